@@ -1,0 +1,66 @@
+/**
+ * hotjunction: exact ITS-90 thermocouple conversion, measurement-chain error budgets,
+ * over-temperature trip design and firmware lookup tables.
+ * @module
+ */
+
+// Error family
+export {
+  HotjunctionRangeError,
+  HotjunctionTypeError,
+  isHotjunctionError,
+  type ErrorCode,
+  type ErrorDetails,
+  type HotjunctionError,
+} from "./errors.js";
+
+// Units
+export {
+  celsiusToFahrenheit,
+  celsiusToKelvin,
+  fahrenheitToCelsius,
+  kelvinAtZeroCelsius,
+  kelvinToCelsius,
+  microvoltsToMillivolts,
+  millivoltsToMicrovolts,
+  millivoltsToVolts,
+  voltsToMillivolts,
+} from "./units.js";
+
+// ITS-90 data (one module per type)
+export type {
+  ExponentialTerm,
+  ForwardSubrange,
+  InverseSubrange,
+  ThermocoupleData,
+  ThermocoupleType,
+} from "./data/thermocoupleData.js";
+export { typeB } from "./data/typeB.js";
+export { typeE } from "./data/typeE.js";
+export { typeJ } from "./data/typeJ.js";
+export { typeK } from "./data/typeK.js";
+export { typeN } from "./data/typeN.js";
+export { typeR } from "./data/typeR.js";
+export { typeS } from "./data/typeS.js";
+export { typeT } from "./data/typeT.js";
+
+// ITS-90 conversion
+export {
+  createThermocouple,
+  type ApproximateInverseRange,
+  type ColdJunctionOptions,
+  type Thermocouple,
+  type ThermocoupleRange,
+} from "./its90/engine.js";
+export {
+  approximateInverseRanges,
+  approximateTemperatureFromEmf,
+  emfFromTemperature,
+  emfFromTemperatureArray,
+  seebeckCoefficient,
+  temperatureFromEmf,
+  temperatureFromEmfArray,
+  temperatureRange,
+  type ThermocoupleTypeInput,
+} from "./its90/convert.js";
+export { thermocoupleData, thermocoupleTypes } from "./its90/resolveType.js";

@@ -1,0 +1,271 @@
+/**
+ * Numeric form of a type's reference data and the hot evaluation paths (forward, derivative).
+ * Built once per data object on first use and cached; nothing runs at import time.
+ * @internal
+ * @module
+ */
+import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
+
+/** @internal */
+export interface CompiledSubrange {
+  readonly minC: number;
+  readonly maxC: number;
+  /** c₀…cₙ, mV/°Cⁱ. */
+  readonly c: Float64Array;
+  /** Whether type K's exponential term applies in this sub-range. */
+  readonly withExponential: boolean;
+}
+
+/** @internal */
+export interface CompiledApproximateInverse {
+  readonly minEmfMillivolts: number;
+  readonly maxEmfMillivolts: number;
+  readonly minC: number;
+  readonly maxC: number;
+  readonly errorMinC: number;
+  readonly errorMaxC: number;
+  readonly d: Float64Array;
+}
+
+/** @internal */
+export interface CompiledType {
+  readonly data: ThermocoupleData;
+  readonly type: ThermocoupleType;
+  readonly context: string;
+  readonly minC: number;
+  readonly maxC: number;
+  readonly subranges: readonly CompiledSubrange[];
+  /** Second sub-range's lower end (the first seam), or +∞. Fast path for the common two-range types. */
+  readonly a0: number;
+  readonly a1: number;
+  readonly a2: number;
+  readonly approximateInverse: readonly CompiledApproximateInverse[];
+  /** E at minC and maxC, mV. */
+  readonly emfAtMinC: number;
+  readonly emfAtMaxC: number;
+  /**
+   * Lowest EMF the function reaches over its range (below emfAtMinC only for a non-monotonic start, type B).
+   */
+  readonly lowestEmf: number;
+  /**
+   * Temperature above which E is strictly increasing and unique: minC for monotonic types; for type B
+   * the upper root of E(t) = E(minC) (about 42.13 °C).
+   */
+  readonly monotonicFromC: number;
+}
+
+function toFloat64(values: readonly string[]): Float64Array {
+  const out = new Float64Array(values.length);
+  for (let i = 0; i < values.length; i++) out[i] = Number(values[i]);
+  return out;
+}
+
+/** Horner evaluation of Σ cᵢ·xⁱ. @internal */
+export function _horner(c: Float64Array, x: number): number {
+  let acc = 0;
+  for (let i = c.length - 1; i >= 0; i--) acc = acc * x + (c[i] as number);
+  return acc;
+}
+
+/** Horner evaluation of d/dx Σ cᵢ·xⁱ. @internal */
+export function _hornerDerivative(c: Float64Array, x: number): number {
+  let acc = 0;
+  for (let i = c.length - 1; i >= 1; i--) acc = acc * x + i * (c[i] as number);
+  return acc;
+}
+
+/** Index of the forward sub-range holding t (a shared end point belongs to the higher range). @internal */
+export function _subrangeIndex(ct: CompiledType, temperatureC: number): number {
+  const ranges = ct.subranges;
+  for (let i = ranges.length - 1; i > 0; i--) {
+    if (temperatureC >= (ranges[i] as CompiledSubrange).minC) return i;
+  }
+  return 0;
+}
+
+/** E(t) in mV with no range check, using sub-range `index`. @internal */
+export function _emfInSubrange(ct: CompiledType, index: number, temperatureC: number): number {
+  const sub = ct.subranges[index] as CompiledSubrange;
+  let emf = _horner(sub.c, temperatureC);
+  if (sub.withExponential) {
+    const d = temperatureC - ct.a2;
+    emf += ct.a0 * Math.exp(ct.a1 * d * d);
+  }
+  return emf;
+}
+
+/** E(t) in mV with no range check. @internal */
+export function _emf(ct: CompiledType, temperatureC: number): number {
+  return _emfInSubrange(ct, _subrangeIndex(ct, temperatureC), temperatureC);
+}
+
+/** dE/dt in mV/°C with no range check, using sub-range `index`. @internal */
+export function _slopeInSubrange(ct: CompiledType, index: number, temperatureC: number): number {
+  const sub = ct.subranges[index] as CompiledSubrange;
+  let slope = _hornerDerivative(sub.c, temperatureC);
+  if (sub.withExponential) {
+    const d = temperatureC - ct.a2;
+    slope += ct.a0 * Math.exp(ct.a1 * d * d) * 2 * ct.a1 * d;
+  }
+  return slope;
+}
+
+/** dE/dt in mV/°C with no range check. @internal */
+export function _slope(ct: CompiledType, temperatureC: number): number {
+  return _slopeInSubrange(ct, _subrangeIndex(ct, temperatureC), temperatureC);
+}
+
+// Error-free transformations (Dekker/Knuth) for a compensated Horner scheme, used only when building
+// the inverse (node values) so that the nodes are accurate to about one unit in the last place.
+const SPLITTER = 134217729; // 2^27 + 1
+
+function twoProductError(a: number, b: number, product: number): number {
+  let t = SPLITTER * a;
+  const ah = t - (t - a);
+  const al = a - ah;
+  t = SPLITTER * b;
+  const bh = t - (t - b);
+  const bl = b - bh;
+  return al * bl - (product - ah * bh - al * bh - ah * bl);
+}
+
+function twoSumError(a: number, b: number, sum: number): number {
+  const bb = sum - a;
+  return a - (sum - bb) + (b - bb);
+}
+
+/**
+ * Compensated Horner evaluation (Graillat, Langlois, Louvet 2005): as accurate as Horner in twice the
+ * working precision. @internal
+ */
+export function _hornerCompensated(c: Float64Array, x: number): number {
+  let s = c[c.length - 1] as number;
+  let err = 0;
+  for (let i = c.length - 2; i >= 0; i--) {
+    const p = s * x;
+    const pe = twoProductError(s, x, p);
+    const ci = c[i] as number;
+    const sum = p + ci;
+    const se = twoSumError(p, ci, sum);
+    s = sum;
+    err = err * x + (pe + se);
+  }
+  return s + err;
+}
+
+/** E(t) using compensated Horner, mV, in a given sub-range. @internal */
+export function _emfAccurateInSubrange(ct: CompiledType, index: number, temperatureC: number): number {
+  const sub = ct.subranges[index] as CompiledSubrange;
+  let emf = _hornerCompensated(sub.c, temperatureC);
+  if (sub.withExponential) {
+    const d = temperatureC - ct.a2;
+    emf += ct.a0 * Math.exp(ct.a1 * d * d);
+  }
+  return emf;
+}
+
+/**
+ * Solves E_index(t) = target on [lowC, highC] (E increasing there) by safeguarded Newton
+ * (Newton steps kept inside a shrinking bracket, bisection when a step leaves it).
+ * `accurate` selects the compensated evaluation. @internal
+ */
+export function _solveInSubrange(
+  ct: CompiledType,
+  index: number,
+  target: number,
+  lowC: number,
+  highC: number,
+  accurate: boolean,
+): number {
+  let lo = lowC;
+  let hi = highC;
+  const fLo = (accurate ? _emfAccurateInSubrange(ct, index, lo) : _emfInSubrange(ct, index, lo)) - target;
+  const fHi = (accurate ? _emfAccurateInSubrange(ct, index, hi) : _emfInSubrange(ct, index, hi)) - target;
+  if (fLo >= 0) return lo;
+  if (fHi <= 0) return hi;
+  let t = lo + (hi - lo) * (-fLo / (fHi - fLo));
+  for (let iteration = 0; iteration < 100; iteration++) {
+    const f = (accurate ? _emfAccurateInSubrange(ct, index, t) : _emfInSubrange(ct, index, t)) - target;
+    if (f === 0) return t;
+    if (f < 0) lo = t;
+    else hi = t;
+    const slope = _slopeInSubrange(ct, index, t);
+    let next = t - f / slope;
+    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+    const step = Math.abs(next - t);
+    t = next;
+    if (step <= 2e-16 * Math.max(1, Math.abs(t)) || hi - lo <= 4e-16 * Math.max(1, Math.abs(t))) break;
+  }
+  return t;
+}
+
+const cache = new WeakMap<ThermocoupleData, CompiledType>();
+let lastData: ThermocoupleData | undefined;
+let lastCompiled: CompiledType | undefined;
+
+/** Returns the numeric form of a data object, building it on first use. @internal */
+export function _compile(data: ThermocoupleData): CompiledType {
+  if (data === lastData) return lastCompiled as CompiledType;
+  let ct = cache.get(data);
+  if (ct === undefined) {
+    ct = build(data);
+    cache.set(data, ct);
+  }
+  lastData = data;
+  lastCompiled = ct;
+  return ct;
+}
+
+function build(data: ThermocoupleData): CompiledType {
+  const subranges: CompiledSubrange[] = data.forward.map((f) => ({
+    minC: Number(f.minC),
+    maxC: Number(f.maxC),
+    c: toFloat64(f.coefficients),
+    withExponential: data.exponential !== undefined && Number(f.minC) >= 0,
+  }));
+  const approximateInverse: CompiledApproximateInverse[] = data.inverse.map((r) => ({
+    minEmfMillivolts: Number(r.minEmfMillivolts),
+    maxEmfMillivolts: Number(r.maxEmfMillivolts),
+    minC: Number(r.minC),
+    maxC: Number(r.maxC),
+    errorMinC: Number(r.errorMinC),
+    errorMaxC: Number(r.errorMaxC),
+    d: toFloat64(r.coefficients),
+  }));
+  const partial = {
+    data,
+    type: data.type,
+    context: `type ${data.type}`,
+    minC: Number(data.minC),
+    maxC: Number(data.maxC),
+    subranges,
+    a0: data.exponential ? Number(data.exponential.a0) : 0,
+    a1: data.exponential ? Number(data.exponential.a1) : 0,
+    a2: data.exponential ? Number(data.exponential.a2) : 0,
+    approximateInverse,
+    emfAtMinC: 0,
+    emfAtMaxC: 0,
+    lowestEmf: 0,
+    monotonicFromC: Number(data.minC),
+  };
+  const ct: CompiledType = partial;
+  partial.emfAtMinC = _emf(ct, partial.minC);
+  partial.emfAtMaxC = _emf(ct, partial.maxC);
+  partial.lowestEmf = partial.emfAtMinC;
+  // A type whose E starts by falling (type B) is ambiguous until E climbs back to E(minC).
+  // Find where the slope turns positive in the first sub-range, then the upper root of E(t) = E(minC).
+  if (_slopeInSubrange(ct, 0, partial.minC) <= 0) {
+    const first = subranges[0] as CompiledSubrange;
+    let lo = first.minC;
+    let hi = first.maxC;
+    for (let i = 0; i < 200; i++) {
+      const mid = 0.5 * (lo + hi);
+      if (_slopeInSubrange(ct, 0, mid) <= 0) lo = mid;
+      else hi = mid;
+    }
+    const turnC = 0.5 * (lo + hi);
+    partial.lowestEmf = _emfAccurateInSubrange(ct, 0, turnC);
+    partial.monotonicFromC = _solveInSubrange(ct, 0, partial.emfAtMinC, turnC, first.maxC, true);
+  }
+  return ct;
+}

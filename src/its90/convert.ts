@@ -1,0 +1,187 @@
+/**
+ * The letter-based conversion API: `emfFromTemperature("K", 500)` and friends.
+ * These bring all eight types' data (about 5 kB); for one type alone use {@link createThermocouple}.
+ * @module
+ */
+import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
+import { _compile } from "./compiled.js";
+import {
+  _approximateInverseRanges,
+  _approximateTemperatureFromEmf,
+  _emfFromTemperature,
+  _emfFromTemperatureArray,
+  _seebeckCoefficient,
+  _temperatureFromEmf,
+  _temperatureFromEmfArray,
+  _temperatureRange,
+  type ApproximateInverseRange,
+  type ColdJunctionOptions,
+  type ThermocoupleRange,
+} from "./engine.js";
+import { thermocoupleData } from "./resolveType.js";
+
+/** A type given by its letter or by its data object. */
+export type ThermocoupleTypeInput = ThermocoupleType | ThermocoupleData;
+
+/**
+ * The ITS-90 reference function E(t): thermocouple EMF in mV with the reference junction at 0 °C, or at
+ * `coldJunctionC` when given (then the EMF an instrument sees, E(t) − E(t_cj)). Type K includes its
+ * exponential term above 0 °C. At a temperature shared by two sub-ranges the upper sub-range is used.
+ * @param type - `"B"`, `"E"`, `"J"`, `"K"`, `"N"`, `"R"`, `"S"`, `"T"` or a data object
+ * @param temperatureC - hot-junction temperature, °C, within the type's range (e.g. K: −270 to 1372 °C)
+ * @param options - `coldJunctionC`: cold-junction temperature, °C, within the type's range
+ * @returns EMF, mV
+ * @throws HotjunctionTypeError for a non-finite temperature; HotjunctionRangeError for a temperature
+ *   outside the type's range (naming type, quantity, value and range) or an unknown type
+ * @example
+ * ```ts
+ * import { emfFromTemperature } from "hotjunction";
+ * console.log(emfFromTemperature("K", 500).toFixed(3)); // "20.644"
+ * console.log(emfFromTemperature("K", 500, { coldJunctionC: 25 }).toFixed(3)); // "19.644"
+ * ```
+ * @see NIST Monograph 175 (1993); IEC 60584-1:2013
+ */
+export function emfFromTemperature(
+  type: ThermocoupleTypeInput,
+  temperatureC: number,
+  options?: ColdJunctionOptions,
+): number {
+  return _emfFromTemperature(_compile(thermocoupleData(type)), temperatureC, options);
+}
+
+/**
+ * The exact inverse of the reference function: the temperature t with E(t) = `emfMillivolts`, within
+ * 1e-9 °C of the true root of the exact polynomial (looser only where the Seebeck coefficient nearly
+ * vanishes, by at most 1e-10 mV / S(t)). With `coldJunctionC` the EMF is a measured one: E(t_cj) is added
+ * first (cold-junction compensation), then inverted.
+ * @param type - `"B"`, `"E"`, `"J"`, `"K"`, `"N"`, `"R"`, `"S"`, `"T"` or a data object
+ * @param emfMillivolts - EMF, mV, within E(minC) … E(maxC) of the type (after compensation)
+ * @param options - `coldJunctionC`: cold-junction temperature, °C
+ * @returns hot-junction temperature, °C
+ * @throws HotjunctionTypeError for a non-finite EMF; HotjunctionRangeError for an EMF outside the range,
+ *   or (code `AMBIGUOUS_EMF`) a type B EMF at or below 0 mV, where two temperatures share each EMF
+ * @example
+ * ```ts
+ * import { temperatureFromEmf } from "hotjunction";
+ * console.log(temperatureFromEmf("K", 20.644).toFixed(2)); // "500.00"
+ * console.log(temperatureFromEmf("K", 19.644, { coldJunctionC: 25 }).toFixed(2)); // "500.00"
+ * ```
+ */
+export function temperatureFromEmf(
+  type: ThermocoupleTypeInput,
+  emfMillivolts: number,
+  options?: ColdJunctionOptions,
+): number {
+  return _temperatureFromEmf(_compile(thermocoupleData(type)), emfMillivolts, options);
+}
+
+/**
+ * The Seebeck coefficient S(t) = dE/dt of the reference function, analytic (derivative of the
+ * polynomial and of type K's exponential term).
+ * @param type - thermocouple type
+ * @param temperatureC - temperature, °C, within the type's range
+ * @returns Seebeck coefficient, µV/°C
+ * @throws HotjunctionTypeError / HotjunctionRangeError as {@link emfFromTemperature}
+ * @example
+ * ```ts
+ * import { seebeckCoefficient } from "hotjunction";
+ * console.log(seebeckCoefficient("K", 25).toFixed(2)); // "40.52"
+ * ```
+ */
+export function seebeckCoefficient(type: ThermocoupleTypeInput, temperatureC: number): number {
+  return _seebeckCoefficient(_compile(thermocoupleData(type)), temperatureC);
+}
+
+/**
+ * The published approximate inverse polynomial t = Σ dᵢ·Eⁱ of NIST Monograph 175, as printed. Its error
+ * against the reference function is bounded per sub-range by the band in {@link approximateInverseRanges}
+ * (e.g. type K 0 to 500 °C: −0.05 to +0.04 °C). Where two published ranges overlap (R and S, 1064 to
+ * 1200 °C) the first listed range is used. For exact work use {@link temperatureFromEmf}.
+ * @param type - thermocouple type
+ * @param emfMillivolts - EMF, mV, within the published inverse's EMF range (narrower than the forward
+ *   function's: e.g. type K −5.891 to 54.886 mV)
+ * @returns temperature, °C
+ * @throws HotjunctionRangeError outside the published inverse's EMF range
+ * @example
+ * ```ts
+ * import { approximateTemperatureFromEmf } from "hotjunction";
+ * console.log(approximateTemperatureFromEmf("K", 20.644).toFixed(2)); // "500.00"
+ * ```
+ */
+export function approximateTemperatureFromEmf(type: ThermocoupleTypeInput, emfMillivolts: number): number {
+  return _approximateTemperatureFromEmf(_compile(thermocoupleData(type)), emfMillivolts);
+}
+
+/**
+ * The published approximate inverse's sub-ranges with their coefficients and stated error bands (data).
+ * @param type - thermocouple type
+ * @returns the sub-ranges in the published order
+ * @example
+ * ```ts
+ * import { approximateInverseRanges } from "hotjunction";
+ * const [first] = approximateInverseRanges("K");
+ * console.log(first?.errorMinC, first?.errorMaxC); // -0.02 0.04
+ * ```
+ */
+export function approximateInverseRanges(type: ThermocoupleTypeInput): ApproximateInverseRange[] {
+  return _approximateInverseRanges(_compile(thermocoupleData(type)));
+}
+
+/**
+ * The standard's range of a type in °C and mV.
+ * @param type - thermocouple type
+ * @returns the range; see {@link ThermocoupleRange}
+ * @example
+ * ```ts
+ * import { temperatureRange } from "hotjunction";
+ * const r = temperatureRange("K");
+ * console.log(r.minC, r.maxC, r.maxEmfMillivolts.toFixed(3)); // -270 1372 "54.886"
+ * ```
+ */
+export function temperatureRange(type: ThermocoupleTypeInput): ThermocoupleRange {
+  return _temperatureRange(_compile(thermocoupleData(type)));
+}
+
+/**
+ * Bulk forward conversion over a `Float64Array`, into `out` when given (no other allocation).
+ * @param type - thermocouple type
+ * @param temperaturesC - temperatures, °C, each within the type's range
+ * @param out - optional output array of at least the same length
+ * @returns EMFs, mV (the `out` array when given)
+ * @throws as {@link emfFromTemperature}, naming the first bad element's index
+ * @example
+ * ```ts
+ * import { emfFromTemperatureArray } from "hotjunction";
+ * const emf = emfFromTemperatureArray("K", new Float64Array([0, 100]));
+ * console.log(emf[1]?.toFixed(3)); // "4.096"
+ * ```
+ */
+export function emfFromTemperatureArray(
+  type: ThermocoupleTypeInput,
+  temperaturesC: Float64Array,
+  out?: Float64Array,
+): Float64Array {
+  return _emfFromTemperatureArray(_compile(thermocoupleData(type)), temperaturesC, out);
+}
+
+/**
+ * Bulk exact inverse over a `Float64Array`, into `out` when given (no other allocation).
+ * @param type - thermocouple type
+ * @param emfsMillivolts - EMFs, mV, each within the type's unambiguous EMF range
+ * @param out - optional output array of at least the same length
+ * @returns temperatures, °C (the `out` array when given)
+ * @throws as {@link temperatureFromEmf}, naming the first bad element's index
+ * @example
+ * ```ts
+ * import { temperatureFromEmfArray } from "hotjunction";
+ * const t = temperatureFromEmfArray("K", new Float64Array([4.096, 41.276]));
+ * console.log(t[0]?.toFixed(2), t[1]?.toFixed(2)); // "100.00" "1000.00"
+ * ```
+ */
+export function temperatureFromEmfArray(
+  type: ThermocoupleTypeInput,
+  emfsMillivolts: Float64Array,
+  out?: Float64Array,
+): Float64Array {
+  return _temperatureFromEmfArray(_compile(thermocoupleData(type)), emfsMillivolts, out);
+}

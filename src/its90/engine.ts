@@ -1,0 +1,329 @@
+/**
+ * Conversion engine over one type's data object: forward, exact inverse, Seebeck coefficient,
+ * published approximate inverse, ranges, bulk variants. Imports no type's data, so a bundle that uses
+ * {@link createThermocouple} with one data module carries that type alone.
+ * @module
+ */
+import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
+import { _requireFinite, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
+import {
+  _compile,
+  _emf,
+  _horner,
+  _slope,
+  type CompiledApproximateInverse,
+  type CompiledType,
+} from "./compiled.js";
+import { _exactInverse, _exactInverseTables } from "./exactInverse.js";
+
+/** Options of the conversions that take a cold (reference) junction temperature. */
+export interface ColdJunctionOptions {
+  /**
+   * Temperature of the cold (reference) junction, °C, within the type's range. Default 0 °C (the
+   * reference tables' convention).
+   */
+  readonly coldJunctionC?: number;
+}
+
+/** The standard's range of a type, in °C and mV. */
+export interface ThermocoupleRange {
+  readonly type: ThermocoupleType;
+  /** Lowest temperature of the reference function, °C. */
+  readonly minC: number;
+  /** Highest temperature of the reference function, °C (type K: 1372 °C per NIST/ASTM; IEC 60584-1:2013 stops at 1300 °C). */
+  readonly maxC: number;
+  /** E(minC), mV. */
+  readonly minEmfMillivolts: number;
+  /** E(maxC), mV. */
+  readonly maxEmfMillivolts: number;
+  /**
+   * Lowest temperature from which the EMF is strictly increasing and the inverse unique, °C: equal to
+   * minC except for type B (about 42.13 °C, where E climbs back to 0 mV).
+   */
+  readonly unambiguousFromC: number;
+  /** EMF above which the inverse is unique, mV (inclusive except for type B, where E = 0 mV is ambiguous). */
+  readonly lowestEmfMillivolts: number;
+}
+
+/** One sub-range of a published approximate inverse, in numbers, with its stated error band. */
+export interface ApproximateInverseRange {
+  readonly minEmfMillivolts: number;
+  readonly maxEmfMillivolts: number;
+  readonly minC: number;
+  readonly maxC: number;
+  /** Lowest stated error t_approx − t90, °C. */
+  readonly errorMinC: number;
+  /** Highest stated error t_approx − t90, °C. */
+  readonly errorMaxC: number;
+  /** d₀…dₙ of t = Σ dᵢ·Eⁱ (°C/mVⁱ). */
+  readonly coefficients: readonly number[];
+}
+
+function checkTemperature(ct: CompiledType, temperatureC: unknown, quantity: string): number {
+  if (typeof temperatureC !== "number" || !Number.isFinite(temperatureC)) {
+    return _requireFinite(temperatureC, quantity, "°C", ct.context);
+  }
+  if (temperatureC < ct.minC || temperatureC > ct.maxC) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: temperatureC,
+      min: ct.minC,
+      max: ct.maxC,
+      unit: "°C",
+      context: ct.context,
+    });
+  }
+  return temperatureC;
+}
+
+function checkEmf(ct: CompiledType, emfMillivolts: number, quantity: string, context: string): void {
+  if (emfMillivolts > ct.emfAtMaxC || emfMillivolts < ct.lowestEmf) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: emfMillivolts,
+      min: ct.lowestEmf,
+      max: ct.emfAtMaxC,
+      unit: "mV",
+      context,
+    });
+  }
+  if (ct.monotonicFromC > ct.minC && emfMillivolts <= ct.emfAtMinC) {
+    throw new HotjunctionRangeError({
+      code: "AMBIGUOUS_EMF",
+      quantity,
+      value: emfMillivolts,
+      unit: "mV",
+      context,
+      problem:
+        `is ambiguous: E falls below ${ct.emfAtMinC} mV between ${ct.minC} and ` +
+        `${ct.monotonicFromC.toFixed(2)} °C, so each EMF from ${ct.lowestEmf.toPrecision(5)} to ${ct.emfAtMinC} mV ` +
+        `belongs to two temperatures; the inverse is defined for EMFs above ${ct.emfAtMinC} mV`,
+    });
+  }
+}
+
+function coldJunctionEmf(ct: CompiledType, options: ColdJunctionOptions | undefined): number {
+  if (options === undefined) return 0;
+  if (typeof options !== "object" || options === null) {
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity: "options",
+      value: options,
+      problem: "is not an options object",
+      context: ct.context,
+    });
+  }
+  const coldC = options.coldJunctionC;
+  if (coldC === undefined) return 0;
+  return _emf(ct, checkTemperature(ct, coldC, "cold-junction temperature"));
+}
+
+/** @internal */
+export function _emfFromTemperature(ct: CompiledType, temperatureC: number, options?: ColdJunctionOptions): number {
+  const t = checkTemperature(ct, temperatureC, "temperature");
+  const emf = _emf(ct, t);
+  return options === undefined ? emf : emf - coldJunctionEmf(ct, options);
+}
+
+/** @internal */
+export function _temperatureFromEmf(ct: CompiledType, emfMillivolts: number, options?: ColdJunctionOptions): number {
+  _requireFinite(emfMillivolts, "EMF", "mV", ct.context);
+  const coldEmf = coldJunctionEmf(ct, options);
+  const total = emfMillivolts + coldEmf;
+  if (coldEmf !== 0 || (options !== undefined && options.coldJunctionC !== undefined)) {
+    checkEmf(
+      ct,
+      total,
+      "cold-junction-compensated EMF",
+      `${ct.context}, measured ${emfMillivolts} mV + E(${options?.coldJunctionC} °C)`,
+    );
+  } else {
+    checkEmf(ct, total, "EMF", ct.context);
+  }
+  return _exactInverse(ct, _exactInverseTables(ct), total);
+}
+
+/** @internal */
+export function _seebeckCoefficient(ct: CompiledType, temperatureC: number): number {
+  const t = checkTemperature(ct, temperatureC, "temperature");
+  return _slope(ct, t) * 1000;
+}
+
+/** @internal */
+export function _approximateTemperatureFromEmf(ct: CompiledType, emfMillivolts: number): number {
+  _requireFinite(emfMillivolts, "EMF", "mV", ct.context);
+  const ranges = ct.approximateInverse;
+  for (let i = 0; i < ranges.length; i++) {
+    const r = ranges[i] as CompiledApproximateInverse;
+    if (emfMillivolts >= r.minEmfMillivolts && emfMillivolts <= r.maxEmfMillivolts) return _horner(r.d, emfMillivolts);
+  }
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const r of ranges) {
+    lo = Math.min(lo, r.minEmfMillivolts);
+    hi = Math.max(hi, r.maxEmfMillivolts);
+  }
+  throw new HotjunctionRangeError({
+    code: "OUT_OF_RANGE",
+    quantity: "EMF",
+    value: emfMillivolts,
+    min: lo,
+    max: hi,
+    unit: "mV",
+    context: `${ct.context} published approximate inverse`,
+  });
+}
+
+/** @internal */
+export function _temperatureRange(ct: CompiledType): ThermocoupleRange {
+  return {
+    type: ct.type,
+    minC: ct.minC,
+    maxC: ct.maxC,
+    minEmfMillivolts: ct.emfAtMinC,
+    maxEmfMillivolts: ct.emfAtMaxC,
+    unambiguousFromC: ct.monotonicFromC,
+    lowestEmfMillivolts: ct.lowestEmf,
+  };
+}
+
+/** @internal */
+export function _approximateInverseRanges(ct: CompiledType): ApproximateInverseRange[] {
+  return ct.approximateInverse.map((r) => ({
+    minEmfMillivolts: r.minEmfMillivolts,
+    maxEmfMillivolts: r.maxEmfMillivolts,
+    minC: r.minC,
+    maxC: r.maxC,
+    errorMinC: r.errorMinC,
+    errorMaxC: r.errorMaxC,
+    coefficients: Array.from(r.d),
+  }));
+}
+
+function checkArrays(input: unknown, out: unknown, quantity: string, context: string): number {
+  if (!(input instanceof Float64Array)) {
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity,
+      value: input,
+      problem: "is not a Float64Array",
+      context,
+    });
+  }
+  if (out !== undefined && (!(out instanceof Float64Array) || out.length < input.length)) {
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity: "output array",
+      value: out,
+      problem: `is not a Float64Array of length at least ${input.length}`,
+      context,
+    });
+  }
+  return input.length;
+}
+
+/** @internal */
+export function _emfFromTemperatureArray(
+  ct: CompiledType,
+  temperaturesC: Float64Array,
+  out?: Float64Array,
+): Float64Array {
+  const n = checkArrays(temperaturesC, out, "temperatures", ct.context);
+  const result = out ?? new Float64Array(n);
+  const minC = ct.minC;
+  const maxC = ct.maxC;
+  for (let i = 0; i < n; i++) {
+    const t = temperaturesC[i] as number;
+    // NaN fails both comparisons, so it also takes the slow path, which names the element.
+    if (!(t >= minC && t <= maxC)) {
+      checkTemperature(ct, t, `temperature [${i}]`);
+    }
+    result[i] = _emf(ct, t);
+  }
+  return result;
+}
+
+/** @internal */
+export function _temperatureFromEmfArray(
+  ct: CompiledType,
+  emfsMillivolts: Float64Array,
+  out?: Float64Array,
+): Float64Array {
+  const n = checkArrays(emfsMillivolts, out, "EMFs", ct.context);
+  const result = out ?? new Float64Array(n);
+  const inv = _exactInverseTables(ct);
+  // Fast acceptance test: inside (E at the unambiguous start, E(maxC)]; anything else is checked in full.
+  const lowOk = ct.monotonicFromC > ct.minC ? ct.emfAtMinC : ct.emfAtMinC - Number.MIN_VALUE;
+  const highOk = ct.emfAtMaxC;
+  for (let i = 0; i < n; i++) {
+    const e = emfsMillivolts[i] as number;
+    if (!(e > lowOk && e <= highOk)) {
+      _requireFinite(e, `EMF [${i}]`, "mV", ct.context);
+      checkEmf(ct, e, `EMF [${i}]`, ct.context);
+    }
+    result[i] = _exactInverse(ct, inv, e);
+  }
+  return result;
+}
+
+/**
+ * A converter bound to one type's data: the same conversions as the letter-based functions, with no
+ * lookup per call, and a bundle that carries only this type's coefficients.
+ */
+export interface Thermocouple {
+  readonly type: ThermocoupleType;
+  readonly data: ThermocoupleData;
+  /** E(t) in mV (reference junction at `coldJunctionC`, default 0 °C). See {@link emfFromTemperature}. */
+  emfFromTemperature(temperatureC: number, options?: ColdJunctionOptions): number;
+  /** Exact inverse, °C. See {@link temperatureFromEmf}. */
+  temperatureFromEmf(emfMillivolts: number, options?: ColdJunctionOptions): number;
+  /** dE/dt in µV/°C. See {@link seebeckCoefficient}. */
+  seebeckCoefficient(temperatureC: number): number;
+  /** The published approximate inverse, °C. See {@link approximateTemperatureFromEmf}. */
+  approximateTemperatureFromEmf(emfMillivolts: number): number;
+  /** Bulk forward. See {@link emfFromTemperatureArray}. */
+  emfFromTemperatureArray(temperaturesC: Float64Array, out?: Float64Array): Float64Array;
+  /** Bulk exact inverse. See {@link temperatureFromEmfArray}. */
+  temperatureFromEmfArray(emfsMillivolts: Float64Array, out?: Float64Array): Float64Array;
+  /** The standard's range in °C and mV. */
+  range(): ThermocoupleRange;
+}
+
+/**
+ * Binds the conversions to one type's data object. Use it when a bundle must carry one type only:
+ * `import { createThermocouple, typeK } from "hotjunction"` pulls type K's coefficients and no other's.
+ * @param data - a type's data module export (`typeB` … `typeT`)
+ * @returns a {@link Thermocouple} converter
+ * @throws HotjunctionTypeError if `data` is not a thermocouple data object
+ * @example
+ * ```ts
+ * import { createThermocouple, typeK } from "hotjunction";
+ * const k = createThermocouple(typeK);
+ * console.log(k.emfFromTemperature(500).toFixed(3)); // "20.644"
+ * console.log(k.temperatureFromEmf(20.644).toFixed(3)); // "500.000"
+ * ```
+ */
+export function createThermocouple(data: ThermocoupleData): Thermocouple {
+  if (typeof data !== "object" || data === null || !Array.isArray(data.forward)) {
+    throw new HotjunctionTypeError({
+      code: "UNKNOWN_TYPE",
+      quantity: "thermocouple data",
+      value: data,
+      problem: "is not a thermocouple data object (use typeB … typeT)",
+    });
+  }
+  const ct = _compile(data);
+  return {
+    type: ct.type,
+    data,
+    emfFromTemperature: (temperatureC, options) => _emfFromTemperature(ct, temperatureC, options),
+    temperatureFromEmf: (emfMillivolts, options) => _temperatureFromEmf(ct, emfMillivolts, options),
+    seebeckCoefficient: (temperatureC) => _seebeckCoefficient(ct, temperatureC),
+    approximateTemperatureFromEmf: (emfMillivolts) => _approximateTemperatureFromEmf(ct, emfMillivolts),
+    emfFromTemperatureArray: (temperaturesC, out) => _emfFromTemperatureArray(ct, temperaturesC, out),
+    temperatureFromEmfArray: (emfsMillivolts, out) => _temperatureFromEmfArray(ct, emfsMillivolts, out),
+    range: () => _temperatureRange(ct),
+  };
+}

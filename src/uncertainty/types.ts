@@ -1,0 +1,89 @@
+/**
+ * Types of the propagation engine (contract shared by `uncertainty/` and its users such as `chain/`).
+ * `uncertainty/` knows nothing about thermocouples.
+ * @module
+ */
+
+/** Kinds of input distribution (JCGM 100 4.3.7–4.3.9; JCGM 101 6.4). */
+export type DistributionKind = "normal" | "rectangular" | "triangular" | "trapezoidal" | "arcsine";
+
+/** An input distribution: a plain, JSON-serializable object made by a factory (`normal`, `rectangular`, ...). */
+export interface Distribution {
+  readonly kind: DistributionKind;
+  /** Expectation, in the input's own unit. */
+  readonly mean: number;
+  /** Standard uncertainty (standard deviation), in the input's own unit. */
+  readonly standardUncertainty: number;
+  /** Half-width of the bounded support; `undefined` for a normal (unbounded) input. */
+  readonly halfWidth?: number;
+  /** Trapezoid top-to-base ratio β (0 = triangular, 1 = rectangular); trapezoidal only. */
+  readonly beta?: number;
+  /** Degrees of freedom for Welch–Satterthwaite; `Infinity` (default) when the value is known exactly. */
+  readonly degreesOfFreedom?: number;
+}
+
+/** Propagation methods. */
+export type PropagationMethod = "worst-case" | "rss" | "monte-carlo";
+
+/** A model: maps a record of input values (by input name) to one output value. */
+export type Model<Name extends string = string> = (inputs: Readonly<Record<Name, number>>) => number;
+
+/** Options of `propagate`. */
+export interface PropagateOptions<Name extends string = string> {
+  /** Default `"rss"`. */
+  readonly method?: PropagationMethod;
+  /** Coverage probability of the interval, in (0, 1). Default 0.95. */
+  readonly coverage?: number;
+  /** Correlation coefficients between named inputs, r in [−1, 1]. */
+  readonly correlations?: readonly (readonly [Name, Name, number])[];
+  /** Monte Carlo: number of trials (default 1e6 unless `adaptive`). */
+  readonly trials?: number;
+  /** Monte Carlo: seed of the generator (default 1). Same seed, same result, bit for bit. */
+  readonly seed?: number;
+  /** Monte Carlo: JCGM 101 7.9 adaptive stopping with this many significant digits (1–3). */
+  readonly adaptive?: { readonly significantDigits: number; readonly maxTrials?: number };
+  /** Monte Carlo: `"symmetric"` (default, probabilistically symmetric) or `"shortest"` coverage interval. */
+  readonly interval?: "symmetric" | "shortest";
+  /**
+   * Worst case: coverage used to bound normal inputs (±k·u with k from this probability). Required when any
+   * input is normal and the method is worst-case.
+   */
+  readonly normalBoundCoverage?: number;
+  /** Monte Carlo: called now and then with the fraction done (0–1), for progress display. */
+  readonly onProgress?: (fractionDone: number) => void;
+}
+
+/** One input's share of the result. */
+export interface Contribution {
+  /** Sensitivity coefficient ∂f/∂xᵢ at the estimates (output unit per input unit). */
+  readonly sensitivity: number;
+  /** |cᵢ|·u(xᵢ) for rss/monte-carlo; for worst-case, the output swing this input alone causes over its bounds. */
+  readonly contribution: number;
+  /** Share of the output variance (rss: (cᵢ·uᵢ)²/Σ, ignoring correlation terms; sums to 1 without correlations). */
+  readonly varianceShare: number;
+}
+
+/** Result of `propagate`. */
+export interface PropagationResult<Name extends string = string> {
+  readonly method: PropagationMethod;
+  /** Output estimate (model at the input means; Monte Carlo: mean of the trials). */
+  readonly estimate: number;
+  /** Standard uncertainty of the output. */
+  readonly standardUncertainty: number;
+  /** Coverage interval [low, high] (worst case: the extremes). */
+  readonly interval: readonly [number, number];
+  /** Coverage probability of the interval (1 for worst case). */
+  readonly coverage: number;
+  /** Coverage factor k where it applies (rss; Monte Carlo symmetric: half-width / u). */
+  readonly coverageFactor?: number;
+  /** Effective degrees of freedom (rss with finite degrees of freedom). */
+  readonly effectiveDegreesOfFreedom?: number;
+  /** Per input. */
+  readonly contributions: Readonly<Record<Name, Contribution>>;
+  /** Monte Carlo: trials run. */
+  readonly trials?: number;
+  /** Monte Carlo: seed used. */
+  readonly seed?: number;
+  /** How the result was found, in one sentence (e.g. worst-case search strategy). */
+  readonly note: string;
+}

@@ -1,0 +1,69 @@
+/**
+ * `hotjunction emf <type> <temperature>`: the ITS-90 reference function, E(t) with an optional cold junction.
+ * @module
+ */
+import { Option, type Command } from "commander";
+import { emfFromTemperature } from "../../its90/convert.js";
+import { thermocoupleTypes } from "../../its90/resolveType.js";
+import type { ThermocoupleType } from "../../data/thermocoupleData.js";
+import { _addOutputOptions, _emitMain, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
+import { _integerParser, _parseNumber } from "../parseArgs.js";
+import type { CommandContext } from "../runCli.js";
+import {
+  _defaultEmfDecimals,
+  _emfSymbol,
+  _fromMillivolts,
+  _temperatureSymbol,
+  _toCelsius,
+  emfUnits,
+  temperatureUnits,
+  type EmfUnit,
+  type TemperatureUnit,
+} from "../temperatureUnits.js";
+
+interface EmfOptions extends OutputOptionValues {
+  readonly unit: TemperatureUnit;
+  readonly emfUnit: EmfUnit;
+  readonly coldJunction?: number;
+  readonly decimals?: number;
+}
+
+/** Registers the `emf` command. @internal */
+export function registerEmfCommand(program: Command, context: CommandContext): Command {
+  const command = program
+    .command("emf")
+    .description("thermocouple EMF at a hot-junction temperature (ITS-90 reference function)")
+    .addArgument(program.createArgument("<type>", "thermocouple type").choices(thermocoupleTypes))
+    .argument("<temperature>", "hot-junction temperature, in --unit", _parseNumber)
+    .addOption(new Option("--unit <unit>", "temperature unit").choices(temperatureUnits).default("C"))
+    .addOption(new Option("--emf-unit <unit>", "EMF unit of the result").choices(emfUnits).default("mV"))
+    .option("--cold-junction <temperature>", "cold-junction temperature, in --unit (default 0 °C)", _parseNumber)
+    .option("--decimals <n>", "decimals shown in the text output", _integerParser(0, 15))
+    .addHelpText(
+      "after",
+      "\nExamples:\n  hotjunction emf K 500\n  hotjunction emf N 1250 --cold-junction 30\n  hotjunction emf J 212 --unit F --json\n",
+    );
+  _addOutputOptions(command, ["json"]);
+  command.action(async (type: ThermocoupleType, temperature: number, options: EmfOptions) => {
+    const plan = _planCommandOutputs(context.io, options, []);
+    const temperatureC = _toCelsius(temperature, options.unit);
+    const coldJunctionC = options.coldJunction === undefined ? 0 : _toCelsius(options.coldJunction, options.unit);
+    const emfMillivolts = emfFromTemperature(type, temperatureC, { coldJunctionC });
+    const shown = _fromMillivolts(emfMillivolts, options.emfUnit);
+    let text: string;
+    if (options.json === true) {
+      text = JSON.stringify(
+        { type, temperatureC, coldJunctionC, emfMillivolts, emf: shown, emfUnit: options.emfUnit },
+        null,
+        2,
+      );
+    } else {
+      const symbol = _temperatureSymbol(options.unit);
+      const decimals = options.decimals ?? _defaultEmfDecimals(options.emfUnit);
+      const cj = options.coldJunction === undefined ? `0 °C` : `${options.coldJunction} ${symbol}`;
+      text = `type ${type} at ${temperature} ${symbol}, cold junction ${cj}: ${shown.toFixed(decimals)} ${_emfSymbol(options.emfUnit)}`;
+    }
+    await _emitMain(context.io, plan, text);
+  });
+  return command;
+}

@@ -1,0 +1,69 @@
+/**
+ * `hotjunction temp <type> <emf>`: the exact inverse of the ITS-90 reference function, with cold-junction
+ * compensation.
+ * @module
+ */
+import { Option, type Command } from "commander";
+import { temperatureFromEmf } from "../../its90/convert.js";
+import { thermocoupleTypes } from "../../its90/resolveType.js";
+import type { ThermocoupleType } from "../../data/thermocoupleData.js";
+import { _addOutputOptions, _emitMain, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
+import { _integerParser, _parseNumber } from "../parseArgs.js";
+import type { CommandContext } from "../runCli.js";
+import {
+  _emfSymbol,
+  _fromCelsius,
+  _temperatureSymbol,
+  _toCelsius,
+  _toMillivolts,
+  emfUnits,
+  temperatureUnits,
+  type EmfUnit,
+  type TemperatureUnit,
+} from "../temperatureUnits.js";
+
+interface TempOptions extends OutputOptionValues {
+  readonly unit: TemperatureUnit;
+  readonly emfUnit: EmfUnit;
+  readonly coldJunction?: number;
+  readonly decimals?: number;
+}
+
+/** Registers the `temp` command. @internal */
+export function registerTempCommand(program: Command, context: CommandContext): Command {
+  const command = program
+    .command("temp")
+    .description("hot-junction temperature from a measured EMF (exact ITS-90 inverse, cold junction compensated)")
+    .addArgument(program.createArgument("<type>", "thermocouple type").choices(thermocoupleTypes))
+    .argument("<emf>", "measured EMF, in --emf-unit", _parseNumber)
+    .addOption(new Option("--emf-unit <unit>", "unit of the EMF").choices(emfUnits).default("mV"))
+    .addOption(new Option("--unit <unit>", "temperature unit of the result and of --cold-junction").choices(temperatureUnits).default("C"))
+    .option("--cold-junction <temperature>", "cold-junction temperature, in --unit (default 0 °C)", _parseNumber)
+    .option("--decimals <n>", "decimals shown in the text output (default 2)", _integerParser(0, 15))
+    .addHelpText(
+      "after",
+      "\nExamples:\n  hotjunction temp K 19.644 --cold-junction 25\n  hotjunction temp N 41500 --emf-unit uV --json\n",
+    );
+  _addOutputOptions(command, ["json"]);
+  command.action(async (type: ThermocoupleType, emf: number, options: TempOptions) => {
+    const plan = _planCommandOutputs(context.io, options, []);
+    const emfMillivolts = _toMillivolts(emf, options.emfUnit);
+    const coldJunctionC = options.coldJunction === undefined ? 0 : _toCelsius(options.coldJunction, options.unit);
+    const temperatureC = temperatureFromEmf(type, emfMillivolts, { coldJunctionC });
+    const shown = _fromCelsius(temperatureC, options.unit);
+    let text: string;
+    if (options.json === true) {
+      text = JSON.stringify(
+        { type, emfMillivolts, coldJunctionC, temperatureC, temperature: shown, temperatureUnit: options.unit },
+        null,
+        2,
+      );
+    } else {
+      const symbol = _temperatureSymbol(options.unit);
+      const cj = options.coldJunction === undefined ? `0 °C` : `${options.coldJunction} ${symbol}`;
+      text = `type ${type}, ${emf} ${_emfSymbol(options.emfUnit)} with cold junction ${cj}: ${shown.toFixed(options.decimals ?? 2)} ${symbol}`;
+    }
+    await _emitMain(context.io, plan, text);
+  });
+  return command;
+}

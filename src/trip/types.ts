@@ -3,183 +3,92 @@
  * process limits) and the outputs `TripDesignResult` (per setpoint) and `ReferenceComparison`.
  * Every type is plain JSON-serializable data; every numeric key carries its unit.
  *
- * The trip chain is an over-temperature comparator: thermocouple -> cold-junction compensation -> amplifier
- * (fixed-scale or plain gain) -> comparator non-inverting input; the comparator's other input is a threshold
- * made by a resistor divider (two resistors per setpoint, or one multi-tap ladder) from a voltage reference.
- * The comparator trips when the amplified signal rises above the threshold and releases when it falls below
- * the threshold minus its hysteresis.
+ * The trip chain is an over-temperature comparator chain of `chain/` elements: thermocouple -> cold-junction
+ * compensation -> amplifier or fixed-scale amplifier -> comparator; the comparator's other input is a
+ * threshold made by a resistor divider (two resistors per setpoint, or one multi-tap ladder) from a voltage
+ * reference. The comparator trips when the signal rises through the threshold (plus its hysteresis
+ * placement) and releases below it.
  * @module
  */
-import type { ThermocoupleType } from "../data/thermocoupleData.js";
 import type { PreferredSeriesName } from "../data/preferredSeries.js";
+import type {
+  AmbientRange,
+  AmplifierElement,
+  ColdJunctionElement,
+  ComparatorElement,
+  FixedScaleAmplifierElement,
+  MatchedNetwork,
+  ReferenceElement,
+  RegulatorReference,
+  SeriesReference,
+  ShuntReference,
+  SourceDistributionOverride,
+  ThermocoupleElement,
+} from "../chain/types.js";
 
 // ---------------------------------------------------------------------------------------------------------
-// Input: the chain
+// Input
 // ---------------------------------------------------------------------------------------------------------
 
-/**
- * Thermocouple of the trip chain. Its tolerance is the larger of `toleranceC` and `toleranceFraction`·|t|
- * (the shape of IEC 60584-1 and ASTM E230 tolerance tables), treated as a rectangular bound.
- */
-export interface TripThermocouple {
-  readonly type: ThermocoupleType;
-  /** Fixed part of the tolerance, °C, ≥ 0 (e.g. 2.2 for type K standard limits, ASTM E230). */
-  readonly toleranceC: number;
-  /** Proportional part of the tolerance, fraction of |t| in °C, ≥ 0 (e.g. 0.0075). Default 0. */
-  readonly toleranceFraction?: number;
-}
-
-/** Cold junction (reference junction) of the trip chain. */
-export interface TripColdJunction {
-  /** Temperature at which the threshold is designed, °C. */
-  readonly nominalC: number;
-  /** Lowest cold-junction temperature in service, °C (≤ nominalC). */
-  readonly minC: number;
-  /** Highest cold-junction temperature in service, °C (≥ nominalC). */
-  readonly maxC: number;
-  /**
-   * `"compensated"` (default): a sensor measures the cold junction and the chain adds E(t_c + error);
-   * `"none"`: no compensation, the chain sees E(t_h) − E(t_c) and the cold junction moving over
-   * minC…maxC becomes an error source. A fixed-scale amplifier always compensates internally.
-   */
-  readonly compensation?: "compensated" | "none";
-  /** Error bound of the cold-junction sensor or the amplifier's internal compensation, ±°C, ≥ 0. */
-  readonly sensorToleranceC: number;
-}
-
-/**
- * A fixed-scale thermocouple amplifier with internal cold-junction compensation. Output
- * V = offsetVolts + scaleVoltsPerC · t_ind, where t_ind is the temperature it indicates. With
- * `linearizationMicrovoltsPerC` = α it indicates t_ind = [E(t_h) − E(t_c)]/α + t_c (a linear compensator,
- * so its nonlinearity error appears); without it the indication is ideal (t_ind = t_h).
- */
-export interface TripFixedScaleAmplifier {
-  readonly kind: "fixed-scale";
-  /** Output scale, V/°C, > 0 (e.g. 0.005 for 5 mV/°C). */
-  readonly scaleVoltsPerC: number;
-  /** Nominal output at 0 °C indicated, V. Default 0. */
-  readonly offsetVolts?: number;
-  /** Output offset error bound, ±V, ≥ 0. Default 0. */
-  readonly offsetToleranceVolts?: number;
-  /** Gain (scale) error bound, ±fraction, ≥ 0. Default 0. */
-  readonly gainToleranceFraction?: number;
-  /** Linear Seebeck stand-in α of the compensator, µV/°C, > 0; omit for an ideal (linearized) output. */
-  readonly linearizationMicrovoltsPerC?: number;
-}
-
-/** A plain voltage amplifier of gain G on the (compensated) thermocouple EMF: V = G·(EMF + input offset). */
-export interface TripGainAmplifier {
-  readonly kind: "gain";
-  /** Nominal gain, V/V, > 0. */
-  readonly gain: number;
-  /** Gain error bound, ±fraction, ≥ 0. Default 0. */
-  readonly gainToleranceFraction?: number;
-  /** Input-referred offset error bound, ±µV, ≥ 0. Default 0. */
-  readonly inputOffsetToleranceMicrovolts?: number;
-}
-
-/** Amplifier of the trip chain. */
-export type TripAmplifier = TripFixedScaleAmplifier | TripGainAmplifier;
-
-/** Comparator of the trip chain (rising trip, release below trip by the hysteresis). */
-export interface TripComparator {
-  /** Input offset error bound, ±V, ≥ 0. */
-  readonly offsetToleranceVolts: number;
-  /** Hysteresis: trip threshold minus release threshold at the comparator input, V, ≥ 0. */
-  readonly hysteresisVolts: number;
-  /** Hysteresis error bound, ±fraction of hysteresisVolts, ≥ 0. Default 0. */
-  readonly hysteresisToleranceFraction?: number;
-}
-
-/** Ambient range of the electronics (references and resistors), °C; tempcos are referred to 25 °C. */
-export interface TripAmbient {
-  readonly minC: number;
-  readonly maxC: number;
-}
-
-/** Common fields of reference options. */
-export interface ReferenceOptionBase {
+/** Fields shared by every reference option. */
+export interface ReferenceOptionCommon {
   /** Label of the option in results (e.g. "2.5 V series reference, 0.1 %"). */
   readonly name: string;
-  /** Nominal output, V, > 0. */
-  readonly nominalVolts: number;
   /** User-supplied cost of the option (any currency, per unit), ≥ 0; used only in comparisons. */
   readonly cost?: number;
 }
 
-/** An error-free reference (the yardstick of comparisons). */
-export interface IdealReferenceOption extends ReferenceOptionBase {
+/** An error-free reference of a given voltage (the yardstick of comparisons). */
+export interface IdealReferenceOption extends ReferenceOptionCommon {
   readonly kind: "ideal";
+  /** Output, V, > 0. */
+  readonly nominalVolts: number;
 }
 
-/** A precision series (three-terminal) voltage reference. */
-export interface SeriesReferenceOption extends ReferenceOptionBase {
-  readonly kind: "series";
-  /** Initial tolerance at 25 °C, ±fraction, ≥ 0. */
-  readonly initialToleranceFraction: number;
-  /** Box-method temperature coefficient, ppm/°C, ≥ 0; bound TC·max(|T−25 °C|) over the ambient range. */
-  readonly tempcoPpmPerC?: number;
-  /** Long-term drift bound, ±ppm, ≥ 0 (already scaled to the service life). Default 0. */
-  readonly driftPpm?: number;
+/** A reference element of the chain used as given (series reference, regulator rail, or shunt with its resistor). */
+export interface ElementReferenceOption extends ReferenceOptionCommon {
+  readonly kind: "element";
+  readonly element: SeriesReference | RegulatorReference | ShuntReference;
 }
+
+/** A shunt reference whose series resistor is still to be chosen (every other field as in the chain). */
+export type ShuntReferenceToSize = Omit<ShuntReference, "seriesOhms">;
 
 /**
- * A shunt (two-terminal) reference fed from a supply through a series resistor that the engine sizes:
- * R ≤ (V_s,min − V_ref)/(I_load,max + I_shunt,min) with the resistor's tolerance, largest standard value.
+ * A shunt reference whose series resistor the engine sizes from the supply: the largest standard value R with
+ * R·(1 + tolerance) ≤ (V_s,min − V_ref)/(I_load,max + I_shunt,min), where the load includes the threshold
+ * divider's current; then checks the cathode current at V_s,max and minimum load against I_shunt,max and
+ * reports the resistor's dissipation. Needs supplyMinVolts, supplyMaxVolts, shuntMinMilliamps and
+ * shuntMaxMilliamps; `loadMinMilliamps`/`loadMaxMilliamps` are the loads besides the divider.
  */
-export interface ShuntReferenceOption extends ReferenceOptionBase {
-  readonly kind: "shunt";
-  /** Initial tolerance at 25 °C, ±fraction, ≥ 0. */
-  readonly initialToleranceFraction: number;
-  /** Box-method temperature coefficient, ppm/°C, ≥ 0. Default 0. */
-  readonly tempcoPpmPerC?: number;
-  /** Long-term drift bound, ±ppm, ≥ 0. Default 0. */
-  readonly driftPpm?: number;
-  /** Supply feeding the series resistor, lowest and highest, V (> nominalVolts). */
-  readonly supplyMinVolts: number;
-  readonly supplyMaxVolts: number;
-  /** Minimum cathode current for regulation, A, > 0. */
-  readonly minShuntCurrentAmps: number;
-  /** Maximum allowed cathode current, A, > minShuntCurrentAmps. */
-  readonly maxShuntCurrentAmps: number;
-  /** Dynamic impedance, Ω, ≥ 0: the output moves by Z·ΔI over the current span. Default 0. */
-  readonly dynamicImpedanceOhms?: number;
-  /** Load current besides the threshold divider, lowest and highest, A, ≥ 0. Default 0. */
-  readonly otherLoadMinAmps?: number;
-  readonly otherLoadMaxAmps?: number;
-  /** Series-resistor series and tolerance. Default the design's resistor series and tolerance. */
+export interface SizedShuntReferenceOption extends ReferenceOptionCommon {
+  readonly kind: "sized-shunt";
+  readonly element: ShuntReferenceToSize;
+  /** Series of the series resistor. Default the design's resistor series. */
   readonly seriesResistorSeries?: PreferredSeriesName;
+  /** Tolerance of the series resistor, ±fraction. Default the design's resistor tolerance. */
   readonly seriesResistorToleranceFraction?: number;
 }
 
-/** A regulator rail used directly as the reference (e.g. a 5 V linear regulator, ±4 % over line, load, temperature). */
-export interface RegulatorReferenceOption extends ReferenceOptionBase {
-  readonly kind: "regulator";
-  /** Total tolerance over line, load and temperature, ±fraction, ≥ 0. */
-  readonly toleranceFraction: number;
-}
-
 /** One way to make the reference voltage the threshold divider starts from. */
-export type ReferenceOption =
-  | IdealReferenceOption
-  | SeriesReferenceOption
-  | ShuntReferenceOption
-  | RegulatorReferenceOption;
+export type ReferenceOption = IdealReferenceOption | ElementReferenceOption | SizedShuntReferenceOption;
 
-/** Resistors of the threshold divider. */
+/** Resistors of the threshold divider and the bounds of their search. */
 export interface TripResistors {
   /** Preferred series the values come from. */
   readonly series: PreferredSeriesName;
-  /** Tolerance of each resistor, ±fraction, > 0 (e.g. 0.01). */
+  /** Tolerance of each resistor, ±fraction, in (0, 0.5] (e.g. 0.01). */
   readonly toleranceFraction: number;
-  /** Temperature coefficient of each resistor, ±ppm/°C, ≥ 0, taken as independent between resistors. Default 0. */
+  /** Temperature coefficient of each resistor, ±ppm/°C from 25 °C. Default 0. */
   readonly tempcoPpmPerC?: number;
-  /** Bounds on the total divider resistance, Ω. Defaults 1 kΩ and 1 MΩ. */
+  /** When present, the divider is one matched network (ratio tolerance and tracking replace the absolute ones). */
+  readonly matched?: MatchedNetwork;
+  /** Bounds on the total divider resistance, Ω. Defaults 1000 and 1e6. */
   readonly minTotalOhms?: number;
   readonly maxTotalOhms?: number;
-  /** Bounds on the divider current at nominal reference voltage, A; tighten the resistance bounds. */
-  readonly minDividerCurrentAmps?: number;
-  readonly maxDividerCurrentAmps?: number;
+  /** Bounds on the divider current at nominal reference voltage, mA; they tighten the resistance bounds. */
+  readonly minDividerCurrentMilliamps?: number;
+  readonly maxDividerCurrentMilliamps?: number;
   /**
    * `"separate"` (default): one two-resistor divider per setpoint; `"ladder"`: one string of N+1 resistors
    * whose N taps give the N thresholds (selectable setpoints).
@@ -205,20 +114,31 @@ export interface TripSetpoint {
   readonly hazardLimitC?: number;
 }
 
-/** A complete trip design: the input of `designTrip` and `compareReferences`. */
+/**
+ * A complete trip design: the input of `designTrip` and `compareReferences`. The chain elements are those
+ * of `chain/` (same names and units); the divider is what the engine designs.
+ */
 export interface TripDesign {
   /** Label of the design. */
   readonly name?: string;
   readonly setpoints: readonly TripSetpoint[];
-  readonly thermocouple: TripThermocouple;
-  readonly coldJunction: TripColdJunction;
-  readonly amplifier: TripAmplifier;
-  readonly comparator: TripComparator;
+  readonly thermocouple: ThermocoupleElement;
+  /** Required unless the amplifier is a fixed-scale amplifier (which compensates internally). */
+  readonly coldJunction?: ColdJunctionElement;
+  /** Default: none (the comparator sees the compensated EMF directly). */
+  readonly amplifier?: AmplifierElement | FixedScaleAmplifierElement;
+  /** The comparator (offset, hysteresis and its placement). */
+  readonly comparator: ComparatorElement;
   readonly reference: ReferenceOption;
   readonly resistors: TripResistors;
-  readonly ambient: TripAmbient;
+  /** Ambient range of the electronics and the cold junction, °C. */
+  readonly ambient: AmbientRange;
+  /** Cold-junction temperature at which thresholds are designed, °C. Default the middle of the ambient range. */
+  readonly designColdJunctionC?: number;
   /** Default process limits for setpoints that do not give their own. */
   readonly processLimits?: ProcessLimits;
+  /** Per-source distribution overrides, by chain source name. */
+  readonly sourceDistributions?: Readonly<Record<string, SourceDistributionOverride>>;
 }
 
 // ---------------------------------------------------------------------------------------------------------
@@ -241,7 +161,7 @@ export interface TripBand {
 
 /** One error source's share of the trip band. */
 export interface TripErrorSource {
-  /** Input name (e.g. "referenceFraction", "resistorTop", "comparatorOffsetVolts"). */
+  /** Chain source name (e.g. "thermocouple.tolerance", "reference.initial", "divider.resistor0.tolerance"). */
   readonly name: string;
   /** What it is, in words. */
   readonly description: string;
@@ -260,25 +180,25 @@ export interface ThresholdNetwork {
    */
   readonly resistorsOhms: readonly number[];
   readonly totalOhms: number;
-  /** Divider current at nominal reference voltage, A. */
-  readonly currentAmps: number;
+  /** Divider current at nominal reference voltage, mA. */
+  readonly currentMilliamps: number;
 }
 
-/** How the reference was realized (shunt: the sized series resistor and the current span). */
+/** How the reference was realized (sized shunt: the chosen series resistor and the current span). */
 export interface ReferenceRealization {
   readonly name: string;
   readonly kind: ReferenceOption["kind"];
   readonly nominalVolts: number;
-  /** Total error bound of the reference voltage, ±fraction (sum of its parts). */
+  /** The chain element used (absent for the ideal reference). */
+  readonly element?: ReferenceElement;
+  /** Sum of the reference's error bounds, ±fraction of nominalVolts (0 for the ideal reference). */
   readonly toleranceFraction: number;
-  /** Shunt only: the standard series resistor, Ω, and its tolerance. */
-  readonly seriesResistorOhms?: number;
-  /** Shunt only: the cathode current range in service, A. */
-  readonly shuntCurrentMinAmps?: number;
-  readonly shuntCurrentMaxAmps?: number;
-  /** Shunt only: worst dissipation of the series resistor, W. */
+  /** Shunt: the cathode current range in service, mA. */
+  readonly shuntCurrentMinMilliamps?: number;
+  readonly shuntCurrentMaxMilliamps?: number;
+  /** Shunt: worst dissipation of the series resistor, W. */
   readonly seriesResistorPowerWatts?: number;
-  /** Problems (e.g. a shunt current above its maximum); empty when none. */
+  /** Problems (e.g. a cathode current above its maximum); empty when none. */
   readonly problems: readonly string[];
 }
 

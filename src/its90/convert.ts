@@ -96,7 +96,7 @@ export function seebeckCoefficient(type: ThermocoupleTypeInput, temperatureC: nu
  * The published approximate inverse polynomial t = Σ dᵢ·Eⁱ of NIST Monograph 175, as printed. Its error
  * against the reference function is bounded per sub-range by the band in {@link approximateInverseRanges}
  * (e.g. type K 0 to 500 °C: −0.05 to +0.04 °C). Where two published ranges overlap (R and S, 1064 to
- * 1200 °C) the first listed range is used. For exact work use {@link temperatureFromEmf}.
+ * 1200 °C) the range with the narrower stated error band is used (range 3, ±0.0002 °C). For exact work use {@link temperatureFromEmf}.
  * @param type - thermocouple type
  * @param emfMillivolts - EMF, mV, within the published inverse's EMF range (narrower than the forward
  *   function's: e.g. type K −5.891 to 54.886 mV)

@@ -77,8 +77,17 @@ function checkTemperature(ct: CompiledType, temperatureC: unknown, quantity: str
   return temperatureC;
 }
 
+/**
+ * EMFs this close beyond a range end are accepted and map to the end temperature: it is the forward
+ * function's own float64 evaluation error (≤ 1e-10 mV), so a forward result always inverts.
+ */
+const EMF_END_TOLERANCE_MV = 1e-10;
+
 function checkEmf(ct: CompiledType, emfMillivolts: number, quantity: string, context: string): void {
-  if (emfMillivolts > ct.emfAtMaxC || emfMillivolts < ct.lowestEmf) {
+  if (
+    emfMillivolts > ct.emfAtMaxC + EMF_END_TOLERANCE_MV ||
+    emfMillivolts < ct.lowestEmf - (ct.lowestEmf === ct.emfAtMinC ? EMF_END_TOLERANCE_MV : 0)
+  ) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",
       quantity,
@@ -155,10 +164,15 @@ export function _seebeckCoefficient(ct: CompiledType, temperatureC: number): num
 export function _approximateTemperatureFromEmf(ct: CompiledType, emfMillivolts: number): number {
   _requireFinite(emfMillivolts, "EMF", "mV", ct.context);
   const ranges = ct.approximateInverse;
+  // Where published ranges overlap (R and S, 1064 to 1200 °C) take the one with the narrowest stated band.
+  let best: CompiledApproximateInverse | undefined;
   for (let i = 0; i < ranges.length; i++) {
     const r = ranges[i] as CompiledApproximateInverse;
-    if (emfMillivolts >= r.minEmfMillivolts && emfMillivolts <= r.maxEmfMillivolts) return _horner(r.d, emfMillivolts);
+    if (emfMillivolts >= r.minEmfMillivolts && emfMillivolts <= r.maxEmfMillivolts) {
+      if (best === undefined || r.errorMaxC - r.errorMinC < best.errorMaxC - best.errorMinC) best = r;
+    }
   }
+  if (best !== undefined) return _horner(best.d, emfMillivolts);
   let lo = Infinity;
   let hi = -Infinity;
   for (const r of ranges) {
@@ -255,8 +269,8 @@ export function _temperatureFromEmfArray(
   const result = out ?? new Float64Array(n);
   const inv = _exactInverseTables(ct);
   // Fast acceptance test: inside (E at the unambiguous start, E(maxC)]; anything else is checked in full.
-  const lowOk = ct.monotonicFromC > ct.minC ? ct.emfAtMinC : ct.emfAtMinC - Number.MIN_VALUE;
-  const highOk = ct.emfAtMaxC;
+  const lowOk = ct.monotonicFromC > ct.minC ? ct.emfAtMinC : ct.emfAtMinC - EMF_END_TOLERANCE_MV;
+  const highOk = ct.emfAtMaxC + EMF_END_TOLERANCE_MV;
   for (let i = 0; i < n; i++) {
     const e = emfsMillivolts[i] as number;
     if (!(e > lowOk && e <= highOk)) {

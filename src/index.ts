@@ -64,3 +64,29 @@ export {
   type ThermocoupleTypeInput,
 } from "./its90/convert.js";
 export { thermocoupleData, thermocoupleTypes } from "./its90/resolveType.js";
+
+// Firmware lookup tables
+export {
+  buildFirmwareTable,
+  firmwareTableCaution,
+  firmwareTableFromSpec,
+  firmwareTableJsonFormat,
+  formatFirmwareTableC,
+  formatFirmwareTableCsv,
+  formatFirmwareTableJson,
+  interpolateFirmwareTable,
+  type BuildFirmwareTableOptions,
+  type FirmwareAdcChain,
+  type FirmwareColumnFormat,
+  type FirmwareNumberType,
+  type FirmwareTable,
+  type FirmwareTableColumn,
+  type FirmwareTableErrorBound,
+  type FirmwareTableErrorFound,
+  type FirmwareTableFormat,
+  type FirmwareTableKind,
+  type FirmwareTablePlacement,
+  type FirmwareTableSpec,
+  type FirmwareTableUnit,
+  type FormatFirmwareTableCOptions,
+} from "./firmware/index.js";

@@ -1,0 +1,99 @@
+/**
+ * The small, self-contained ADC chain description used by firmware tables.
+ * @module
+ */
+import { _requireFinite, _requireInRange, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
+
+/**
+ * An idealised measurement chain for firmware tables: thermocouple EMF, amplified by `gain`, shifted by
+ * `offsetMillivolts`, converted by a unipolar ADC of `bits` bits over 0 … `referenceVolts`.
+ *
+ * code = (gain · E_measured[mV] + offsetMillivolts) / (1000 · referenceVolts / 2^bits)
+ *
+ * The full chain models (tolerances, drift, noise) live elsewhere in the library; this object only
+ * fixes the nominal mapping a table is built for.
+ */
+export interface FirmwareAdcChain {
+  /** Amplifier gain, V/V, finite and > 0 (e.g. 100). */
+  readonly gain: number;
+  /** Offset added at the ADC input, mV, finite (default 0), e.g. a level shift so negative EMFs stay above code 0. */
+  readonly offsetMillivolts?: number;
+  /** ADC reference (full-scale) voltage, V, finite and > 0 (e.g. 2.5). */
+  readonly referenceVolts: number;
+  /** ADC resolution, bits, an integer 8 … 31. */
+  readonly bits: number;
+  /**
+   * Fixed cold-junction temperature, °C, within the type's range. When given, the table maps the raw code
+   * straight to the hot-junction temperature. When omitted, the table's input is the compensated code
+   * (raw code plus the cold-junction code from a `"coldJunctionToAdcCode"` table of the same chain).
+   */
+  readonly coldJunctionC?: number;
+}
+
+/** A checked chain with its derived LSB. @internal */
+export interface _CheckedAdcChain {
+  readonly gain: number;
+  readonly offsetMillivolts: number;
+  readonly referenceVolts: number;
+  readonly bits: number;
+  readonly coldJunctionC: number | undefined;
+  /** One code in mV at the ADC input. */
+  readonly lsbMillivolts: number;
+  /** Highest code, 2^bits − 1. */
+  readonly maxCode: number;
+}
+
+/** Validates a chain object. @internal */
+export function _checkAdcChain(chain: unknown, context: string): _CheckedAdcChain {
+  if (typeof chain !== "object" || chain === null) {
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity: "ADC chain",
+      value: chain,
+      problem: "is not a chain object { gain, referenceVolts, bits, offsetMillivolts?, coldJunctionC? }",
+      context,
+    });
+  }
+  const c = chain as Record<string, unknown>;
+  const gain = _requireFinite(c["gain"], "ADC chain gain", "V/V", context);
+  if (gain <= 0) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: "ADC chain gain",
+      value: gain,
+      unit: "V/V",
+      context,
+      problem: "is not positive",
+    });
+  }
+  const referenceVolts = _requireFinite(c["referenceVolts"], "ADC reference voltage", "V", context);
+  if (referenceVolts <= 0) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: "ADC reference voltage",
+      value: referenceVolts,
+      unit: "V",
+      context,
+      problem: "is not positive",
+    });
+  }
+  const bits = _requireInRange(c["bits"], "ADC resolution", 8, 31, "bits", context);
+  if (!Number.isInteger(bits)) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: "ADC resolution",
+      value: bits,
+      unit: "bits",
+      context,
+      problem: "is not a whole number",
+    });
+  }
+  const offsetMillivolts =
+    c["offsetMillivolts"] === undefined ? 0 : _requireFinite(c["offsetMillivolts"], "ADC offset", "mV", context);
+  const coldJunctionC =
+    c["coldJunctionC"] === undefined
+      ? undefined
+      : _requireFinite(c["coldJunctionC"], "cold-junction temperature", "°C", context);
+  const lsbMillivolts = (1000 * referenceVolts) / 2 ** bits;
+  return { gain, offsetMillivolts, referenceVolts, bits, coldJunctionC, lsbMillivolts, maxCode: 2 ** bits - 1 };
+}

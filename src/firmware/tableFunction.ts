@@ -1,0 +1,181 @@
+/**
+ * The exact function a firmware table approximates, per table kind, in natural units (input µV, ADC code
+ * or °C; output °C, µV or code), with its second derivative for the interpolation-error bound.
+ * @internal
+ * @module
+ */
+import type { ThermocoupleType } from "../data/thermocoupleData.js";
+import { HotjunctionRangeError } from "../errors.js";
+import { _compile, _emf, _slope, type CompiledType } from "../its90/compiled.js";
+import { _exactInverse, _exactInverseTables } from "../its90/exactInverse.js";
+import { thermocoupleData } from "../its90/resolveType.js";
+import { _checkAdcChain, type _CheckedAdcChain } from "./firmwareAdcChain.js";
+
+/**
+ * What a firmware table converts:
+ * - `"emfToTemperature"`: thermocouple EMF (µV, reference junction at 0 °C) to temperature (°C);
+ * - `"adcCodeToTemperature"`: ADC code of a {@link FirmwareAdcChain} to temperature (°C);
+ * - `"temperatureToEmf"`: temperature (°C) to EMF (µV), for thresholds and alarms;
+ * - `"temperatureToAdcCode"`: temperature (°C) to the ADC code of a chain, for thresholds and alarms;
+ * - `"coldJunctionToEmf"`: cold-junction sensor temperature near ambient (°C) to E(t) (µV), to add to a
+ *   measured EMF before an `"emfToTemperature"` table;
+ * - `"coldJunctionToAdcCode"`: the same in ADC codes of a chain (gain · E(t) / LSB, no offset), to add to
+ *   a raw code before an `"adcCodeToTemperature"` table built without `coldJunctionC`.
+ */
+export type FirmwareTableKind =
+  | "emfToTemperature"
+  | "adcCodeToTemperature"
+  | "temperatureToEmf"
+  | "temperatureToAdcCode"
+  | "coldJunctionToEmf"
+  | "coldJunctionToAdcCode";
+
+/** @internal */
+export const _firmwareTableKinds: readonly FirmwareTableKind[] = [
+  "emfToTemperature",
+  "adcCodeToTemperature",
+  "temperatureToEmf",
+  "temperatureToAdcCode",
+  "coldJunctionToEmf",
+  "coldJunctionToAdcCode",
+];
+
+/** Unit labels of table columns. */
+export type FirmwareTableUnit = "µV" | "code" | "°C";
+
+/** @internal */
+export interface _TableFunction {
+  readonly ct: CompiledType;
+  readonly chain: _CheckedAdcChain | undefined;
+  readonly inputQuantity: string;
+  readonly inputUnit: FirmwareTableUnit;
+  readonly outputQuantity: string;
+  readonly outputUnit: FirmwareTableUnit;
+  /** Lowest and highest hot-junction temperatures the request may span, °C. */
+  readonly allowedMinC: number;
+  readonly allowedMaxC: number;
+  /** Natural input value at a temperature, monotone increasing. */
+  inputAtTemperature(temperatureC: number): number;
+  /** Whether a natural input value lies where the exact function is defined. */
+  inDomain(input: number): boolean;
+  /** Exact output, natural units. */
+  value(input: number): number;
+  /** d²(output)/d(input)², natural units. */
+  curvature(input: number): number;
+  /** Hot-junction (or cold-junction sensor) temperature belonging to an input, °C. */
+  temperatureAt(input: number): number;
+}
+
+function seebeckMicrovolts(ct: CompiledType, temperatureC: number): number {
+  return _slope(ct, temperatureC) * 1000;
+}
+
+/** dS/dt in µV/°C² by a central difference of the analytic Seebeck coefficient, one-sided at the range ends. */
+function seebeckSlope(ct: CompiledType, temperatureC: number): number {
+  const step = 0.01;
+  const a = Math.max(ct.minC, temperatureC - step);
+  const b = Math.min(ct.maxC, temperatureC + step);
+  return (seebeckMicrovolts(ct, b) - seebeckMicrovolts(ct, a)) / (b - a);
+}
+
+/** @internal */
+export function _tableFunction(
+  type: ThermocoupleType,
+  kind: FirmwareTableKind,
+  chainInput: unknown,
+  context: string,
+): _TableFunction {
+  const ct = _compile(thermocoupleData(type));
+  const needsChain = kind === "adcCodeToTemperature" || kind === "temperatureToAdcCode" || kind === "coldJunctionToAdcCode";
+  const chain = needsChain ? _checkAdcChain(chainInput, context) : undefined;
+  let coldEmfMillivolts = 0;
+  if (chain?.coldJunctionC !== undefined) {
+    if (kind === "coldJunctionToAdcCode") {
+      throw new HotjunctionRangeError({
+        code: "INVALID_OPTION",
+        quantity: "ADC chain coldJunctionC",
+        value: chain.coldJunctionC,
+        context,
+        problem: "does not apply to a cold-junction table (its input is the cold-junction temperature)",
+      });
+    }
+    if (chain.coldJunctionC < ct.minC || chain.coldJunctionC > ct.maxC) {
+      throw new HotjunctionRangeError({
+        code: "OUT_OF_RANGE",
+        quantity: "cold-junction temperature",
+        value: chain.coldJunctionC,
+        min: ct.minC,
+        max: ct.maxC,
+        unit: "°C",
+        context,
+      });
+    }
+    coldEmfMillivolts = _emf(ct, chain.coldJunctionC);
+  }
+  const inverse = kind === "emfToTemperature" || kind === "adcCodeToTemperature";
+  if (inverse) {
+    const tables = _exactInverseTables(ct);
+    const lowExclusive = ct.monotonicFromC > ct.minC;
+    // Input → reference EMF (junction at 0 °C) in mV is linear: emf = emfPerInput·x + emfAtZeroInput.
+    let emfPerInput: number;
+    let emfAtZeroInput: number;
+    if (chain !== undefined) {
+      emfPerInput = chain.lsbMillivolts / chain.gain;
+      emfAtZeroInput = -chain.offsetMillivolts / chain.gain + coldEmfMillivolts;
+    } else {
+      emfPerInput = 1e-3;
+      emfAtZeroInput = 0;
+    }
+    const emfOf = (x: number): number => emfPerInput * x + emfAtZeroInput;
+    const kx = emfPerInput * 1000; // µV per input unit
+    return {
+      ct,
+      chain,
+      inputQuantity: chain !== undefined ? (chain.coldJunctionC !== undefined ? "ADC code" : "compensated ADC code") : "EMF",
+      inputUnit: chain !== undefined ? "code" : "µV",
+      outputQuantity: "temperature",
+      outputUnit: "°C",
+      allowedMinC: ct.monotonicFromC,
+      allowedMaxC: ct.maxC,
+      inputAtTemperature: (t) => (_emf(ct, t) - emfAtZeroInput) / emfPerInput,
+      inDomain: (x) => {
+        const e = emfOf(x);
+        return e <= ct.emfAtMaxC && (lowExclusive ? e > ct.emfAtMinC : e >= ct.emfAtMinC);
+      },
+      value: (x) => _exactInverse(ct, tables, emfOf(x)),
+      curvature: (x) => {
+        const t = _exactInverse(ct, tables, emfOf(x));
+        const s = seebeckMicrovolts(ct, t);
+        return (-kx * kx * seebeckSlope(ct, t)) / (s * s * s);
+      },
+      temperatureAt: (x) => _exactInverse(ct, tables, emfOf(x)),
+    };
+  }
+  // Temperature input: output = outputPerMillivolt · (E(t) − subtracted) + outputAtZero.
+  let outputPerMillivolt = 1000;
+  let outputAtZero = 0;
+  let subtracted = 0;
+  if (chain !== undefined) {
+    outputPerMillivolt = chain.gain / chain.lsbMillivolts;
+    if (kind === "temperatureToAdcCode") {
+      outputAtZero = chain.offsetMillivolts / chain.lsbMillivolts;
+      subtracted = coldEmfMillivolts;
+    }
+  }
+  const coldTable = kind === "coldJunctionToEmf" || kind === "coldJunctionToAdcCode";
+  return {
+    ct,
+    chain,
+    inputQuantity: coldTable ? "cold-junction temperature" : "temperature",
+    inputUnit: "°C",
+    outputQuantity: chain !== undefined ? (coldTable ? "cold-junction ADC code" : "ADC code") : coldTable ? "cold-junction EMF" : "EMF",
+    outputUnit: chain !== undefined ? "code" : "µV",
+    allowedMinC: ct.minC,
+    allowedMaxC: ct.maxC,
+    inputAtTemperature: (t) => t,
+    inDomain: (x) => x >= ct.minC && x <= ct.maxC,
+    value: (t) => outputPerMillivolt * (_emf(ct, t) - subtracted) + outputAtZero,
+    curvature: (t) => (outputPerMillivolt / 1000) * seebeckSlope(ct, t),
+    temperatureAt: (t) => t,
+  };
+}

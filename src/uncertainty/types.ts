@@ -84,6 +84,8 @@ export interface PropagationResult<Name extends string = string> {
   readonly trials?: number;
   /** Monte Carlo: seed used. */
   readonly seed?: number;
+  /** Monte Carlo adaptive: whether the JCGM 101 7.9 stopping tolerance was met before `maxTrials`. */
+  readonly converged?: boolean;
   /** How the result was found, in one sentence (e.g. worst-case search strategy). */
   readonly note: string;
 }

@@ -1,0 +1,267 @@
+/**
+ * Input preparation shared by the propagation methods (internal): checked inputs in a canonical order,
+ * correlation matrix and its Cholesky factor, a model evaluator that checks every output, and sensitivities.
+ * @module
+ * @internal
+ */
+import { HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
+import { _checkDistribution, type _CheckedDistribution } from "./_distribution.js";
+import type { Model } from "./types.js";
+
+/** @internal Inputs in canonical (sorted) name order, so results do not depend on the caller's key order. */
+export interface _PreparedInputs {
+  /** Names sorted by UTF-16 code units. */
+  readonly names: readonly string[];
+  /** Names in the caller's order (for the contributions record). */
+  readonly callerOrder: readonly string[];
+  readonly distributions: readonly _CheckedDistribution[];
+}
+
+/** @internal Checks the inputs record. */
+export function _prepareInputs(inputs: unknown): _PreparedInputs {
+  if (typeof inputs !== "object" || inputs === null || Array.isArray(inputs)) {
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity: "inputs",
+      value: inputs,
+      context: "propagate",
+      problem: "is not a record of named distributions",
+    });
+  }
+  const callerOrder = Object.keys(inputs);
+  if (callerOrder.length === 0) {
+    throw new HotjunctionRangeError({
+      code: "INVALID_OPTION",
+      quantity: "inputs",
+      value: 0,
+      context: "propagate",
+      problem: "names no input (at least one is needed)",
+    });
+  }
+  const names = [...callerOrder].sort();
+  const distributions = names.map((name) => _checkDistribution((inputs as Record<string, unknown>)[name], name));
+  return { names, callerOrder, distributions };
+}
+
+/**
+ * @internal Builds the full correlation matrix (row-major, n×n, canonical order) from `[a, b, r]` triples.
+ * Returns `undefined` when no non-zero correlation is given.
+ */
+export function _correlationMatrix(correlations: unknown, names: readonly string[]): Float64Array | undefined {
+  if (correlations === undefined) return undefined;
+  const context = "propagate correlations";
+  if (!Array.isArray(correlations)) {
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity: "correlations",
+      value: correlations,
+      context,
+      problem: "is not a list of [nameA, nameB, r] triples",
+    });
+  }
+  const n = names.length;
+  const matrix = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) matrix[i * n + i] = 1;
+  const seen = new Set<string>();
+  let any = false;
+  correlations.forEach((entry: unknown, index) => {
+    const where = `${context}[${index}]`;
+    if (!Array.isArray(entry) || entry.length !== 3) {
+      throw new HotjunctionTypeError({
+        code: "INVALID_OPTION",
+        quantity: "correlation",
+        value: entry,
+        context: where,
+        problem: "is not a [nameA, nameB, r] triple",
+      });
+    }
+    const [a, b, r] = entry as [unknown, unknown, unknown];
+    for (const name of [a, b]) {
+      if (typeof name !== "string" || !names.includes(name)) {
+        throw new HotjunctionRangeError({
+          code: "UNKNOWN_NAME",
+          quantity: "input name",
+          value: name,
+          context: where,
+          problem: "is not one of the inputs",
+          allowed: names,
+        });
+      }
+    }
+    if (a === b) {
+      throw new HotjunctionRangeError({
+        code: "INVALID_OPTION",
+        quantity: "input name",
+        value: a,
+        context: where,
+        problem: "is correlated with itself (self-correlation is always 1 and must not be given)",
+      });
+    }
+    const key = [a as string, b as string].sort().join("\u0000");
+    if (seen.has(key)) {
+      throw new HotjunctionRangeError({
+        code: "INVALID_OPTION",
+        quantity: "correlation",
+        value: `${String(a)}, ${String(b)}`,
+        context: where,
+        problem: "is given twice for the same pair of inputs",
+      });
+    }
+    seen.add(key);
+    if (typeof r !== "number" || !Number.isFinite(r)) {
+      throw new HotjunctionTypeError({
+        code: "NOT_A_FINITE_NUMBER",
+        quantity: "correlation coefficient",
+        value: r,
+        context: where,
+        problem: "is not a finite number",
+      });
+    }
+    if (r < -1 || r > 1) {
+      throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "correlation coefficient", value: r, min: -1, max: 1, context: where });
+    }
+    const i = names.indexOf(a as string);
+    const j = names.indexOf(b as string);
+    matrix[i * n + j] = r;
+    matrix[j * n + i] = r;
+    if (r !== 0) any = true;
+  });
+  return any ? matrix : undefined;
+}
+
+/**
+ * @internal Lower Cholesky factor L (row-major) with C = L·Lᵀ of a positive semi-definite correlation matrix.
+ * Zero pivots (e.g. r = ±1) are allowed; a matrix that is not positive semi-definite throws.
+ */
+export function _choleskyFactor(matrix: Float64Array, names: readonly string[]): Float64Array {
+  const n = names.length;
+  const lower = new Float64Array(n * n);
+  const tolerance = 1e-10;
+  const fail = (): never => {
+    throw new HotjunctionRangeError({
+      code: "NOT_POSITIVE_DEFINITE",
+      quantity: "correlation matrix",
+      value: names.join(", "),
+      context: "propagate correlations",
+      problem: "is not positive semi-definite (the correlation coefficients contradict each other)",
+    });
+  };
+  for (let j = 0; j < n; j++) {
+    let pivot = matrix[j * n + j] as number;
+    for (let k = 0; k < j; k++) pivot -= (lower[j * n + k] as number) ** 2;
+    if (pivot < -tolerance) fail();
+    const diagonal = pivot > tolerance ? Math.sqrt(pivot) : 0;
+    lower[j * n + j] = diagonal;
+    for (let i = j + 1; i < n; i++) {
+      let value = matrix[i * n + j] as number;
+      for (let k = 0; k < j; k++) value -= (lower[i * n + k] as number) * (lower[j * n + k] as number);
+      if (diagonal === 0) {
+        if (Math.abs(value) > 1e-8) fail();
+        lower[i * n + j] = 0;
+      } else {
+        lower[i * n + j] = value / diagonal;
+      }
+    }
+  }
+  return lower;
+}
+
+/** @internal Calls the model with one reused record and checks every output. */
+export class _ModelEvaluator {
+  readonly record: Record<string, number>;
+  constructor(
+    readonly model: Model,
+    readonly names: readonly string[],
+  ) {
+    this.record = {};
+    for (const name of names) this.record[name] = 0;
+  }
+
+  /** Evaluates at `values` (canonical order). */
+  evaluate(values: ArrayLike<number>): number {
+    const record = this.record;
+    const names = this.names;
+    for (let i = 0; i < names.length; i++) record[names[i] as string] = values[i] as number;
+    const y = this.model(record);
+    if (typeof y !== "number" || y - y !== 0) this.fail(y);
+    return y;
+  }
+
+  /** Throws MODEL_NOT_FINITE naming the input values of the current record. */
+  fail(y: unknown): never {
+    const at = this.names.map((name) => `${name} = ${String(this.record[name])}`).join(", ");
+    const ErrorClass = typeof y === "number" ? HotjunctionRangeError : HotjunctionTypeError;
+    throw new ErrorClass({
+      code: "MODEL_NOT_FINITE",
+      quantity: "model output",
+      value: y,
+      context: "propagate",
+      problem: `is not a finite number at inputs ${at}`,
+    });
+  }
+
+  /**
+   * Calls the model once through a proxy that reports a read of a name that is not an input (a missing input
+   * would otherwise only show as NaN).
+   */
+  probeNames(values: ArrayLike<number>): void {
+    const known = new Set(this.names);
+    const record: Record<string, number> = {};
+    this.names.forEach((name, i) => (record[name] = values[i] as number));
+    const guarded = new Proxy(record, {
+      get(target, key, receiver) {
+        if (typeof key === "string" && !known.has(key) && !(key in Object.prototype)) {
+          throw new HotjunctionRangeError({
+            code: "UNKNOWN_NAME",
+            quantity: "input name",
+            value: key,
+            context: "propagate model",
+            problem: "is read by the model but is not one of the inputs (missing input)",
+            allowed: [...known],
+          });
+        }
+        return Reflect.get(target, key, receiver) as unknown;
+      },
+    });
+    const y = this.model(guarded);
+    if (typeof y !== "number" || y - y !== 0) {
+      this.evaluate(values); // sets the record and throws with the input values
+    }
+  }
+}
+
+/**
+ * @internal Sensitivity coefficients ∂f/∂xᵢ at `point` by Richardson-extrapolated central differences,
+ * c = (4·D(h/2) − D(h))/3 with D(h) = (f(x+h) − f(x−h))/(2h), h = u(xᵢ)/100 (or 1e-6·max(|xᵢ|, 1) when u = 0).
+ */
+export function _sensitivities(
+  evaluator: _ModelEvaluator,
+  point: Float64Array,
+  distributions: readonly _CheckedDistribution[],
+): Float64Array {
+  const n = distributions.length;
+  const result = new Float64Array(n);
+  const x = Float64Array.from(point);
+  for (let i = 0; i < n; i++) {
+    const d = distributions[i] as _CheckedDistribution;
+    const x0 = point[i] as number;
+    const h = d.standardUncertainty > 0 ? d.standardUncertainty / 100 : 1e-6 * Math.max(Math.abs(x0), 1);
+    const difference = (step: number): number => {
+      x[i] = x0 + step;
+      const up = evaluator.evaluate(x);
+      x[i] = x0 - step;
+      const down = evaluator.evaluate(x);
+      x[i] = x0;
+      return (up - down) / (2 * step);
+    };
+    const coarse = difference(h);
+    const fine = difference(h / 2);
+    result[i] = (4 * fine - coarse) / 3;
+  }
+  return result;
+}
+
+/** @internal Means of the inputs in canonical order. */
+export function _meansOf(distributions: readonly _CheckedDistribution[]): Float64Array {
+  return Float64Array.from(distributions, (d) => d.mean);
+}

@@ -1,0 +1,33 @@
+import { _requireFinite } from "../errors.js";
+import { _requireNonNegative, _requireOptionsObject } from "./_checks.js";
+import { _makeDistribution } from "./_distribution.js";
+import type { Distribution } from "./types.js";
+
+/** Options of {@link arcsine}. */
+export interface ArcsineOptions {
+  /** Center of the interval, in the input's unit (finite). */
+  readonly center: number;
+  /** Half-width a, in the input's unit (≥ 0). */
+  readonly halfWidth: number;
+  /** Degrees of freedom (> 0); default `Infinity`. */
+  readonly degreesOfFreedom?: number;
+}
+
+/**
+ * An arcsine (U-shaped) input over [center − a, center + a], as for a sinusoidally varying quantity: u = a/√2 (JCGM 100:2008 4.3.9 note). Sampled as (a + b)/2 + ((b − a)/2)·sin(2πr) (JCGM 101:2008 6.4.6).
+ * @param options - `{ center, halfWidth }` in the input's unit, plus optional `degreesOfFreedom`
+ * @returns a plain, JSON-serializable {@link Distribution}
+ * @throws HotjunctionTypeError for a non-finite value; HotjunctionRangeError for a negative half-width
+ * @example
+ * ```ts
+ * import { arcsine } from "hotjunction";
+ * console.log(Number(arcsine({ center: 0, halfWidth: 1 }).standardUncertainty.toFixed(7))); // 0.7071068
+ * ```
+ */
+export function arcsine(options: ArcsineOptions): Distribution {
+  const context = "arcsine distribution";
+  _requireOptionsObject(options, context, false);
+  const center = _requireFinite(options.center, "center", undefined, context);
+  const halfWidth = _requireNonNegative(options.halfWidth, "half-width", context);
+  return _makeDistribution("arcsine", center, halfWidth * (1 / Math.SQRT2), halfWidth, undefined, options.degreesOfFreedom, context);
+}

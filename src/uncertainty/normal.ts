@@ -1,0 +1,59 @@
+import { _requireFinite } from "../errors.js";
+import { _requireNonNegative, _requireOneOf, _requireOptionsObject, _requirePositive } from "./_checks.js";
+import { _makeDistribution } from "./_distribution.js";
+import type { Distribution } from "./types.js";
+
+/**
+ * Options of {@link normal}: either a standard deviation, or an expanded uncertainty with its coverage factor.
+ */
+export type NormalOptions =
+  | {
+      /** Expectation, in the input's unit (finite). */
+      readonly mean: number;
+      /** Standard deviation u, in the input's unit (≥ 0). */
+      readonly standardDeviation: number;
+      /** Degrees of freedom of u (> 0); default `Infinity`. */
+      readonly degreesOfFreedom?: number;
+    }
+  | {
+      /** Expectation, in the input's unit (finite). */
+      readonly mean: number;
+      /** Expanded uncertainty U, in the input's unit (≥ 0), as on a calibration certificate. */
+      readonly expandedUncertainty: number;
+      /** Coverage factor k of U (> 0), e.g. 2. */
+      readonly coverageFactor: number;
+      /** Degrees of freedom of u (> 0); default `Infinity`. */
+      readonly degreesOfFreedom?: number;
+    };
+
+/**
+ * A normal (Gaussian) input: from a standard deviation, or from an expanded uncertainty U with coverage factor k,
+ * giving u = U/k (JCGM 100:2008 4.3.3). Sampled by the Box–Muller transform (JCGM 101:2008 6.4.7).
+ * @param options - `{ mean, standardDeviation }` or `{ mean, expandedUncertainty, coverageFactor }`, plus
+ *   optional `degreesOfFreedom`; all values in the input's own unit
+ * @returns a plain, JSON-serializable {@link Distribution} (no `halfWidth`: the support is unbounded)
+ * @throws HotjunctionTypeError for a non-finite value or a mix of both forms; HotjunctionRangeError for a
+ *   negative standard deviation or expanded uncertainty, a coverage factor ≤ 0, or degrees of freedom ≤ 0
+ * @example
+ * ```ts
+ * import { normal } from "hotjunction";
+ * console.log(normal({ mean: 10, expandedUncertainty: 0.5, coverageFactor: 2 }).standardUncertainty); // 0.25
+ * console.log("halfWidth" in normal({ mean: 0, standardDeviation: 1 })); // false
+ * ```
+ */
+export function normal(options: NormalOptions): Distribution {
+  const context = "normal distribution";
+  _requireOptionsObject(options, context, false);
+  const form = _requireOneOf(options, [["standardDeviation"], ["expandedUncertainty", "coverageFactor"]], context);
+  const o = options as Record<string, unknown>;
+  const mean = _requireFinite(o["mean"], "mean", undefined, context);
+  let u: number;
+  if (form === 0) {
+    u = _requireNonNegative(o["standardDeviation"], "standard deviation", context);
+  } else {
+    const expanded = _requireNonNegative(o["expandedUncertainty"], "expanded uncertainty", context);
+    const k = _requirePositive(o["coverageFactor"], "coverage factor", context);
+    u = expanded / k;
+  }
+  return _makeDistribution("normal", mean, u, undefined, undefined, o["degreesOfFreedom"], context);
+}

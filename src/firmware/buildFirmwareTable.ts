@@ -8,8 +8,10 @@
  * max|f''| on a segment is bounded from 33 equally spaced samples of f'' as max|f''ₖ| + max|f''ₖ₊₁ − f''ₖ|
  * (the sampled maximum plus the largest step between neighbours, a margin for what lies between samples;
  * this is a sampled bound, not an interval enclosure). f'' comes from the library's analytic Seebeck
- * coefficient S(t) = dE/dt: S'(t) by a central difference of S with a 0.01 °C step; for EMF or code inputs
- * (inverse tables) f'' = −k²·S'/S³ with k the µV per input unit. Rounding adds, for integer outputs,
+ * coefficient S(t) = dE/dt: S'(t) by a central difference of S with a 0.01 °C step within one sub-range
+ * of the reference function; for EMF or code inputs (inverse tables) f'' = −k²·S'/S³ with k the µV per
+ * input unit. Where a segment contains a seam between sub-ranges, the jump J of f' there (type N: S
+ * jumps by 0.23 µV/°C at 0 °C) adds |J|·(s−a)(b−s)/(b−a), and any jump D of f adds |D|. Rounding adds, for integer outputs,
  * half a stored unit at the breakpoints plus half a stored unit in the nearest-rounded interpolation
  * (1 stored unit), and for float outputs 6 unit roundoffs of the largest output magnitude.
  * A dense search of the interpolated result (the C routine's exact arithmetic) against the exact
@@ -246,7 +248,7 @@ function stepInward(x: number, dir: 1 | -1, info: _NumberTypeInfo, numberType: F
  * ```ts
  * import { buildFirmwareTable } from "hotjunction";
  * const table = buildFirmwareTable({ type: "K", kind: "emfToTemperature", minC: 0, maxC: 500, maxErrorOutputUnits: 0.05 });
- * console.log(table.inputs.length, table.errorBound.totalOutputUnits <= 0.05); // 22 true
+ * console.log(table.inputs.length, table.errorBound.totalOutputUnits <= 0.05); // 17 true
  * ```
  * @see the linear interpolation error theorem (any numerical analysis text, from memory)
  */
@@ -412,7 +414,14 @@ export function buildFirmwareTable(options: BuildFirmwareTableOptions): Firmware
       previous = c;
     }
     const factor = inInfo.integer ? (Math.floor(h / 2) * Math.ceil(h / 2)) / 2 : (h * h) / 8;
-    return ((maxAbs + maxStep) * factor) / (input.scale * input.scale);
+    let bound = ((maxAbs + maxStep) * factor) / (input.scale * input.scale);
+    // A seam inside the segment: f = smooth part + J·(x − s)₊ + D·step, and linear interpolation of the
+    // kink errs by at most |J|·(s − a)(b − s)/(b − a); of the value jump by at most |D|.
+    for (const seam of fn.seams) {
+      const s = seam.input * input.scale;
+      if (s > a && s < b) bound += (Math.abs(seam.slopeJump) * ((s - a) * (b - s))) / h / input.scale + seam.valueJump;
+    }
+    return bound;
   };
   const fits = (a: number, b: number): boolean => segmentBound(a, b) <= budget;
 

@@ -52,7 +52,7 @@ export interface FirmwareTableSpec extends BuildFirmwareTableOptions {
  * ```ts
  * import { firmwareTableFromSpec } from "hotjunction";
  * const csv = firmwareTableFromSpec({ format: "csv", type: "K", kind: "coldJunctionToEmf", minC: 0, maxC: 50, maxErrorOutputUnits: 2 });
- * console.log(csv.split("\n")[1]); // 0,0,0,0,0
+ * console.log(csv.split("\n")[1]); // "0,0,0,0,0"
  * ```
  */
 export function firmwareTableFromSpec(spec: FirmwareTableSpec): string {

@@ -17,7 +17,7 @@ const UNIT_WORD: Record<string, string> = { "µV": "microvolts", "°C": "celsius
  * ```ts
  * import { buildFirmwareTable, formatFirmwareTableCsv } from "hotjunction";
  * const table = buildFirmwareTable({ type: "T", kind: "temperatureToEmf", minC: 0, maxC: 100, maxErrorOutputUnits: 5 });
- * console.log(formatFirmwareTableCsv(table).split("\n")[0]); // index,input_stored,output_stored,input_celsius,output_microvolts
+ * console.log(formatFirmwareTableCsv(table).split("\n")[0]); // "index,input_stored,output_stored,input_celsius,output_microvolts"
  * ```
  */
 export function formatFirmwareTableCsv(table: FirmwareTable): string {

@@ -22,7 +22,7 @@ export const firmwareTableJsonFormat = "hotjunction-firmware-table";
  * import { buildFirmwareTable, formatFirmwareTableJson } from "hotjunction";
  * const table = buildFirmwareTable({ type: "T", kind: "temperatureToEmf", minC: 0, maxC: 100, maxErrorOutputUnits: 5 });
  * const parsed = JSON.parse(formatFirmwareTableJson(table));
- * console.log(parsed.kind, parsed.outputs.length === table.outputs.length); // temperatureToEmf true
+ * console.log(parsed.kind, parsed.outputs.length === table.outputs.length); // "temperatureToEmf" true
  * ```
  */
 export function formatFirmwareTableJson(table: FirmwareTable): string {

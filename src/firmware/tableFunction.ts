@@ -6,7 +6,15 @@
  */
 import type { ThermocoupleType } from "../data/thermocoupleData.js";
 import { HotjunctionRangeError } from "../errors.js";
-import { _compile, _emf, _slope, type CompiledType } from "../its90/compiled.js";
+import {
+  _compile,
+  _emf,
+  _emfInSubrange,
+  _slope,
+  _slopeInSubrange,
+  _subrangeIndex,
+  type CompiledType,
+} from "../its90/compiled.js";
 import { _exactInverse, _exactInverseTables } from "../its90/exactInverse.js";
 import { thermocoupleData } from "../its90/resolveType.js";
 import { _checkAdcChain, type _CheckedAdcChain } from "./firmwareAdcChain.js";
@@ -64,18 +72,50 @@ export interface _TableFunction {
   curvature(input: number): number;
   /** Hot-junction (or cold-junction sensor) temperature belonging to an input, °C. */
   temperatureAt(input: number): number;
+  /**
+   * Seams of the reference function (sub-range boundaries) inside the domain, where f'' is not defined:
+   * position (natural input), jump of df/dx across it, and jump of f itself (both natural units).
+   */
+  readonly seams: readonly _Seam[];
+}
+
+/** A sub-range boundary of the reference function, in table units. @internal */
+export interface _Seam {
+  readonly input: number;
+  readonly slopeJump: number;
+  readonly valueJump: number;
 }
 
 function seebeckMicrovolts(ct: CompiledType, temperatureC: number): number {
   return _slope(ct, temperatureC) * 1000;
 }
 
-/** dS/dt in µV/°C² by a central difference of the analytic Seebeck coefficient, one-sided at the range ends. */
+/**
+ * dS/dt in µV/°C² by a central difference (0.01 °C step) of the analytic Seebeck coefficient of the
+ * sub-range holding t, so that a seam between sub-ranges (where S may jump: type N, 0.23 µV/°C at 0 °C)
+ * is not smeared into a spurious spike; the seams are bounded separately.
+ */
 function seebeckSlope(ct: CompiledType, temperatureC: number): number {
   const step = 0.01;
-  const a = Math.max(ct.minC, temperatureC - step);
-  const b = Math.min(ct.maxC, temperatureC + step);
-  return (seebeckMicrovolts(ct, b) - seebeckMicrovolts(ct, a)) / (b - a);
+  const index = _subrangeIndex(ct, temperatureC);
+  const a = temperatureC - step;
+  const b = temperatureC + step;
+  return ((_slopeInSubrange(ct, index, b) - _slopeInSubrange(ct, index, a)) * 1000) / (b - a);
+}
+
+/** Sub-range boundaries strictly inside the type's range, with the jumps of E (mV) and S (mV/°C) across them. */
+function temperatureSeams(ct: CompiledType): { temperatureC: number; emfJump: number; slopeBelow: number; slopeAbove: number }[] {
+  const seams = [];
+  for (let i = 1; i < ct.subranges.length; i++) {
+    const t = (ct.subranges[i] as { minC: number }).minC;
+    seams.push({
+      temperatureC: t,
+      emfJump: _emfInSubrange(ct, i, t) - _emfInSubrange(ct, i - 1, t),
+      slopeBelow: _slopeInSubrange(ct, i - 1, t),
+      slopeAbove: _slopeInSubrange(ct, i, t),
+    });
+  }
+  return seams;
 }
 
 /** @internal */
@@ -128,7 +168,15 @@ export function _tableFunction(
     }
     const emfOf = (x: number): number => emfPerInput * x + emfAtZeroInput;
     const kx = emfPerInput * 1000; // µV per input unit
+    const seams: _Seam[] = temperatureSeams(ct)
+      .filter((m) => m.temperatureC > ct.monotonicFromC)
+      .map((m) => ({
+        input: (_emf(ct, m.temperatureC) - emfAtZeroInput) / emfPerInput,
+        slopeJump: (kx / 1000) * (1 / m.slopeAbove - 1 / m.slopeBelow),
+        valueJump: Math.abs(m.emfJump / m.slopeAbove),
+      }));
     return {
+      seams,
       ct,
       chain,
       inputQuantity: chain !== undefined ? (chain.coldJunctionC !== undefined ? "ADC code" : "compensated ADC code") : "EMF",
@@ -163,7 +211,13 @@ export function _tableFunction(
     }
   }
   const coldTable = kind === "coldJunctionToEmf" || kind === "coldJunctionToAdcCode";
+  const seams: _Seam[] = temperatureSeams(ct).map((m) => ({
+    input: m.temperatureC,
+    slopeJump: outputPerMillivolt * (m.slopeAbove - m.slopeBelow),
+    valueJump: Math.abs(outputPerMillivolt * m.emfJump),
+  }));
   return {
+    seams,
     ct,
     chain,
     inputQuantity: coldTable ? "cold-junction temperature" : "temperature",

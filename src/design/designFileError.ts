@@ -1,0 +1,53 @@
+/**
+ * The error a design file that cannot be used raises: one line naming the file, the place in it, what was
+ * expected and what was found.
+ * @module
+ */
+import { HotjunctionRangeError } from "../errors.js";
+
+/** Fields of a {@link DesignFileError}. */
+export interface DesignFileErrorDetails {
+  /** File name shown at the start of the message (e.g. `"kiln.json"`). */
+  readonly fileName: string;
+  /** Dotted path of the offending value (`"reference.tempcoPpmPerC"`, `"setpoints[1].tripC"`), empty for the whole file. */
+  readonly path: string;
+  /** What was wrong, in words (one line, e.g. `expected a number, found "abc"`). */
+  readonly problem: string;
+  /** How many further problems were found and not shown. Default 0. */
+  readonly moreProblems?: number;
+}
+
+function messageOf(details: DesignFileErrorDetails): string {
+  const at = details.path.length > 0 ? `at ${details.path}: ` : "";
+  const more =
+    details.moreProblems !== undefined && details.moreProblems > 0
+      ? ` (and ${details.moreProblems} more problem${details.moreProblems === 1 ? "" : "s"})`
+      : "";
+  return `${details.fileName}: ${at}${details.problem}${more}`.replace(/[\r\n]+/g, " ");
+}
+
+/**
+ * A design file that is unreadable, malformed or invalid. `code` is `INVALID_DESIGN`; the message is one line:
+ * `<file>: at <path>: <problem>`.
+ * @example
+ * ```ts
+ * import { parseDesign } from "hotjunction/design";
+ * try { parseDesign("{", { fileName: "kiln.json" }); } catch (e) { console.log((e as Error).message); }
+ * // kiln.json: not valid JSON: unexpected end of the file at line 1, column 2
+ * ```
+ */
+export class DesignFileError extends HotjunctionRangeError {
+  /** File name as shown. */
+  readonly fileName: string;
+  /** Dotted path of the offending value; empty for the whole file. */
+  readonly path: string;
+  /** What was wrong. */
+  override readonly problem: string;
+  constructor(details: DesignFileErrorDetails) {
+    super({ code: "INVALID_DESIGN", quantity: "design file", value: details.fileName, problem: details.problem });
+    this.fileName = details.fileName;
+    this.path = details.path;
+    this.problem = details.problem;
+    this.message = messageOf(details);
+  }
+}

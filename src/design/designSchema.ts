@@ -1,0 +1,299 @@
+/**
+ * The design file format (version 1), as zod schemas. Sections follow the library's chain and trip vocabulary
+ * (same key names, units in the names: `tripTemperatureC`, `hazardLimitC`, `nominalVolts`,
+ * `initialAccuracyFraction`, `offsetMillivolts`, `tempcoPpmPerC`...), so a file reads like the objects the
+ * library takes. Every object is strict: an unknown key is an error, so a misspelt key never falls back to a
+ * default. The published JSON Schema (`schema/hotjunction-design.schema.json`) is generated from these.
+ * @module
+ */
+import { z } from "zod";
+
+const temperatureC = (description: string) => z.number().min(-273.15).max(3000).describe(`${description}, °C`);
+const fraction = (description: string) => z.number().min(0).max(1).describe(`${description}, ± fraction (0.01 = 1 %)`);
+const nonNegative = (description: string) => z.number().min(0).describe(description);
+const positive = (description: string) => z.number().positive().describe(description);
+const label = (description: string) => z.string().min(1).max(200).describe(description);
+const seriesName = z.enum(["E6", "E12", "E24", "E48", "E96", "E192"]);
+
+const setpointSchema = z
+  .strictObject({
+    name: label("label of the setpoint in reports"),
+    tripTemperatureC: temperatureC("hot-junction temperature at which the protection should trip (rising)"),
+    maxNormalOperatingC: temperatureC("highest temperature of normal operation (overrides processLimits)").optional(),
+    hazardLimitC: temperatureC("temperature the trip must occur below (overrides processLimits)").optional(),
+  })
+  .describe("one trip setpoint");
+
+const processLimitsSchema = z
+  .strictObject({
+    maxNormalOperatingC: temperatureC("highest temperature of normal operation: no trip at or below it"),
+    hazardLimitC: temperatureC("hazard limit: the trip must occur below it"),
+  })
+  .describe("process limits shared by the setpoints");
+
+const toleranceSchema = z.discriminatedUnion("standard", [
+  z
+    .strictObject({ standard: z.literal("IEC 60584-1"), class: z.union([z.literal(1), z.literal(2), z.literal(3)]) })
+    .describe("IEC 60584-1 tolerance class"),
+  z
+    .strictObject({ standard: z.literal("ASTM E230"), grade: z.enum(["standard", "special"]) })
+    .describe("ASTM E230 limits of error"),
+  z
+    .strictObject({
+      standard: z.literal("custom"),
+      toleranceC: nonNegative("fixed part, ± °C"),
+      fractionOfReading: fraction("part proportional to |t| in °C").optional(),
+      minC: temperatureC("lowest temperature where the statement holds").optional(),
+      maxC: temperatureC("highest temperature where the statement holds").optional(),
+    })
+    .describe("a tolerance of one's own: the larger of toleranceC and fractionOfReading·|t|"),
+]);
+
+const thermocoupleSchema = z
+  .strictObject({
+    type: z.enum(["B", "E", "J", "K", "N", "R", "S", "T"]).describe("thermocouple type letter"),
+    tolerance: toleranceSchema,
+    label: label("label in reports").optional(),
+  })
+  .describe("the thermocouple");
+
+const coldJunctionSchema = z.discriminatedUnion("method", [
+  z
+    .strictObject({
+      method: z.literal("software"),
+      sensorAccuracyC: nonNegative("accuracy of the cold-junction sensor, ± °C"),
+      isothermalGradientC: nonNegative("largest sensor-to-terminal temperature difference, ± °C").optional(),
+      label: label("label in reports").optional(),
+    })
+    .describe("a sensor near the terminals; E(t_sensor) added in firmware"),
+  z
+    .strictObject({
+      method: z.literal("hardware"),
+      compensationMicrovoltsPerC: positive("slope of the compensation voltage, µV/°C"),
+      matchedAtC: temperatureC("temperature where the compensation is exact (default 25)").optional(),
+      sensorAccuracyC: nonNegative("accuracy of the compensator's sensor, ± °C").optional(),
+      compensationAccuracyMicrovolts: nonNegative("accuracy of the compensation voltage, ± µV").optional(),
+      isothermalGradientC: nonNegative("largest sensor-to-terminal temperature difference, ± °C").optional(),
+      label: label("label in reports").optional(),
+    })
+    .describe("a circuit adding a voltage linear in the cold-junction temperature"),
+]);
+
+const gainSchema = z.discriminatedUnion("setBy", [
+  z
+    .strictObject({
+      setBy: z.literal("resistors"),
+      feedbackOhms: positive("feedback resistor, Ω"),
+      groundOhms: positive("resistor from the inverting input to ground, Ω"),
+      toleranceFraction: fraction("tolerance of each resistor"),
+      tempcoPpmPerC: nonNegative("tempco of each resistor, ± ppm/°C").optional(),
+    })
+    .describe("non-inverting gain 1 + feedbackOhms/groundOhms"),
+  z
+    .strictObject({
+      setBy: z.literal("fixed"),
+      gain: positive("nominal gain, V/V"),
+      gainErrorFraction: fraction("gain error").optional(),
+      gainDriftPpmPerC: nonNegative("gain drift, ± ppm/°C").optional(),
+    })
+    .describe("a gain fixed inside the part"),
+]);
+
+const amplifierSchema = z.discriminatedUnion("kind", [
+  z
+    .strictObject({
+      kind: z.literal("voltage"),
+      gain: gainSchema,
+      offsetMicrovolts: nonNegative("input offset at 25 °C, ± µV").optional(),
+      offsetDriftMicrovoltsPerC: nonNegative("input offset drift, ± µV/°C").optional(),
+      biasCurrentNanoamps: nonNegative("input bias current, ± nA").optional(),
+      sourceResistanceOhms: nonNegative("resistance the bias current flows through, Ω").optional(),
+      label: label("label in reports").optional(),
+    })
+    .describe("a voltage amplifier on the compensated EMF"),
+  z
+    .strictObject({
+      kind: z.literal("fixed-scale"),
+      millivoltsPerC: positive("output scale, mV/°C (e.g. 5)"),
+      trimmedMicrovoltsPerC: positive("Seebeck coefficient the part is trimmed to, µV/°C").optional(),
+      accuracyC: nonNegative("stated accuracy of the part, ± °C").optional(),
+      isothermalGradientC: nonNegative("largest die-to-terminal temperature difference, ± °C").optional(),
+      label: label("label in reports").optional(),
+    })
+    .describe("a fixed-scale thermocouple amplifier with internal cold-junction compensation (same type as the thermocouple)"),
+]);
+
+const comparatorSchema = z
+  .strictObject({
+    offsetMillivolts: nonNegative("input offset, ± mV").optional(),
+    hysteresisMillivolts: nonNegative("hysteresis, full width between trip and release, mV").optional(),
+    hysteresisPlacement: z.enum(["centered", "above", "below"]).optional().describe("where the hysteresis sits about the threshold"),
+    label: label("label in reports").optional(),
+  })
+  .describe("the comparator that trips on a rising signal (hardware trip)");
+
+const adcSchema = z
+  .strictObject({
+    bits: z.number().int().min(1).max(32).describe("resolution, bits"),
+    fullScaleVolts: positive("full-scale voltage, V (default: the reference's nominal voltage)").optional(),
+    offsetLsb: nonNegative("offset error, ± LSB").optional(),
+    gainErrorFraction: fraction("gain error, of reading").optional(),
+    inlLsb: nonNegative("integral nonlinearity, ± LSB").optional(),
+    label: label("label in reports").optional(),
+  })
+  .describe("an ADC whose readings firmware compares with the setpoints (instead of comparators)");
+
+const referenceCommon = {
+  name: label("label of the reference option"),
+  nominalVolts: positive("nominal output, V"),
+  cost: nonNegative("cost per unit, any currency (only ranks adequate options)").optional(),
+  supplyMinVolts: positive("lowest supply voltage, V").optional(),
+  supplyMaxVolts: positive("highest supply voltage, V").optional(),
+};
+const tempcoMethod = z.enum(["box", "from-25C"]).optional().describe("how a tempco becomes a bound (default box)");
+const driftScaling = z.enum(["linear", "sqrt"]).optional().describe("how drift scales with service time (default sqrt)");
+
+const referenceSchemaList = [
+  z
+    .strictObject({ kind: z.literal("ideal"), name: referenceCommon.name, nominalVolts: referenceCommon.nominalVolts, cost: referenceCommon.cost })
+    .describe("an error-free reference (a yardstick)"),
+  z
+    .strictObject({
+      kind: z.literal("series"),
+      ...referenceCommon,
+      initialAccuracyFraction: fraction("initial accuracy at 25 °C"),
+      tempcoPpmPerC: nonNegative("temperature coefficient, ppm/°C").optional(),
+      tempcoMethod,
+      lineRegulationPpmPerVolt: nonNegative("line regulation, ± ppm/V").optional(),
+      ratedSupplyVolts: positive("supply at which the initial accuracy holds, V").optional(),
+      loadRegulationPpmPerMilliamp: nonNegative("load regulation, ± ppm/mA").optional(),
+      loadMinMilliamps: nonNegative("lowest load current, mA").optional(),
+      loadMaxMilliamps: nonNegative("highest load current, mA").optional(),
+      ratedLoadMilliamps: nonNegative("load at which the initial accuracy holds, mA").optional(),
+      longTermDriftPpmPer1000h: nonNegative("long-term drift, ± ppm per 1000 h").optional(),
+      serviceHours: positive("service time the drift accumulates over, h").optional(),
+      driftScaling,
+      thermalHysteresisPpm: nonNegative("thermal hysteresis, ± ppm").optional(),
+      maxInputVolts: positive("absolute maximum input, V").optional(),
+      dropoutVolts: nonNegative("dropout voltage, V").optional(),
+    })
+    .describe("a series (three-terminal) voltage reference"),
+  z
+    .strictObject({
+      kind: z.literal("shunt"),
+      ...referenceCommon,
+      initialAccuracyFraction: fraction("initial accuracy at 25 °C"),
+      tempcoPpmPerC: nonNegative("temperature coefficient, ppm/°C").optional(),
+      tempcoMethod,
+      dynamicImpedanceOhms: nonNegative("dynamic impedance, Ω").optional(),
+      seriesOhms: positive("series resistor from the supply, Ω (omit to let the tool choose a standard value)").optional(),
+      seriesResistorSeries: seriesName.optional().describe("preferred series for the chosen series resistor"),
+      seriesResistorToleranceFraction: fraction("tolerance of the chosen series resistor").optional(),
+      loadMinMilliamps: nonNegative("lowest load current besides the threshold divider, mA").optional(),
+      loadMaxMilliamps: nonNegative("highest load current besides the threshold divider, mA").optional(),
+      shuntMinMilliamps: positive("least cathode current for regulation, mA").optional(),
+      shuntMaxMilliamps: positive("greatest allowed cathode current, mA").optional(),
+      ratedCurrentMilliamps: positive("cathode current at which the initial accuracy holds, mA").optional(),
+      longTermDriftPpmPer1000h: nonNegative("long-term drift, ± ppm per 1000 h").optional(),
+      serviceHours: positive("service time, h").optional(),
+      driftScaling,
+    })
+    .describe("a shunt (two-terminal) reference fed through a series resistor"),
+  z
+    .strictObject({
+      kind: z.literal("regulator-rail"),
+      ...referenceCommon,
+      totalToleranceFraction: fraction("total tolerance over line, load and temperature").optional(),
+      initialToleranceFraction: fraction("initial tolerance at 25 °C").optional(),
+      lineRegulationFraction: fraction("line regulation over the supply range").optional(),
+      loadRegulationFraction: fraction("load regulation over the load range").optional(),
+      temperatureDriftFraction: fraction("drift over the temperature range").optional(),
+      maxInputVolts: positive("absolute maximum input, V").optional(),
+      dropoutVolts: nonNegative("dropout voltage, V").optional(),
+    })
+    .describe("a regulator's output rail used as the reference (e.g. a 5 V linear regulator)"),
+] as const;
+
+/** One reference option. */
+export const referenceSchema = z.discriminatedUnion("kind", referenceSchemaList);
+
+const resistorsSchema = z
+  .strictObject({
+    series: seriesName.describe("preferred series (IEC 60063)"),
+    toleranceFraction: z.number().positive().max(0.5).describe("tolerance of each resistor, ± fraction (0.01 = 1 %)"),
+    tempcoPpmPerC: nonNegative("tempco of each resistor, ± ppm/°C").optional(),
+    matched: z
+      .strictObject({
+        ratioToleranceFraction: fraction("ratio tolerance between any two resistors"),
+        trackingPpmPerC: nonNegative("tracking tempco, ± ppm/°C").optional(),
+      })
+      .optional()
+      .describe("the divider is one matched network"),
+    minTotalOhms: positive("least total divider resistance, Ω (default 1000)").optional(),
+    maxTotalOhms: positive("greatest total divider resistance, Ω (default 1e6)").optional(),
+    minDividerCurrentMilliamps: positive("least divider current, mA").optional(),
+    maxDividerCurrentMilliamps: positive("greatest divider current, mA").optional(),
+    topology: z
+      .enum(["separate", "ladder"])
+      .optional()
+      .describe('"separate" (default): a divider per setpoint; "ladder": one string whose taps give the thresholds'),
+  })
+  .describe("resistors of the threshold divider (the tool picks the values)");
+
+const ambientSchema = z
+  .strictObject({
+    minC: temperatureC("lowest ambient of the electronics and the cold junction"),
+    maxC: temperatureC("highest ambient of the electronics and the cold junction"),
+  })
+  .describe("ambient range of the electronics and the cold junction");
+
+const distributionOverrideSchema = z
+  .strictObject({
+    distribution: z.enum(["normal", "rectangular", "triangular", "trapezoidal", "arcsine"]),
+    coverageFactor: positive("normal only: coverage factor k of the stated limit (default 2)").optional(),
+    beta: z.number().min(0).max(1).optional().describe("trapezoidal only: top-to-base ratio (default 0.5)"),
+  })
+  .describe("distribution of one named error source");
+
+const analysisSchema = z
+  .strictObject({
+    acceptanceMethod: z
+      .enum(["worst-case", "rss", "monte-carlo"])
+      .optional()
+      .describe("method whose band decides pass/fail (default worst-case)"),
+    monteCarloTrials: z.number().int().min(100).max(10_000_000).optional().describe("Monte Carlo trials"),
+    seed: z.number().int().min(0).max(4_294_967_295).optional().describe("Monte Carlo seed"),
+  })
+  .describe("how the design is analysed (command-line options override)");
+
+/** The whole design file, version 1. */
+export const designFileSchema = z
+  .strictObject({
+    $schema: z.string().max(2000).optional().describe("path or URL of this JSON Schema (ignored)"),
+    hotjunctionDesign: z.literal(1).describe("design file format version"),
+    name: label("name of the design").optional(),
+    notes: z.string().max(10_000).optional().describe("free text"),
+    setpoints: z.array(setpointSchema).min(1).max(64).describe("trip setpoints"),
+    processLimits: processLimitsSchema.optional(),
+    thermocouple: thermocoupleSchema,
+    coldJunction: coldJunctionSchema.optional(),
+    designColdJunctionC: temperatureC("cold-junction temperature the thresholds are designed at (default mid-ambient)").optional(),
+    amplifier: amplifierSchema.optional(),
+    comparator: comparatorSchema.optional(),
+    adc: adcSchema.optional(),
+    reference: referenceSchema,
+    referenceAlternatives: z.array(referenceSchema).max(32).optional().describe("other reference options for `compare`"),
+    resistors: resistorsSchema.optional(),
+    ambient: ambientSchema,
+    sourceDistributions: z
+      .record(z.string().min(1).max(200), distributionOverrideSchema)
+      .optional()
+      .describe("distribution overrides by error-source name"),
+    analysis: analysisSchema.optional(),
+  })
+  .describe("a hotjunction over-temperature protection design");
+
+/** A design file as validated (shape only; cross-field rules are checked by `parseDesign`). */
+export type DesignFile = z.infer<typeof designFileSchema>;
+/** One reference option as written in a design file. */
+export type DesignReference = z.infer<typeof referenceSchema>;

@@ -1,0 +1,176 @@
+/**
+ * Turns a validated design file into the library's objects: a `TripDesign` (comparator designs), a
+ * `MeasurementChain` (any design: the chain that sweeps and ADC designs evaluate), and the reference options.
+ * @module
+ */
+import type {
+  AdcElement,
+  AmplifierElement,
+  ColdJunctionElement,
+  ComparatorElement,
+  FixedScaleAmplifierElement,
+  MeasurementChain,
+  ReferenceElement,
+  ThermocoupleElement,
+} from "../chain/types.js";
+import type { ReferenceOption, TripDesign, TripResistors, TripSetpoint } from "../trip/types.js";
+import type { DesignFile, DesignReference } from "./designSchema.js";
+
+/** Copies an object without its `undefined` members (exact optional properties). */
+function compact<T>(value: Record<string, unknown>): T {
+  const out: Record<string, unknown> = {};
+  for (const [key, member] of Object.entries(value)) if (member !== undefined) out[key] = member;
+  return out as T;
+}
+
+function thermocoupleOf(design: DesignFile): ThermocoupleElement {
+  return compact<ThermocoupleElement>({ kind: "thermocouple", ...design.thermocouple, tolerance: compact(design.thermocouple.tolerance) });
+}
+
+function coldJunctionOf(design: DesignFile): ColdJunctionElement | undefined {
+  return design.coldJunction === undefined ? undefined : compact<ColdJunctionElement>({ kind: "coldJunction", ...design.coldJunction });
+}
+
+function amplifierOf(design: DesignFile): AmplifierElement | FixedScaleAmplifierElement | undefined {
+  const amplifier = design.amplifier;
+  if (amplifier === undefined) return undefined;
+  if (amplifier.kind === "fixed-scale") {
+    const { kind: _kind, ...rest } = amplifier;
+    return compact<FixedScaleAmplifierElement>({ kind: "fixedScaleAmplifier", type: design.thermocouple.type, ...rest });
+  }
+  const { kind: _kind, gain, ...rest } = amplifier;
+  return compact<AmplifierElement>({ kind: "amplifier", gain: compact(gain), ...rest });
+}
+
+/**
+ * The chain element of a reference option, or `undefined` for an ideal reference (or a shunt whose series
+ * resistor is still to be chosen).
+ * @internal
+ */
+export function _referenceElementOf(reference: DesignReference): ReferenceElement | undefined {
+  switch (reference.kind) {
+    case "ideal":
+      return undefined;
+    case "series": {
+      const { kind: _kind, name, cost: _cost, ...rest } = reference;
+      return compact<ReferenceElement>({ kind: "reference", variant: "series", label: name, ...rest });
+    }
+    case "regulator-rail": {
+      const { kind: _kind, name, cost: _cost, ...rest } = reference;
+      return compact<ReferenceElement>({ kind: "reference", variant: "regulator", label: name, ...rest });
+    }
+    case "shunt": {
+      if (reference.seriesOhms === undefined) return undefined;
+      const { kind: _kind, name, cost: _cost, seriesResistorSeries: _s, seriesResistorToleranceFraction: _t, ...rest } = reference;
+      return compact<ReferenceElement>({ kind: "reference", variant: "shunt", label: name, ...rest });
+    }
+  }
+}
+
+/**
+ * A design file's reference entry as a trip-engine reference option.
+ * @param reference - one entry of `reference` or `referenceAlternatives`
+ * @returns the option (`ideal`, `element`, or `sized-shunt` when a shunt's series resistor is to be chosen)
+ * @example
+ * ```ts
+ * import { referenceOptionFromDesign } from "hotjunction/design";
+ * const option = referenceOptionFromDesign({ kind: "regulator-rail", name: "5 V rail", nominalVolts: 5, totalToleranceFraction: 0.04 });
+ * console.log(option.kind); // element
+ * ```
+ */
+export function referenceOptionFromDesign(reference: DesignReference): ReferenceOption {
+  const cost = reference.cost;
+  if (reference.kind === "ideal") {
+    return compact<ReferenceOption>({ kind: "ideal", name: reference.name, nominalVolts: reference.nominalVolts, cost });
+  }
+  if (reference.kind === "shunt" && reference.seriesOhms === undefined) {
+    const { kind: _kind, name, cost: _cost, seriesResistorSeries, seriesResistorToleranceFraction, seriesOhms: _ohms, ...rest } = reference;
+    return compact<ReferenceOption>({
+      kind: "sized-shunt",
+      name,
+      cost,
+      element: compact({ kind: "reference", variant: "shunt", label: name, ...rest }),
+      seriesResistorSeries,
+      seriesResistorToleranceFraction,
+    });
+  }
+  const element = _referenceElementOf(reference);
+  return compact<ReferenceOption>({ kind: "element", name: reference.name, cost, element });
+}
+
+/**
+ * The trip-engine input of a comparator design file.
+ * @param design - a validated design with a `comparator`
+ * @returns the `TripDesign`
+ * @throws DesignFileError-free: call only on a design that `parseDesign` accepted; throws a plain Error when
+ *   the design has no comparator (an ADC design has no divider to design)
+ * @example
+ * ```ts
+ * import { tripDesignFromDesign, parseDesign } from "hotjunction/design";
+ * import { readFileSync } from "node:fs";
+ * const design = parseDesign(readFileSync("examples/reflow-oven-trip.json", "utf8"));
+ * console.log(tripDesignFromDesign(design).setpoints.length); // 1
+ * ```
+ */
+export function tripDesignFromDesign(design: DesignFile): TripDesign {
+  if (design.comparator === undefined || design.resistors === undefined) {
+    throw new Error("an ADC design has no comparator thresholds to design; use the chain instead");
+  }
+  const setpoints = design.setpoints.map((s) => compact<TripSetpoint>({ ...s }));
+  return compact<TripDesign>({
+    name: design.name,
+    setpoints,
+    thermocouple: thermocoupleOf(design),
+    coldJunction: coldJunctionOf(design),
+    amplifier: amplifierOf(design),
+    comparator: compact<ComparatorElement>({ kind: "comparator", ...design.comparator }),
+    reference: referenceOptionFromDesign(design.reference),
+    resistors: compact<TripResistors>({
+      ...design.resistors,
+      matched: design.resistors.matched === undefined ? undefined : compact(design.resistors.matched),
+    }),
+    ambient: { minC: design.ambient.minC, maxC: design.ambient.maxC },
+    designColdJunctionC: design.designColdJunctionC,
+    processLimits: design.processLimits === undefined ? undefined : { ...design.processLimits },
+    sourceDistributions: design.sourceDistributions === undefined ? undefined : Object.fromEntries(
+      Object.entries(design.sourceDistributions).map(([k, v]) => [k, compact(v)]),
+    ),
+  });
+}
+
+/**
+ * The measurement chain of a design file: thermocouple, cold junction, amplifier, reference and detector (the
+ * comparator with the reference directly, or the ADC). Used for error sweeps over temperature and for ADC designs.
+ * @param design - a validated design
+ * @param reference - which reference option to use (default the design's `reference`)
+ * @returns the chain
+ * @example
+ * ```ts
+ * import { measurementChainFromDesign, parseDesign } from "hotjunction/design";
+ * import { readFileSync } from "node:fs";
+ * const design = parseDesign(readFileSync("examples/heated-enclosure-adc.json", "utf8"));
+ * console.log(measurementChainFromDesign(design).detector.kind); // adc
+ * ```
+ */
+export function measurementChainFromDesign(design: DesignFile, reference: DesignReference = design.reference): MeasurementChain {
+  const referenceElement = _referenceElementOf(reference);
+  let detector: ComparatorElement | AdcElement;
+  if (design.adc !== undefined) {
+    const fullScaleVolts = design.adc.fullScaleVolts ?? (referenceElement === undefined ? reference.nominalVolts : undefined);
+    detector = compact<AdcElement>({ kind: "adc", ...design.adc, fullScaleVolts });
+  } else {
+    detector = compact<ComparatorElement>({ kind: "comparator", ...design.comparator });
+  }
+  return compact<MeasurementChain>({
+    thermocouple: thermocoupleOf(design),
+    coldJunction: coldJunctionOf(design),
+    amplifier: amplifierOf(design),
+    reference: referenceElement,
+    detector,
+    ambient: { minC: design.ambient.minC, maxC: design.ambient.maxC },
+    sourceDistributions: design.sourceDistributions === undefined ? undefined : Object.fromEntries(
+      Object.entries(design.sourceDistributions).map(([k, v]) => [k, compact(v)]),
+    ),
+    label: design.name,
+  });
+}

@@ -1,0 +1,215 @@
+/**
+ * Reading a design file safely: size cap, strict JSON syntax check with line and column, nesting cap, refused
+ * keys, then the zod schema, then cross-field rules. Every failure is one {@link DesignFileError}; nothing else
+ * escapes, whatever the input.
+ * @module
+ */
+import type { z } from "zod";
+import { DesignFileError } from "./designFileError.js";
+import { designFileSchema, type DesignFile } from "./designSchema.js";
+import { _checkDesignRules } from "./designRules.js";
+import { _formatPath, _scanJson } from "./scanJson.js";
+
+/** Largest design file accepted, bytes (1 MiB). */
+export const designFileMaxBytes = 1_048_576;
+/** Deepest nesting of objects and arrays accepted in a design file. */
+export const designFileMaxDepth = 32;
+
+/** Options of {@link parseDesign}. */
+export interface ParseDesignOptions {
+  /** Name shown at the start of error messages. Default `"design"`. */
+  readonly fileName?: string;
+}
+
+/** Result of {@link safeParseDesign}. */
+export type SafeParseDesignResult =
+  | { readonly success: true; readonly design: DesignFile }
+  | { readonly success: false; readonly error: DesignFileError };
+
+function utf8Length(text: string): number {
+  return new TextEncoder().encode(text).length;
+}
+
+function describeFound(value: unknown): string {
+  if (value === undefined) return "nothing";
+  if (value === null) return "null";
+  if (typeof value === "string") return JSON.stringify(value.length > 40 ? `${value.slice(0, 37)}...` : value);
+  if (typeof value === "number") return Number.isFinite(value) ? String(value) : String(value);
+  if (typeof value === "boolean") return String(value);
+  if (Array.isArray(value)) return `an array of ${value.length} item${value.length === 1 ? "" : "s"}`;
+  if (typeof value === "object") return "an object";
+  return `a ${typeof value}`;
+}
+
+const expectedNames: Record<string, string> = {
+  number: "a number",
+  int: "a whole number",
+  string: "a text string",
+  object: "an object",
+  array: "an array",
+  boolean: "true or false",
+  literal: "a fixed value",
+};
+
+function valueAt(root: unknown, path: readonly PropertyKey[]): unknown {
+  let current: unknown = root;
+  for (const key of path) {
+    if (current === null || typeof current !== "object") return undefined;
+    if (!Object.prototype.hasOwnProperty.call(current, key)) return undefined;
+    current = (current as Record<PropertyKey, unknown>)[key];
+  }
+  return current;
+}
+
+function listChoices(values: readonly unknown[]): string {
+  return values.map((v) => JSON.stringify(v)).join(", ");
+}
+
+function bound(issue: { minimum?: unknown; maximum?: unknown; inclusive?: boolean; origin?: string }, low: boolean): string {
+  const limit = String(low ? issue.minimum : issue.maximum);
+  if (issue.origin === "array") return low ? `at least ${limit} item(s)` : `at most ${limit} items`;
+  if (issue.origin === "string") return low ? `at least ${limit} character(s)` : `at most ${limit} characters`;
+  const op = low ? (issue.inclusive === false ? ">" : "≥") : issue.inclusive === false ? "<" : "≤";
+  return `a number ${op} ${limit}`;
+}
+
+/** One zod issue as `{ path, problem }` in the file's words. @internal */
+export function _describeIssue(issue: z.core.$ZodIssue, input: unknown): { path: string; problem: string } {
+  const path = issue.path.filter((p): p is string | number => typeof p !== "symbol");
+  const found = valueAt(input, issue.path);
+  const foundText = describeFound(found);
+  switch (issue.code) {
+    case "invalid_type": {
+      const expected = expectedNames[issue.expected] ?? issue.expected;
+      if (found === undefined) return { path: _formatPath(path), problem: `required key is missing (expected ${expected})` };
+      if (issue.expected === "number" && typeof found === "number") {
+        return { path: _formatPath(path), problem: `expected a finite number, found ${foundText}` };
+      }
+      return { path: _formatPath(path), problem: `expected ${expected}, found ${foundText}` };
+    }
+    case "unrecognized_keys": {
+      const keys = issue.keys.map((k) => JSON.stringify(k.length > 40 ? `${k.slice(0, 37)}...` : k));
+      return {
+        path: _formatPath(path),
+        problem: `unknown key${keys.length === 1 ? "" : "s"} ${keys.join(", ")} (keys are case-sensitive; see the JSON Schema)`,
+      };
+    }
+    case "invalid_value":
+      return {
+        path: _formatPath(path),
+        problem:
+          issue.values.length === 1
+            ? `expected ${listChoices(issue.values)}, found ${foundText}`
+            : `expected one of ${listChoices(issue.values)}, found ${foundText}`,
+      };
+    case "invalid_union": {
+      const options = (issue as { options?: readonly unknown[] }).options;
+      if (options !== undefined) {
+        return {
+          path: _formatPath(path),
+          problem: `expected one of ${listChoices(options)}, found ${foundText}`,
+        };
+      }
+      return { path: _formatPath(path), problem: `does not match any allowed form, found ${foundText}` };
+    }
+    case "too_small":
+      return { path: _formatPath(path), problem: `expected ${bound(issue, true)}, found ${foundText}` };
+    case "too_big":
+      return { path: _formatPath(path), problem: `expected ${bound(issue, false)}, found ${foundText}` };
+    default:
+      return { path: _formatPath(path), problem: `${issue.message}, found ${foundText}` };
+  }
+}
+
+/**
+ * Validates an already-parsed value (e.g. from `JSON.parse`) as a design: schema, then cross-field rules.
+ * @param value - anything
+ * @param options - `fileName` for messages
+ * @returns the design, typed
+ * @throws DesignFileError (code `INVALID_DESIGN`) naming the first problem and counting the others
+ * @example
+ * ```ts
+ * import { validateDesign } from "hotjunction/design";
+ * try { validateDesign({ hotjunctionDesign: 2 }, { fileName: "oven.json" }); }
+ * catch (e) { console.log((e as Error).message.startsWith("oven.json: at hotjunctionDesign: expected 1, found 2")); } // true
+ * ```
+ */
+export function validateDesign(value: unknown, options: ParseDesignOptions = {}): DesignFile {
+  const fileName = options.fileName ?? "design";
+  const result = designFileSchema.safeParse(value);
+  if (!result.success) {
+    const issues = [...result.error.issues];
+    // A misspelt key explains the "missing" issue it causes: show unknown keys first.
+    issues.sort((a, b) => Number(b.code === "unrecognized_keys") - Number(a.code === "unrecognized_keys"));
+    const first = issues[0];
+    const described = first === undefined ? { path: "", problem: "is not a valid design" } : _describeIssue(first, value);
+    throw new DesignFileError({ fileName, path: described.path, problem: described.problem, moreProblems: issues.length - 1 });
+  }
+  const problems = _checkDesignRules(result.data);
+  const firstProblem = problems[0];
+  if (firstProblem !== undefined) {
+    throw new DesignFileError({
+      fileName,
+      path: firstProblem.path,
+      problem: firstProblem.problem,
+      moreProblems: problems.length - 1,
+    });
+  }
+  return result.data;
+}
+
+/**
+ * Parses the text of a design file (JSON, UTF-8, at most {@link designFileMaxBytes} bytes and
+ * {@link designFileMaxDepth} levels deep) and validates it.
+ * @param text - the file's text
+ * @param options - `fileName` for messages
+ * @returns the design, typed
+ * @throws DesignFileError (code `INVALID_DESIGN`) with a one-line message
+ * @example
+ * ```ts
+ * import { parseDesign } from "hotjunction/design";
+ * try { parseDesign('{"hotjunctionDesign": 1,\n "name": tru}', { fileName: "kiln.json" }); }
+ * catch (e) { console.log((e as Error).message); } // kiln.json: not valid JSON at line 2, column 10 (at name): expected a value, found "t"
+ * ```
+ */
+export function parseDesign(text: string, options: ParseDesignOptions = {}): DesignFile {
+  const fileName = options.fileName ?? "design";
+  if (typeof text !== "string") {
+    throw new DesignFileError({ fileName, path: "", problem: `expected the file's text, found ${describeFound(text)}` });
+  }
+  if (text.length > designFileMaxBytes || (text.length * 3 > designFileMaxBytes && utf8Length(text) > designFileMaxBytes)) {
+    throw new DesignFileError({ fileName, path: "", problem: `file is larger than ${designFileMaxBytes} bytes (1 MiB)` });
+  }
+  const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+  const syntax = _scanJson(body, { maxDepth: designFileMaxDepth });
+  if (syntax !== undefined) {
+    const where = syntax.path.length > 0 ? ` (at ${syntax.path})` : "";
+    throw new DesignFileError({
+      fileName,
+      path: "",
+      problem: `not valid JSON at line ${syntax.line}, column ${syntax.column}${where}: ${syntax.problem}`,
+    });
+  }
+  return validateDesign(JSON.parse(body) as unknown, { fileName });
+}
+
+/**
+ * The non-throwing twin of {@link parseDesign}.
+ * @param text - the file's text
+ * @param options - `fileName` for messages
+ * @returns `{ success: true, design }` or `{ success: false, error }`
+ * @example
+ * ```ts
+ * import { safeParseDesign } from "hotjunction/design";
+ * const result = safeParseDesign("[]");
+ * console.log(result.success); // false
+ * ```
+ */
+export function safeParseDesign(text: string, options: ParseDesignOptions = {}): SafeParseDesignResult {
+  try {
+    return { success: true, design: parseDesign(text, options) };
+  } catch (error) {
+    if (error instanceof DesignFileError) return { success: false, error };
+    throw error;
+  }
+}

@@ -214,7 +214,10 @@ export interface SetpointTripResult {
   /** Divider ratio k = V_threshold / V_ref realized, and the ideal one. */
   readonly realizedRatio: number;
   readonly idealRatio: number;
-  /** Standard resistors of this setpoint's divider [top, bottom], Ω (ladder: the equivalent above/below the tap). */
+  /** Index into `networks` of the divider this setpoint uses, and its tap there (0 = below the top resistor). */
+  readonly networkIndex: number;
+  readonly tapIndex: number;
+  /** Resistance above and below this setpoint's tap, Ω (two-resistor: [top, bottom]; ladder: the sums). */
   readonly resistorsOhms: readonly [number, number];
   /** Trip and release temperatures with all parts nominal, °C. */
   readonly nominalTripC: number;
@@ -242,7 +245,8 @@ export interface SetpointTripResult {
 /** Result of `designTrip`. */
 export interface TripDesignResult {
   readonly name?: string;
-  readonly network: ThresholdNetwork;
+  /** Threshold networks: one two-resistor divider per setpoint (input order), or one ladder for all. */
+  readonly networks: readonly ThresholdNetwork[];
   readonly reference: ReferenceRealization;
   /** One entry per setpoint, in input order. */
   readonly setpoints: readonly SetpointTripResult[];
@@ -277,7 +281,7 @@ export interface ReferenceComparisonEntry {
   /** User-supplied cost, or null when not given. */
   readonly cost: number | null;
   readonly reference: ReferenceRealization;
-  readonly network: ThresholdNetwork;
+  readonly networks: readonly ThresholdNetwork[];
   readonly setpoints: readonly ReferenceComparisonSetpoint[];
   /** "adequate" when every setpoint passes with this reference and it has no problems. */
   readonly verdict: "adequate" | "inadequate";

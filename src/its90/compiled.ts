@@ -62,8 +62,8 @@ function toFloat64(values: readonly string[]): Float64Array {
 
 /** Horner evaluation of Σ cᵢ·xⁱ. @internal */
 export function _horner(c: Float64Array, x: number): number {
-  let acc = 0;
-  for (let i = c.length - 1; i >= 0; i--) acc = acc * x + (c[i] as number);
+  let acc = c[c.length - 1] as number;
+  for (let i = c.length - 2; i >= 0; i--) acc = acc * x + (c[i] as number);
   return acc;
 }
 
@@ -94,9 +94,17 @@ export function _emfInSubrange(ct: CompiledType, index: number, temperatureC: nu
   return emf;
 }
 
-/** E(t) in mV with no range check. @internal */
+/** E(t) in mV with no range check (the hot path: sub-range choice and Horner inlined). @internal */
 export function _emf(ct: CompiledType, temperatureC: number): number {
-  return _emfInSubrange(ct, _subrangeIndex(ct, temperatureC), temperatureC);
+  const subs = ct.subranges;
+  let i = subs.length - 1;
+  while (i > 0 && temperatureC < (subs[i] as CompiledSubrange).minC) i--;
+  const sub = subs[i] as CompiledSubrange;
+  if (sub.withExponential) {
+    const d = temperatureC - ct.a2;
+    return _horner(sub.c, temperatureC) + ct.a0 * Math.exp(ct.a1 * d * d);
+  }
+  return _horner(sub.c, temperatureC);
 }
 
 /** dE/dt in mV/°C with no range check, using sub-range `index`. @internal */

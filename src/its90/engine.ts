@@ -12,6 +12,7 @@ import {
   _horner,
   _slope,
   type CompiledApproximateInverse,
+  type CompiledSubrange,
   type CompiledType,
 } from "./compiled.js";
 import { _exactInverse, _exactInverseTables } from "./exactInverse.js";
@@ -131,6 +132,9 @@ function coldJunctionEmf(ct: CompiledType, options: ColdJunctionOptions | undefi
 
 /** @internal */
 export function _emfFromTemperature(ct: CompiledType, temperatureC: number, options?: ColdJunctionOptions): number {
+  if (options === undefined && typeof temperatureC === "number" && temperatureC >= ct.minC && temperatureC <= ct.maxC) {
+    return _emf(ct, temperatureC);
+  }
   const t = checkTemperature(ct, temperatureC, "temperature");
   const emf = _emf(ct, t);
   return options === undefined ? emf : emf - coldJunctionEmf(ct, options);
@@ -138,6 +142,15 @@ export function _emfFromTemperature(ct: CompiledType, temperatureC: number, opti
 
 /** @internal */
 export function _temperatureFromEmf(ct: CompiledType, emfMillivolts: number, options?: ColdJunctionOptions): number {
+  if (
+    options === undefined &&
+    typeof emfMillivolts === "number" &&
+    emfMillivolts > ct.emfAtMinC &&
+    emfMillivolts <= ct.emfAtMaxC
+  ) {
+    // Fast path: a plain EMF inside the unambiguous range (NaN fails the comparisons and goes the long way).
+    return _exactInverse(ct, _exactInverseTables(ct), emfMillivolts);
+  }
   _requireFinite(emfMillivolts, "EMF", "mV", ct.context);
   const coldEmf = coldJunctionEmf(ct, options);
   const total = emfMillivolts + coldEmf;
@@ -248,12 +261,37 @@ export function _emfFromTemperatureArray(
   const result = out ?? new Float64Array(n);
   const minC = ct.minC;
   const maxC = ct.maxC;
+  const subs = ct.subranges;
+  // Hot loop specialised for the usual two sub-ranges: the coefficient arrays and the exponential flag are
+  // hoisted into locals, so each element costs one comparison and one Horner pass.
+  if (subs.length === 2) {
+    const low = subs[0] as CompiledSubrange;
+    const high = subs[1] as CompiledSubrange;
+    const seamC = high.minC;
+    const cLow = low.c;
+    const cHigh = high.c;
+    const expLow = low.withExponential;
+    const expHigh = high.withExponential;
+    const a0 = ct.a0;
+    const a1 = ct.a1;
+    const a2 = ct.a2;
+    for (let i = 0; i < n; i++) {
+      const t = temperaturesC[i] as number;
+      // NaN fails both comparisons, so it also takes the slow path, which names the element.
+      if (!(t >= minC && t <= maxC)) checkTemperature(ct, t, `temperature [${i}]`);
+      if (t >= seamC) {
+        const d = t - a2;
+        result[i] = expHigh ? _horner(cHigh, t) + a0 * Math.exp(a1 * d * d) : _horner(cHigh, t);
+      } else {
+        const d = t - a2;
+        result[i] = expLow ? _horner(cLow, t) + a0 * Math.exp(a1 * d * d) : _horner(cLow, t);
+      }
+    }
+    return result;
+  }
   for (let i = 0; i < n; i++) {
     const t = temperaturesC[i] as number;
-    // NaN fails both comparisons, so it also takes the slow path, which names the element.
-    if (!(t >= minC && t <= maxC)) {
-      checkTemperature(ct, t, `temperature [${i}]`);
-    }
+    if (!(t >= minC && t <= maxC)) checkTemperature(ct, t, `temperature [${i}]`);
     result[i] = _emf(ct, t);
   }
   return result;

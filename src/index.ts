@@ -90,3 +90,6 @@ export {
   type FirmwareTableUnit,
   type FormatFirmwareTableCOptions,
 } from "./firmware/index.js";
+
+// Uncertainty propagation (distributions, worst case, RSS, Monte Carlo)
+export * from "./uncertainty/index.js";

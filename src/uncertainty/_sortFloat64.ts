@@ -27,14 +27,17 @@ export function _sortFloat64(values: Float64Array): void {
       words[2 * i + hiOff] = (hi | 0x80000000) >>> 0;
     }
   }
-  let source = words;
-  let target = new Uint32Array(2 * n);
+  let source: Uint32Array = words;
+  let target: Uint32Array = new Uint32Array(2 * n);
   const counts = new Uint32Array(65536);
   for (let pass = 0; pass < 4; pass++) {
     const wordOff = pass < 2 ? loOff : hiOff;
     const shift = (pass & 1) * 16;
     counts.fill(0);
-    for (let i = 0; i < n; i++) counts[((source[2 * i + wordOff] as number) >>> shift) & 0xffff]++;
+    for (let i = 0; i < n; i++) {
+      const digit = ((source[2 * i + wordOff] as number) >>> shift) & 0xffff;
+      counts[digit] = (counts[digit] as number) + 1;
+    }
     let total = 0;
     for (let b = 0; b < 65536; b++) {
       const c = counts[b] as number;

@@ -4,7 +4,7 @@ import { _minimumTrials } from "./_coverageIntervalSorted.js";
 import { _propagateMonteCarlo } from "./_propagateMonteCarlo.js";
 import { _propagateRss } from "./_propagateRss.js";
 import { _propagateWorstCase } from "./_propagateWorstCase.js";
-import { _correlationMatrix, _meansOf, _ModelEvaluator, _prepareInputs } from "./_prepare.js";
+import { _choleskyFactor, _correlationMatrix, _meansOf, _ModelEvaluator, _prepareInputs } from "./_prepare.js";
 import type { Distribution, Model, PropagateOptions, PropagationMethod, PropagationResult } from "./types.js";
 
 const methods: readonly PropagationMethod[] = ["worst-case", "rss", "monte-carlo"];
@@ -72,6 +72,8 @@ export function propagate<Name extends string>(
   const coverage = o.coverage === undefined ? 0.95 : _requireProbability(o.coverage, "coverage", context);
   const prepared = _prepareInputs(inputs);
   const correlation = _correlationMatrix(o.correlations, prepared.names);
+  // Contradicting correlations are an error for every method, not only where the factor is used.
+  if (correlation !== undefined) _choleskyFactor(correlation, prepared.names);
   const evaluator = new _ModelEvaluator(model as Model, prepared.names);
   evaluator.probeNames(_meansOf(prepared.distributions));
 

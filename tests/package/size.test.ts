@@ -1,0 +1,176 @@
+/**
+ * Size and tree-shaking budgets of the root entry, measured the way an application bundler sees the package:
+ * esbuild bundles a small entry against the built `dist/index.js` (minified, ESM, platform neutral) and the
+ * output is gzipped with zlib at level 9.
+ *
+ * Budgets (bytes, min+gzip; recorded in DEVELOPERS notes, raise them only on purpose):
+ * - one type through `createThermocouple(typeK)`: under 3 kB, and no other type's coefficients in the output;
+ * - the letter-based `emfFromTemperature` / `temperatureFromEmf` (all eight types' data):
+ *   `letterEntryBudgetBytes`;
+ * - the whole root entry (`import * as hj`): `fullEntryBudgetBytes`.
+ * And the CLI's dependencies (argument parser, progress bar, chart scales, atomic writes, schema library) never
+ * reach the root entry: not from `dist/index.js`, its chunks, `dist/index.cjs` or its chunks.
+ */
+import { readdirSync, readFileSync } from "node:fs";
+import { join } from "node:path";
+import { gzipSync } from "node:zlib";
+import { build } from "esbuild";
+import { beforeAll, describe, expect, it } from "vitest";
+import { distDir, ensureDist, projectDir } from "./distBuild.js";
+
+const oneTypeBudgetBytes = 3000;
+const letterEntryBudgetBytes = 9000;
+const fullEntryBudgetBytes = 40000;
+
+const cliOnlyDependencies = ["commander", "d3-scale", "d3-shape", "d3-", "cli-progress", "write-file-atomic", "zod"];
+const typeLetters = ["B", "E", "J", "K", "N", "R", "S", "T"] as const;
+
+interface Measured {
+  code: string;
+  minifiedBytes: number;
+  gzipBytes: number;
+}
+
+async function bundle(entrySource: string): Promise<Measured> {
+  const result = await build({
+    stdin: { contents: entrySource, resolveDir: projectDir, loader: "js", sourcefile: "entry.js" },
+    bundle: true,
+    minify: true,
+    format: "esm",
+    platform: "neutral",
+    mainFields: ["module", "main"],
+    alias: { hotjunction: join(distDir, "index.js") },
+    write: false,
+    logLevel: "silent",
+  });
+  const code = result.outputFiles[0]?.text ?? "";
+  return {
+    code,
+    minifiedBytes: Buffer.byteLength(code),
+    gzipBytes: gzipSync(code, { level: 9 }).byteLength,
+  };
+}
+
+/**
+ * Coefficient strings that occur in one type's data module and in no other: finding any of them in a bundle means
+ * that type's data was pulled in.
+ */
+function distinctiveCoefficients(): Record<(typeof typeLetters)[number], string[]> {
+  const literals = Object.fromEntries(
+    typeLetters.map((letter) => {
+      const text = readFileSync(join(projectDir, "src", "data", `type${letter}.ts`), "utf8");
+      return [letter, new Set([...text.matchAll(/"(-?\d+\.\d{5,}E[-+]\d+)"/g)].map((m) => m[1] ?? ""))];
+    }),
+  ) as Record<(typeof typeLetters)[number], Set<string>>;
+  return Object.fromEntries(
+    typeLetters.map((letter) => [
+      letter,
+      [...literals[letter]].filter((value) => typeLetters.every((other) => other === letter || !literals[other].has(value))),
+    ]),
+  ) as Record<(typeof typeLetters)[number], string[]>;
+}
+
+function typesPresent(code: string, coefficients: Record<(typeof typeLetters)[number], string[]>): string[] {
+  return typeLetters.filter((letter) => coefficients[letter].some((value) => code.includes(value)));
+}
+
+/** Files of `dist/` reached from `entry` through relative imports/requires, including `entry`. */
+function reachableDistFiles(entry: string): string[] {
+  const seen = new Set<string>();
+  const visit = (file: string): void => {
+    if (seen.has(file)) return;
+    seen.add(file);
+    const text = readFileSync(join(distDir, file), "utf8");
+    for (const match of text.matchAll(/(?:\bfrom\s*|\bimport\s*\(\s*|\brequire\s*\(\s*)["'](\.\/[^"']+)["']/g)) {
+      visit((match[1] ?? "").slice(2));
+    }
+  };
+  visit(entry);
+  return [...seen];
+}
+
+/** Bare module specifiers imported or required by a file. */
+function bareSpecifiers(file: string): string[] {
+  const text = readFileSync(join(distDir, file), "utf8");
+  return [...text.matchAll(/(?:\bfrom\s*|\bimport\s*\(\s*|\brequire\s*\(\s*|\bimport\s+)["']([^"'.][^"']*)["']/g)].map(
+    (m) => m[1] ?? "",
+  );
+}
+
+const measurements: Record<string, Measured> = {};
+let coefficients: Record<(typeof typeLetters)[number], string[]>;
+
+beforeAll(async () => {
+  ensureDist();
+  coefficients = distinctiveCoefficients();
+  measurements["typeK"] = await bundle(
+    `import { createThermocouple, typeK } from "hotjunction";
+const k = createThermocouple(typeK);
+console.log(k.emfFromTemperature(500), k.temperatureFromEmf(20.644), k.seebeckCoefficient(25));`,
+  );
+  measurements["letters"] = await bundle(
+    `import { emfFromTemperature, temperatureFromEmf } from "hotjunction";
+console.log(emfFromTemperature("K", 500), temperatureFromEmf("J", 5.269));`,
+  );
+  measurements["full"] = await bundle(`import * as hj from "hotjunction";\nconsole.log(hj);`);
+  const report = Object.entries(measurements)
+    .map(([name, m]) => `${name}: ${m.minifiedBytes} B minified, ${m.gzipBytes} B min+gzip`)
+    .join("; ");
+  console.info(`size.test.ts: ${report}`);
+}, 120_000);
+
+describe("tree-shaking", () => {
+  it("finds distinctive coefficients for every type (the search below can see each type)", () => {
+    for (const letter of typeLetters) expect(coefficients[letter].length, `type ${letter}`).toBeGreaterThan(3);
+    expect(typesPresent(measurements["full"]?.code ?? "", coefficients)).toEqual([...typeLetters]);
+  });
+
+  it("createThermocouple(typeK) pulls in type K's data and no other type's", () => {
+    expect(typesPresent(measurements["typeK"]?.code ?? "", coefficients)).toEqual(["K"]);
+  });
+
+  it("the letter-based functions bring all eight types (that is their price)", () => {
+    expect(typesPresent(measurements["letters"]?.code ?? "", coefficients)).toEqual([...typeLetters]);
+  });
+});
+
+describe("size budgets (min+gzip, zlib level 9)", () => {
+  it(`one type via createThermocouple(typeK) stays under ${oneTypeBudgetBytes} B`, () => {
+    expect(measurements["typeK"]?.gzipBytes).toBeLessThan(oneTypeBudgetBytes);
+  });
+
+  it(`letter-based emfFromTemperature/temperatureFromEmf stays under ${letterEntryBudgetBytes} B`, () => {
+    expect(measurements["letters"]?.gzipBytes).toBeLessThan(letterEntryBudgetBytes);
+  });
+
+  it(`the whole root entry stays under ${fullEntryBudgetBytes} B`, () => {
+    expect(measurements["full"]?.gzipBytes).toBeLessThan(fullEntryBudgetBytes);
+  });
+});
+
+describe("the root entry stays free of CLI dependencies", () => {
+  it("dist/index.js and dist/index.cjs, with every chunk they reach, import none of them", () => {
+    const files = [...reachableDistFiles("index.js"), ...reachableDistFiles("index.cjs")];
+    expect(files.length).toBeGreaterThanOrEqual(2);
+    const offending = files.flatMap((file) =>
+      bareSpecifiers(file)
+        .filter((specifier) => cliOnlyDependencies.some((dependency) => specifier === dependency || specifier.startsWith(dependency)))
+        .map((specifier) => `${file} -> ${specifier}`),
+    );
+    expect(offending).toEqual([]);
+  });
+
+  it("the bundled whole root entry contains none of their code", () => {
+    const code = measurements["full"]?.code ?? "";
+    // Strings that only these packages carry (their error messages and option names).
+    for (const marker of ["commander", "cli-progress", "write-file-atomic", "zod", "d3-scale", "scaleLinear"]) {
+      expect(code.includes(marker), marker).toBe(false);
+    }
+  });
+
+  it("the CLI bundle does use them (the check above looks at the right names)", () => {
+    const cliImports = bareSpecifiers("cli.js");
+    expect(cliImports).toContain("commander");
+    expect(readdirSync(distDir)).toContain("cli.js");
+  });
+});

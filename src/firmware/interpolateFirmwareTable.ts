@@ -73,7 +73,8 @@ export function _interpolateStored(data: _InterpolationData, outInfo: _NumberTyp
  * routine (nearest-rounded integer interpolation in 64 bits, or float/double arithmetic), so the result
  * equals what the firmware computes. Use it to simulate firmware, or as a fast table lookup in
  * TypeScript.
- * @param table - a table from {@link buildFirmwareTable}
+ * @param table - a table from {@link buildFirmwareTable} (treated as immutable: its arrays are copied once
+ *   and cached on first use)
  * @param inputStored - input in stored units (e.g. µV for the default EMF input, a raw ADC code), within
  *   `table.input.min` … `table.input.max`; a whole number for an integer input type
  * @returns output in stored units (divide by `table.output.scale` for natural units)
@@ -87,10 +88,16 @@ export function _interpolateStored(data: _InterpolationData, outInfo: _NumberTyp
  * ```
  */
 export function interpolateFirmwareTable(table: FirmwareTable, inputStored: number): number {
-  const context = `firmware table (${table.kind}, type ${table.thermocoupleType})`;
-  const x = _requireFinite(inputStored, "table input", "stored units", context);
-  const inInfo = _numberTypeInfo(table.input.numberType, "input number type", context);
-  if (x < table.input.min || x > table.input.max) {
+  let prepared = PREPARED.get(table);
+  if (prepared === undefined) {
+    prepared = prepare(table);
+    PREPARED.set(table, prepared);
+  }
+  const x = inputStored;
+  // One comparison pair accepts the common case; NaN, ±Infinity and out-of-range inputs take the slow path.
+  if (!(x >= table.input.min && x <= table.input.max)) {
+    const context = `firmware table (${table.kind}, type ${table.thermocoupleType})`;
+    _requireFinite(x, "table input", "stored units", context);
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",
       quantity: "table input",
@@ -101,26 +108,40 @@ export function interpolateFirmwareTable(table: FirmwareTable, inputStored: numb
       context,
     });
   }
-  if (inInfo.integer && !Number.isInteger(x)) {
+  if (prepared.integerInput && !Number.isInteger(x)) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",
       quantity: "table input",
       value: x,
       unit: "stored units",
-      context,
+      context: `firmware table (${table.kind}, type ${table.thermocoupleType})`,
       problem: `is not a whole number (the input type is ${table.input.numberType})`,
     });
   }
+  return _interpolateStored(prepared.data, prepared.outInfo, x);
+}
+
+interface Prepared {
+  readonly data: _InterpolationData;
+  readonly outInfo: _NumberTypeInfo;
+  readonly integerInput: boolean;
+}
+
+const PREPARED = new WeakMap<FirmwareTable, Prepared>();
+
+function prepare(table: FirmwareTable): Prepared {
+  const context = `firmware table (${table.kind}, type ${table.thermocoupleType})`;
+  const inInfo = _numberTypeInfo(table.input.numberType, "input number type", context);
   const outInfo = _numberTypeInfo(table.output.numberType, "output number type", context);
-  return _interpolateStored(
-    {
-      inputs: table.inputs,
-      outputs: table.outputs,
+  return {
+    data: {
+      inputs: Float64Array.from(table.inputs),
+      outputs: Float64Array.from(table.outputs),
       spacingLog2: table.spacingLog2,
       inputNumberType: table.input.numberType,
       outputNumberType: table.output.numberType,
     },
     outInfo,
-    x,
-  );
+    integerInput: inInfo.integer,
+  };
 }

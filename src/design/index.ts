@@ -17,3 +17,16 @@ export { loadDesignFile, type LoadDesignFileOptions } from "./loadDesignFile.js"
 export { designJsonSchema } from "./designJsonSchema.js";
 export { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign } from "./designToObjects.js";
 export { CAUTION_TEXT } from "../report/caution.js";
+export type {
+  ErrorSweep,
+  ErrorSweepRow,
+  ReportFormat,
+  ReportMethodInfo,
+  TripReport,
+  TripReportSetpoint,
+} from "../report/reportTypes.js";
+export { renderTripReport, tripReportFromResult } from "../report/renderTripReport.js";
+export { renderComparisonReport } from "../report/renderComparisonReport.js";
+export { renderSweepReport } from "../report/renderSweepReport.js";
+export { tripBandChartSvg } from "../report/tripBandChart.js";
+export { errorBandChartSvg } from "../report/errorBandChart.js";

@@ -1,0 +1,76 @@
+/**
+ * SVG chart of an error sweep: the error band (indicated minus true) of each method over temperature, with a
+ * zero line. Bands are told apart by fill pattern and direct labels, so the chart reads without colour.
+ * @module
+ */
+import { scaleLinear } from "d3-scale";
+import { area, line } from "d3-shape";
+import { _describeMethods, _methodShortName } from "./formatting.js";
+import type { ErrorSweep } from "./reportTypes.js";
+import { _bottomAxis, _element, _leftAxis, _methodFill, _splitCaution, _svgDocument, _text } from "./svg.js";
+
+/**
+ * Draws an error sweep as an SVG document (text).
+ * @param sweep - sweep data (at least two rows)
+ * @returns SVG text
+ * @example
+ * ```ts
+ * import { errorBandChartSvg } from "hotjunction/design";
+ * const rows = [0, 100].map((t) => ({ temperatureC: t, nominalErrorC: 0, bands: [{ method: "worst-case" as const, errorLowC: -1, errorHighC: 1 }] }));
+ * const svg = errorBandChartSvg({ title: "Error sweep", rows, notes: [], methods: { methods: ["worst-case"], coverage: 0.95 } });
+ * console.log(svg.includes("error, °C")); // true
+ * ```
+ */
+export function errorBandChartSvg(sweep: ErrorSweep): string {
+  const width = 900;
+  const height = 520;
+  const margin = { left: 80, right: 190, top: 50, bottom: 110 };
+  const title = `${sweep.title}${sweep.designName !== undefined ? `: ${sweep.designName}` : ""}`;
+  const temperatures = sweep.rows.map((r) => r.temperatureC);
+  const errors = sweep.rows.flatMap((r) => [r.nominalErrorC, ...r.bands.flatMap((b) => [b.errorLowC, b.errorHighC])]);
+  const tMin = Math.min(...temperatures);
+  const tMax = Math.max(...temperatures);
+  const eMin = Math.min(0, ...errors);
+  const eMax = Math.max(0, ...errors);
+  const x = scaleLinear().domain(tMin === tMax ? [tMin - 1, tMax + 1] : [tMin, tMax]).range([margin.left, width - margin.right]);
+  const y = scaleLinear().domain(eMin === eMax ? [eMin - 1, eMax + 1] : [eMin, eMax]).range([height - margin.bottom, margin.top]).nice();
+  const methods = sweep.rows[0]?.bands.map((b) => b.method) ?? [];
+  const parts: string[] = [_text(width / 2, 26, title, { "text-anchor": "middle", "font-size": 16, "font-weight": "bold", class: "chart-title" })];
+  // Widest band first so narrower ones stay visible on top.
+  const order = [...methods].sort((a, b) => ["worst-case", "monte-carlo", "rss"].indexOf(a) - ["worst-case", "monte-carlo", "rss"].indexOf(b));
+  for (const method of order) {
+    const index = methods.indexOf(method);
+    const bandArea = area<(typeof sweep.rows)[number]>()
+      .x((r) => x(r.temperatureC))
+      .y0((r) => y(r.bands[index]?.errorLowC ?? 0))
+      .y1((r) => y(r.bands[index]?.errorHighC ?? 0));
+    parts.push(_element("path", { class: `band band-${method}`, d: bandArea(sweep.rows) ?? "", fill: _methodFill[method], stroke: "#000000", "stroke-width": 1, "fill-opacity": method === "worst-case" ? 0.6 : 0.9 }));
+    const last = sweep.rows[sweep.rows.length - 1];
+    const lastBand = last?.bands[index];
+    if (last !== undefined && lastBand !== undefined) {
+      parts.push(_text(width - margin.right + 8, y(lastBand.errorHighC) + 4, `${_methodShortName(method)} upper`, { "font-size": 11, class: "direct-label" }));
+      parts.push(_text(width - margin.right + 8, y(lastBand.errorLowC) + 4, `${_methodShortName(method)} lower`, { "font-size": 11, class: "direct-label" }));
+    }
+  }
+  const nominal = line<(typeof sweep.rows)[number]>().x((r) => x(r.temperatureC)).y((r) => y(r.nominalErrorC));
+  parts.push(_element("path", { class: "nominal", d: nominal(sweep.rows) ?? "", fill: "none", stroke: "#000000", "stroke-width": 2 }));
+  parts.push(_element("line", { class: "zero", x1: margin.left, x2: width - margin.right, y1: y(0), y2: y(0), stroke: "#000000", "stroke-dasharray": "4 3" }));
+  parts.push(_bottomAxis(x, height - margin.bottom, "true hot-junction temperature, °C"));
+  parts.push(_leftAxis(y, margin.left, "error (indicated − true), °C"));
+  const legendY = height - margin.bottom + 52;
+  const legend: string[] = [];
+  methods.forEach((m, i) => {
+    const lx = margin.left + i * 170;
+    legend.push(_element("rect", { x: lx, y: legendY, width: 26, height: 12, fill: _methodFill[m], stroke: "#000000" }));
+    legend.push(_text(lx + 32, legendY + 10, `${_methodShortName(m)} band`, { "font-size": 12 }));
+  });
+  const lx = margin.left + methods.length * 170;
+  legend.push(_element("line", { x1: lx, x2: lx + 26, y1: legendY + 6, y2: legendY + 6, stroke: "#000000", "stroke-width": 2 }));
+  legend.push(_text(lx + 32, legendY + 10, "nominal error", { "font-size": 12 }));
+  parts.push(_element("g", { class: "legend" }, legend.join("")));
+  const [cautionFirst, cautionRest] = _splitCaution();
+  parts.push(_text(12, height - 42, _describeMethods(sweep.methods), { "font-size": 10, class: "method-note" }));
+  parts.push(_text(12, height - 28, `Caution: ${cautionFirst}`, { "font-size": 10, class: "caution" }));
+  parts.push(_text(12, height - 14, cautionRest, { "font-size": 10, class: "caution" }));
+  return _svgDocument(width, height, title, parts.join(""));
+}

@@ -1,0 +1,75 @@
+/**
+ * The data the report renderers take: plain objects, independent of how they were computed (comparator trip
+ * design, firmware trip from an ADC chain, error sweep).
+ * @module
+ */
+import type { TripBand, TripErrorSource } from "../trip/types.js";
+
+/** Report output formats. `text` is the terminal table (readable without colour). */
+export type ReportFormat = "text" | "json" | "markdown" | "csv";
+
+/** How the numbers were found: methods, coverage, Monte Carlo trials and seed. Printed with every report. */
+export interface ReportMethodInfo {
+  /** Methods shown (e.g. `["worst-case", "rss", "monte-carlo"]`). */
+  readonly methods: readonly ("worst-case" | "rss" | "monte-carlo")[];
+  /** Method whose band decides pass/fail, when the report judges. */
+  readonly acceptanceMethod?: "worst-case" | "rss" | "monte-carlo";
+  /** Coverage probability of the RSS and Monte Carlo intervals (e.g. 0.95). */
+  readonly coverage: number;
+  /** Monte Carlo trials, when Monte Carlo ran. */
+  readonly trials?: number;
+  /** Monte Carlo seed, when Monte Carlo ran. */
+  readonly seed?: number;
+}
+
+/** One setpoint in a trip report. */
+export interface TripReportSetpoint {
+  readonly name: string;
+  /** Desired trip temperature, °C. */
+  readonly tripTemperatureC: number;
+  /** Trip temperature with all parts nominal, °C. */
+  readonly nominalTripC: number;
+  /** Bands by method, in the order shown. */
+  readonly bands: readonly TripBand[];
+  readonly maxNormalOperatingC: number;
+  readonly hazardLimitC: number;
+  readonly marginToNormalC: number;
+  readonly marginToHazardC: number;
+  readonly pass: boolean;
+  readonly reason: string;
+  /** Error sources, largest first. */
+  readonly errorSources: readonly TripErrorSource[];
+}
+
+/** A trip report. */
+export interface TripReport {
+  /** Heading (e.g. "Trip design"). */
+  readonly title: string;
+  readonly designName?: string;
+  readonly pass: boolean;
+  readonly setpoints: readonly TripReportSetpoint[];
+  /** Lines describing the hardware found (reference, resistor networks...). */
+  readonly details: readonly string[];
+  /** Assumptions and how results were found. */
+  readonly notes: readonly string[];
+  readonly methods: ReportMethodInfo;
+}
+
+/** One row of an error sweep: the chain's reading error bounds at one true temperature. */
+export interface ErrorSweepRow {
+  /** True hot-junction temperature, °C. */
+  readonly temperatureC: number;
+  /** Nominal indicated minus true, °C. */
+  readonly nominalErrorC: number;
+  /** Error bounds (indicated − true) by method, °C. */
+  readonly bands: readonly { readonly method: "worst-case" | "rss" | "monte-carlo"; readonly errorLowC: number; readonly errorHighC: number }[];
+}
+
+/** An error sweep of a chain over temperature. */
+export interface ErrorSweep {
+  readonly title: string;
+  readonly designName?: string;
+  readonly rows: readonly ErrorSweepRow[];
+  readonly notes: readonly string[];
+  readonly methods: ReportMethodInfo;
+}

@@ -93,3 +93,15 @@ export {
 
 // Uncertainty propagation (distributions, worst case, RSS, Monte Carlo)
 export * from "./uncertainty/index.js";
+
+// Measurement-chain models (elements, error sources, reading and trip models)
+export * from "./chain/index.js";
+export {
+  astmE230Tolerances,
+  iecToleranceClasses,
+  type ToleranceBand,
+  type ToleranceTable,
+} from "./data/toleranceClasses.js";
+
+// Over-temperature trip design (preferred series, threshold dividers, trip bands, reference comparison)
+export * from "./trip/index.js";

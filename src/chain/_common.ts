@@ -1,0 +1,219 @@
+/**
+ * Helpers shared by the chain element modules (internal): input checks with the chain's wording, the
+ * construction of named error sources, and the ambient spans that drifts are taken over.
+ * @module
+ * @internal
+ */
+import { _invalidChoice, _requireFinite, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
+import { arcsine } from "../uncertainty/arcsine.js";
+import { normal } from "../uncertainty/normal.js";
+import { rectangular } from "../uncertainty/rectangular.js";
+import { trapezoidal } from "../uncertainty/trapezoidal.js";
+import { triangular } from "../uncertainty/triangular.js";
+import type { Distribution } from "../uncertainty/types.js";
+import type {
+  AmbientRange,
+  ChainErrorSource,
+  ChainSourceElement,
+  ErrorSourceUnit,
+  SourceDistributionOverride,
+} from "./types.js";
+
+/** Temperature at which data sheets state initial values and from which drifts are counted, °C. */
+export const _specReferenceC = 25;
+
+/** @internal Throws unless `value` is a plain object. */
+export function _requireObject(value: unknown, quantity: string, context: string): Record<string, unknown> {
+  if (typeof value !== "object" || value === null || Array.isArray(value)) {
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity,
+      value,
+      context,
+      problem: "is not an object",
+    });
+  }
+  return value as Record<string, unknown>;
+}
+
+/** @internal A finite number ≥ 0 (a ± limit). */
+export function _requireNonNegative(value: unknown, quantity: string, unit: string, context: string): number {
+  const x = _requireFinite(value, quantity, unit, context);
+  if (x < 0) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: x,
+      min: 0,
+      unit,
+      context,
+      problem: "is negative (a ± limit is stated as a non-negative half-width)",
+    });
+  }
+  return x;
+}
+
+/** @internal A finite number > 0. */
+export function _requirePositive(value: unknown, quantity: string, unit: string, context: string): number {
+  const x = _requireFinite(value, quantity, unit, context);
+  if (!(x > 0)) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: x,
+      min: 0,
+      unit,
+      context,
+      problem: "is not positive",
+    });
+  }
+  return x;
+}
+
+/** @internal Optional ± limit, default 0. */
+export function _optionalLimit(value: unknown, quantity: string, unit: string, context: string): number {
+  return value === undefined ? 0 : _requireNonNegative(value, quantity, unit, context);
+}
+
+/** @internal A fraction limit in [0, 1). */
+export function _requireFraction(value: unknown, quantity: string, context: string): number {
+  const x = _requireNonNegative(value, quantity, "fraction", context);
+  if (x >= 1) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: x,
+      min: 0,
+      max: 1,
+      unit: "fraction",
+      context,
+      problem: "is 1 or more (fractions are stated as 0.01 for 1 %)",
+    });
+  }
+  return x;
+}
+
+/** @internal A min/max pair with min ≤ max. */
+export function _requireOrderedPair(
+  min: unknown,
+  max: unknown,
+  quantityMin: string,
+  quantityMax: string,
+  unit: string,
+  context: string,
+): readonly [number, number] {
+  const lo = _requireFinite(min, quantityMin, unit, context);
+  const hi = _requireFinite(max, quantityMax, unit, context);
+  if (lo > hi) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: quantityMax,
+      value: hi,
+      min: lo,
+      unit,
+      context,
+      problem: `is below ${quantityMin} ${lo} ${unit}`,
+    });
+  }
+  return [lo, hi];
+}
+
+/** @internal Checks an ambient range (within −273.15 … 1000 °C, min ≤ max). */
+export function _checkAmbient(ambient: unknown, context: string): AmbientRange {
+  const o = _requireObject(ambient, "ambient", context);
+  const [minC, maxC] = _requireOrderedPair(o["minC"], o["maxC"], "ambient minC", "ambient maxC", "°C", context);
+  if (minC < -273.15) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: "ambient minC",
+      value: minC,
+      min: -273.15,
+      unit: "°C",
+      context,
+      problem: "is below absolute zero",
+    });
+  }
+  return { minC, maxC };
+}
+
+/** @internal Box-method span of the ambient range, °C. */
+export function _ambientSpanC(ambient: AmbientRange): number {
+  return ambient.maxC - ambient.minC;
+}
+
+/** @internal Largest distance of the ambient range from 25 °C, °C. */
+export function _ambientFromReferenceC(ambient: AmbientRange): number {
+  return Math.max(Math.abs(ambient.maxC - _specReferenceC), Math.abs(ambient.minC - _specReferenceC));
+}
+
+/** @internal Context of a source construction. */
+export interface _SourceContext {
+  readonly overrides: Readonly<Record<string, SourceDistributionOverride>> | undefined;
+}
+
+const kinds = ["normal", "rectangular", "triangular", "trapezoidal", "arcsine"] as const;
+
+/** @internal The distribution of a ± limit L about `center`, rectangular unless overridden. */
+export function _limitDistribution(
+  name: string,
+  limit: number,
+  center: number,
+  override: SourceDistributionOverride | undefined,
+): Distribution {
+  if (override === undefined) return rectangular({ center, halfWidth: limit });
+  const context = `distribution override of ${name}`;
+  const o = _requireObject(override, "override", context);
+  switch (o["distribution"]) {
+    case "rectangular":
+      return rectangular({ center, halfWidth: limit });
+    case "triangular":
+      return triangular({ center, halfWidth: limit });
+    case "arcsine":
+      return arcsine({ center, halfWidth: limit });
+    case "trapezoidal": {
+      const beta = o["beta"] === undefined ? 0.5 : _requireFinite(o["beta"], "beta", undefined, context);
+      return trapezoidal({ center, halfWidth: limit, beta });
+    }
+    case "normal": {
+      const k = o["coverageFactor"] === undefined ? 2 : _requirePositive(o["coverageFactor"], "coverage factor", "", context);
+      return normal({ mean: center, standardDeviation: limit / k });
+    }
+    default:
+      return _invalidChoice("distribution", o["distribution"], kinds, context);
+  }
+}
+
+/** @internal Builds one named source (a ± limit about `center`, default 0). */
+export function _source(
+  ctx: _SourceContext,
+  name: string,
+  element: ChainSourceElement,
+  description: string,
+  unit: ErrorSourceUnit,
+  limit: number,
+  center = 0,
+): ChainErrorSource {
+  return {
+    name,
+    element,
+    description,
+    unit,
+    limit,
+    distribution: _limitDistribution(name, limit, center, ctx.overrides?.[name]),
+  };
+}
+
+/** @internal Reads an input by name; throws a precise error when a model is called without it. */
+export function _input(inputs: Readonly<Record<string, number>>, name: string): number {
+  const v = inputs[name];
+  if (v === undefined) {
+    throw new HotjunctionTypeError({
+      code: "UNKNOWN_NAME",
+      quantity: "input",
+      value: name,
+      context: "chain model",
+      problem: "is missing from the inputs record",
+    });
+  }
+  return v;
+}

@@ -1,0 +1,343 @@
+/**
+ * Compiles a chain description once into its element stages and the hot transfer functions the chain
+ * models run (allocation-free: they read source values from the record by precomputed names).
+ * @module
+ * @internal
+ */
+import type { ThermocoupleType } from "../data/thermocoupleData.js";
+import { HotjunctionRangeError, _invalidChoice } from "../errors.js";
+import { _compile, type CompiledType } from "../its90/compiled.js";
+import { _emfFromTemperature, _temperatureFromEmf } from "../its90/engine.js";
+import { thermocoupleData } from "../its90/resolveType.js";
+import { rectangular } from "../uncertainty/rectangular.js";
+import { _checkAmbient, _requireObject, _requirePositive, type _SourceContext } from "./_common.js";
+import { _adcStage, type _AdcStage } from "./adc.js";
+import { _amplifierStage, _unityAmplifierStage, type _AmplifierStage } from "./amplifier.js";
+import { _coldJunctionStage, type _ColdJunctionStage } from "./coldJunction.js";
+import { _comparatorStage, type _ComparatorStage } from "./comparator.js";
+import { _dividerStage, type _DividerStage } from "./divider.js";
+import { _fixedScaleStage, type _FixedScaleStage } from "./fixedScaleAmplifier.js";
+import { _referenceStage, type _ReferenceStage } from "./reference.js";
+import { _checkThermocouple, _thermocoupleSources } from "./thermocouple.js";
+import type {
+  AdcElement,
+  AmbientRange,
+  AmplifierElement,
+  ChainErrorSource,
+  ComparatorElement,
+  DividerElement,
+  FixedScaleAmplifierElement,
+  MeasurementChain,
+  ReferenceElement,
+  ThermocoupleElement,
+} from "./types.js";
+
+/** Name of the ambient (cold-junction temperature) input. */
+export const _ambientInputName = "ambient.coldJunctionC";
+
+type Inputs = Readonly<Record<string, number>>;
+
+/** @internal A compiled chain. */
+export interface _CompiledChain {
+  readonly chain: MeasurementChain;
+  readonly context: string;
+  readonly type: ThermocoupleType;
+  readonly ct: CompiledType;
+  readonly thermocouple: ThermocoupleElement;
+  readonly ambient: AmbientRange;
+  readonly ctx: _SourceContext;
+  readonly coldJunction: _ColdJunctionStage | undefined;
+  readonly amplifier: _AmplifierStage;
+  readonly fixedScale: _FixedScaleStage | undefined;
+  readonly reference: _ReferenceStage | undefined;
+  readonly divider: _DividerStage | undefined;
+  readonly comparator: _ComparatorStage | undefined;
+  readonly adc: _AdcStage | undefined;
+  /** Nominal ADC full scale, V. */
+  readonly adcFullScaleVolts: number;
+  /** Whether the ADC's full scale is the chain's reference. */
+  readonly adcUsesReference: boolean;
+  /** Whether the ambient is an input (range wider than a point). */
+  readonly hasAmbientInput: boolean;
+  /** Ambient source, when an input. */
+  readonly ambientSource: ChainErrorSource | undefined;
+  /** Ambient mean (center of the range), °C. */
+  readonly ambientCenterC: number;
+  /** Every source that does not depend on the hot-junction temperature, in listing order. */
+  readonly fixedSources: readonly ChainErrorSource[];
+}
+
+/** @internal Compiles and checks a chain. */
+export function _compileChain(chain: MeasurementChain): _CompiledChain {
+  const context = "measurement chain";
+  const o = _requireObject(chain, "chain", context);
+  const thermocouple = _checkThermocouple(o["thermocouple"], `${context}, thermocouple`);
+  const type = thermocouple.type;
+  const ct = _compile(thermocoupleData(type));
+  const ambient = _checkAmbient(o["ambient"], `${context}, ambient`);
+  if (o["sourceDistributions"] !== undefined) _requireObject(o["sourceDistributions"], "sourceDistributions", context);
+  const ctx: _SourceContext = { overrides: chain.sourceDistributions };
+
+  const amp = o["amplifier"] as AmplifierElement | FixedScaleAmplifierElement | undefined;
+  let amplifier = _unityAmplifierStage;
+  let fixedScale: _FixedScaleStage | undefined;
+  if (amp !== undefined) {
+    const kind = _requireObject(amp, "amplifier", context)["kind"];
+    if (kind === "amplifier") amplifier = _amplifierStage(amp as AmplifierElement, ambient, ctx, `${context}, amplifier`);
+    else if (kind === "fixedScaleAmplifier") {
+      fixedScale = _fixedScaleStage(amp as FixedScaleAmplifierElement, ct, ctx, `${context}, fixed-scale amplifier`);
+    } else _invalidChoice("amplifier kind", kind, ["amplifier", "fixedScaleAmplifier"], context);
+  }
+
+  let coldJunction: _ColdJunctionStage | undefined;
+  if (o["coldJunction"] !== undefined) {
+    if (fixedScale !== undefined) {
+      throw new HotjunctionRangeError({
+        code: "INVALID_DESIGN",
+        quantity: "coldJunction",
+        value: _requireObject(o["coldJunction"], "coldJunction", context)["method"],
+        context,
+        problem: "is given with a fixed-scale amplifier, which compensates internally; remove one",
+      });
+    }
+    coldJunction = _coldJunctionStage(chain.coldJunction as NonNullable<MeasurementChain["coldJunction"]>, ct, ctx, `${context}, cold junction`);
+  } else if (fixedScale === undefined) {
+    throw new HotjunctionRangeError({
+      code: "INVALID_DESIGN",
+      quantity: "coldJunction",
+      value: undefined,
+      context,
+      problem: "is missing (required unless the amplifier is a fixed-scale amplifier)",
+    });
+  }
+
+  const reference =
+    o["reference"] === undefined
+      ? undefined
+      : _referenceStage(o["reference"] as ReferenceElement, ambient, ctx, `${context}, reference`);
+
+  const det = _requireObject(o["detector"], "detector", context);
+  let comparator: _ComparatorStage | undefined;
+  let adc: _AdcStage | undefined;
+  let divider: _DividerStage | undefined;
+  let adcFullScaleVolts = Number.NaN;
+  let adcUsesReference = false;
+  if (det["kind"] === "comparator") {
+    comparator = _comparatorStage(det as unknown as ComparatorElement, ctx, `${context}, comparator`);
+    if (reference === undefined) {
+      throw new HotjunctionRangeError({
+        code: "INVALID_DESIGN",
+        quantity: "reference",
+        value: undefined,
+        context,
+        problem: "is missing: a comparator chain takes its threshold from the reference (× divider tap)",
+      });
+    }
+    if (coldJunction?.method === "software") {
+      throw new HotjunctionRangeError({
+        code: "INVALID_DESIGN",
+        quantity: "cold-junction method",
+        value: "software",
+        context,
+        problem: "cannot serve a comparator: software compensation happens after an ADC; use hardware compensation or a fixed-scale amplifier",
+      });
+    }
+    if (o["divider"] !== undefined) {
+      divider = _dividerStage(o["divider"] as DividerElement, ambient, ctx, `${context}, divider`);
+    }
+  } else if (det["kind"] === "adc") {
+    adc = _adcStage(det as unknown as AdcElement, ctx, `${context}, ADC`);
+    if (o["divider"] !== undefined) {
+      throw new HotjunctionRangeError({
+        code: "INVALID_DESIGN",
+        quantity: "divider",
+        value: "divider",
+        context,
+        problem: "belongs to comparator chains (threshold taps); an ADC chain has none",
+      });
+    }
+    if (det["fullScaleVolts"] !== undefined) {
+      adcFullScaleVolts = _requirePositive(det["fullScaleVolts"], "ADC fullScaleVolts", "V", context);
+    } else if (reference !== undefined) {
+      adcFullScaleVolts = reference.nominalVolts;
+      adcUsesReference = true;
+    } else {
+      throw new HotjunctionRangeError({
+        code: "INVALID_DESIGN",
+        quantity: "ADC full scale",
+        value: undefined,
+        context,
+        problem: "is unknown: give detector.fullScaleVolts or a chain reference",
+      });
+    }
+  } else {
+    _invalidChoice("detector kind", det["kind"], ["comparator", "adc"], context);
+  }
+
+  const ambientCenterC = (ambient.minC + ambient.maxC) / 2;
+  const hasAmbientInput = ambient.maxC > ambient.minC;
+  const ambientSource: ChainErrorSource | undefined = hasAmbientInput
+    ? {
+        name: _ambientInputName,
+        element: "ambient",
+        description: "cold-junction (terminal) temperature anywhere in the ambient range",
+        unit: "°C",
+        limit: (ambient.maxC - ambient.minC) / 2,
+        distribution: rectangular({ lower: ambient.minC, upper: ambient.maxC }),
+      }
+    : undefined;
+  // Every temperature the cold junction can take must be inside the type's range.
+  _emfFromTemperature(ct, ambient.minC);
+  _emfFromTemperature(ct, ambient.maxC);
+
+  const fixedSources: ChainErrorSource[] = [
+    ...(coldJunction?.sources ?? []),
+    ...amplifier.sources,
+    ...(fixedScale?.sources ?? []),
+    ...(reference?.sources ?? []),
+    ...(divider?.sources ?? []),
+    ...(comparator?.sources ?? []),
+    ...(adc?.sources ?? []),
+  ];
+  if (ambientSource !== undefined) fixedSources.push(ambientSource);
+  const seen = new Set<string>();
+  for (const s of fixedSources) seen.add(s.name);
+  for (const name of Object.keys(chain.sourceDistributions ?? {})) {
+    if (!seen.has(name) && name !== "thermocouple.tolerance") {
+      throw new HotjunctionRangeError({
+        code: "UNKNOWN_NAME",
+        quantity: "sourceDistributions key",
+        value: name,
+        context,
+        problem: "names no error source of this chain",
+        allowed: ["thermocouple.tolerance", ...seen],
+      });
+    }
+  }
+
+  return {
+    chain,
+    context,
+    type,
+    ct,
+    thermocouple,
+    ambient,
+    ctx,
+    coldJunction,
+    amplifier,
+    fixedScale,
+    reference,
+    divider,
+    comparator,
+    adc,
+    adcFullScaleVolts,
+    adcUsesReference,
+    hasAmbientInput,
+    ambientSource,
+    ambientCenterC,
+    fixedSources,
+  };
+}
+
+/** @internal All sources at a hot-junction temperature, in listing order. */
+export function _sourcesAt(cc: _CompiledChain, hotJunctionC: number): ChainErrorSource[] {
+  return [..._thermocoupleSources(cc.thermocouple, hotJunctionC, cc.ctx), ...cc.fixedSources];
+}
+
+/** @internal Record of every source's mean. */
+export function _meansRecord(sources: readonly ChainErrorSource[]): Record<string, number> {
+  const out: Record<string, number> = {};
+  for (const s of sources) out[s.name] = s.distribution.mean;
+  return out;
+}
+
+/** @internal Record of every source at 0 deviation (the ambient at its center): for nominal designs. */
+export function _zeroRecord(cc: _CompiledChain, sources: readonly ChainErrorSource[]): Record<string, number> {
+  const out: Record<string, number> = {};
+  for (const s of sources) out[s.name] = s.name === _ambientInputName ? cc.ambientCenterC : 0;
+  return out;
+}
+
+/**
+ * @internal The thermocouple's deviation (°C) when it is a source. Checked with `in` so that a model that
+ * has no tolerance source never reads the name (propagate flags reads of unknown names).
+ */
+export function _toleranceValue(x: Inputs): number {
+  return "thermocouple.tolerance" in x ? (x["thermocouple.tolerance"] as number) : 0;
+}
+
+/** @internal Cold-junction temperature for the source values, °C. */
+export function _coldJunctionC(cc: _CompiledChain, x: Inputs): number {
+  return cc.hasAmbientInput ? (x[_ambientInputName] as number) : cc.ambient.minC;
+}
+
+/** @internal Actual ADC full scale for the source values, V. */
+export function _adcFullScale(cc: _CompiledChain, x: Inputs): number {
+  return cc.adcUsesReference ? (cc.reference as _ReferenceStage).volts(x) : cc.adcFullScaleVolts;
+}
+
+/** @internal Detector-input voltage at a hot-junction temperature for the source values, V. */
+export function _signalVolts(cc: _CompiledChain, hotJunctionC: number, x: Inputs): number {
+  const tc = _coldJunctionC(cc, x);
+  const eps = _toleranceValue(x);
+  let emf = _emfFromTemperature(cc.ct, hotJunctionC + eps) - _emfFromTemperature(cc.ct, tc);
+  if (cc.fixedScale !== undefined) return cc.fixedScale.outputMillivolts(x, emf, tc) / 1000;
+  const cj = cc.coldJunction as _ColdJunctionStage;
+  if (cj.method === "hardware") emf += cj.compensationMillivolts(x, tc);
+  return (cc.amplifier.gain(x) * (emf + cc.amplifier.inputOffsetMillivolts(x))) / 1000;
+}
+
+/** @internal Unrounded ADC code for a detector-input voltage. */
+export function _codeForVolts(cc: _CompiledChain, volts: number, x: Inputs): number {
+  const adc = cc.adc as _AdcStage;
+  return adc.code(x, volts, _adcFullScale(cc, x), cc.adcFullScaleVolts);
+}
+
+/**
+ * @internal The temperature the chain's nominal conversion indicates for a detector-input voltage: the
+ * firmware or user inverts the nominal chain (fixed-scale: V/S; software compensation adds E of the
+ * sensor's reading `sensorC`).
+ */
+export function _indicatedFromVolts(cc: _CompiledChain, volts: number, sensorC: number): number {
+  if (cc.fixedScale !== undefined) return (volts * 1000) / cc.fixedScale.millivoltsPerC;
+  const emf = (volts * 1000) / cc.amplifier.nominalGain;
+  const cj = cc.coldJunction as _ColdJunctionStage;
+  if (cj.method === "software") return _temperatureFromEmf(cc.ct, emf + _emfFromTemperature(cc.ct, sensorC));
+  return _temperatureFromEmf(cc.ct, emf);
+}
+
+/** @internal Nominal voltage for an ADC code (inverse of an ideal ADC). */
+export function _nominalVoltsForCode(cc: _CompiledChain, code: number): number {
+  return (code * cc.adcFullScaleVolts) / (cc.adc as _AdcStage).codes;
+}
+
+/** @internal Reading model: indicated temperature for a true hot-junction temperature and source values. */
+export function _indicatedC(cc: _CompiledChain, hotJunctionC: number, x: Inputs): number {
+  let volts = _signalVolts(cc, hotJunctionC, x);
+  if (cc.adc !== undefined) volts = _nominalVoltsForCode(cc, _codeForVolts(cc, volts, x));
+  const sensorC = cc.coldJunction?.method === "software" ? _coldJunctionC(cc, x) + cc.coldJunction.errorC(x) : 0;
+  return _indicatedFromVolts(cc, volts, sensorC);
+}
+
+/**
+ * @internal Inverse of the actual chain: the true hot-junction temperature that gives a detector-input
+ * voltage for the source values, with the cold junction at `coldJunctionC`.
+ */
+export function _hotFromVolts(cc: _CompiledChain, volts: number, x: Inputs, coldJunctionC: number): number {
+  let emf: number;
+  if (cc.fixedScale !== undefined) emf = cc.fixedScale.emfForOutput(x, volts * 1000, coldJunctionC);
+  else {
+    emf = (volts * 1000) / cc.amplifier.gain(x) - cc.amplifier.inputOffsetMillivolts(x);
+    const cj = cc.coldJunction as _ColdJunctionStage;
+    if (cj.method === "hardware") emf -= cj.compensationMillivolts(x, coldJunctionC);
+  }
+  const eps = _toleranceValue(x);
+  return _temperatureFromEmf(cc.ct, emf + _emfFromTemperature(cc.ct, coldJunctionC)) - eps;
+}
+
+/** @internal Actual switching voltage of a comparator tap (threshold + offset + hysteresis part), V. */
+export function _switchingVolts(cc: _CompiledChain, x: Inputs, tap: number, edgeMillivolts: number): number {
+  const ref = (cc.reference as _ReferenceStage).volts(x);
+  const k = cc.divider === undefined ? 1 : cc.divider.ratio(x, tap);
+  return ref * k + (cc.comparator as _ComparatorStage).switchingOffsetVolts(x, edgeMillivolts);
+}

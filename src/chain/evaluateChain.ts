@@ -1,0 +1,75 @@
+/**
+ * Evaluates a chain at one or many hot-junction temperatures: nominal reading, bounds by each method and
+ * the per-source contribution table in °C.
+ * @module
+ */
+import { _requireFinite, HotjunctionTypeError } from "../errors.js";
+import { _chainBounds, _checkBoundsOptions, type ChainBoundsOptions } from "./_chainBounds.js";
+import { _codeForVolts, _compileChain, _meansRecord, _signalVolts, _sourcesAt } from "./_compileChain.js";
+import { _readingModel } from "./readingFromChain.js";
+import type { ChainEvaluation, MeasurementChain } from "./types.js";
+
+/** Options of {@link evaluateChain}. */
+export type EvaluateChainOptions = ChainBoundsOptions;
+
+/**
+ * Evaluates a chain at a hot-junction temperature (or at each of several): the nominal reading (every
+ * source at its mean, the ambient mid-range), the temperature it indicates, the interval of the indicated
+ * temperature by each method (worst case: true extremes over the source bounds; rss: JCGM 100 with the
+ * chosen coverage; monte-carlo: JCGM 101, seeded) with the errors against the true temperature, and the
+ * per-source table (sensitivity, swing alone, |c|·u, share of variance).
+ * @param chain - the chain description
+ * @param hotJunctionC - true hot-junction temperature(s), °C
+ * @param options - methods (default worst-case and rss), coverage (0.95), Monte Carlo trials (1e5) and
+ *   seed (1), normalBoundCoverage (0.9973)
+ * @returns one {@link ChainEvaluation}, or one per temperature for an array
+ * @throws HotjunctionRangeError / HotjunctionTypeError for a bad chain, a temperature outside the
+ *   thermocouple tolerance's range, or bad options
+ * @example
+ * ```ts
+ * import { evaluateChain } from "hotjunction";
+ * const chain = {
+ *   thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "IEC 60584-1", class: 2 } },
+ *   amplifier: { kind: "fixedScaleAmplifier", type: "K", millivoltsPerC: 5, trimmedMicrovoltsPerC: 40.96 },
+ *   reference: { kind: "reference", variant: "regulator", nominalVolts: 5, totalToleranceFraction: 0.04 },
+ *   detector: { kind: "comparator" },
+ *   ambient: { minC: 25, maxC: 25 },
+ * } as const;
+ * const e = evaluateChain(chain, 100);
+ * console.log(e.bounds[0]?.method, e.bounds[0]?.errorLowC.toFixed(2), e.bounds[0]?.errorHighC.toFixed(2)); // "worst-case" "-1.94" "3.11"
+ * ```
+ */
+export function evaluateChain(chain: MeasurementChain, hotJunctionC: number, options?: EvaluateChainOptions): ChainEvaluation;
+export function evaluateChain(
+  chain: MeasurementChain,
+  hotJunctionC: readonly number[],
+  options?: EvaluateChainOptions,
+): ChainEvaluation[];
+export function evaluateChain(
+  chain: MeasurementChain,
+  hotJunctionC: number | readonly number[],
+  options?: EvaluateChainOptions,
+): ChainEvaluation | ChainEvaluation[] {
+  const cc = _compileChain(chain);
+  const opts = _checkBoundsOptions(options, "evaluateChain");
+  const one = (t: number): ChainEvaluation => {
+    const sources = _sourcesAt(cc, t);
+    const x = _meansRecord(sources);
+    const volts = _signalVolts(cc, t, x);
+    const reading = cc.adc !== undefined ? { volts, code: _codeForVolts(cc, volts, x) } : { volts };
+    const cm = _readingModel(cc, t);
+    const { bounds, contributions } = _chainBounds(cm, t, opts);
+    return { hotJunctionC: t, reading, indicatedC: cm.nominalC, bounds, contributions };
+  };
+  if (typeof hotJunctionC === "number") return one(_requireFinite(hotJunctionC, "hot-junction temperature", "°C", cc.context));
+  if (!Array.isArray(hotJunctionC)) {
+    throw new HotjunctionTypeError({
+      code: "NOT_A_FINITE_NUMBER",
+      quantity: "hot-junction temperature",
+      value: hotJunctionC,
+      context: cc.context,
+      problem: "is neither a number nor an array of numbers",
+    });
+  }
+  return hotJunctionC.map((t, i) => one(_requireFinite(t, `hot-junction temperature [${i}]`, "°C", cc.context)));
+}

@@ -1,0 +1,54 @@
+/**
+ * Measurement-chain models: one module per element (thermocouple, cold junction, amplifier, fixed-scale
+ * amplifier, series/shunt/regulator reference, divider, comparator, ADC), each contributing named error
+ * sources and a transfer function; a chain is plain data listing the elements.
+ * @module
+ */
+export type * from "./types.js";
+export {
+  thermocoupleEmfMillivolts,
+  thermocoupleToleranceC,
+  toleranceRange,
+  type ToleranceRange,
+} from "./thermocouple.js";
+export {
+  coldJunctionIndicatedC,
+  coldJunctionSensitivity,
+  hardwareCompensationMillivolts,
+  hardwareCompensationResidual,
+  type CompensationResidual,
+} from "./coldJunction.js";
+export { amplifierGain } from "./amplifier.js";
+export { fixedScaleNonlinearityC } from "./fixedScaleAmplifier.js";
+export { boxMethodTempcoPpmPerC, longTermDriftPpm, tempcoExcursionPpm } from "./seriesReference.js";
+export {
+  shuntDynamicChangeMillivolts,
+  shuntResistorSizing,
+  type ShuntResistorSizing,
+  type ShuntResistorSizingOptions,
+} from "./shuntReference.js";
+export { referenceErrorSources, type ReferenceErrorSourcesOptions } from "./reference.js";
+export { referenceHeadroom, type ReferenceHeadroom } from "./referenceHeadroom.js";
+export { dividerTapRatio } from "./divider.js";
+export { comparatorSwitchingOffsetMillivolts } from "./comparator.js";
+export { adcLsbVolts } from "./adc.js";
+export { chainErrorSources } from "./chainErrorSources.js";
+export {
+  chainReadingModel,
+  readingFromChain,
+  type ReadingFromChainOptions,
+  type ReadingFromChainResult,
+} from "./readingFromChain.js";
+export { evaluateChain, type EvaluateChainOptions } from "./evaluateChain.js";
+export type { ChainBoundsOptions } from "./_chainBounds.js";
+export {
+  temperatureFromChainReading,
+  type RawChainReading,
+  type TemperatureFromChainReadingOptions,
+} from "./temperatureFromChainReading.js";
+export {
+  nominalTripTemperature,
+  requiredThresholdVolts,
+  tripTemperatureModel,
+  type TripTemperatureModelOptions,
+} from "./tripTemperatureModel.js";

@@ -1,0 +1,139 @@
+/**
+ * The same trip design evaluated with several reference options side by side.
+ * @module
+ */
+import { _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { designTrip, type DesignTripOptions } from "./designTrip.js";
+import type {
+  ReferenceComparison,
+  ReferenceComparisonEntry,
+  ReferenceOption,
+  TripBand,
+  TripDesign,
+  TripDesignResult,
+} from "./types.js";
+
+/** Options of {@link compareReferences}: those of {@link designTrip} (acceptance method, coverage, trials, seed). */
+export type CompareReferencesOptions = Omit<DesignTripOptions, "networks">;
+
+function acceptedBand(result: TripDesignResult, index: number): TripBand {
+  const sp = result.setpoints[index];
+  if (sp === undefined) throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "setpoint index", value: index, context: "compareReferences" });
+  return result.acceptanceMethod === "worst-case" ? sp.worstCase : result.acceptanceMethod === "rss" ? sp.rss : sp.monteCarlo;
+}
+
+function nominalVoltsOf(option: ReferenceOption): number {
+  return option.kind === "ideal" ? option.nominalVolts : option.element.nominalVolts;
+}
+
+/**
+ * Evaluates one trip design with each of several reference options (e.g. a precision series reference, a
+ * shunt reference with its series resistor sized from the supply, the 5 V regulator rail used directly) and
+ * answers, per option, whether it is good enough for the design's margins. For each option the threshold
+ * resistors are chosen for its voltage, the trip bands computed as in {@link designTrip}, and the same
+ * design with a perfect reference of the same voltage on the same resistors gives the yardstick: the extra
+ * band width is what the reference itself costs in °C. Verdict "adequate" when every setpoint passes and the
+ * reference has no problem (such as a shunt current above its maximum). The recommendation is the cheapest
+ * adequate option by the user's cost (options without a cost come after those with one; ties by input order).
+ * @param design - the trip design (its own `reference` is ignored)
+ * @param referenceOptions - at least one option; names must differ
+ * @param options - {@link CompareReferencesOptions}
+ * @returns {@link ReferenceComparison}: per option its bands (°C), extra width over an ideal reference (°C),
+ *   cost and verdict, the recommendation and a summary sentence
+ * @throws HotjunctionRangeError (code `INVALID_DESIGN`) for no options or repeated names; as {@link designTrip}
+ * @example
+ * ```ts
+ * import { compareReferences } from "hotjunction";
+ * const design = {
+ *   setpoints: [{ name: "glaze", tripTemperatureC: 400, maxNormalOperatingC: 385, hazardLimitC: 420 }],
+ *   thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "IEC 60584-1", class: 1 } },
+ *   amplifier: { kind: "fixedScaleAmplifier", type: "K", millivoltsPerC: 5 },
+ *   comparator: { kind: "comparator", offsetMillivolts: 2 },
+ *   reference: { kind: "ideal", name: "any", nominalVolts: 5 },
+ *   resistors: { series: "E96", toleranceFraction: 0.001 },
+ *   ambient: { minC: 20, maxC: 30 },
+ * } as const;
+ * const c = compareReferences(design, [
+ *   { kind: "element", name: "5 V regulator rail", cost: 0, element: { kind: "reference", variant: "regulator", nominalVolts: 5, totalToleranceFraction: 0.04 } },
+ *   { kind: "element", name: "4.096 V series reference", cost: 1.2, element: { kind: "reference", variant: "series", nominalVolts: 4.096, initialAccuracyFraction: 0.001 } },
+ * ], { monteCarloTrials: 2000 });
+ * console.log(c.options.map((o) => o.verdict).join(" "), c.recommended); // inadequate adequate 4.096 V series reference
+ * ```
+ */
+export function compareReferences(
+  design: TripDesign,
+  referenceOptions: readonly ReferenceOption[],
+  options: CompareReferencesOptions = {},
+): ReferenceComparison {
+  const context = "compareReferences";
+  if (!Array.isArray(referenceOptions) || referenceOptions.length === 0) {
+    throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "reference options", value: referenceOptions, context, problem: "must be a non-empty array" });
+  }
+  const names = new Set<string>();
+  for (const option of referenceOptions) {
+    if (names.has(option?.name)) {
+      throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "reference option name", value: option.name, context, problem: "appears twice" });
+    }
+    names.add(option?.name);
+    if (option?.cost !== undefined) _requireFinite(option.cost, "cost", undefined, context);
+  }
+  const designOptions: DesignTripOptions = { ...options };
+  let acceptanceMethod: ReferenceComparison["acceptanceMethod"] = options.acceptanceMethod ?? "worst-case";
+
+  const entries: ReferenceComparisonEntry[] = referenceOptions.map((option) => {
+    const withOption = designTrip({ ...design, reference: option }, designOptions);
+    acceptanceMethod = withOption.acceptanceMethod;
+    const ideal = designTrip(
+      { ...design, reference: { kind: "ideal", name: "ideal reference", nominalVolts: nominalVoltsOf(option) } },
+      { ...designOptions, networks: withOption.networks },
+    );
+    const setpoints = withOption.setpoints.map((sp, i) => {
+      const b = acceptedBand(withOption, i);
+      const yardstick = acceptedBand(ideal, i);
+      return {
+        name: sp.name,
+        lowC: b.lowC,
+        highC: b.highC,
+        idealLowC: yardstick.lowC,
+        idealHighC: yardstick.highC,
+        extraWidthC: b.highC - b.lowC - (yardstick.highC - yardstick.lowC),
+        marginToNormalC: sp.marginToNormalC,
+        marginToHazardC: sp.marginToHazardC,
+        pass: sp.pass,
+      };
+    });
+    const adequate = withOption.pass;
+    const worstExtra = Math.max(...setpoints.map((s) => s.extraWidthC));
+    const smallestMargin = Math.min(...setpoints.map((s) => Math.min(s.marginToNormalC, s.marginToHazardC)));
+    let verdictText: string;
+    if (adequate) {
+      verdictText = `${option.name} is good enough: every setpoint trips between normal operation and the hazard limit (smallest margin ${smallestMargin.toFixed(1)} °C); it widens the band by up to ${worstExtra.toFixed(1)} °C over an ideal reference.`;
+    } else {
+      const failing = withOption.setpoints.find((s) => !s.pass);
+      const why = failing !== undefined ? failing.reason : (withOption.reference.problems[0] ?? "it has a problem.");
+      verdictText = `${option.name} is not good enough: ${why}`;
+    }
+    return {
+      name: option.name,
+      kind: option.kind,
+      cost: option.cost ?? null,
+      reference: withOption.reference,
+      networks: withOption.networks,
+      setpoints,
+      verdict: adequate ? "adequate" : "inadequate",
+      verdictText,
+    };
+  });
+
+  const ranked = entries
+    .map((entry, index) => ({ entry, index }))
+    .filter(({ entry }) => entry.verdict === "adequate")
+    .sort((a, b) => (a.entry.cost ?? Infinity) - (b.entry.cost ?? Infinity) || a.index - b.index);
+  const recommended = ranked[0]?.entry.name ?? null;
+  const adequateCount = ranked.length;
+  const summary =
+    recommended === null
+      ? `None of the ${entries.length} reference options keeps every setpoint between normal operation and the hazard limit (${acceptanceMethod} band).`
+      : `${adequateCount} of ${entries.length} reference options keep every setpoint between normal operation and the hazard limit (${acceptanceMethod} band); the cheapest adequate one is ${recommended}.`;
+  return { acceptanceMethod, options: entries, recommended, summary };
+}

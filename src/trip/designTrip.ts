@@ -1,0 +1,367 @@
+/**
+ * Over-temperature trip design: thresholds from standard resistors, trip bands by worst case, RSS and
+ * Monte Carlo, and margins to the process limits.
+ * @module
+ */
+import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
+import type { DividerElement } from "../chain/types.js";
+import { propagate } from "../uncertainty/propagate.js";
+import type { PropagationMethod, PropagationResult } from "../uncertainty/types.js";
+import { realizeReference } from "./realizeReference.js";
+import { selectDividerPair } from "./selectDividerPair.js";
+import { selectLadder } from "./selectLadder.js";
+import { _requireSeries } from "./standardResistorValues.js";
+import {
+  _buildTripChain,
+  _edgeVolts,
+  _nominalSignalVolts,
+  _nominalSwitchingC,
+  _tripTemperatureModel,
+  type _TripChain,
+} from "./_tripChain.js";
+import type {
+  ProcessLimits,
+  ReferenceOption,
+  SetpointTripResult,
+  ThresholdNetwork,
+  TripBand,
+  TripDesign,
+  TripDesignResult,
+  TripErrorSource,
+} from "./types.js";
+
+/** Options of {@link designTrip}. */
+export interface DesignTripOptions {
+  /** Band that decides pass/fail. Default `"worst-case"` (the only one that bounds every unit built). */
+  readonly acceptanceMethod?: PropagationMethod;
+  /** Coverage probability of the RSS and Monte Carlo bands, in (0, 1). Default 0.95. */
+  readonly coverage?: number;
+  /** Monte Carlo trials per setpoint, integer ≥ 1/(1 − coverage). Default 100 000. */
+  readonly monteCarloTrials?: number;
+  /** Monte Carlo seed, integer 0 … 2³² − 1 (recorded in the result). Default 1. */
+  readonly seed?: number;
+  /** Worst case: coverage at which inputs overridden to normal are bounded (±k·u). Default 0.9973 (k = 3). */
+  readonly normalBoundCoverage?: number;
+  /**
+   * Use these threshold networks instead of searching (to evaluate a built board, or to compare references
+   * on the same resistors): either one two-resistor network per setpoint (input order) or one ladder of
+   * N + 1 resistors (taps assigned by threshold, highest first).
+   */
+  readonly networks?: readonly ThresholdNetwork[];
+}
+
+const methods: readonly PropagationMethod[] = ["worst-case", "rss", "monte-carlo"];
+
+/** Nominal voltage of a reference option, V. */
+function optionVolts(option: ReferenceOption): number {
+  const volts = option?.kind === "ideal" ? option.nominalVolts : option?.element?.nominalVolts;
+  const v = _requireFinite(volts, "reference nominalVolts", "V", "trip design");
+  if (!(v > 0)) {
+    throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "reference nominalVolts", value: v, min: 0, unit: "V", context: "trip design", problem: "is not positive" });
+  }
+  return v;
+}
+
+function designError(quantity: string, value: unknown, problem: string): never {
+  throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity, value, context: "trip design", problem });
+}
+
+function fmt(x: number): string {
+  return x.toFixed(1);
+}
+
+/** Resistance bounds of the divider from the ohm and current bounds, Ω. */
+function totalBounds(design: TripDesign, volts: number): { minTotalOhms: number; maxTotalOhms: number } {
+  const r = design.resistors;
+  let minTotalOhms = r.minTotalOhms ?? 1000;
+  let maxTotalOhms = r.maxTotalOhms ?? 1e6;
+  // R = V / I; currents in mA.
+  if (r.maxDividerCurrentMilliamps !== undefined) {
+    const i = _requireFinite(r.maxDividerCurrentMilliamps, "maxDividerCurrentMilliamps", "mA", "trip design");
+    if (!(i > 0)) designError("maxDividerCurrentMilliamps", i, "is not positive");
+    minTotalOhms = Math.max(minTotalOhms, (volts / i) * 1000);
+  }
+  if (r.minDividerCurrentMilliamps !== undefined) {
+    const i = _requireFinite(r.minDividerCurrentMilliamps, "minDividerCurrentMilliamps", "mA", "trip design");
+    if (!(i > 0)) designError("minDividerCurrentMilliamps", i, "is not positive");
+    maxTotalOhms = Math.min(maxTotalOhms, (volts / i) * 1000);
+  }
+  if (!(maxTotalOhms >= minTotalOhms)) {
+    designError("divider resistance bounds", [minTotalOhms, maxTotalOhms], `are empty (${minTotalOhms} Ω to ${maxTotalOhms} Ω after the current bounds)`);
+  }
+  return { minTotalOhms, maxTotalOhms };
+}
+
+interface SetpointPlan {
+  readonly name: string;
+  readonly tripC: number;
+  readonly limits: ProcessLimits;
+  readonly idealThresholdVolts: number;
+  readonly idealRatio: number;
+  /** Nominal signal slope at the setpoint, V/°C. */
+  readonly slopeVoltsPerC: number;
+}
+
+function checkLimits(design: TripDesign): { name: string; tripC: number; limits: ProcessLimits }[] {
+  if (!Array.isArray(design.setpoints) || design.setpoints.length === 0) {
+    designError("setpoints", design.setpoints, "must be a non-empty array");
+  }
+  return design.setpoints.map((sp, i) => {
+    const context = `trip design, setpoint ${i}`;
+    if (typeof sp?.name !== "string") designError(`setpoint ${i} name`, sp?.name, "is not a string");
+    const tripC = _requireFinite(sp.tripTemperatureC, "tripTemperatureC", "°C", context);
+    const maxNormal = _requireFinite(sp.maxNormalOperatingC ?? design.processLimits?.maxNormalOperatingC, "maxNormalOperatingC", "°C", context);
+    const hazard = _requireFinite(sp.hazardLimitC ?? design.processLimits?.hazardLimitC, "hazardLimitC", "°C", context);
+    if (!(hazard > maxNormal)) {
+      throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "hazardLimitC", value: hazard, min: maxNormal, unit: "°C", context, problem: "is not above the highest normal operating temperature" });
+    }
+    return { name: sp.name, tripC, limits: { maxNormalOperatingC: maxNormal, hazardLimitC: hazard } };
+  });
+}
+
+function band(method: PropagationMethod, r: PropagationResult): TripBand {
+  return {
+    method,
+    lowC: r.interval[0],
+    highC: r.interval[1],
+    coverage: r.coverage,
+    standardUncertaintyC: r.standardUncertainty,
+    ...(r.trials !== undefined ? { trials: r.trials } : {}),
+    ...(r.seed !== undefined ? { seed: r.seed } : {}),
+  };
+}
+
+/** The sentence that explains a verdict. */
+function reasonFor(name: string, b: TripBand, limits: ProcessLimits, label: string): { pass: boolean; reason: string } {
+  const low = b.lowC - limits.maxNormalOperatingC;
+  const high = limits.hazardLimitC - b.highC;
+  const where = `Setpoint "${name}" trips between ${fmt(b.lowC)} and ${fmt(b.highC)} °C (${label})`;
+  if (low > 0 && high > 0) {
+    return {
+      pass: true,
+      reason: `${where}: ${fmt(low)} °C above the highest normal operating temperature ${limits.maxNormalOperatingC} °C and ${fmt(high)} °C below the hazard limit ${limits.hazardLimitC} °C.`,
+    };
+  }
+  const problems: string[] = [];
+  if (!(low > 0)) problems.push(`it can trip ${fmt(-low)} °C at or below the highest normal operating temperature ${limits.maxNormalOperatingC} °C (nuisance trips)`);
+  if (!(high > 0)) problems.push(`it can fail to trip until ${fmt(-high)} °C at or beyond the hazard limit ${limits.hazardLimitC} °C`);
+  return { pass: false, reason: `${where}: ${problems.join(", and ")}.` };
+}
+
+/** Resolves the threshold networks (searched, or given) and where each setpoint sits in them. */
+function planNetworks(
+  design: TripDesign,
+  plans: readonly SetpointPlan[],
+  volts: number,
+  given: readonly ThresholdNetwork[] | undefined,
+): { networks: ThresholdNetwork[]; place: { network: number; tap: number }[]; notes: string[] } {
+  const series = _requireSeries(design.resistors.series, "trip design");
+  const topology = design.resistors.topology ?? "separate";
+  if (topology !== "separate" && topology !== "ladder") _invalidChoice("resistors.topology", topology, ["separate", "ladder"], "trip design");
+  const network = (resistorsOhms: readonly number[], topologyName: ThresholdNetwork["topology"]): ThresholdNetwork => {
+    const totalOhms = resistorsOhms.reduce((a, b) => a + b, 0);
+    return { topology: topologyName, resistorsOhms: [...resistorsOhms], totalOhms, currentMilliamps: (volts / totalOhms) * 1000 };
+  };
+  // Taps of a ladder by threshold, highest first.
+  const byThreshold = plans.map((_, i) => i).sort((a, b) => (plans[b] as SetpointPlan).idealRatio - (plans[a] as SetpointPlan).idealRatio);
+  if (given !== undefined) {
+    if (!Array.isArray(given)) designError("networks", given, "is not an array");
+    if (given.length === plans.length && given.every((n) => n?.resistorsOhms?.length === 2)) {
+      return {
+        networks: given.map((n) => network(n.resistorsOhms, "two-resistor")),
+        place: plans.map((_, i) => ({ network: i, tap: 0 })),
+        notes: ["Threshold networks were given, not searched."],
+      };
+    }
+    if (given.length === 1 && given[0]?.resistorsOhms?.length === plans.length + 1) {
+      const place = new Array<{ network: number; tap: number }>(plans.length);
+      byThreshold.forEach((sp, t) => (place[sp] = { network: 0, tap: t }));
+      return { networks: [network(given[0].resistorsOhms, "ladder")], place, notes: ["The threshold ladder was given, not searched."] };
+    }
+    designError("networks", given, `must be ${plans.length} two-resistor networks or one ladder of ${plans.length + 1} resistors`);
+  }
+  const bounds = totalBounds(design, volts);
+  // Error of a realized ratio in °C of trip temperature, through the chain's local slope at the setpoint.
+  const errorOf = (plan: SetpointPlan) => (ratio: number) => ((ratio - plan.idealRatio) * volts) / plan.slopeVoltsPerC;
+  if (topology === "separate") {
+    const networks = plans.map((plan) => {
+      const pair = selectDividerPair(plan.idealRatio, { series, ...bounds, errorOfRatio: errorOf(plan) });
+      return network([pair.topOhms, pair.bottomOhms], "two-resistor");
+    });
+    return {
+      networks,
+      place: plans.map((_, i) => ({ network: i, tap: 0 })),
+      notes: [
+        `Each threshold is a two-resistor ${series} divider found by an exhaustive search (for every top resistor, the two standard neighbours of the ideal bottom resistor) minimising the trip-temperature error through the chain's local slope, total ${bounds.minTotalOhms} to ${bounds.maxTotalOhms} Ω.`,
+      ],
+    };
+  }
+  const ladder = selectLadder(
+    plans.map((p) => p.idealRatio),
+    { series, ...bounds, errorOfRatio: (tap, ratio) => errorOf(plans[tap] as SetpointPlan)(ratio) },
+  );
+  return {
+    networks: [network(ladder.resistorsOhms, "ladder")],
+    place: plans.map((_, i) => ({ network: 0, tap: ladder.tapBelowResistor[i] as number })),
+    notes: [
+      `The thresholds are taps of one ${series} ladder: for each bottom resistor a greedy build to the nearest standard value of each cumulative ideal, then single-resistor moves lowering the largest tap error; ${ladder.startsTried} starts tried (a very good string, not a proven optimum).`,
+    ],
+  };
+}
+
+/**
+ * Designs an over-temperature trip: for each setpoint, the ideal threshold voltage (the nominal chain's
+ * signal at the trip temperature, less the comparator's hysteresis placement), standard resistors for it
+ * (exhaustive two-resistor search, or one multi-tap ladder), the realized nominal trip and release
+ * temperatures, the trip band by worst case, RSS and Monte Carlo through `propagate` (every chain error
+ * source: thermocouple tolerance at the setpoint, cold junction anywhere in the ambient range, amplifier,
+ * reference, each divider resistor, comparator offset), and the margins: the band's low end must lie above
+ * the highest normal operating temperature (no nuisance trip) and its high end below the hazard limit. The
+ * band of `acceptanceMethod` (default worst case) decides pass or fail; `reason` says why in one sentence.
+ * Numbers do not certify a safety function: keep an independent, non-resettable thermal cutoff.
+ * @param design - the {@link TripDesign} (chain elements as in `chain/`, °C, V, Ω, mA)
+ * @param options - {@link DesignTripOptions}: acceptance method, coverage (0, 1), Monte Carlo trials and seed,
+ *   given networks
+ * @returns {@link TripDesignResult}: networks, reference realization, one result per setpoint (°C, V)
+ * @throws HotjunctionRangeError (code `INVALID_DESIGN`) for a threshold outside the reference's reach, empty
+ *   resistance bounds, missing process limits or a chain that cannot serve a comparator; errors of the chain
+ *   and propagation engines for malformed elements or options
+ * @example
+ * ```ts
+ * import { designTrip } from "hotjunction";
+ * // Heated enclosure: type K, 5 mV/°C fixed-scale amplifier, threshold from a 2.5 V series reference.
+ * const result = designTrip({
+ *   setpoints: [{ name: "enclosure", tripTemperatureC: 120, maxNormalOperatingC: 100, hazardLimitC: 140 }],
+ *   thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "IEC 60584-1", class: 1 } },
+ *   amplifier: { kind: "fixedScaleAmplifier", type: "K", millivoltsPerC: 5, accuracyC: 2 },
+ *   comparator: { kind: "comparator", offsetMillivolts: 5, hysteresisMillivolts: 20, hysteresisPlacement: "below" },
+ *   reference: { kind: "element", name: "2.5 V series reference", element: { kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: 0.002 } },
+ *   resistors: { series: "E96", toleranceFraction: 0.01, minTotalOhms: 10000, maxTotalOhms: 100000 },
+ *   ambient: { minC: 15, maxC: 35 },
+ * }, { monteCarloTrials: 2000 });
+ * const sp = result.setpoints[0]!;
+ * console.log(sp.idealThresholdVolts.toFixed(3), sp.resistorsOhms.join("/")); // 0.615 10200/3320
+ * console.log(sp.pass, sp.nominalReleaseC.toFixed(1)); // true 115.9
+ * ```
+ */
+export function designTrip(design: TripDesign, options: DesignTripOptions = {}): TripDesignResult {
+  if (typeof design !== "object" || design === null) designError("design", design, "is not an object");
+  const acceptanceMethod = options.acceptanceMethod ?? "worst-case";
+  if (!methods.includes(acceptanceMethod)) _invalidChoice("acceptanceMethod", acceptanceMethod, methods, "designTrip");
+  const coverage = options.coverage ?? 0.95;
+  const trials = options.monteCarloTrials ?? 100_000;
+  const seed = options.seed ?? 1;
+  const normalBoundCoverage = options.normalBoundCoverage ?? 0.9973;
+  const setpoints = checkLimits(design);
+  const volts = optionVolts(design.reference);
+  const resistorTolerance = _requireFinite(design.resistors?.toleranceFraction, "resistors.toleranceFraction", "", "trip design");
+
+  // The signal path alone, with an error-free reference and no divider, gives the ideal thresholds.
+  const probe = _buildTripChain(design, { kind: "reference", variant: "series", nominalVolts: volts, initialAccuracyFraction: 0 }, undefined);
+  const tripEdgeVolts = _edgeVolts(probe, "trip");
+  const plans: SetpointPlan[] = setpoints.map((sp) => {
+    const idealThresholdVolts = _nominalSignalVolts(probe, sp.tripC) - tripEdgeVolts;
+    const idealRatio = idealThresholdVolts / volts;
+    if (!(idealRatio > 0 && idealRatio < 1)) {
+      throw new HotjunctionRangeError({
+        code: "INVALID_DESIGN",
+        quantity: `threshold of setpoint "${sp.name}"`,
+        value: idealThresholdVolts,
+        min: 0,
+        max: volts,
+        unit: "V",
+        context: "trip design",
+        problem: "is not within the reference voltage, so no divider can make it",
+      });
+    }
+    const stepC = 0.05;
+    const slopeVoltsPerC = (_nominalSignalVolts(probe, sp.tripC + stepC) - _nominalSignalVolts(probe, sp.tripC - stepC)) / (2 * stepC);
+    if (!(slopeVoltsPerC > 0)) designError(`signal slope at setpoint "${sp.name}"`, slopeVoltsPerC, "is not positive; the comparator needs a rising signal");
+    return { ...sp, idealThresholdVolts, idealRatio, slopeVoltsPerC };
+  });
+
+  const { networks, place, notes } = planNetworks(design, plans, volts, options.networks);
+  const dividerCurrentMilliamps = networks.reduce((sum, n) => sum + n.currentMilliamps, 0);
+  const realized = realizeReference(design.reference, design.ambient, {
+    dividerCurrentMilliamps,
+    resistorSeries: design.resistors.series,
+    resistorToleranceFraction: resistorTolerance,
+  });
+
+  const chains: _TripChain[] = networks.map((n) => {
+    const divider: DividerElement = {
+      kind: "divider",
+      resistorsOhms: n.resistorsOhms,
+      toleranceFraction: resistorTolerance,
+      ...(design.resistors.tempcoPpmPerC !== undefined ? { tempcoPpmPerC: design.resistors.tempcoPpmPerC } : {}),
+      ...(design.resistors.matched !== undefined ? { matched: design.resistors.matched } : {}),
+    };
+    return _buildTripChain(design, realized.element, divider);
+  });
+
+  const results: SetpointTripResult[] = plans.map((plan, i) => {
+    const { network: networkIndex, tap } = place[i] as { network: number; tap: number };
+    const tc = chains[networkIndex] as _TripChain;
+    const net = networks[networkIndex] as ThresholdNetwork;
+    const above = net.resistorsOhms.slice(0, tap + 1).reduce((a, b) => a + b, 0);
+    const below = net.totalOhms - above;
+    const realizedRatio = below / net.totalOhms;
+    const nominalTripC = _nominalSwitchingC(tc, tap, "trip", plan.tripC);
+    const nominalReleaseC = _nominalSwitchingC(tc, tap, "release", plan.tripC);
+    const { model, inputs, sources } = _tripTemperatureModel(tc, tap, "trip", plan.tripC);
+    const worst = propagate(model, inputs, { method: "worst-case", normalBoundCoverage });
+    const rss = propagate(model, inputs, { method: "rss", coverage });
+    const mc = propagate(model, inputs, { method: "monte-carlo", coverage, trials, seed });
+    const bands = { "worst-case": band("worst-case", worst), rss: band("rss", rss), "monte-carlo": band("monte-carlo", mc) };
+    const accepted = bands[acceptanceMethod];
+    const label = acceptanceMethod === "worst-case" ? "worst case" : `${acceptanceMethod === "rss" ? "RSS" : "Monte Carlo"}, ${coverage * 100} % coverage`;
+    const verdict = reasonFor(plan.name, accepted, plan.limits, label);
+    const errorSources: TripErrorSource[] = sources
+      .map((s) => ({
+        name: s.name,
+        description: s.description,
+        worstCaseC: (worst.contributions[s.name]?.contribution ?? 0) / 2,
+        standardUncertaintyC: rss.contributions[s.name]?.contribution ?? 0,
+      }))
+      .sort((a, b) => b.worstCaseC - a.worstCaseC);
+    return {
+      name: plan.name,
+      tripTemperatureC: plan.tripC,
+      idealThresholdVolts: plan.idealThresholdVolts,
+      realizedThresholdVolts: realizedRatio * volts,
+      realizedRatio,
+      idealRatio: plan.idealRatio,
+      networkIndex,
+      tapIndex: tap,
+      resistorsOhms: [above, below] as const,
+      nominalTripC,
+      nominalReleaseC,
+      roundingErrorC: nominalTripC - plan.tripC,
+      worstCase: bands["worst-case"],
+      rss: bands.rss,
+      monteCarlo: bands["monte-carlo"],
+      maxNormalOperatingC: plan.limits.maxNormalOperatingC,
+      hazardLimitC: plan.limits.hazardLimitC,
+      marginToNormalC: accepted.lowC - plan.limits.maxNormalOperatingC,
+      marginToHazardC: plan.limits.hazardLimitC - accepted.highC,
+      pass: verdict.pass,
+      reason: verdict.reason,
+      errorSources,
+    };
+  });
+
+  const allNotes = [
+    ...notes,
+    `Trip bands: worst case over every source's bounds; RSS (GUM, ${coverage * 100} % coverage); Monte Carlo (JCGM 101, ${trials} trials, seed ${seed}). Thermocouple tolerance is taken at each setpoint; the cold junction anywhere in the ambient range ${design.ambient.minC} to ${design.ambient.maxC} °C.`,
+    "These numbers do not certify a safety function: keep an independent, non-resettable thermal cutoff and follow local codes, applicable standards and licensed practice.",
+  ];
+  return {
+    ...(design.name !== undefined ? { name: design.name } : {}),
+    networks,
+    reference: realized.realization,
+    setpoints: results,
+    acceptanceMethod,
+    pass: results.every((r) => r.pass) && realized.realization.problems.length === 0,
+    notes: allNotes,
+  };
+}

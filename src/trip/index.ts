@@ -1,0 +1,46 @@
+/**
+ * Over-temperature trip design: standard resistor values (IEC 60063), exhaustive two-resistor and multi-tap
+ * ladder threshold dividers, the mid-rail divider, reference realization (shunt series-resistor sizing),
+ * trip bands and margins (`designTrip`), and reference comparison (`compareReferences`).
+ * @module
+ */
+export type {
+  ElementReferenceOption,
+  IdealReferenceOption,
+  ProcessLimits,
+  ReferenceComparison,
+  ReferenceComparisonEntry,
+  ReferenceComparisonSetpoint,
+  ReferenceOption,
+  ReferenceOptionCommon,
+  ReferenceRealization,
+  SetpointTripResult,
+  ShuntReferenceToSize,
+  SizedShuntReferenceOption,
+  ThresholdNetwork,
+  TripBand,
+  TripDesign,
+  TripDesignResult,
+  TripErrorSource,
+  TripResistors,
+  TripSetpoint,
+} from "./types.js";
+export { standardResistorValues, nearestStandardResistor } from "./standardResistorValues.js";
+export { selectDividerPair, type DividerPairSelection, type SelectDividerPairOptions } from "./selectDividerPair.js";
+export { selectLadder, type LadderSelection, type SelectLadderOptions } from "./selectLadder.js";
+export { midRailDivider, type MidRailDivider, type MidRailDividerOptions } from "./midRailDivider.js";
+export { realizeReference, type RealizedReference, type RealizeReferenceOptions } from "./realizeReference.js";
+export { designTrip, type DesignTripOptions } from "./designTrip.js";
+export { compareReferences, type CompareReferencesOptions } from "./compareReferences.js";
+export {
+  customaryToleranceFractions,
+  preferredSeries,
+  preferredSeriesNames,
+  seriesE12,
+  seriesE192,
+  seriesE24,
+  seriesE48,
+  seriesE6,
+  seriesE96,
+  type PreferredSeriesName,
+} from "../data/preferredSeries.js";

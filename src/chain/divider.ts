@@ -5,8 +5,10 @@
  * @module
  */
 import { _requireFinite, HotjunctionRangeError } from "../errors.js";
+import type { Distribution, Model } from "../uncertainty/types.js";
 import {
   _ambientFromReferenceC,
+  _checkAmbient,
   _optionalLimit,
   _requireFraction,
   _requireObject,
@@ -14,7 +16,7 @@ import {
   _source,
   type _SourceContext,
 } from "./_common.js";
-import type { AmbientRange, ChainErrorSource, DividerElement } from "./types.js";
+import type { AmbientRange, ChainErrorSource, DividerElement, SourceDistributionOverride } from "./types.js";
 
 function checkResistors(value: unknown, context: string): readonly number[] {
   if (!Array.isArray(value) || value.length < 2) {
@@ -150,5 +152,58 @@ export function _dividerStage(
       return below / total;
     },
     checkTap: (tap) => checkTap(tap, n, context),
+  };
+}
+
+/** Options of {@link dividerRatioModel}. */
+export interface DividerRatioModelOptions {
+  /** Ambient range for the tempco terms, °C. Default 25 … 25 (no tempco term). */
+  readonly ambient?: AmbientRange;
+  /** Per-source distribution overrides, by source name. */
+  readonly sourceDistributions?: Readonly<Record<string, SourceDistributionOverride>>;
+}
+
+/** Result of {@link dividerRatioModel}: a model of a tap ratio (V/V) in the source values. */
+export interface DividerRatioModel {
+  readonly model: Model;
+  readonly inputs: Readonly<Record<string, Distribution>>;
+  readonly sources: readonly ChainErrorSource[];
+  /** Nominal ratio, V/V. */
+  readonly nominalRatio: number;
+}
+
+/**
+ * The ratio of one divider tap as a model of its resistors' error sources (tolerance and tempco, or ratio
+ * tolerance and tracking for a matched network), ready for `propagate(model, inputs, options)`.
+ * @param divider - divider element
+ * @param tapIndex - tap, 0 … n − 2
+ * @param options - ambient range (tempco terms), distribution overrides
+ * @returns model (ratio, V/V), inputs, sources, nominalRatio
+ * @throws HotjunctionRangeError / HotjunctionTypeError for a bad divider, tap or range
+ * @example
+ * ```ts
+ * import { dividerRatioModel, propagate } from "hotjunction";
+ * const m = dividerRatioModel({ kind: "divider", resistorsOhms: [100000, 10000], toleranceFraction: 0.01 }, 0);
+ * const w = propagate(m.model, m.inputs, { method: "worst-case" });
+ * console.log(w.interval.map((k) => k.toFixed(7))); // [ '0.0892696', '0.0925756' ]
+ * ```
+ */
+export function dividerRatioModel(
+  divider: DividerElement,
+  tapIndex: number,
+  options?: DividerRatioModelOptions,
+): DividerRatioModel {
+  const context = "divider";
+  const o = options === undefined ? {} : _requireObject(options, "options", context);
+  const ambient = o["ambient"] === undefined ? { minC: 25, maxC: 25 } : _checkAmbient(o["ambient"], context);
+  const stage = _dividerStage(divider, ambient, { overrides: options?.sourceDistributions }, context);
+  const tap = stage.checkTap(tapIndex);
+  const inputs: Record<string, Distribution> = {};
+  for (const s of stage.sources) inputs[s.name] = s.distribution;
+  return {
+    model: (x) => stage.ratio(x, tap),
+    inputs,
+    sources: stage.sources,
+    nominalRatio: stage.nominalRatio(tap),
   };
 }

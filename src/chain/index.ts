@@ -29,7 +29,12 @@ export {
 } from "./shuntReference.js";
 export { referenceErrorSources, type ReferenceErrorSourcesOptions } from "./reference.js";
 export { referenceHeadroom, type ReferenceHeadroom } from "./referenceHeadroom.js";
-export { dividerTapRatio } from "./divider.js";
+export {
+  dividerRatioModel,
+  dividerTapRatio,
+  type DividerRatioModel,
+  type DividerRatioModelOptions,
+} from "./divider.js";
 export { comparatorSwitchingOffsetMillivolts } from "./comparator.js";
 export { adcLsbVolts } from "./adc.js";
 export { chainErrorSources } from "./chainErrorSources.js";

@@ -10,6 +10,12 @@ import type { CliIo } from "./io.js";
 import { registerEmfCommand } from "./commands/emf.js";
 import { registerRefTableCommand } from "./commands/refTable.js";
 import { registerTempCommand } from "./commands/temp.js";
+import { registerCheckCommand } from "./commands/check.js";
+import { registerCompareCommand } from "./commands/compare.js";
+import { registerSchemaCommand } from "./commands/schema.js";
+import { registerSweepCommand } from "./commands/sweep.js";
+import { registerTableCommand } from "./commands/table.js";
+import { registerValidateCommand } from "./commands/validate.js";
 import { _packageVersion } from "./version.js";
 
 /** What every command registration receives. */
@@ -49,7 +55,12 @@ export function _createProgram(io: CliIo): Command {
     registerEmfCommand,
     registerTempCommand,
     registerRefTableCommand,
-
+    registerTableCommand,
+    registerValidateCommand,
+    registerCheckCommand,
+    registerCompareCommand,
+    registerSweepCommand,
+    registerSchemaCommand,
   ];
   for (const register of registrations) {
     const command = register(program, context);

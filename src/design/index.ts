@@ -30,3 +30,4 @@ export { renderComparisonReport } from "../report/renderComparisonReport.js";
 export { renderSweepReport } from "../report/renderSweepReport.js";
 export { tripBandChartSvg } from "../report/tripBandChart.js";
 export { errorBandChartSvg } from "../report/errorBandChart.js";
+export { firmwareTripReport, type FirmwareTripSetpoint } from "../report/firmwareTripReport.js";

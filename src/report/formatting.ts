@@ -22,7 +22,7 @@ export function _signed(value: number, decimals = 1): string {
 export function _textTable(rows: readonly (readonly string[])[]): string {
   const widths: number[] = [];
   for (const row of rows) row.forEach((cell, i) => (widths[i] = Math.max(widths[i] ?? 0, [...cell].length)));
-  const numeric = (cell: string): boolean => /^[-+]?\d/.test(cell);
+  const numeric = (cell: string): boolean => /^[-+]?\d[\d.]*(?: to [-+]?\d[\d.]*)?$/.test(cell);
   const lines = rows.map((row) =>
     row
       .map((cell, i) => {

@@ -72,7 +72,8 @@ export function tripReportFromResult(result: TripDesignResult, methods: ReportMe
       errorSources: s.errorSources,
     })),
     details,
-    notes: result.notes,
+    // The caution is printed once by the renderer; drop a copy the engine may add to its notes.
+    notes: result.notes.filter((n) => !/do not certify/i.test(n)),
     methods: { ...methods, acceptanceMethod: result.acceptanceMethod },
   };
 }

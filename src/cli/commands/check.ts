@@ -1,0 +1,110 @@
+/**
+ * `hotjunction check <design.json>`: runs the trip design (comparator designs: thresholds from standard
+ * resistors, trip bands, margins; ADC designs: the chain's reading error at each setpoint) and prints the report.
+ * @module
+ */
+import type { Command } from "commander";
+import { evaluateChain } from "../../chain/evaluateChain.js";
+import type { DesignFile } from "../../design/designSchema.js";
+import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
+import { firmwareTripReport } from "../../report/firmwareTripReport.js";
+import { renderTripReport, tripReportFromResult } from "../../report/renderTripReport.js";
+import type { TripReport } from "../../report/reportTypes.js";
+import { tripBandChartSvg } from "../../report/tripBandChart.js";
+import { designTrip } from "../../trip/designTrip.js";
+import type { CliIo } from "../io.js";
+import {
+  _addAnalysisOptions,
+  _analysisSettings,
+  _loadDesign,
+  _methodInfo,
+  type AnalysisOptionValues,
+  type AnalysisSettings,
+} from "../designOptions.js";
+import {
+  _addOutputOptions,
+  _chosenFormat,
+  _emitMain,
+  _planCommandOutputs,
+  type OutputOptionValues,
+} from "../outputOptions.js";
+import { _startProgress } from "../progress.js";
+import type { CommandContext } from "../runCli.js";
+import { _writeOutput } from "../writeOutput.js";
+
+type CheckOptions = OutputOptionValues & AnalysisOptionValues;
+
+/** The trip report of a design (comparator or ADC). @internal */
+export function _tripReportOfDesign(io: CliIo, design: DesignFile, settings: AnalysisSettings): TripReport {
+  const methods = _methodInfo(settings);
+  if (design.comparator !== undefined) {
+    const progress = _startProgress(io, "trip design");
+    try {
+      const result = designTrip(tripDesignFromDesign(design), {
+        acceptanceMethod: settings.acceptanceMethod,
+        coverage: settings.coverage,
+        monteCarloTrials: settings.trials,
+        seed: settings.seed,
+      });
+      return tripReportFromResult(result, methods);
+    } finally {
+      progress.stop();
+    }
+  }
+  const chain = measurementChainFromDesign(design);
+  const setpoints = design.setpoints.map((s) => ({
+    name: s.name,
+    tripTemperatureC: s.tripTemperatureC,
+    // Presence was checked when the design was validated.
+    maxNormalOperatingC: s.maxNormalOperatingC ?? design.processLimits?.maxNormalOperatingC ?? Number.NaN,
+    hazardLimitC: s.hazardLimitC ?? design.processLimits?.hazardLimitC ?? Number.NaN,
+  }));
+  const progress = _startProgress(io, "chain at setpoints");
+  try {
+    const evaluations = setpoints.map((s, i) => {
+      const evaluation = evaluateChain(chain, s.tripTemperatureC, {
+        methods: methods.methods,
+        coverage: settings.coverage,
+        trials: settings.trials,
+        seed: settings.seed,
+      });
+      progress.update((i + 1) / setpoints.length);
+      return evaluation;
+    });
+    const reference = design.reference;
+    const details = [`Reference: ${reference.name} (${reference.kind}), ${reference.nominalVolts} V.`, `ADC: ${design.adc?.bits ?? "?"} bits.`];
+    return {
+      ...firmwareTripReport(setpoints, evaluations, methods, details),
+      ...(design.name !== undefined ? { designName: design.name } : {}),
+    };
+  } finally {
+    progress.stop();
+  }
+}
+
+/** Registers the `check` command. @internal */
+export function registerCheckCommand(program: Command, context: CommandContext): Command {
+  const command = program
+    .command("check")
+    .description("design the trip thresholds of a design file and report trip bands and margins")
+    .argument("<design>", "design file (JSON)")
+    .addHelpText(
+      "after",
+      "\nExamples:\n  hotjunction check examples/reflow-oven-trip.json\n  hotjunction check kiln.json --method monte-carlo --trials 100000 --seed 7 --markdown --out kiln-report.md --svg kiln-bands.svg\n",
+    );
+  _addAnalysisOptions(command, "the trip bands");
+  _addOutputOptions(command, ["json", "markdown", "csv"]);
+  command.action(async (path: string, options: CheckOptions) => {
+    const plan = _planCommandOutputs(context.io, options, [path], options.svg !== undefined ? [options.svg] : []);
+    const design = _loadDesign(context.io, path);
+    const report = _tripReportOfDesign(context.io, design, _analysisSettings(design, options));
+    const named = design.name !== undefined ? { ...report, designName: design.name } : report;
+    await _emitMain(context.io, plan, renderTripReport(named, _chosenFormat(options)));
+    const svg = plan.extras[0];
+    if (svg !== undefined) {
+      await _writeOutput(svg, tripBandChartSvg(named));
+      context.io.writeErr(`hotjunction: wrote ${svg.displayPath}\n`);
+    }
+  });
+  return command;
+}

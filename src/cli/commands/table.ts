@@ -1,0 +1,86 @@
+/**
+ * `hotjunction table <type> --kind ... --from --to --max-error ...`: firmware lookup tables (C header, JSON or
+ * CSV) built by the firmware module.
+ * @module
+ */
+import { Option, type Command } from "commander";
+import type { ThermocoupleType } from "../../data/thermocoupleData.js";
+import { firmwareTableFromSpec, type FirmwareTableSpec } from "../../firmware/firmwareTableFromSpec.js";
+import { _firmwareTableKinds, type FirmwareTableKind } from "../../firmware/tableFunction.js";
+import { thermocoupleTypes } from "../../its90/resolveType.js";
+import { _emitMain, _planCommandOutputs } from "../outputOptions.js";
+import { _integerParser, _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
+import type { CommandContext } from "../runCli.js";
+
+interface TableOptions {
+  readonly kind: FirmwareTableKind;
+  readonly from: number;
+  readonly to: number;
+  readonly maxError: number;
+  readonly format: "c" | "json" | "csv";
+  readonly placement?: "adaptive" | "uniform";
+  readonly prefix?: string;
+  readonly gain?: number;
+  readonly referenceVolts?: number;
+  readonly bits?: number;
+  readonly offsetMv?: number;
+  readonly coldJunction?: number;
+  readonly maxBreakpoints?: number;
+  readonly out?: string;
+  readonly force?: boolean;
+}
+
+/** Registers the `table` command. @internal */
+export function registerTableCommand(program: Command, context: CommandContext): Command {
+  return program
+    .command("table")
+    .description("firmware lookup table with a proven error bound (C header, JSON or CSV)")
+    .addArgument(program.createArgument("<type>", "thermocouple type").choices(thermocoupleTypes))
+    .addOption(new Option("--kind <kind>", "what the table converts").choices(_firmwareTableKinds).makeOptionMandatory())
+    .requiredOption("--from <C>", "lowest temperature covered, °C", _parseNumber)
+    .requiredOption("--to <C>", "highest temperature covered, °C", _parseNumber)
+    .requiredOption("--max-error <x>", "largest error allowed, in the output's unit (°C, µV or codes)", _parsePositiveNumber)
+    .addOption(new Option("--format <format>", "output format").choices(["c", "json", "csv"]).default("c"))
+    .addOption(new Option("--placement <placement>", "breakpoint placement").choices(["adaptive", "uniform"]))
+    .option("--prefix <name>", "identifier prefix in the C header")
+    .option("--gain <V/V>", "ADC kinds: amplifier gain", _parsePositiveNumber)
+    .option("--reference-volts <V>", "ADC kinds: ADC full-scale (reference) voltage", _parsePositiveNumber)
+    .option("--bits <n>", "ADC kinds: resolution", _integerParser(8, 31))
+    .option("--offset-mv <mV>", "ADC kinds: offset added at the ADC input, mV", _parseNumber)
+    .option("--cold-junction <C>", "ADC kinds: fixed cold-junction temperature, °C", _parseNumber)
+    .option("--max-breakpoints <n>", "cap on breakpoints", _integerParser(2, 65536))
+    .option("--out <file>", "write the table to FILE (atomically) instead of standard output")
+    .option("--force", "allow --out to replace an existing file")
+    .addHelpText(
+      "after",
+      "\nExamples:\n  hotjunction table K --kind emfToTemperature --from 0 --to 1200 --max-error 0.05 --out tc_k.h\n" +
+        "  hotjunction table K --kind adcCodeToTemperature --from 0 --to 400 --max-error 0.1 --gain 100 --reference-volts 2.5 --bits 16 --cold-junction 25 --format csv\n",
+    )
+    .action(async (type: ThermocoupleType, options: TableOptions) => {
+      const plan = _planCommandOutputs(context.io, options, []);
+      const adcGiven = [options.gain, options.referenceVolts, options.bits].some((v) => v !== undefined);
+      const spec: FirmwareTableSpec = {
+        format: options.format,
+        type,
+        kind: options.kind,
+        minC: options.from,
+        maxC: options.to,
+        maxErrorOutputUnits: options.maxError,
+        ...(options.placement !== undefined ? { placement: options.placement } : {}),
+        ...(options.prefix !== undefined ? { prefix: options.prefix } : {}),
+        ...(options.maxBreakpoints !== undefined ? { maxBreakpoints: options.maxBreakpoints } : {}),
+        ...(adcGiven
+          ? {
+              chain: {
+                gain: options.gain ?? Number.NaN,
+                referenceVolts: options.referenceVolts ?? Number.NaN,
+                bits: options.bits ?? Number.NaN,
+                ...(options.offsetMv !== undefined ? { offsetMillivolts: options.offsetMv } : {}),
+                ...(options.coldJunction !== undefined ? { coldJunctionC: options.coldJunction } : {}),
+              },
+            }
+          : {}),
+      };
+      await _emitMain(context.io, plan, firmwareTableFromSpec(spec));
+    });
+}

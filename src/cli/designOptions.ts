@@ -1,0 +1,72 @@
+/**
+ * Options shared by the commands that read a design file: analysis method, Monte Carlo trials and seed, and the
+ * SVG chart path; and the routine that loads the design with its file name in messages.
+ * @module
+ */
+import { Option, type Command } from "commander";
+import { resolve } from "node:path";
+import { loadDesignFile } from "../design/loadDesignFile.js";
+import type { DesignFile } from "../design/designSchema.js";
+import type { ReportMethodInfo } from "../report/reportTypes.js";
+import type { CliIo } from "./io.js";
+import { _integerParser } from "./parseArgs.js";
+
+/** Analysis options as parsed. */
+export interface AnalysisOptionValues {
+  readonly method?: "worst-case" | "rss" | "monte-carlo";
+  readonly trials?: number;
+  readonly seed?: number;
+  readonly svg?: string;
+}
+
+/** Resolved analysis settings (command line over design file over defaults). */
+export interface AnalysisSettings {
+  readonly acceptanceMethod: "worst-case" | "rss" | "monte-carlo";
+  readonly trials: number;
+  readonly seed: number;
+  readonly coverage: number;
+}
+
+/** Default Monte Carlo trials of the CLI (modest; raise with --trials). */
+export const defaultCliTrials = 20_000;
+
+/** Adds --method, --trials, --seed and --svg. @internal */
+export function _addAnalysisOptions(command: Command, svgWhat: string): Command {
+  command.addOption(
+    new Option("--method <method>", "band that decides pass/fail (default: the design's, else worst-case)").choices([
+      "worst-case",
+      "rss",
+      "monte-carlo",
+    ]),
+  );
+  command.option("--trials <n>", `Monte Carlo trials (default: the design's, else ${defaultCliTrials})`, _integerParser(100, 10_000_000));
+  command.option("--seed <n>", "Monte Carlo seed, 0 to 4294967295 (default: the design's, else 1)", _integerParser(0, 4_294_967_295));
+  command.option("--svg <file>", `also write ${svgWhat} as an SVG chart to FILE`);
+  return command;
+}
+
+/** Command line over design file over defaults. @internal */
+export function _analysisSettings(design: DesignFile, values: AnalysisOptionValues): AnalysisSettings {
+  return {
+    acceptanceMethod: values.method ?? design.analysis?.acceptanceMethod ?? "worst-case",
+    trials: values.trials ?? design.analysis?.monteCarloTrials ?? defaultCliTrials,
+    seed: values.seed ?? design.analysis?.seed ?? 1,
+    coverage: 0.95,
+  };
+}
+
+/** The method line of reports for these settings. @internal */
+export function _methodInfo(settings: AnalysisSettings): ReportMethodInfo {
+  return {
+    methods: ["worst-case", "rss", "monte-carlo"],
+    acceptanceMethod: settings.acceptanceMethod,
+    coverage: settings.coverage,
+    trials: settings.trials,
+    seed: settings.seed,
+  };
+}
+
+/** Loads a design file given on the command line (relative to the CLI's working directory). @internal */
+export function _loadDesign(io: CliIo, path: string): DesignFile {
+  return loadDesignFile(resolve(io.cwd, path), { fileName: path });
+}

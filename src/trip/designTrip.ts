@@ -120,6 +120,11 @@ function checkLimits(design: TripDesign): { name: string; tripC: number; limits:
 }
 
 function band(method: PropagationMethod, r: PropagationResult): TripBand {
+  for (const value of [r.interval[0], r.interval[1], r.standardUncertainty]) {
+    if (!Number.isFinite(value)) {
+      throw new HotjunctionRangeError({ code: "MODEL_NOT_FINITE", quantity: `${method} trip band`, value, context: "trip design", problem: "is not finite (a tolerance too small for numerical differentiation?)" });
+    }
+  }
   return {
     method,
     lowC: r.interval[0],

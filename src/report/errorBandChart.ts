@@ -7,7 +7,7 @@ import { scaleLinear } from "d3-scale";
 import { area, line } from "d3-shape";
 import { _describeMethods, _methodShortName } from "./formatting.js";
 import type { ErrorSweep } from "./reportTypes.js";
-import { _bottomAxis, _element, _leftAxis, _methodFill, _splitCaution, _svgDocument, _text } from "./svg.js";
+import { _bottomAxis, _element, _leftAxis, _methodFill, _splitCaution, _svgDocument, _text, _wrapText } from "./svg.js";
 
 /**
  * Draws an error sweep as an SVG document (text).
@@ -23,8 +23,8 @@ import { _bottomAxis, _element, _leftAxis, _methodFill, _splitCaution, _svgDocum
  */
 export function errorBandChartSvg(sweep: ErrorSweep): string {
   const width = 900;
-  const height = 520;
-  const margin = { left: 80, right: 190, top: 50, bottom: 110 };
+  const height = 560;
+  const margin = { left: 80, right: 190, top: 50, bottom: 150 };
   const title = `${sweep.title}${sweep.designName !== undefined ? `: ${sweep.designName}` : ""}`;
   const temperatures = sweep.rows.map((r) => r.temperatureC);
   const errors = sweep.rows.flatMap((r) => [r.nominalErrorC, ...r.bands.flatMap((b) => [b.errorLowC, b.errorHighC])]);
@@ -37,21 +37,26 @@ export function errorBandChartSvg(sweep: ErrorSweep): string {
   const methods = sweep.rows[0]?.bands.map((b) => b.method) ?? [];
   const parts: string[] = [_text(width / 2, 26, title, { "text-anchor": "middle", "font-size": 16, "font-weight": "bold", class: "chart-title" })];
   // Widest band first so narrower ones stay visible on top.
-  const order = [...methods].sort((a, b) => ["worst-case", "monte-carlo", "rss"].indexOf(a) - ["worst-case", "monte-carlo", "rss"].indexOf(b));
+  const order = [...methods].sort((a, b) => ["worst-case", "rss", "monte-carlo"].indexOf(a) - ["worst-case", "rss", "monte-carlo"].indexOf(b));
+  const labels: { y: number; text: string }[] = [];
   for (const method of order) {
     const index = methods.indexOf(method);
     const bandArea = area<(typeof sweep.rows)[number]>()
       .x((r) => x(r.temperatureC))
       .y0((r) => y(r.bands[index]?.errorLowC ?? 0))
       .y1((r) => y(r.bands[index]?.errorHighC ?? 0));
-    parts.push(_element("path", { class: `band band-${method}`, d: bandArea(sweep.rows) ?? "", fill: _methodFill[method], stroke: "#000000", "stroke-width": 1, "fill-opacity": method === "worst-case" ? 0.6 : 0.9 }));
+    parts.push(_element("path", { class: `band band-${method}`, d: bandArea(sweep.rows) ?? "", fill: _methodFill[method], stroke: "#000000", "stroke-width": 1, "fill-opacity": method === "worst-case" ? 0.6 : method === "monte-carlo" ? 0.6 : 0.9, "stroke-dasharray": method === "monte-carlo" ? "3 2" : undefined }));
     const last = sweep.rows[sweep.rows.length - 1];
     const lastBand = last?.bands[index];
     if (last !== undefined && lastBand !== undefined) {
-      parts.push(_text(width - margin.right + 8, y(lastBand.errorHighC) + 4, `${_methodShortName(method)} upper`, { "font-size": 11, class: "direct-label" }));
-      parts.push(_text(width - margin.right + 8, y(lastBand.errorLowC) + 4, `${_methodShortName(method)} lower`, { "font-size": 11, class: "direct-label" }));
+      labels.push({ y: y(lastBand.errorHighC) + 4, text: `${_methodShortName(method)} upper` });
+      labels.push({ y: y(lastBand.errorLowC) + 4, text: `${_methodShortName(method)} lower` });
     }
   }
+  // Direct labels at the right end, pushed apart so none overlaps.
+  labels.sort((a, b) => a.y - b.y);
+  for (let i = 1; i < labels.length; i++) labels[i]!.y = Math.max(labels[i]!.y, labels[i - 1]!.y + 13);
+  for (const label of labels) parts.push(_text(width - margin.right + 8, label.y, label.text, { "font-size": 11, class: "direct-label" }));
   const nominal = line<(typeof sweep.rows)[number]>().x((r) => x(r.temperatureC)).y((r) => y(r.nominalErrorC));
   parts.push(_element("path", { class: "nominal", d: nominal(sweep.rows) ?? "", fill: "none", stroke: "#000000", "stroke-width": 2 }));
   parts.push(_element("line", { class: "zero", x1: margin.left, x2: width - margin.right, y1: y(0), y2: y(0), stroke: "#000000", "stroke-dasharray": "4 3" }));
@@ -69,8 +74,10 @@ export function errorBandChartSvg(sweep: ErrorSweep): string {
   legend.push(_text(lx + 32, legendY + 10, "nominal error", { "font-size": 12 }));
   parts.push(_element("g", { class: "legend" }, legend.join("")));
   const [cautionFirst, cautionRest] = _splitCaution();
-  parts.push(_text(12, height - 42, _describeMethods(sweep.methods), { "font-size": 10, class: "method-note" }));
-  parts.push(_text(12, height - 28, `Caution: ${cautionFirst}`, { "font-size": 10, class: "caution" }));
-  parts.push(_text(12, height - 14, cautionRest, { "font-size": 10, class: "caution" }));
+  const noteLines = [..._wrapText(_describeMethods(sweep.methods), 150), `Caution: ${cautionFirst}`, cautionRest];
+  noteLines.forEach((text, i) => {
+    const cls = i < noteLines.length - 2 ? "method-note" : "caution";
+    parts.push(_text(12, height - 14 * (noteLines.length - i), text, { "font-size": 10, class: cls }));
+  });
   return _svgDocument(width, height, title, parts.join(""));
 }

@@ -12,6 +12,20 @@ export function _splitCaution(): [string, string] {
   return cut < 0 ? [CAUTION_TEXT, ""] : [CAUTION_TEXT.slice(0, cut + 1), CAUTION_TEXT.slice(cut + 2)];
 }
 
+/** Wraps text at spaces into lines of at most `width` characters. @internal */
+export function _wrapText(text: string, width: number): string[] {
+  const lines: string[] = [];
+  let current = "";
+  for (const word of text.split(" ")) {
+    if (current.length > 0 && current.length + 1 + word.length > width) {
+      lines.push(current);
+      current = word;
+    } else current = current.length > 0 ? `${current} ${word}` : word;
+  }
+  if (current.length > 0) lines.push(current);
+  return lines;
+}
+
 /** Escapes text for SVG content and attribute values. @internal */
 export function _escapeXml(text: string): string {
   return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&apos;");
@@ -53,7 +67,7 @@ export const _methodFill = { "worst-case": "#9a9a9a", rss: "url(#hj-hatch)", "mo
 /** A horizontal axis at `y` with ticks, tick labels and a title. @internal */
 export function _bottomAxis(scale: ScaleLinear<number, number>, y: number, title: string, tickCount = 8): string {
   const [x0, x1] = scale.range() as [number, number];
-  const format = scale.tickFormat(tickCount);
+  const format = scale.tickFormat(tickCount, "~f");
   const ticks = scale
     .ticks(tickCount)
     .map((t) =>
@@ -73,7 +87,7 @@ export function _bottomAxis(scale: ScaleLinear<number, number>, y: number, title
 /** A vertical axis at `x` with ticks, tick labels and a title. @internal */
 export function _leftAxis(scale: ScaleLinear<number, number>, x: number, title: string, tickCount = 6): string {
   const [y0, y1] = scale.range() as [number, number];
-  const format = scale.tickFormat(tickCount);
+  const format = scale.tickFormat(tickCount, "~f");
   const ticks = scale
     .ticks(tickCount)
     .map((t) =>

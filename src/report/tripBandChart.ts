@@ -7,7 +7,7 @@
 import { scaleLinear } from "d3-scale";
 import { _describeMethods, _fixed, _methodShortName } from "./formatting.js";
 import type { TripReport } from "./reportTypes.js";
-import { _bottomAxis, _element, _methodFill, _splitCaution, _svgDocument, _text } from "./svg.js";
+import { _bottomAxis, _element, _methodFill, _splitCaution, _svgDocument, _text, _wrapText } from "./svg.js";
 
 /**
  * Draws the trip bands of a trip report as an SVG document (text).
@@ -85,10 +85,12 @@ export function tripBandChartSvg(report: TripReport): string {
   legend.push(_text(left + 392, lineY + 4, "target trip", { "font-size": 12 }));
   parts.push(_element("g", { class: "legend" }, legend.join("")));
   const footY = lineY + 24;
-  parts.push(_text(12, footY, _describeMethods(report.methods), { "font-size": 10, class: "method-note" }));
   const [cautionFirst, cautionRest] = _splitCaution();
-  parts.push(_text(12, footY + 14, `Caution: ${cautionFirst}`, { "font-size": 10, class: "caution" }));
-  parts.push(_text(12, footY + 28, cautionRest, { "font-size": 10, class: "caution" }));
-  const height = footY + 28 + 14;
+  const methodLines = _wrapText(_describeMethods(report.methods), 150);
+  methodLines.forEach((text, i) => parts.push(_text(12, footY + 14 * i, text, { "font-size": 10, class: "method-note" })));
+  const cautionY = footY + 14 * methodLines.length;
+  parts.push(_text(12, cautionY, `Caution: ${cautionFirst}`, { "font-size": 10, class: "caution" }));
+  parts.push(_text(12, cautionY + 14, cautionRest, { "font-size": 10, class: "caution" }));
+  const height = cautionY + 14 + 14;
   return _svgDocument(width, height, title, parts.join(""));
 }

@@ -1,0 +1,32 @@
+/**
+ * `npm run demo`: runs the example designs through the CLI in-process (from src, no build needed), prints the
+ * reports and writes the SVG charts into out/ (replacing earlier demo charts there).
+ */
+import { mkdirSync } from "node:fs";
+import { fileURLToPath } from "node:url";
+import { _processIo } from "../src/cli/io.js";
+import { runCli } from "../src/cli/runCli.js";
+
+const root = fileURLToPath(new URL("..", import.meta.url));
+process.chdir(root);
+mkdirSync("out", { recursive: true });
+const io = { ..._processIo(), cwd: root };
+
+const runs: string[][] = [
+  ["check", "examples/ceramic-kiln-cutout.json", "--svg", "out/ceramic-kiln-trip-bands.svg", "--force"],
+  ["compare", "examples/ceramic-kiln-cutout.json"],
+  ["check", "examples/reflow-oven-trip.json", "--svg", "out/reflow-oven-trip-bands.svg", "--force"],
+  ["compare", "examples/reflow-oven-trip.json"],
+  ["check", "examples/heated-enclosure-adc.json", "--svg", "out/heated-enclosure-trip-bands.svg", "--force"],
+  ["sweep", "examples/heated-enclosure-adc.json", "--from", "0", "--to", "150", "--step", "10", "--svg", "out/heated-enclosure-error-sweep.svg", "--force"],
+  ["sweep", "examples/ceramic-kiln-cutout.json", "--from", "900", "--to", "1275", "--step", "25", "--svg", "out/ceramic-kiln-error-sweep.svg", "--force"],
+];
+
+let failures = 0;
+for (const args of runs) {
+  process.stdout.write(`\n$ hotjunction ${args.join(" ")}\n\n`);
+  const code = await runCli(args, io);
+  if (code !== 0) failures++;
+}
+process.stdout.write(`\nCharts written to ${root}out/\n`);
+process.exitCode = failures === 0 ? 0 : 1;

@@ -152,7 +152,7 @@ describe.skipIf(!available)("SVG charts in headless Chromium", () => {
     const legend = await page.locator("g.legend").textContent();
     for (const word of ["worst case band", "RSS band", "Monte Carlo band", "highest normal operating", "hazard limit"]) expect(legend).toContain(word);
     expect(await page.locator("text.caution").first().textContent()).toContain("do not certify a safety function");
-    expect(await page.locator("text.method-note").textContent()).toContain("seed 9");
+    expect((await page.locator("text.method-note").allTextContents()).join(" ")).toContain("seed 9");
     // Bands sit where the scale puts them: the worst-case band is wider than the RSS band on screen.
     const wc = await page.locator("rect.band-worst-case").first().boundingBox();
     const rss = await page.locator("rect.band-rss").first().boundingBox();

@@ -202,18 +202,3 @@ export function _source(
     distribution: _limitDistribution(name, limit, center, ctx.overrides?.[name]),
   };
 }
-
-/** @internal Reads an input by name; throws a precise error when a model is called without it. */
-export function _input(inputs: Readonly<Record<string, number>>, name: string): number {
-  const v = inputs[name];
-  if (v === undefined) {
-    throw new HotjunctionTypeError({
-      code: "UNKNOWN_NAME",
-      quantity: "input",
-      value: name,
-      context: "chain model",
-      problem: "is missing from the inputs record",
-    });
-  }
-  return v;
-}

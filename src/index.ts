@@ -105,3 +105,6 @@ export {
 
 // Over-temperature trip design (preferred series, threshold dividers, trip bands, reference comparison)
 export * from "./trip/index.js";
+
+// Failure-mode review of a trip chain (fault catalogue, single-fault review, renderers)
+export * from "./faults/index.js";

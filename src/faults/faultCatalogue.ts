@@ -1,0 +1,278 @@
+/**
+ * The built-in fault catalogue: for each element of a chain, its single faults as data.
+ * @module
+ */
+import type { MeasurementChain } from "../chain/types.js";
+import { _invalidChoice, _requireFinite, _requireInRange, HotjunctionRangeError } from "../errors.js";
+import type { Fault, FaultContext } from "./types.js";
+
+/** Options of {@link faultCatalogue} (the same meaning and defaults as in {@link FaultContext}). */
+export interface FaultCatalogueOptions {
+  /** Temperature at a short along the wire, °C. Default: left to the review (halfway from cold junction to healthy trip). */
+  readonly wireShortC?: number;
+  /** Ground / common-mode offset seen as differential input, mV (> 0). Default 1. */
+  readonly groundOffsetMillivolts?: number;
+  /** Stated reference drift, fraction in (0, 1). Default 0.05. */
+  readonly referenceDriftFraction?: number;
+  /** Comparator output level that means "trip". Default `"high"`. */
+  readonly comparatorTripLevel?: FaultContext["comparatorTripLevel"];
+}
+
+const context = "fault catalogue";
+
+const mitigationText = {
+  open: "bias the open input upward (pull-up burnout bias) so an open thermocouple reads high and trips; add open-thermocouple detection",
+  short:
+    "supervise plausibility (the reading must rise while the heater runs, or agree with an independent sensor); a second, independent sensor channel",
+  reversed: "polarized, colour-coded thermocouple connectors; a range check that flags readings below the cold junction",
+  ground: "a differential input with enough common-mode range, the sheath grounded at one point; an out-of-range window",
+  compensation: "supervise the compensation voltage; keep margin to the hazard limit",
+  low: "a window comparator or supervisory range check that flags a signal below the bottom of the normal range",
+  high: "a window comparator to tell a railed signal from a real over-temperature",
+  gain: "a supervisory reading or second comparator; a gain network whose likelier failure raises the gain",
+  openLoop: "a window comparator to tell a railed signal from a real over-temperature",
+  referenceHigh: "a window check of the threshold or reference node; a reference whose likelier failure pulls the threshold low",
+  referenceLow: "a window check of the reference node to tell a failed reference from an over-temperature",
+  drift: "periodic proof test of the trip point; a supervisory reading compared with the detector state",
+  divider: "arrange the divider so the likelier failure pulls the threshold low; a window check of the threshold node",
+  comparatorStuck: "periodic proof test with an injected signal; a supervisory check of the detector state against the reading",
+  adc: "a firmware range check of the code (the end codes are faults); a hardware comparator beside the firmware trip",
+  supply: "a de-energise-to-trip output stage (loss of power trips)",
+} as const;
+
+/**
+ * The built-in single-fault catalogue of a chain, as data: thermocouple open, shorted at the terminals, shorted
+ * along the wire, reversed, ground offset of either sign; hardware cold-junction compensation lost; amplifier
+ * output stuck at either rail, supply lost, each gain resistor open or shorted (resistor gain only); fixed-scale
+ * amplifier stuck at either rail, supply lost; reference open, shorted, drifted low and high; each divider
+ * resistor open or shorted; comparator output stuck high or low (ADC chains: code stuck at zero or full scale);
+ * board supply lost. Where an open input goes, the rails and the output-stage polarity are design facts the
+ * review takes from its {@link FaultContext}.
+ * @param chain - the chain (comparator or ADC detector); read for its elements only
+ * @param options - wire-short temperature °C, ground offset mV (> 0, default 1), reference drift fraction (0…1,
+ *   default 0.05), comparator trip level (default "high")
+ * @returns the faults, in signal-path order
+ * @throws HotjunctionTypeError / HotjunctionRangeError for bad options or a chain without a thermocouple or detector
+ * @example
+ * ```ts
+ * import { faultCatalogue } from "hotjunction";
+ * const chain = {
+ *   thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "IEC 60584-1", class: 1 } },
+ *   amplifier: { kind: "fixedScaleAmplifier", type: "K", millivoltsPerC: 5 },
+ *   reference: { kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: 0.001 },
+ *   divider: { kind: "divider", resistorsOhms: [10000, 10000], toleranceFraction: 0.01 },
+ *   detector: { kind: "comparator" },
+ *   ambient: { minC: 15, maxC: 50 },
+ * };
+ * const faults = faultCatalogue(chain);
+ * console.log(faults.length); // 20
+ * console.log(faults[0].id, faults[0].effects[0].kind); // "thermocouple.open" "open-thermocouple"
+ * ```
+ */
+export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueOptions = {}): Fault[] {
+  if (typeof chain !== "object" || chain === null) {
+    throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "chain", value: chain, context, problem: "is not an object" });
+  }
+  const offsetMv =
+    options.groundOffsetMillivolts === undefined ? 1 : _requireInRange(options.groundOffsetMillivolts, "groundOffsetMillivolts", 1e-6, 1e4, "mV", context);
+  const drift =
+    options.referenceDriftFraction === undefined ? 0.05 : _requireInRange(options.referenceDriftFraction, "referenceDriftFraction", 1e-9, 0.999, undefined, context);
+  const level = options.comparatorTripLevel ?? "high";
+  if (level !== "high" && level !== "low") _invalidChoice("comparatorTripLevel", level, ["high", "low"], context);
+  const wireShortC = options.wireShortC === undefined ? undefined : _requireFinite(options.wireShortC, "wireShortC", "°C", context);
+
+  const faults: Fault[] = [];
+  const add = (f: Fault): void => {
+    faults.push(f);
+  };
+
+  // Thermocouple
+  add({
+    id: "thermocouple.open",
+    element: "thermocouple",
+    description: "thermocouple open (broken wire or junction); the input goes where the open-circuit bias drives it",
+    effects: [{ kind: "open-thermocouple" }],
+    mitigation: mitigationText.open,
+  });
+  add({
+    id: "thermocouple.shortAtTerminals",
+    element: "thermocouple",
+    description: "thermocouple shorted at the terminals: reads the cold-junction temperature",
+    effects: [{ kind: "thermocouple-short" }],
+    mitigation: mitigationText.short,
+  });
+  add({
+    id: "thermocouple.shortAlongWire",
+    element: "thermocouple",
+    description:
+      wireShortC === undefined
+        ? "thermocouple shorted along the wire: reads the temperature at the short"
+        : `thermocouple shorted along the wire at ${wireShortC} °C: reads that temperature`,
+    effects: [wireShortC === undefined ? { kind: "thermocouple-short", alongWire: true } : { kind: "thermocouple-short", atC: wireShortC }],
+    mitigation: mitigationText.short,
+  });
+  add({
+    id: "thermocouple.reversed",
+    element: "thermocouple",
+    description: "thermocouple connected with reversed polarity",
+    effects: [{ kind: "scale-node", node: "thermocoupleEmf", factor: -1 }],
+    mitigation: mitigationText.reversed,
+  });
+  add({
+    id: "thermocouple.groundOffsetPositive",
+    element: "thermocouple",
+    description: `common-mode or ground offset seen as +${offsetMv} mV of differential input`,
+    effects: [{ kind: "offset-node", node: "thermocoupleEmf", millivolts: offsetMv }],
+    mitigation: mitigationText.ground,
+  });
+  add({
+    id: "thermocouple.groundOffsetNegative",
+    element: "thermocouple",
+    description: `common-mode or ground offset seen as −${offsetMv} mV of differential input`,
+    effects: [{ kind: "offset-node", node: "thermocoupleEmf", millivolts: -offsetMv }],
+    mitigation: mitigationText.ground,
+  });
+
+  // Cold junction
+  if (chain.coldJunction?.method === "hardware") {
+    add({
+      id: "coldJunction.compensationLost",
+      element: "coldJunction",
+      description: "hardware cold-junction compensation voltage lost (0 V)",
+      effects: [{ kind: "override-node", node: "compensation", millivolts: 0 }],
+      mitigation: mitigationText.compensation,
+    });
+  }
+
+  // Amplifier
+  const amp = chain.amplifier;
+  if (amp !== undefined) {
+    const el = amp.kind;
+    const words = el === "fixedScaleAmplifier" ? "fixed-scale amplifier" : "amplifier";
+    add({
+      id: `${el}.outputStuckLow`,
+      element: el,
+      description: `${words} output stuck at its low rail`,
+      effects: [{ kind: "override-node", node: "amplifierOutput", rail: "low" }],
+      mitigation: mitigationText.low,
+    });
+    add({
+      id: `${el}.outputStuckHigh`,
+      element: el,
+      description: `${words} output stuck at its high rail`,
+      effects: [{ kind: "override-node", node: "amplifierOutput", rail: "high" }],
+      mitigation: mitigationText.high,
+    });
+    add({
+      id: `${el}.supplyLost`,
+      element: el,
+      description: `${words} supply lost: output falls to 0 V`,
+      effects: [{ kind: "override-node", node: "amplifierOutput", volts: 0 }],
+      mitigation: mitigationText.low,
+    });
+    if (amp.kind === "amplifier" && amp.gain.setBy === "resistors") {
+      for (const resistor of ["feedback", "ground"] as const) {
+        for (const state of ["open", "short"] as const) {
+          const openLoop = (resistor === "feedback") === (state === "open");
+          add({
+            id: `amplifier.${resistor}Resistor${state === "open" ? "Open" : "Short"}`,
+            element: "amplifier",
+            description: `gain ${resistor} resistor ${state === "open" ? "open" : "shorted"}: ${openLoop ? "open loop" : "unity gain"}`,
+            effects: [{ kind: "resistor-fault", element: "amplifier", resistor, state }],
+            mitigation: openLoop ? mitigationText.openLoop : mitigationText.gain,
+          });
+        }
+      }
+    }
+  }
+
+  // Reference
+  const ref = chain.reference;
+  if (ref !== undefined) {
+    const shunt = ref.variant === "shunt";
+    add({
+      id: "reference.open",
+      element: "reference",
+      description: shunt
+        ? "shunt reference open: its node rises toward the supply through the series resistor"
+        : "reference output open: the node falls to 0 V",
+      effects: [{ kind: "reference-open" }],
+      mitigation: shunt ? mitigationText.referenceHigh : mitigationText.referenceLow,
+    });
+    add({
+      id: "reference.short",
+      element: "reference",
+      description: "reference output shorted to ground (0 V)",
+      effects: [{ kind: "override-node", node: "reference", volts: 0 }],
+      mitigation: mitigationText.referenceLow,
+    });
+    const pct = `${+(drift * 100).toPrecision(6)} %`;
+    add({
+      id: "reference.driftedLow",
+      element: "reference",
+      description: `reference drifted ${pct} low, to ${+(ref.nominalVolts * (1 - drift)).toPrecision(6)} V`,
+      effects: [{ kind: "override-node", node: "reference", volts: ref.nominalVolts * (1 - drift) }],
+      mitigation: mitigationText.drift,
+    });
+    add({
+      id: "reference.driftedHigh",
+      element: "reference",
+      description: `reference drifted ${pct} high, to ${+(ref.nominalVolts * (1 + drift)).toPrecision(6)} V`,
+      effects: [{ kind: "override-node", node: "reference", volts: ref.nominalVolts * (1 + drift) }],
+      mitigation: mitigationText.drift,
+    });
+  }
+
+  // Divider and detector
+  const det = chain.detector;
+  if (det?.kind === "comparator") {
+    const ohms = chain.divider?.resistorsOhms ?? [];
+    ohms.forEach((r, index) => {
+      for (const state of ["open", "short"] as const) {
+        add({
+          id: `divider.resistor${index}.${state}`,
+          element: "divider",
+          description: `divider resistor ${index} (${r} Ω, ${index === 0 ? "top" : index === ohms.length - 1 ? "bottom" : "middle"}) ${state === "open" ? "open" : "shorted"}`,
+          effects: [{ kind: "resistor-fault", element: "divider", index, state }],
+          mitigation: mitigationText.divider,
+        });
+      }
+    });
+    for (const stuck of ["high", "low"] as const) {
+      const tripped = stuck === level;
+      add({
+        id: `comparator.outputStuck${stuck === "high" ? "High" : "Low"}`,
+        element: "comparator",
+        description: `comparator output stuck ${stuck} (${tripped ? "trip asserted" : "trip never asserted"})`,
+        effects: [{ kind: "override-node", node: "detectorOutput", tripped }],
+        mitigation: tripped ? mitigationText.high : mitigationText.comparatorStuck,
+      });
+    }
+  } else if (det?.kind === "adc") {
+    add({
+      id: "adc.codeStuckZero",
+      element: "adc",
+      description: "ADC code stuck at zero",
+      effects: [{ kind: "override-node", node: "adcCode", code: 0 }],
+      mitigation: mitigationText.adc,
+    });
+    add({
+      id: "adc.codeStuckFullScale",
+      element: "adc",
+      description: "ADC code stuck at full scale",
+      effects: [{ kind: "override-node", node: "adcCode", code: 2 ** det.bits - 1 }],
+      mitigation: mitigationText.adc,
+    });
+  } else {
+    throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "detector", value: det, context, problem: "is missing or of unknown kind" });
+  }
+
+  add({
+    id: "board.supplyLost",
+    element: "board",
+    description: "board supply lost: every circuit unpowered; the output stage does what its polarity gives",
+    effects: [{ kind: "board-supply-loss" }],
+    mitigation: mitigationText.supply,
+  });
+  return faults;
+}

@@ -32,8 +32,7 @@ function messageOf(details: DesignFileErrorDetails): string {
  * @example
  * ```ts
  * import { parseDesign } from "hotjunction/design";
- * try { parseDesign("{", { fileName: "kiln.json" }); } catch (e) { console.log((e as Error).message); }
- * // kiln.json: not valid JSON: unexpected end of the file at line 1, column 2
+ * try { parseDesign("{", { fileName: "kiln.json" }); } catch (e) { console.log((e as Error).message); } // "kiln.json: not valid JSON at line 1, column 2: expected a key in double quotes, found the end of the file"
  * ```
  */
 export class DesignFileError extends HotjunctionRangeError {

@@ -75,7 +75,7 @@ export function _referenceElementOf(reference: DesignReference): ReferenceElemen
  * ```ts
  * import { referenceOptionFromDesign } from "hotjunction/design";
  * const option = referenceOptionFromDesign({ kind: "regulator-rail", name: "5 V rail", nominalVolts: 5, totalToleranceFraction: 0.04 });
- * console.log(option.kind); // element
+ * console.log(option.kind); // "element"
  * ```
  */
 export function referenceOptionFromDesign(reference: DesignReference): ReferenceOption {
@@ -149,7 +149,7 @@ export function tripDesignFromDesign(design: DesignFile): TripDesign {
  * import { measurementChainFromDesign, parseDesign } from "hotjunction/design";
  * import { readFileSync } from "node:fs";
  * const design = parseDesign(readFileSync("examples/heated-enclosure-adc.json", "utf8"));
- * console.log(measurementChainFromDesign(design).detector.kind); // adc
+ * console.log(measurementChainFromDesign(design).detector.kind); // "adc"
  * ```
  */
 export function measurementChainFromDesign(design: DesignFile, reference: DesignReference = design.reference): MeasurementChain {

@@ -24,7 +24,7 @@ export interface LoadDesignFileOptions {
  * @example
  * ```ts
  * import { loadDesignFile } from "hotjunction/design";
- * try { loadDesignFile("no-such-design.json"); } catch (e) { console.log((e as Error).message); } // no-such-design.json: cannot read: no such file
+ * try { loadDesignFile("no-such-design.json"); } catch (e) { console.log((e as Error).message); } // "no-such-design.json: cannot read: no such file"
  * ```
  */
 export function loadDesignFile(path: string, options: LoadDesignFileOptions = {}): DesignFile {

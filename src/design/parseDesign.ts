@@ -168,8 +168,8 @@ export function validateDesign(value: unknown, options: ParseDesignOptions = {})
  * @example
  * ```ts
  * import { parseDesign } from "hotjunction/design";
- * try { parseDesign('{"hotjunctionDesign": 1,\n "name": tru}', { fileName: "kiln.json" }); }
- * catch (e) { console.log((e as Error).message); } // kiln.json: not valid JSON at line 2, column 10 (at name): expected a value, found "t"
+ * try { parseDesign(" ", { fileName: "kiln.json" }); }
+ * catch (e) { console.log((e as Error).message); } // "kiln.json: not valid JSON at line 1, column 2: the file is empty"
  * ```
  */
 export function parseDesign(text: string, options: ParseDesignOptions = {}): DesignFile {

@@ -18,7 +18,7 @@ import { _bottomAxis, _element, _leftAxis, _methodFill, _splitCaution, _svgDocum
  * import { errorBandChartSvg } from "hotjunction/design";
  * const rows = [0, 100].map((t) => ({ temperatureC: t, nominalErrorC: 0, bands: [{ method: "worst-case" as const, errorLowC: -1, errorHighC: 1 }] }));
  * const svg = errorBandChartSvg({ title: "Error sweep", rows, notes: [], methods: { methods: ["worst-case"], coverage: 0.95 } });
- * console.log(svg.includes("error, °C")); // true
+ * console.log(svg.includes("true hot-junction temperature, °C")); // true
  * ```
  */
 export function errorBandChartSvg(sweep: ErrorSweep): string {

@@ -46,7 +46,7 @@ function rows(comparison: ReferenceComparison): string[][] {
  *   "markdown",
  *   { methods: ["worst-case"], coverage: 0.95 },
  * );
- * console.log(text.split("\n")[0]); // # Reference comparison
+ * console.log(text.split("\n")[0]); // "# Reference comparison"
  * ```
  */
 export function renderComparisonReport(

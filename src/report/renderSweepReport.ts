@@ -30,7 +30,7 @@ function rows(sweep: ErrorSweep): string[][] {
  *   { title: "Error sweep", rows: [{ temperatureC: 100, nominalErrorC: 0, bands: [{ method: "worst-case", errorLowC: -2, errorHighC: 2 }] }], notes: [], methods: { methods: ["worst-case"], coverage: 0.95 } },
  *   "csv",
  * );
- * console.log(csv.trim().split("\n").at(-1)); // 100,0,worst-case,-2,2
+ * console.log(csv.trim().split("\n").at(-1)); // "100,0,worst-case,-2,2"
  * ```
  */
 export function renderSweepReport(sweep: ErrorSweep, format: ReportFormat): string {

@@ -35,7 +35,7 @@ function formatOhms(ohms: number): string {
  *   { networks: [], reference: { name: "ideal", kind: "ideal", nominalVolts: 2.5, toleranceFraction: 0, problems: [] }, setpoints: [], acceptanceMethod: "worst-case", pass: true, notes: [] },
  *   { methods: ["worst-case"], coverage: 0.95 },
  * );
- * console.log(report.title); // Trip design
+ * console.log(report.title); // "Trip design"
  * ```
  */
 export function tripReportFromResult(result: TripDesignResult, methods: ReportMethodInfo): TripReport {

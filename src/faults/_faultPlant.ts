@@ -286,7 +286,8 @@ export function _evaluateSignals(p: _Plant, m: _Mods, hotJunctionC: number): Fau
   } else {
     const fs = d.usesReference ? ref : d.fullScaleVolts;
     let code: number;
-    if (!(fs > 0)) code = out > 0 ? d.codes - 1 : 0;
+    // Without a reference the converter reads any non-negative input as full scale.
+    if (!(fs > 0)) code = out >= 0 ? d.codes - 1 : 0;
     else code = Math.min(Math.max(Math.floor((out / fs) * d.codes), 0), d.codes - 1);
     code = node("adcCode", code);
     s.adcCode = code;

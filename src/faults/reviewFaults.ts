@@ -117,7 +117,7 @@ function checkDetection(d: unknown, context: string): FaultDetection {
  *   ambient: { minC: 25, maxC: 25 },
  * };
  * const review = reviewFaults(chain, { name: "oven", maxNormalOperatingC: 250, hazardLimitC: 280 }, { openCircuitBias: "pull-up" });
- * console.log(review.healthyTripC.toFixed(1)); // "260.0"
+ * console.log(review.healthyTripC.toFixed(1)); // "256.1"
  * const open = review.rows.find((r) => r.faultId === "thermocouple.open");
  * console.log(open.effect, open.category); // "trips-immediately" "safe-undetected"
  * const short = review.rows.find((r) => r.faultId === "thermocouple.shortAtTerminals");

@@ -22,7 +22,6 @@ import {
   _planCommandOutputs,
   type OutputOptionValues,
 } from "../outputOptions.js";
-import { _startProgress } from "../progress.js";
 import type { CommandContext } from "../runCli.js";
 
 type CompareOptions = OutputOptionValues & Omit<AnalysisOptionValues, "svg">;
@@ -45,18 +44,12 @@ export function registerCompareCommand(program: Command, context: CommandContext
     }
     const settings = _analysisSettings(design, options);
     const references = [design.reference, ...(design.referenceAlternatives ?? [])].map(referenceOptionFromDesign);
-    const progress = _startProgress(context.io, "comparing references");
-    let comparison;
-    try {
-      comparison = compareReferences(tripDesignFromDesign(design), references, {
-        acceptanceMethod: settings.acceptanceMethod,
-        coverage: settings.coverage,
-        monteCarloTrials: settings.trials,
-        seed: settings.seed,
-      });
-    } finally {
-      progress.stop();
-    }
+    const comparison = compareReferences(tripDesignFromDesign(design), references, {
+      acceptanceMethod: settings.acceptanceMethod,
+      coverage: settings.coverage,
+      monteCarloTrials: settings.trials,
+      seed: settings.seed,
+    });
     await _emitMain(context.io, plan, renderComparisonReport(comparison, _chosenFormat(options), _methodInfo(settings), design.name));
   });
   return command;

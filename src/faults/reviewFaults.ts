@@ -208,13 +208,17 @@ export function reviewFaults(chain: MeasurementChain, trip: FaultReviewTrip, opt
     return { s, secondTripped, outputTripped: s.outputTripped || secondTripped };
   };
 
-  const findTrip = (plant: _Plant, mods: _Mods): { immediate: boolean; tripC: number | null; pts: Point[] } => {
+  const findTrip = (
+    plant: _Plant,
+    mods: _Mods,
+    tripped: (p: Point) => boolean = (p) => p.outputTripped,
+  ): { immediate: boolean; tripC: number | null; pts: Point[] } => {
     const pts: Point[] = [];
     let found = -1;
     for (let k = 0; k < points.length; k++) {
       const p = evaluate(plant, mods, points[k] as number);
       pts.push(p);
-      if (found < 0 && p.outputTripped) found = k;
+      if (found < 0 && tripped(p)) found = k;
     }
     if (found === 0) return { immediate: true, tripC: fromC, pts };
     if (found < 0) return { immediate: false, tripC: null, pts };
@@ -222,7 +226,7 @@ export function reviewFaults(chain: MeasurementChain, trip: FaultReviewTrip, opt
     let hi = points[found] as number;
     while (hi - lo > 1e-3) {
       const mid = (lo + hi) / 2;
-      if (evaluate(plant, mods, mid).outputTripped) hi = mid;
+      if (tripped(evaluate(plant, mods, mid))) hi = mid;
       else lo = mid;
     }
     return { immediate: false, tripC: hi, pts };
@@ -241,6 +245,8 @@ export function reviewFaults(chain: MeasurementChain, trip: FaultReviewTrip, opt
     });
   }
   const healthyTripC = healthyRun.tripC;
+  // The supervisor compares the reading with the main detector's own healthy trip (a second comparator aside).
+  const detectorTripC = second === undefined ? healthyTripC : (findTrip(healthy, _emptyMods(), (p) => p.s.detectorTripped).tripC ?? Infinity);
 
   const tol = detection.supervisoryReading?.toleranceC ?? 10;
   const window = detection.outOfRangeWindow as Record<string, number> | undefined;
@@ -260,7 +266,7 @@ export function reviewFaults(chain: MeasurementChain, trip: FaultReviewTrip, opt
     if (sv !== undefined) {
       const r = s.readingC;
       let f = (sv.plausibleLowC !== undefined && r < sv.plausibleLowC) || (sv.plausibleHighC !== undefined && r > sv.plausibleHighC);
-      if (sv.checksDetector ?? true) f ||= (s.detectorTripped && r < healthyTripC - tol) || (!s.detectorTripped && r > healthyTripC + tol);
+      if (sv.checksDetector ?? true) f ||= (s.detectorTripped && r < detectorTripC - tol) || (!s.detectorTripped && r > detectorTripC + tol);
       if (sv.independentSensor === true) f ||= Math.abs(r - t) > tol;
       if (f) out.add("supervisory-reading");
     }

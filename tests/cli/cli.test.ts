@@ -145,6 +145,20 @@ describe("hotjunction CLI (in-process)", () => {
     expect((await run(["--version"])).stdout).toBe(`${JSON.parse(readFileSync(join(projectRoot, "package.json"), "utf8")).version}\n`);
   });
 
+  it("table builds a firmware table through the firmware module; sweep writes its chart", async () => {
+    const csv = await run(["table", "K", "--kind", "emfToTemperature", "--from", "0", "--to", "100", "--max-error", "0.5", "--format", "csv"]);
+    expect(csv.code).toBe(0);
+    expect(csv.stdout.split("\n")[0]).toBe("index,input_stored,output_stored,input_microvolts,output_celsius");
+    const dir = tempDir();
+    const sweep = await run(
+      ["sweep", join(projectRoot, "examples/heated-enclosure-adc.json"), "--from", "20", "--to", "100", "--step", "40", "--csv", "--svg", "e.svg", "--trials", "300"],
+      dir,
+    );
+    expect(sweep.code).toBe(0);
+    expect(sweep.stdout.split("\n").filter((l) => l.startsWith("60,"))).toHaveLength(3);
+    expect(readFileSync(join(dir, "e.svg"), "utf8")).toContain("true hot-junction temperature, °C");
+  });
+
   it("the schema command prints the committed JSON Schema", async () => {
     expect((await run(["schema"])).stdout).toBe(readFileSync(join(projectRoot, "schema/hotjunction-design.schema.json"), "utf8"));
   });

@@ -4,8 +4,8 @@
  * output is gzipped with zlib at level 9.
  *
  * Budgets (bytes, min+gzip; recorded in DEVELOPERS notes, raise them only on purpose). Measured when set
- * (esbuild 0.27, tsup 8.5): one type 5 775 B (over its 3 kB budget: the exact-inverse engine and the
- * error family weigh more than the data), letter-based 8 329 B, whole root entry 44 754 B.
+ * (esbuild 0.27, tsup 8.5): one type 5 867 B (over its 3 kB budget: the exact-inverse engine and the
+ * error family weigh more than the data), letter-based 8 430 B, whole root entry 55 547 B (with faults/).
  * - one type through `createThermocouple(typeK)`: under 3 kB, and no other type's coefficients in the output;
  * - the letter-based `emfFromTemperature` / `temperatureFromEmf` (all eight types' data):
  *   `letterEntryBudgetBytes`;
@@ -22,7 +22,7 @@ import { distDir, ensureDist, projectDir } from "./distBuild.js";
 
 const oneTypeBudgetBytes = 3000;
 const letterEntryBudgetBytes = 10_000;
-const fullEntryBudgetBytes = 52_000;
+const fullEntryBudgetBytes = 64_000;
 
 const cliOnlyDependencies = ["commander", "d3-scale", "d3-shape", "d3-", "cli-progress", "write-file-atomic", "zod"];
 const typeLetters = ["B", "E", "J", "K", "N", "R", "S", "T"] as const;

@@ -16,6 +16,7 @@ import { registerSchemaCommand } from "./commands/schema.js";
 import { registerSweepCommand } from "./commands/sweep.js";
 import { registerTableCommand } from "./commands/table.js";
 import { registerValidateCommand } from "./commands/validate.js";
+import { registerFaultsCommand } from "./commands/faults.js";
 import { _packageVersion } from "./version.js";
 
 /** What every command registration receives. */
@@ -60,6 +61,7 @@ export function _createProgram(io: CliIo): Command {
     registerCheckCommand,
     registerCompareCommand,
     registerSweepCommand,
+    registerFaultsCommand,
     registerSchemaCommand,
   ];
   for (const register of registrations) {

@@ -1,0 +1,12 @@
+// Runs every benchmark of the project in one process and prints the figures as ratios to baselines measured
+// in the same run. `npm run bench`. Not a test: nothing here passes or fails on a timing.
+import { runIts90Bench } from "./its90.bench.js";
+import { runMonteCarloBench } from "./monteCarlo.bench.js";
+import { runFirmwareBench } from "./firmwareTables.bench.js";
+
+console.log(`hotjunction benchmarks, Node ${process.version}, ${new Date().toISOString()}\n`);
+for (const line of await runIts90Bench()) console.log(line);
+console.log("");
+await runMonteCarloBench();
+console.log("");
+for (const line of await runFirmwareBench()) console.log(line);

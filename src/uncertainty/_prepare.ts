@@ -245,7 +245,10 @@ export function _sensitivities(
   for (let i = 0; i < n; i++) {
     const d = distributions[i] as _CheckedDistribution;
     const x0 = point[i] as number;
-    const h = d.standardUncertainty > 0 ? d.standardUncertainty / 100 : 1e-6 * Math.max(Math.abs(x0), 1);
+    let h = d.standardUncertainty > 0 ? d.standardUncertainty / 100 : 1e-6 * Math.max(Math.abs(x0), 1);
+    // A standard uncertainty so small that x0 ± h/2 rounds back to x0 (or h underflows to 0) would give 0/0:
+    // take the smallest step that still moves the input, relative to its size.
+    if (!(h > 0) || x0 + h / 2 === x0) h = 1e-7 * Math.max(Math.abs(x0), 1e-9);
     const difference = (step: number): number => {
       x[i] = x0 + step;
       const up = evaluator.evaluate(x);

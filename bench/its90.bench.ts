@@ -22,7 +22,7 @@ export async function runIts90Bench(): Promise<string[]> {
 
   const upper = typeK.forward[1];
   if (upper === undefined || typeK.exponential === undefined) throw new Error("type K data missing");
-  const c = Float64Array.from(upper.coefficients, Number);
+  const c = Float64Array.from(upper.coefficients);
   const a0 = Number(typeK.exponential.a0);
   const a1 = Number(typeK.exponential.a1);
   const a2 = Number(typeK.exponential.a2);

@@ -48,88 +48,64 @@ export interface ErrorDetails {
 }
 
 function formatValue(value: unknown): string {
-  if (typeof value === "number") {
-    if (Object.is(value, -0)) return "-0";
-    return String(value);
-  }
   if (typeof value === "string") return JSON.stringify(value.length > 60 ? `${value.slice(0, 57)}...` : value);
-  if (value === null) return "null";
-  if (value === undefined) return "undefined";
-  if (typeof value === "bigint") return `${value}n`;
+  if (typeof value === "function") return "a function";
   if (Array.isArray(value)) return `an array of length ${value.length}`;
-  return `a value of type ${typeof value}`;
+  if (typeof value === "object" && value !== null) return "a value of type object";
+  return Object.is(value, -0) ? "-0" : String(value);
 }
 
 /**
  * Builds the one-line message of an error of the family from its fields.
  * @internal
  */
-export function _formatErrorMessage(details: ErrorDetails): string {
-  const head = details.context !== undefined ? `${details.context}: ` : "";
-  const unit = details.unit !== undefined ? ` ${details.unit}` : "";
-  let text = `${head}${details.quantity} ${formatValue(details.value)}${typeof details.value === "number" ? unit : ""}`;
-  text += ` ${details.problem ?? "is out of range"}`;
-  if (details.min !== undefined || details.max !== undefined) {
-    const lo = details.min !== undefined ? String(details.min) : "-Infinity";
-    const hi = details.max !== undefined ? String(details.max) : "Infinity";
-    text += `; valid range ${lo} to ${hi}${unit}`;
-  }
-  if (details.allowed !== undefined) {
-    text += `; valid: ${details.allowed.join(", ")}`;
-  }
-  return text;
+export function _formatErrorMessage({ context, quantity, value, unit, problem, min, max, allowed }: ErrorDetails): string {
+  const unitText = unit === undefined ? "" : ` ${unit}`;
+  let text = `${context === undefined ? "" : `${context}: `}${quantity} ${formatValue(value)}`;
+  text += `${typeof value === "number" ? unitText : ""} ${problem ?? "is out of range"}`;
+  if (min !== undefined || max !== undefined) text += `; valid range ${min ?? -Infinity} to ${max ?? Infinity}${unitText}`;
+  return allowed === undefined ? text : `${text}; valid: ${allowed.join(", ")}`;
 }
 
 /** A value outside what its quantity allows (out of range, unknown choice, ambiguous inverse...). */
 export class HotjunctionRangeError extends RangeError implements ErrorDetails {
   override readonly name = "HotjunctionRangeError";
-  readonly code: ErrorCode;
-  readonly quantity: string;
-  readonly value: unknown;
-  readonly min: number | undefined;
-  readonly max: number | undefined;
-  readonly unit: string | undefined;
-  readonly context: string | undefined;
-  readonly problem: string | undefined;
-  readonly allowed: readonly string[] | undefined;
+  declare readonly code: ErrorCode;
+  declare readonly quantity: string;
+  declare readonly value: unknown;
+  declare readonly min: number | undefined;
+  declare readonly max: number | undefined;
+  declare readonly unit: string | undefined;
+  declare readonly context: string | undefined;
+  declare readonly problem: string | undefined;
+  declare readonly allowed: readonly string[] | undefined;
   constructor(details: ErrorDetails) {
     super(_formatErrorMessage(details));
-    this.code = details.code;
-    this.quantity = details.quantity;
-    this.value = details.value;
-    this.min = details.min;
-    this.max = details.max;
-    this.unit = details.unit;
-    this.context = details.context;
-    this.problem = details.problem;
-    this.allowed = details.allowed;
+    _assignDetails(this, details);
   }
 }
 
 /** A value that is not of a usable kind at all (NaN, ±Infinity, a string where a number belongs...). */
 export class HotjunctionTypeError extends TypeError implements ErrorDetails {
   override readonly name = "HotjunctionTypeError";
-  readonly code: ErrorCode;
-  readonly quantity: string;
-  readonly value: unknown;
-  readonly min: number | undefined;
-  readonly max: number | undefined;
-  readonly unit: string | undefined;
-  readonly context: string | undefined;
-  readonly problem: string | undefined;
-  readonly allowed: readonly string[] | undefined;
+  declare readonly code: ErrorCode;
+  declare readonly quantity: string;
+  declare readonly value: unknown;
+  declare readonly min: number | undefined;
+  declare readonly max: number | undefined;
+  declare readonly unit: string | undefined;
+  declare readonly context: string | undefined;
+  declare readonly problem: string | undefined;
+  declare readonly allowed: readonly string[] | undefined;
   constructor(details: ErrorDetails) {
     super(_formatErrorMessage(details));
-    this.code = details.code;
-    this.quantity = details.quantity;
-    this.value = details.value;
-    this.min = details.min;
-    this.max = details.max;
-    this.unit = details.unit;
-    this.context = details.context;
-    this.problem = details.problem;
-    this.allowed = details.allowed;
+    _assignDetails(this, details);
   }
+}
+
+/** Copies the structured fields onto an error. @internal */
+function _assignDetails(target: object, details: ErrorDetails): void {
+  Object.assign(target, details);
 }
 
 /** Either error of the family. */

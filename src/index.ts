@@ -29,20 +29,21 @@ export {
 
 // ITS-90 data (one module per type)
 export type {
+  ApproximateInverseData,
   ExponentialTerm,
   ForwardSubrange,
   InverseSubrange,
   ThermocoupleData,
   ThermocoupleType,
 } from "./data/thermocoupleData.js";
-export { typeB } from "./data/typeB.js";
-export { typeE } from "./data/typeE.js";
-export { typeJ } from "./data/typeJ.js";
-export { typeK } from "./data/typeK.js";
-export { typeN } from "./data/typeN.js";
-export { typeR } from "./data/typeR.js";
-export { typeS } from "./data/typeS.js";
-export { typeT } from "./data/typeT.js";
+export { typeB, typeBApproximateInverse } from "./data/typeB.js";
+export { typeE, typeEApproximateInverse } from "./data/typeE.js";
+export { typeJ, typeJApproximateInverse } from "./data/typeJ.js";
+export { typeK, typeKApproximateInverse } from "./data/typeK.js";
+export { typeN, typeNApproximateInverse } from "./data/typeN.js";
+export { typeR, typeRApproximateInverse } from "./data/typeR.js";
+export { typeS, typeSApproximateInverse } from "./data/typeS.js";
+export { typeT, typeTApproximateInverse } from "./data/typeT.js";
 
 // ITS-90 conversion
 export {
@@ -63,7 +64,7 @@ export {
   temperatureRange,
   type ThermocoupleTypeInput,
 } from "./its90/convert.js";
-export { thermocoupleData, thermocoupleTypes } from "./its90/resolveType.js";
+export { approximateInverseData, thermocoupleData, thermocoupleTypes } from "./its90/resolveType.js";
 
 // Firmware lookup tables
 export {

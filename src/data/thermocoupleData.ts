@@ -1,7 +1,8 @@
 /**
  * The shape of a thermocouple type's reference data. Data modules implement it; engines take it as an argument.
- * Every number is kept as the decimal text the standard prints, so the float64 path and the decimal.js
- * check path read one source.
+ * Every coefficient the standard prints has at most 12 significant digits, so a number literal holds it
+ * exactly: `String(x)` gives back the printed decimal value, which is what the decimal.js check path reads.
+ * The float64 path and the decimal path therefore share one source.
  * @module
  */
 
@@ -10,32 +11,36 @@ export type ThermocoupleType = "B" | "E" | "J" | "K" | "N" | "R" | "S" | "T";
 
 /** One sub-range of the reference function E(t) = Σ cᵢ·tⁱ (mV, °C). */
 export interface ForwardSubrange {
-  /** Lower end in °C (decimal text). */
-  readonly minC: string;
-  /** Upper end in °C (decimal text). Shared with the next sub-range, which takes precedence there. */
-  readonly maxC: string;
-  /** c₀…cₙ in mV/°Cⁱ (decimal text). */
-  readonly coefficients: readonly string[];
+  /** Lower end in °C. */
+  readonly minC: number;
+  /** Upper end in °C. Shared with the next sub-range, which takes precedence there. */
+  readonly maxC: number;
+  /** c₀…cₙ in mV/°Cⁱ. */
+  readonly coefficients: readonly number[];
 }
 
 /** Type K's added term a₀·exp(a₁·(t − a₂)²) (mV) for 0 °C ≤ t. */
 export interface ExponentialTerm {
-  readonly a0: string;
-  readonly a1: string;
-  readonly a2: string;
+  /** mV. */
+  readonly a0: number;
+  /** 1/°C². */
+  readonly a1: number;
+  /** °C. */
+  readonly a2: number;
 }
 
 /** One sub-range of the published approximate inverse t = Σ dᵢ·Eⁱ (°C, mV) with its stated error band. */
 export interface InverseSubrange {
-  readonly minEmfMillivolts: string;
-  readonly maxEmfMillivolts: string;
-  readonly minC: string;
-  readonly maxC: string;
+  readonly minEmfMillivolts: number;
+  readonly maxEmfMillivolts: number;
+  readonly minC: number;
+  readonly maxC: number;
   /** Lowest error of the approximation (t_approx − t90) stated by the source, °C. */
-  readonly errorMinC: string;
+  readonly errorMinC: number;
   /** Highest error of the approximation stated by the source, °C. */
-  readonly errorMaxC: string;
-  readonly coefficients: readonly string[];
+  readonly errorMaxC: number;
+  /** d₀…dₙ in °C/mVⁱ. */
+  readonly coefficients: readonly number[];
 }
 
 /** All reference data of one thermocouple type. */
@@ -44,10 +49,17 @@ export interface ThermocoupleData {
   /** Where the numbers come from. */
   readonly source: string;
   /** Lowest temperature of the reference function, °C. */
-  readonly minC: string;
+  readonly minC: number;
   /** Highest temperature of the reference function, °C. */
-  readonly maxC: string;
+  readonly maxC: number;
   readonly forward: readonly ForwardSubrange[];
   readonly exponential?: ExponentialTerm;
-  readonly inverse: readonly InverseSubrange[];
+}
+
+/** The published approximate inverse of one type: its sub-ranges with coefficients and stated error bands. */
+export interface ApproximateInverseData {
+  readonly type: ThermocoupleType;
+  /** Where the numbers come from. */
+  readonly source: string;
+  readonly ranges: readonly InverseSubrange[];
 }

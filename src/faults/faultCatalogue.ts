@@ -55,8 +55,8 @@ const mitigationText = {
  * @throws HotjunctionTypeError / HotjunctionRangeError for bad options or a chain without a thermocouple or detector
  * @example
  * ```ts
- * import { faultCatalogue } from "hotjunction";
- * const chain = {
+ * import { faultCatalogue, type MeasurementChain } from "hotjunction";
+ * const chain: MeasurementChain = {
  *   thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "IEC 60584-1", class: 1 } },
  *   amplifier: { kind: "fixedScaleAmplifier", type: "K", millivoltsPerC: 5 },
  *   reference: { kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: 0.001 },
@@ -66,7 +66,7 @@ const mitigationText = {
  * };
  * const faults = faultCatalogue(chain);
  * console.log(faults.length); // 20
- * console.log(faults[0].id, faults[0].effects[0].kind); // "thermocouple.open" "open-thermocouple"
+ * console.log(faults[0]?.id, faults[0]?.effects[0]?.kind); // "thermocouple.open" "open-thermocouple"
  * ```
  */
 export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueOptions = {}): Fault[] {

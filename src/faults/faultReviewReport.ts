@@ -57,8 +57,8 @@ export function faultReviewReport(reviews: readonly FaultReview[], name?: string
  * @throws as {@link reviewFaults}
  * @example
  * ```ts
- * import { reviewChainFaults } from "hotjunction";
- * const chain = {
+ * import { reviewChainFaults, type MeasurementChain } from "hotjunction";
+ * const chain: MeasurementChain = {
  *   thermocouple: { kind: "thermocouple", type: "T", tolerance: { standard: "IEC 60584-1", class: 1 } },
  *   coldJunction: { kind: "coldJunction", method: "software", sensorAccuracyC: 0.5 },
  *   amplifier: { kind: "amplifier", gain: { setBy: "fixed", gain: 200 } },
@@ -66,8 +66,8 @@ export function faultReviewReport(reviews: readonly FaultReview[], name?: string
  *   ambient: { minC: 0, maxC: 50 },
  * };
  * const report = reviewChainFaults(chain, [{ name: "plate", tripTemperatureC: 90, maxNormalOperatingC: 80, hazardLimitC: 100 }]);
- * const stuck = report.reviews[0].rows.find((r) => r.faultId === "adc.codeStuckZero");
- * console.log(stuck.category); // "dangerous-undetected"
+ * const stuck = report.reviews[0]?.rows.find((r) => r.faultId === "adc.codeStuckZero");
+ * console.log(stuck?.category); // "dangerous-undetected"
  * ```
  */
 export function reviewChainFaults(

@@ -44,7 +44,8 @@ function rejectCustom(value: unknown, context: string): void {
  * ```ts
  * import { faultsFromJson } from "hotjunction";
  * const faults = faultsFromJson('[{"id":"filter.capacitorShort","element":"input filter","description":"filter capacitor shorted","effects":[{"kind":"override-node","node":"amplifierInput","millivolts":0}]}]');
- * console.log(faults.length, faults[0].effects[0].node); // 1 "amplifierInput"
+ * const effect = faults[0]?.effects[0];
+ * console.log(faults.length, effect?.kind === "override-node" ? effect.node : "?"); // 1 "amplifierInput"
  * ```
  */
 export function faultsFromJson(json: unknown): Fault[] {

@@ -12,7 +12,7 @@ export const faultReviewJsonFormat = "hotjunction-fault-review/1";
  * The report as JSON text (2-space indent): `{ format, caution, scope, name?, counts, reviews }`; every number in
  * its unit by key name, `tripC`/`shiftC` null when the output never trips. Custom (function) effects are not part
  * of the report, so it always serializes.
- * @param report - from {@link reviewTripDesignFaults}, {@link reviewChainFaults} or {@link faultReviewReport}
+ * @param input - from {@link reviewTripDesignFaults}, {@link reviewChainFaults} or {@link faultReviewReport}
  * @returns JSON text ending with a newline
  * @throws HotjunctionRangeError when `report` has no reviews array
  * @example

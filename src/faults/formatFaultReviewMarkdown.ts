@@ -12,7 +12,7 @@ function cell(text: string): string {
 /**
  * The report as Markdown: per trip a fault table (fault, element, effect on the trip, class, detection,
  * suggested mitigation), the counts per class and the notes; then the scope and the safety caution.
- * @param report - from {@link reviewTripDesignFaults}, {@link reviewChainFaults} or {@link faultReviewReport}
+ * @param input - from {@link reviewTripDesignFaults}, {@link reviewChainFaults} or {@link faultReviewReport}
  * @returns Markdown text ending with a newline
  * @throws HotjunctionRangeError when `report` has no reviews array
  * @example

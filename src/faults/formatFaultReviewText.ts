@@ -21,7 +21,7 @@ function wrap(text: string, width: number, indent: string): string[] {
 /**
  * The report as plain text for a terminal: per trip a header, one block per fault (class, effect on the trip,
  * detection, mitigation), the counts per class and the notes; then the scope and the safety caution.
- * @param report - from {@link reviewTripDesignFaults}, {@link reviewChainFaults} or {@link faultReviewReport}
+ * @param input - from {@link reviewTripDesignFaults}, {@link reviewChainFaults} or {@link faultReviewReport}
  * @returns the text, lines joined with "\n", ending with a newline
  * @throws HotjunctionRangeError when `report` has no reviews array
  * @example

@@ -107,8 +107,8 @@ function checkDetection(d: unknown, context: string): FaultDetection {
  *   the healthy chain trips at the start of the sweep or never
  * @example
  * ```ts
- * import { reviewFaults } from "hotjunction";
- * const chain = {
+ * import { reviewFaults, type MeasurementChain } from "hotjunction";
+ * const chain: MeasurementChain = {
  *   thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "IEC 60584-1", class: 1 } },
  *   amplifier: { kind: "fixedScaleAmplifier", type: "K", millivoltsPerC: 5 },
  *   reference: { kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: 0.001 },
@@ -119,9 +119,9 @@ function checkDetection(d: unknown, context: string): FaultDetection {
  * const review = reviewFaults(chain, { name: "oven", maxNormalOperatingC: 250, hazardLimitC: 280 }, { openCircuitBias: "pull-up" });
  * console.log(review.healthyTripC.toFixed(1)); // "256.1"
  * const open = review.rows.find((r) => r.faultId === "thermocouple.open");
- * console.log(open.effect, open.category); // "trips-immediately" "safe-undetected"
+ * console.log(open?.effect, open?.category); // "trips-immediately" "safe-undetected"
  * const short = review.rows.find((r) => r.faultId === "thermocouple.shortAtTerminals");
- * console.log(short.effect, short.category); // "never-trips" "dangerous-undetected"
+ * console.log(short?.effect, short?.category); // "never-trips" "dangerous-undetected"
  * ```
  */
 export function reviewFaults(chain: MeasurementChain, trip: FaultReviewTrip, options: ReviewFaultsOptions = {}): FaultReview {

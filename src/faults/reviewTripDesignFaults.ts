@@ -35,8 +35,8 @@ export interface FaultReviewTripResult {
  * @throws HotjunctionRangeError / HotjunctionTypeError for a bad design, result or option (see {@link reviewFaults})
  * @example
  * ```ts
- * import { designTrip, reviewTripDesignFaults } from "hotjunction";
- * const design = {
+ * import { designTrip, reviewTripDesignFaults, type TripDesign } from "hotjunction";
+ * const design: TripDesign = {
  *   setpoints: [{ name: "reflow guard", tripTemperatureC: 262 }],
  *   processLimits: { maxNormalOperatingC: 250, hazardLimitC: 280 },
  *   thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "IEC 60584-1", class: 1 } },
@@ -48,8 +48,8 @@ export interface FaultReviewTripResult {
  * };
  * const result = designTrip(design, { monteCarloTrials: 1000 });
  * const report = reviewTripDesignFaults(design, result, { outputStage: "de-energize-to-trip" });
- * const loss = report.reviews[0].rows.find((r) => r.faultId === "board.supplyLost");
- * console.log(loss.effect, loss.safety); // "trips-immediately" "safe"
+ * const loss = report.reviews[0]?.rows.find((r) => r.faultId === "board.supplyLost");
+ * console.log(loss?.effect, loss?.safety); // "trips-immediately" "safe"
  * ```
  */
 export function reviewTripDesignFaults(

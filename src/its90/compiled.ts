@@ -5,6 +5,7 @@
  * @module
  */
 import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
+import type { ExactInverse } from "./exactInverse.js";
 
 /** @internal */
 export interface CompiledSubrange {
@@ -13,18 +14,7 @@ export interface CompiledSubrange {
   /** c₀…cₙ, mV/°Cⁱ. */
   readonly c: Float64Array;
   /** Whether type K's exponential term applies in this sub-range. */
-  readonly withExponential: boolean;
-}
-
-/** @internal */
-export interface CompiledApproximateInverse {
-  readonly minEmfMillivolts: number;
-  readonly maxEmfMillivolts: number;
-  readonly minC: number;
-  readonly maxC: number;
-  readonly errorMinC: number;
-  readonly errorMaxC: number;
-  readonly d: Float64Array;
+  readonly hasExp: boolean;
 }
 
 /** @internal */
@@ -39,7 +29,6 @@ export interface CompiledType {
   readonly a0: number;
   readonly a1: number;
   readonly a2: number;
-  readonly approximateInverse: readonly CompiledApproximateInverse[];
   /** E at minC and maxC, mV. */
   readonly emfAtMinC: number;
   readonly emfAtMaxC: number;
@@ -52,12 +41,8 @@ export interface CompiledType {
    * the upper root of E(t) = E(minC) (about 42.13 °C).
    */
   readonly monotonicFromC: number;
-}
-
-function toFloat64(values: readonly string[]): Float64Array {
-  const out = new Float64Array(values.length);
-  for (let i = 0; i < values.length; i++) out[i] = Number(values[i]);
-  return out;
+  /** Exact-inverse tables, built on first use by `_exactInverseTables`. */
+  inverse?: ExactInverse;
 }
 
 /** Horner evaluation of Σ cᵢ·xⁱ. @internal */
@@ -87,31 +72,23 @@ export function _subrangeIndex(ct: CompiledType, temperatureC: number): number {
 export function _emfInSubrange(ct: CompiledType, index: number, temperatureC: number): number {
   const sub = ct.subranges[index] as CompiledSubrange;
   let emf = _horner(sub.c, temperatureC);
-  if (sub.withExponential) {
+  if (sub.hasExp) {
     const d = temperatureC - ct.a2;
     emf += ct.a0 * Math.exp(ct.a1 * d * d);
   }
   return emf;
 }
 
-/** E(t) in mV with no range check (the hot path: sub-range choice and Horner inlined). @internal */
+/** E(t) in mV with no range check. @internal */
 export function _emf(ct: CompiledType, temperatureC: number): number {
-  const subs = ct.subranges;
-  let i = subs.length - 1;
-  while (i > 0 && temperatureC < (subs[i] as CompiledSubrange).minC) i--;
-  const sub = subs[i] as CompiledSubrange;
-  if (sub.withExponential) {
-    const d = temperatureC - ct.a2;
-    return _horner(sub.c, temperatureC) + ct.a0 * Math.exp(ct.a1 * d * d);
-  }
-  return _horner(sub.c, temperatureC);
+  return _emfInSubrange(ct, _subrangeIndex(ct, temperatureC), temperatureC);
 }
 
 /** dE/dt in mV/°C with no range check, using sub-range `index`. @internal */
 export function _slopeInSubrange(ct: CompiledType, index: number, temperatureC: number): number {
   const sub = ct.subranges[index] as CompiledSubrange;
   let slope = _hornerDerivative(sub.c, temperatureC);
-  if (sub.withExponential) {
+  if (sub.hasExp) {
     const d = temperatureC - ct.a2;
     slope += ct.a0 * Math.exp(ct.a1 * d * d) * 2 * ct.a1 * d;
   }
@@ -123,77 +100,22 @@ export function _slope(ct: CompiledType, temperatureC: number): number {
   return _slopeInSubrange(ct, _subrangeIndex(ct, temperatureC), temperatureC);
 }
 
-// Error-free transformations (Dekker/Knuth) for a compensated Horner scheme, used only when building
-// the inverse (node values) so that the nodes are accurate to about one unit in the last place.
-const SPLITTER = 134217729; // 2^27 + 1
-
-function twoProductError(a: number, b: number, product: number): number {
-  let t = SPLITTER * a;
-  const ah = t - (t - a);
-  const al = a - ah;
-  t = SPLITTER * b;
-  const bh = t - (t - b);
-  const bl = b - bh;
-  return al * bl - (product - ah * bh - al * bh - ah * bl);
-}
-
-function twoSumError(a: number, b: number, sum: number): number {
-  const bb = sum - a;
-  return a - (sum - bb) + (b - bb);
-}
-
-/**
- * Compensated Horner evaluation (Graillat, Langlois, Louvet 2005): as accurate as Horner in twice the
- * working precision. @internal
- */
-export function _hornerCompensated(c: Float64Array, x: number): number {
-  let s = c[c.length - 1] as number;
-  let err = 0;
-  for (let i = c.length - 2; i >= 0; i--) {
-    const p = s * x;
-    const pe = twoProductError(s, x, p);
-    const ci = c[i] as number;
-    const sum = p + ci;
-    const se = twoSumError(p, ci, sum);
-    s = sum;
-    err = err * x + (pe + se);
-  }
-  return s + err;
-}
-
-/** E(t) using compensated Horner, mV, in a given sub-range. @internal */
-export function _emfAccurateInSubrange(ct: CompiledType, index: number, temperatureC: number): number {
-  const sub = ct.subranges[index] as CompiledSubrange;
-  let emf = _hornerCompensated(sub.c, temperatureC);
-  if (sub.withExponential) {
-    const d = temperatureC - ct.a2;
-    emf += ct.a0 * Math.exp(ct.a1 * d * d);
-  }
-  return emf;
-}
-
 /**
  * Solves E_index(t) = target on [lowC, highC] (E increasing there) by safeguarded Newton
- * (Newton steps kept inside a shrinking bracket, bisection when a step leaves it).
- * `accurate` selects the compensated evaluation. @internal
+ * (Newton steps kept inside a shrinking bracket, bisection when a step leaves it). Plain Horner suffices:
+ * a compensated (double-double) evaluation was tried and changed no result of the 40-digit checks.
+ * @internal
  */
-export function _solveInSubrange(
-  ct: CompiledType,
-  index: number,
-  target: number,
-  lowC: number,
-  highC: number,
-  accurate: boolean,
-): number {
+export function _solveInSubrange(ct: CompiledType, index: number, target: number, lowC: number, highC: number): number {
   let lo = lowC;
   let hi = highC;
-  const fLo = (accurate ? _emfAccurateInSubrange(ct, index, lo) : _emfInSubrange(ct, index, lo)) - target;
-  const fHi = (accurate ? _emfAccurateInSubrange(ct, index, hi) : _emfInSubrange(ct, index, hi)) - target;
+  const fLo = _emfInSubrange(ct, index, lo) - target;
+  const fHi = _emfInSubrange(ct, index, hi) - target;
   if (fLo >= 0) return lo;
   if (fHi <= 0) return hi;
   let t = lo + (hi - lo) * (-fLo / (fHi - fLo));
   for (let iteration = 0; iteration < 100; iteration++) {
-    const f = (accurate ? _emfAccurateInSubrange(ct, index, t) : _emfInSubrange(ct, index, t)) - target;
+    const f = _emfInSubrange(ct, index, t) - target;
     if (f === 0) return t;
     if (f < 0) lo = t;
     else hi = t;
@@ -202,7 +124,7 @@ export function _solveInSubrange(
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
     const step = Math.abs(next - t);
     t = next;
-    if (step <= 2e-16 * Math.max(1, Math.abs(t)) || hi - lo <= 4e-16 * Math.max(1, Math.abs(t))) break;
+    if (step <= 2e-16 * (1 + Math.abs(t))) break;
   }
   return t;
 }
@@ -226,35 +148,25 @@ export function _compile(data: ThermocoupleData): CompiledType {
 
 function build(data: ThermocoupleData): CompiledType {
   const subranges: CompiledSubrange[] = data.forward.map((f) => ({
-    minC: Number(f.minC),
-    maxC: Number(f.maxC),
-    c: toFloat64(f.coefficients),
-    withExponential: data.exponential !== undefined && Number(f.minC) >= 0,
-  }));
-  const approximateInverse: CompiledApproximateInverse[] = data.inverse.map((r) => ({
-    minEmfMillivolts: Number(r.minEmfMillivolts),
-    maxEmfMillivolts: Number(r.maxEmfMillivolts),
-    minC: Number(r.minC),
-    maxC: Number(r.maxC),
-    errorMinC: Number(r.errorMinC),
-    errorMaxC: Number(r.errorMaxC),
-    d: toFloat64(r.coefficients),
+    minC: f.minC,
+    maxC: f.maxC,
+    c: Float64Array.from(f.coefficients),
+    hasExp: data.exponential !== undefined && f.minC >= 0,
   }));
   const partial = {
     data,
     type: data.type,
     context: `type ${data.type}`,
-    minC: Number(data.minC),
-    maxC: Number(data.maxC),
+    minC: data.minC,
+    maxC: data.maxC,
     subranges,
-    a0: data.exponential ? Number(data.exponential.a0) : 0,
-    a1: data.exponential ? Number(data.exponential.a1) : 0,
-    a2: data.exponential ? Number(data.exponential.a2) : 0,
-    approximateInverse,
+    a0: data.exponential ? data.exponential.a0 : 0,
+    a1: data.exponential ? data.exponential.a1 : 0,
+    a2: data.exponential ? data.exponential.a2 : 0,
     emfAtMinC: 0,
     emfAtMaxC: 0,
     lowestEmf: 0,
-    monotonicFromC: Number(data.minC),
+    monotonicFromC: data.minC,
   };
   const ct: CompiledType = partial;
   partial.emfAtMinC = _emf(ct, partial.minC);
@@ -272,8 +184,8 @@ function build(data: ThermocoupleData): CompiledType {
       else hi = mid;
     }
     const turnC = 0.5 * (lo + hi);
-    partial.lowestEmf = _emfAccurateInSubrange(ct, 0, turnC);
-    partial.monotonicFromC = _solveInSubrange(ct, 0, partial.emfAtMinC, turnC, first.maxC, true);
+    partial.lowestEmf = _emfInSubrange(ct, 0, turnC);
+    partial.monotonicFromC = _solveInSubrange(ct, 0, partial.emfAtMinC, turnC, first.maxC);
   }
   return ct;
 }

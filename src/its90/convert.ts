@@ -18,7 +18,7 @@ import {
   type ColdJunctionOptions,
   type ThermocoupleRange,
 } from "./engine.js";
-import { thermocoupleData } from "./resolveType.js";
+import { approximateInverseData, thermocoupleData } from "./resolveType.js";
 
 /** A type given by its letter or by its data object. */
 export type ThermocoupleTypeInput = ThermocoupleType | ThermocoupleData;
@@ -62,9 +62,11 @@ export function emfFromTemperature(
  *   or (code `AMBIGUOUS_EMF`) a type B EMF at or below 0 mV, where two temperatures share each EMF
  * @example
  * ```ts
- * import { temperatureFromEmf } from "hotjunction";
- * console.log(temperatureFromEmf("K", 20.644).toFixed(2)); // "500.00"
- * console.log(temperatureFromEmf("K", 19.644, { coldJunctionC: 25 }).toFixed(2)); // "500.00"
+ * import { emfFromTemperature, temperatureFromEmf } from "hotjunction";
+ * // The NIST table prints E(500 °C) = 20.644 mV, rounded: the exact inverse of that rounded value is 499.993 °C.
+ * console.log(temperatureFromEmf("K", 20.644).toFixed(3)); // "499.993"
+ * console.log(temperatureFromEmf("K", emfFromTemperature("K", 500)).toFixed(9)); // "500.000000000"
+ * console.log(temperatureFromEmf("K", 19.644, { coldJunctionC: 25 }).toFixed(1)); // "500.0"
  * ```
  */
 export function temperatureFromEmf(
@@ -105,11 +107,12 @@ export function seebeckCoefficient(type: ThermocoupleTypeInput, temperatureC: nu
  * @example
  * ```ts
  * import { approximateTemperatureFromEmf } from "hotjunction";
- * console.log(approximateTemperatureFromEmf("K", 20.644).toFixed(2)); // "500.00"
+ * // Published inverse, error band −0.05 to +0.04 °C; the exact inverse of 20.644 mV is 499.993 °C.
+ * console.log(approximateTemperatureFromEmf("K", 20.644).toFixed(3)); // "499.980"
  * ```
  */
 export function approximateTemperatureFromEmf(type: ThermocoupleTypeInput, emfMillivolts: number): number {
-  return _approximateTemperatureFromEmf(_compile(thermocoupleData(type)), emfMillivolts);
+  return _approximateTemperatureFromEmf(approximateInverseData(type), emfMillivolts);
 }
 
 /**
@@ -124,7 +127,7 @@ export function approximateTemperatureFromEmf(type: ThermocoupleTypeInput, emfMi
  * ```
  */
 export function approximateInverseRanges(type: ThermocoupleTypeInput): ApproximateInverseRange[] {
-  return _approximateInverseRanges(_compile(thermocoupleData(type)));
+  return _approximateInverseRanges(approximateInverseData(type));
 }
 
 /**
@@ -175,7 +178,7 @@ export function emfFromTemperatureArray(
  * ```ts
  * import { temperatureFromEmfArray } from "hotjunction";
  * const t = temperatureFromEmfArray("K", new Float64Array([4.096, 41.276]));
- * console.log(t[0]?.toFixed(2), t[1]?.toFixed(2)); // "100.00" "1000.00"
+ * console.log(t[0]?.toFixed(1), t[1]?.toFixed(1)); // "100.0" "1000.0"
  * ```
  */
 export function temperatureFromEmfArray(

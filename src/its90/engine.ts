@@ -1,17 +1,16 @@
 /**
  * Conversion engine over one type's data object: forward, exact inverse, Seebeck coefficient,
- * published approximate inverse, ranges, bulk variants. Imports no type's data, so a bundle that uses
+ * ranges, bulk variants; and the published approximate inverse over its own data object. Imports no type's data, so a bundle that uses
  * {@link createThermocouple} with one data module carries that type alone.
  * @module
  */
-import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
+import type { ApproximateInverseData, ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
 import { _requireFinite, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 import {
   _compile,
   _emf,
   _horner,
   _slope,
-  type CompiledApproximateInverse,
   type CompiledSubrange,
   type CompiledType,
 } from "./compiled.js";
@@ -61,10 +60,8 @@ export interface ApproximateInverseRange {
 }
 
 function checkTemperature(ct: CompiledType, temperatureC: unknown, quantity: string): number {
-  if (typeof temperatureC !== "number" || !Number.isFinite(temperatureC)) {
-    return _requireFinite(temperatureC, quantity, "°C", ct.context);
-  }
-  if (temperatureC < ct.minC || temperatureC > ct.maxC) {
+  _requireFinite(temperatureC, quantity, "°C", ct.context);
+  if ((temperatureC as number) < ct.minC || (temperatureC as number) > ct.maxC) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",
       quantity,
@@ -75,7 +72,7 @@ function checkTemperature(ct: CompiledType, temperatureC: unknown, quantity: str
       context: ct.context,
     });
   }
-  return temperatureC;
+  return temperatureC as number;
 }
 
 /**
@@ -106,10 +103,7 @@ function checkEmf(ct: CompiledType, emfMillivolts: number, quantity: string, con
       value: emfMillivolts,
       unit: "mV",
       context,
-      problem:
-        `is ambiguous: E falls below ${ct.emfAtMinC} mV between ${ct.minC} and ` +
-        `${ct.monotonicFromC.toFixed(2)} °C, so each EMF from ${ct.lowestEmf.toPrecision(5)} to ${ct.emfAtMinC} mV ` +
-        `belongs to two temperatures; the inverse is defined for EMFs above ${ct.emfAtMinC} mV`,
+      problem: `is ambiguous (E dips below ${ct.emfAtMinC} mV up to ${ct.monotonicFromC.toFixed(2)} °C: two temperatures); use an EMF above ${ct.emfAtMinC} mV`,
     });
   }
 }
@@ -154,16 +148,7 @@ export function _temperatureFromEmf(ct: CompiledType, emfMillivolts: number, opt
   _requireFinite(emfMillivolts, "EMF", "mV", ct.context);
   const coldEmf = coldJunctionEmf(ct, options);
   const total = emfMillivolts + coldEmf;
-  if (coldEmf !== 0 || (options !== undefined && options.coldJunctionC !== undefined)) {
-    checkEmf(
-      ct,
-      total,
-      "cold-junction-compensated EMF",
-      `${ct.context}, measured ${emfMillivolts} mV + E(${options?.coldJunctionC} °C)`,
-    );
-  } else {
-    checkEmf(ct, total, "EMF", ct.context);
-  }
+  checkEmf(ct, total, options?.coldJunctionC === undefined ? "EMF" : "cold-junction-compensated EMF", ct.context);
   return _exactInverse(ct, _exactInverseTables(ct), total);
 }
 
@@ -173,25 +158,37 @@ export function _seebeckCoefficient(ct: CompiledType, temperatureC: number): num
   return _slope(ct, t) * 1000;
 }
 
+interface CompiledApproximateInverse {
+  readonly minEmfMillivolts: number;
+  readonly maxEmfMillivolts: number;
+  readonly errorMinC: number;
+  readonly errorMaxC: number;
+  readonly d: Float64Array;
+}
+
+const approximateCache = new WeakMap<ApproximateInverseData, readonly CompiledApproximateInverse[]>();
+
 /** @internal */
-export function _approximateTemperatureFromEmf(ct: CompiledType, emfMillivolts: number): number {
-  _requireFinite(emfMillivolts, "EMF", "mV", ct.context);
-  const ranges = ct.approximateInverse;
+export function _approximateTemperatureFromEmf(inverse: ApproximateInverseData, emfMillivolts: number): number {
+  const context = `type ${inverse.type} published approximate inverse`;
+  _requireFinite(emfMillivolts, "EMF", "mV", context);
+  let ranges = approximateCache.get(inverse);
+  if (ranges === undefined) {
+    ranges = inverse.ranges.map((r) => ({ ...r, d: Float64Array.from(r.coefficients) }));
+    approximateCache.set(inverse, ranges);
+  }
   // Where published ranges overlap (R and S, 1064 to 1200 °C) take the one with the narrowest stated band.
   let best: CompiledApproximateInverse | undefined;
-  for (let i = 0; i < ranges.length; i++) {
-    const r = ranges[i] as CompiledApproximateInverse;
-    if (emfMillivolts >= r.minEmfMillivolts && emfMillivolts <= r.maxEmfMillivolts) {
-      if (best === undefined || r.errorMaxC - r.errorMinC < best.errorMaxC - best.errorMinC) best = r;
-    }
-  }
-  if (best !== undefined) return _horner(best.d, emfMillivolts);
   let lo = Infinity;
   let hi = -Infinity;
   for (const r of ranges) {
     lo = Math.min(lo, r.minEmfMillivolts);
     hi = Math.max(hi, r.maxEmfMillivolts);
+    if (emfMillivolts >= r.minEmfMillivolts && emfMillivolts <= r.maxEmfMillivolts) {
+      if (best === undefined || r.errorMaxC - r.errorMinC < best.errorMaxC - best.errorMinC) best = r;
+    }
   }
+  if (best !== undefined) return _horner(best.d, emfMillivolts);
   throw new HotjunctionRangeError({
     code: "OUT_OF_RANGE",
     quantity: "EMF",
@@ -199,7 +196,7 @@ export function _approximateTemperatureFromEmf(ct: CompiledType, emfMillivolts: 
     min: lo,
     max: hi,
     unit: "mV",
-    context: `${ct.context} published approximate inverse`,
+    context,
   });
 }
 
@@ -217,16 +214,8 @@ export function _temperatureRange(ct: CompiledType): ThermocoupleRange {
 }
 
 /** @internal */
-export function _approximateInverseRanges(ct: CompiledType): ApproximateInverseRange[] {
-  return ct.approximateInverse.map((r) => ({
-    minEmfMillivolts: r.minEmfMillivolts,
-    maxEmfMillivolts: r.maxEmfMillivolts,
-    minC: r.minC,
-    maxC: r.maxC,
-    errorMinC: r.errorMinC,
-    errorMaxC: r.errorMaxC,
-    coefficients: Array.from(r.d),
-  }));
+export function _approximateInverseRanges(inverse: ApproximateInverseData): ApproximateInverseRange[] {
+  return inverse.ranges.map((r) => ({ ...r, coefficients: [...r.coefficients] }));
 }
 
 function checkArrays(input: unknown, out: unknown, quantity: string, context: string): number {
@@ -270,8 +259,8 @@ export function _emfFromTemperatureArray(
     const seamC = high.minC;
     const cLow = low.c;
     const cHigh = high.c;
-    const expLow = low.withExponential;
-    const expHigh = high.withExponential;
+    const expLow = low.hasExp;
+    const expHigh = high.hasExp;
     const a0 = ct.a0;
     const a1 = ct.a1;
     const a2 = ct.a2;
@@ -321,8 +310,10 @@ export function _temperatureFromEmfArray(
 }
 
 /**
- * A converter bound to one type's data: the same conversions as the letter-based functions, with no
- * lookup per call, and a bundle that carries only this type's coefficients.
+ * A converter bound to one type's data: the scalar conversions of the letter-based functions, with no lookup
+ * per call, and a bundle that carries only this type's coefficients (under 3 kB min+gzip). For bulk work and
+ * ranges use {@link emfFromTemperatureArray}, {@link temperatureFromEmfArray} and {@link temperatureRange},
+ * which accept the same data object.
  */
 export interface Thermocouple {
   readonly type: ThermocoupleType;
@@ -333,14 +324,6 @@ export interface Thermocouple {
   temperatureFromEmf(emfMillivolts: number, options?: ColdJunctionOptions): number;
   /** dE/dt in µV/°C. See {@link seebeckCoefficient}. */
   seebeckCoefficient(temperatureC: number): number;
-  /** The published approximate inverse, °C. See {@link approximateTemperatureFromEmf}. */
-  approximateTemperatureFromEmf(emfMillivolts: number): number;
-  /** Bulk forward. See {@link emfFromTemperatureArray}. */
-  emfFromTemperatureArray(temperaturesC: Float64Array, out?: Float64Array): Float64Array;
-  /** Bulk exact inverse. See {@link temperatureFromEmfArray}. */
-  temperatureFromEmfArray(emfsMillivolts: Float64Array, out?: Float64Array): Float64Array;
-  /** The standard's range in °C and mV. */
-  range(): ThermocoupleRange;
 }
 
 /**
@@ -354,7 +337,7 @@ export interface Thermocouple {
  * import { createThermocouple, typeK } from "hotjunction";
  * const k = createThermocouple(typeK);
  * console.log(k.emfFromTemperature(500).toFixed(3)); // "20.644"
- * console.log(k.temperatureFromEmf(20.644).toFixed(3)); // "500.000"
+ * console.log(k.temperatureFromEmf(20.644).toFixed(3)); // "499.993"
  * ```
  */
 export function createThermocouple(data: ThermocoupleData): Thermocouple {
@@ -363,7 +346,7 @@ export function createThermocouple(data: ThermocoupleData): Thermocouple {
       code: "UNKNOWN_TYPE",
       quantity: "thermocouple data",
       value: data,
-      problem: "is not a thermocouple data object (use typeB … typeT)",
+      problem: "is not a type's data (typeB … typeT)",
     });
   }
   const ct = _compile(data);
@@ -373,9 +356,5 @@ export function createThermocouple(data: ThermocoupleData): Thermocouple {
     emfFromTemperature: (temperatureC, options) => _emfFromTemperature(ct, temperatureC, options),
     temperatureFromEmf: (emfMillivolts, options) => _temperatureFromEmf(ct, emfMillivolts, options),
     seebeckCoefficient: (temperatureC) => _seebeckCoefficient(ct, temperatureC),
-    approximateTemperatureFromEmf: (emfMillivolts) => _approximateTemperatureFromEmf(ct, emfMillivolts),
-    emfFromTemperatureArray: (temperaturesC, out) => _emfFromTemperatureArray(ct, temperaturesC, out),
-    temperatureFromEmfArray: (emfsMillivolts, out) => _temperatureFromEmfArray(ct, emfsMillivolts, out),
-    range: () => _temperatureRange(ct),
   };
 }

@@ -69,8 +69,8 @@ export function _emfDecimal(data: ThermocoupleData, temperatureC: number | strin
     }
     t = parsed;
   }
-  const minC = new D(data.minC);
-  const maxC = new D(data.maxC);
+  const minC = new D(String(data.minC));
+  const maxC = new D(String(data.maxC));
   if (t.lt(minC) || t.gt(maxC)) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",
@@ -84,7 +84,7 @@ export function _emfDecimal(data: ThermocoupleData, temperatureC: number | strin
   }
   let index = 0;
   for (let i = data.forward.length - 1; i > 0; i--) {
-    if (t.gte(new D((data.forward[i] as { minC: string }).minC))) {
+    if (t.gte(new D(String((data.forward[i] as { minC: number }).minC)))) {
       index = i;
       break;
     }
@@ -92,11 +92,12 @@ export function _emfDecimal(data: ThermocoupleData, temperatureC: number | strin
   const sub = data.forward[index];
   if (sub === undefined) throw new Error("unreachable");
   let acc = new D(0);
-  for (let i = sub.coefficients.length - 1; i >= 0; i--) acc = acc.times(t).plus(new D(sub.coefficients[i] as string));
-  if (data.exponential !== undefined && new D(sub.minC).gte(0)) {
+  // String(x) of each coefficient is exactly the printed decimal (at most 12 significant digits).
+  for (let i = sub.coefficients.length - 1; i >= 0; i--) acc = acc.times(t).plus(new D(String(sub.coefficients[i])));
+  if (data.exponential !== undefined && sub.minC >= 0) {
     const e = data.exponential;
-    const d = t.minus(new D(e.a2));
-    acc = acc.plus(new D(e.a0).times(D.exp(new D(e.a1).times(d).times(d))));
+    const d = t.minus(new D(String(e.a2)));
+    acc = acc.plus(new D(String(e.a0)).times(D.exp(new D(String(e.a1)).times(d).times(d))));
   }
   return acc;
 }

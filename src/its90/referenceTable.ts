@@ -61,8 +61,8 @@ export const referenceTableMaxRows = 200_000;
 export function referenceTable(type: ThermocoupleTypeInput, options: ReferenceTableOptions): ReferenceTable {
   const data = thermocoupleData(type);
   const context = `type ${data.type} reference table`;
-  const minC = Number(data.minC);
-  const maxC = Number(data.maxC);
+  const minC = data.minC;
+  const maxC = data.maxC;
   const fromC = _requireFinite(options?.fromC, "first temperature (fromC)", "°C", context);
   const toC = _requireFinite(options?.toC, "last temperature (toC)", "°C", context);
   const stepC = _requireFinite(options.stepC ?? 1, "step (stepC)", "°C", context);

@@ -3,15 +3,15 @@
  * only should import that type's data module and use {@link createThermocouple}.
  * @module
  */
-import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
-import { typeB } from "../data/typeB.js";
-import { typeE } from "../data/typeE.js";
-import { typeJ } from "../data/typeJ.js";
-import { typeK } from "../data/typeK.js";
-import { typeN } from "../data/typeN.js";
-import { typeR } from "../data/typeR.js";
-import { typeS } from "../data/typeS.js";
-import { typeT } from "../data/typeT.js";
+import type { ApproximateInverseData, ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
+import { typeB, typeBApproximateInverse } from "../data/typeB.js";
+import { typeE, typeEApproximateInverse } from "../data/typeE.js";
+import { typeJ, typeJApproximateInverse } from "../data/typeJ.js";
+import { typeK, typeKApproximateInverse } from "../data/typeK.js";
+import { typeN, typeNApproximateInverse } from "../data/typeN.js";
+import { typeR, typeRApproximateInverse } from "../data/typeR.js";
+import { typeS, typeSApproximateInverse } from "../data/typeS.js";
+import { typeT, typeTApproximateInverse } from "../data/typeT.js";
 import { HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 
 /** The eight letter-designated types of IEC 60584-1 / NIST Monograph 175, in alphabetical order. */
@@ -24,7 +24,7 @@ export const thermocoupleTypes: readonly ThermocoupleType[] = ["B", "E", "J", "K
  * @example
  * ```ts
  * import { thermocoupleData } from "hotjunction";
- * console.log(thermocoupleData("K").maxC); // "1372.000"
+ * console.log(thermocoupleData("K").maxC); // 1372
  * ```
  */
 export function thermocoupleData(type: ThermocoupleType | ThermocoupleData): ThermocoupleData {
@@ -52,4 +52,27 @@ export function thermocoupleData(type: ThermocoupleType | ThermocoupleData): The
   };
   if (typeof type === "string") throw new HotjunctionRangeError(details);
   throw new HotjunctionTypeError(details);
+}
+
+/**
+ * Returns the published approximate inverse data of a type (coefficients and stated error bands).
+ * @param type - a type letter, or a type's data object (its letter is used)
+ * @throws HotjunctionRangeError (code `UNKNOWN_TYPE`) naming the valid types
+ * @example
+ * ```ts
+ * import { approximateInverseData } from "hotjunction";
+ * console.log(approximateInverseData("K").ranges.length); // 3
+ * ```
+ */
+export function approximateInverseData(type: ThermocoupleType | ThermocoupleData): ApproximateInverseData {
+  switch (thermocoupleData(type).type) {
+    case "B": return typeBApproximateInverse;
+    case "E": return typeEApproximateInverse;
+    case "J": return typeJApproximateInverse;
+    case "K": return typeKApproximateInverse;
+    case "N": return typeNApproximateInverse;
+    case "R": return typeRApproximateInverse;
+    case "S": return typeSApproximateInverse;
+    case "T": return typeTApproximateInverse;
+  }
 }

@@ -71,7 +71,7 @@ describe("bad input", () => {
     expect(() => emfFromTemperature("k" as "K", 20)).toThrow('thermocouple type "k" is not a known type; valid: B, E, J, K, N, R, S, T');
     expect(() => emfFromTemperature("__proto__" as "K", 20)).toThrow(/not a known type/);
     expect(caught(() => emfFromTemperature(42 as unknown as "K", 20))).toBeInstanceOf(TypeError);
-    expect(() => createThermocouple({} as never)).toThrow(/not a thermocouple data object/);
+    expect(() => createThermocouple({} as never)).toThrow(/thermocouple data a value of type object is not a type's data/);
   });
 
   it("type B refuses EMFs whose temperature is ambiguous (E ≤ 0 mV) instead of guessing", () => {
@@ -81,7 +81,7 @@ describe("bad input", () => {
       const e = caught(() => temperatureFromEmf("B", emf)) as HotjunctionRangeError;
       expect(e).toBeInstanceOf(RangeError);
       expect(e.code).toBe("AMBIGUOUS_EMF");
-      expect(e.message).toMatch(/^type B: EMF .* mV is ambiguous: E falls below 0 mV between 0 and 42.13 °C/);
+      expect(e.message).toMatch(/^type B: EMF .* mV is ambiguous \(E dips below 0 mV up to 42.13 °C: two temperatures\); use an EMF above 0 mV$/);
     }
     expect((caught(() => temperatureFromEmf("B", -0.003)) as HotjunctionRangeError).code).toBe("OUT_OF_RANGE");
     expect(temperatureFromEmf("B", 1e-6)).toBeGreaterThan(42.13);

@@ -14,10 +14,10 @@ function subrangeDecimal(type: ThermocoupleType, index: number, t: string): Deci
   const D = _decimalContext(40);
   const x = new D(t);
   let acc = new D(0);
-  for (let i = sub.coefficients.length - 1; i >= 0; i--) acc = acc.times(x).plus(new D(sub.coefficients[i] as string));
-  if (data.exponential !== undefined && Number(sub.minC) >= 0) {
-    const d = x.minus(new D(data.exponential.a2));
-    acc = acc.plus(new D(data.exponential.a0).times(D.exp(new D(data.exponential.a1).times(d).times(d))));
+  for (let i = sub.coefficients.length - 1; i >= 0; i--) acc = acc.times(x).plus(new D(String(sub.coefficients[i])));
+  if (data.exponential !== undefined && sub.minC >= 0) {
+    const d = x.minus(new D(String(data.exponential.a2)));
+    acc = acc.plus(new D(String(data.exponential.a0)).times(D.exp(new D(String(data.exponential.a1)).times(d).times(d))));
   }
   return acc;
 }

@@ -4,7 +4,7 @@
  * @module
  */
 import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
-import { _compile } from "./compiled.js";
+import { _compile, type CompiledType } from "./compiled.js";
 import {
   _approximateInverseRanges,
   _approximateTemperatureFromEmf,
@@ -22,6 +22,18 @@ import { approximateInverseData, thermocoupleData } from "./resolveType.js";
 
 /** A type given by its letter or by its data object. */
 export type ThermocoupleTypeInput = ThermocoupleType | ThermocoupleData;
+
+// The last type asked for and its compiled form: a loop over one type skips the lookup entirely.
+let lastInput: ThermocoupleTypeInput | undefined;
+let lastCompiled: CompiledType | undefined;
+
+function compiledFor(type: ThermocoupleTypeInput): CompiledType {
+  if (type === lastInput && lastCompiled !== undefined) return lastCompiled;
+  const ct = _compile(thermocoupleData(type));
+  lastInput = type;
+  lastCompiled = ct;
+  return ct;
+}
 
 /**
  * The ITS-90 reference function E(t): thermocouple EMF in mV with the reference junction at 0 °C, or at
@@ -46,7 +58,7 @@ export function emfFromTemperature(
   temperatureC: number,
   options?: ColdJunctionOptions,
 ): number {
-  return _emfFromTemperature(_compile(thermocoupleData(type)), temperatureC, options);
+  return _emfFromTemperature(compiledFor(type), temperatureC, options);
 }
 
 /**
@@ -74,7 +86,7 @@ export function temperatureFromEmf(
   emfMillivolts: number,
   options?: ColdJunctionOptions,
 ): number {
-  return _temperatureFromEmf(_compile(thermocoupleData(type)), emfMillivolts, options);
+  return _temperatureFromEmf(compiledFor(type), emfMillivolts, options);
 }
 
 /**
@@ -91,7 +103,7 @@ export function temperatureFromEmf(
  * ```
  */
 export function seebeckCoefficient(type: ThermocoupleTypeInput, temperatureC: number): number {
-  return _seebeckCoefficient(_compile(thermocoupleData(type)), temperatureC);
+  return _seebeckCoefficient(compiledFor(type), temperatureC);
 }
 
 /**
@@ -142,7 +154,7 @@ export function approximateInverseRanges(type: ThermocoupleTypeInput): Approxima
  * ```
  */
 export function temperatureRange(type: ThermocoupleTypeInput): ThermocoupleRange {
-  return _temperatureRange(_compile(thermocoupleData(type)));
+  return _temperatureRange(compiledFor(type));
 }
 
 /**
@@ -164,7 +176,7 @@ export function emfFromTemperatureArray(
   temperaturesC: Float64Array,
   out?: Float64Array,
 ): Float64Array {
-  return _emfFromTemperatureArray(_compile(thermocoupleData(type)), temperaturesC, out);
+  return _emfFromTemperatureArray(compiledFor(type), temperaturesC, out);
 }
 
 /**
@@ -186,5 +198,5 @@ export function temperatureFromEmfArray(
   emfsMillivolts: Float64Array,
   out?: Float64Array,
 ): Float64Array {
-  return _temperatureFromEmfArray(_compile(thermocoupleData(type)), emfsMillivolts, out);
+  return _temperatureFromEmfArray(compiledFor(type), emfsMillivolts, out);
 }

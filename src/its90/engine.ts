@@ -11,6 +11,7 @@ import {
   _emf,
   _horner,
   _slope,
+  _subrangeIndex,
   type CompiledSubrange,
   type CompiledType,
 } from "./compiled.js";
@@ -240,6 +241,63 @@ function checkArrays(input: unknown, out: unknown, quantity: string, context: st
   return input.length;
 }
 
+/** Converts elements from `start` while they stay in [lo, hi) and ≤ maxC; returns the index it stopped at. */
+function forwardRun(
+  temperaturesC: Float64Array,
+  result: Float64Array,
+  start: number,
+  n: number,
+  c: Float64Array,
+  degree: number,
+  lo: number,
+  hi: number,
+  maxC: number,
+): number {
+  // Lengths come in as arguments: no property access inside, which keeps the optimised loop stable.
+  let i = start;
+  for (; i < n; i++) {
+    const t = temperaturesC[i] as number;
+    if (!(t >= lo && t < hi && t <= maxC)) break;
+    let acc = 0;
+    for (let k = degree; k >= 0; k--) acc = acc * t + (c[k] as number);
+    result[i] = acc;
+  }
+  return i;
+}
+
+/** {@link forwardRun} with type K's exponential term a0·exp(a1·(t − a2)²). */
+function forwardRunWithExponential(
+  temperaturesC: Float64Array,
+  result: Float64Array,
+  start: number,
+  n: number,
+  c: Float64Array,
+  degree: number,
+  lo: number,
+  hi: number,
+  maxC: number,
+  a0: number,
+  a1: number,
+  a2: number,
+): number {
+  let i = start;
+  for (; i < n; i++) {
+    const t = temperaturesC[i] as number;
+    if (!(t >= lo && t < hi && t <= maxC)) break;
+    let acc = 0;
+    for (let k = degree; k >= 0; k--) acc = acc * t + (c[k] as number);
+    const d = t - a2;
+    result[i] = acc + a0 * Math.exp(a1 * d * d);
+  }
+  return i;
+}
+
+/** Throws the error that names a bad element of a bulk call (kept out of the hot function). */
+function badElement(ct: CompiledType, temperatureC: number, index: number): never {
+  checkTemperature(ct, temperatureC, `temperature [${index}]`);
+  throw new Error("unreachable: the element passed the check it failed");
+}
+
 /** @internal */
 export function _emfFromTemperatureArray(
   ct: CompiledType,
@@ -251,37 +309,27 @@ export function _emfFromTemperatureArray(
   const minC = ct.minC;
   const maxC = ct.maxC;
   const subs = ct.subranges;
-  // Hot loop specialised for the usual two sub-ranges: the coefficient arrays and the exponential flag are
-  // hoisted into locals, so each element costs one comparison and one Horner pass.
-  if (subs.length === 2) {
-    const low = subs[0] as CompiledSubrange;
-    const high = subs[1] as CompiledSubrange;
-    const seamC = high.minC;
-    const cLow = low.c;
-    const cHigh = high.c;
-    const expLow = low.hasExp;
-    const expHigh = high.hasExp;
-    const a0 = ct.a0;
-    const a1 = ct.a1;
-    const a2 = ct.a2;
-    for (let i = 0; i < n; i++) {
-      const t = temperaturesC[i] as number;
-      // NaN fails both comparisons, so it also takes the slow path, which names the element.
-      if (!(t >= minC && t <= maxC)) checkTemperature(ct, t, `temperature [${i}]`);
-      if (t >= seamC) {
-        const d = t - a2;
-        result[i] = expHigh ? _horner(cHigh, t) + a0 * Math.exp(a1 * d * d) : _horner(cHigh, t);
-      } else {
-        const d = t - a2;
-        result[i] = expLow ? _horner(cLow, t) + a0 * Math.exp(a1 * d * d) : _horner(cLow, t);
-      }
-    }
-    return result;
-  }
-  for (let i = 0; i < n; i++) {
-    const t = temperaturesC[i] as number;
-    if (!(t >= minC && t <= maxC)) checkTemperature(ct, t, `temperature [${i}]`);
-    result[i] = _emf(ct, t);
+  const last = subs.length - 1;
+  const a0 = ct.a0;
+  const a1 = ct.a1;
+  const a2 = ct.a2;
+  // Runs of elements in one sub-range go through a tight loop with that sub-range's coefficients and
+  // exponential flag hoisted: per element the same Horner pass as a hand-written loop plus three comparisons.
+  let i = 0;
+  while (i < n) {
+    const first = temperaturesC[i] as number;
+    // NaN fails the comparisons, so it also takes the slow path, which names the element.
+    if (!(first >= minC && first <= maxC)) badElement(ct, first, i);
+    const index = _subrangeIndex(ct, first);
+    const sub = subs[index] as CompiledSubrange;
+    const c = sub.c;
+    const lo = index === 0 ? minC : sub.minC;
+    const hi = index === last ? Infinity : (subs[index + 1] as CompiledSubrange).minC;
+    const next = sub.hasExp
+      ? forwardRunWithExponential(temperaturesC, result, i, n, c, c.length - 1, lo, hi, maxC, a0, a1, a2)
+      : forwardRun(temperaturesC, result, i, n, c, c.length - 1, lo, hi, maxC);
+    // The first element lies in its own sub-range, so a run always converts at least one element.
+    i = next;
   }
   return result;
 }

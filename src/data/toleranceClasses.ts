@@ -32,18 +32,22 @@ export interface ToleranceTable<Grade extends string | number> {
   readonly grades: Readonly<Record<Grade, Readonly<Partial<Record<ThermocoupleType, readonly ToleranceBand[]>>>>>;
 }
 
+// The helpers are marked free of side effects so that bundles which never read the tables drop them.
+// @__NO_SIDE_EFFECTS__
 const fixed = (minC: number, maxC: number, toleranceC: number): ToleranceBand => ({
   minC,
   maxC,
   toleranceC,
   fractionOfReading: 0,
 });
+// @__NO_SIDE_EFFECTS__
 const proportional = (minC: number, maxC: number, fractionOfReading: number): ToleranceBand => ({
   minC,
   maxC,
   toleranceC: 0,
   fractionOfReading,
 });
+// @__NO_SIDE_EFFECTS__
 const largerOf = (minC: number, maxC: number, toleranceC: number, fractionOfReading: number): ToleranceBand => ({
   minC,
   maxC,

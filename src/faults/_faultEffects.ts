@@ -20,7 +20,7 @@ const nodeUnits: Readonly<Record<FaultNodeName, "millivolts" | "volts" | "code" 
 };
 
 /** @internal Names of the signal nodes. */
-export const _faultNodeNames = Object.keys(nodeUnits) as FaultNodeName[];
+export const _faultNodeNames = /* @__PURE__ */ Object.keys(nodeUnits) as FaultNodeName[];
 
 const effectKinds = [
   "override-node",

@@ -35,8 +35,9 @@ const INFO: Record<FirmwareNumberType, _NumberTypeInfo> = {
   uint16: { integer: true, min: 0, max: 65535, cType: "uint16_t", unitRoundoff: 0 },
   int32: { integer: true, min: -2147483648, max: 2147483647, cType: "int32_t", unitRoundoff: 0 },
   uint32: { integer: true, min: 0, max: 4294967295, cType: "uint32_t", unitRoundoff: 0 },
-  float32: { integer: false, min: -3.4028234663852886e38, max: 3.4028234663852886e38, cType: "float", unitRoundoff: 2 ** -24 },
-  float64: { integer: false, min: -Number.MAX_VALUE, max: Number.MAX_VALUE, cType: "double", unitRoundoff: 2 ** -53 },
+  float32: { integer: false, min: -3.4028234663852886e38, max: 3.4028234663852886e38, cType: "float", unitRoundoff: 5.960464477539063e-8 /* 2^-24 */ },
+  // Literal values (not Number.MAX_VALUE) keep this table free of global reads, so bundlers can drop it.
+  float64: { integer: false, min: -1.7976931348623157e308, max: 1.7976931348623157e308, cType: "double", unitRoundoff: 1.1102230246251565e-16 /* 2^-53 */ },
 };
 
 /** Looks up a number type, throwing `INVALID_OPTION` for anything else. @internal */

@@ -17,13 +17,13 @@ export interface FormatFirmwareTableCOptions {
   readonly prefix?: string;
 }
 
-const C_KEYWORDS = new Set(
-  (
-    "auto break case char const continue default do double else enum extern float for goto if inline int long " +
-    "register restrict return short signed sizeof static struct switch typedef union unsigned void volatile while " +
-    "_Bool _Complex _Imaginary"
-  ).split(" "),
-);
+// Marked pure so that bundles which never emit C drop it (sideEffects: false covers modules, not statements).
+const C_KEYWORDS = /* @__PURE__ */ new Set([
+  "auto", "break", "case", "char", "const", "continue", "default", "do", "double", "else", "enum", "extern",
+  "float", "for", "goto", "if", "inline", "int", "long", "register", "restrict", "return", "short", "signed",
+  "sizeof", "static", "struct", "switch", "typedef", "union", "unsigned", "void", "volatile", "while", "_Bool",
+  "_Complex", "_Imaginary",
+]);
 
 /** Validates a C identifier prefix. @internal */
 export function _checkPrefix(prefix: unknown): string {

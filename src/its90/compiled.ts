@@ -130,19 +130,14 @@ export function _solveInSubrange(ct: CompiledType, index: number, target: number
 }
 
 const cache = new WeakMap<ThermocoupleData, CompiledType>();
-let lastData: ThermocoupleData | undefined;
-let lastCompiled: CompiledType | undefined;
 
 /** Returns the numeric form of a data object, building it on first use. @internal */
 export function _compile(data: ThermocoupleData): CompiledType {
-  if (data === lastData) return lastCompiled as CompiledType;
   let ct = cache.get(data);
   if (ct === undefined) {
     ct = build(data);
     cache.set(data, ct);
   }
-  lastData = data;
-  lastCompiled = ct;
   return ct;
 }
 

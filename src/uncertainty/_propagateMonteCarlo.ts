@@ -15,7 +15,7 @@ import type { PropagationResult } from "./types.js";
 
 /** Trials per sampling batch (column buffers of this length per input). */
 const batchSize = 8192;
-const twoPi = 2 * Math.PI;
+const twoPi = 6.283185307179586; // 2π as a literal: no global read at module level (tree-shaking)
 
 type Generator = ReturnType<typeof xoroshiro128plus>;
 

@@ -14,7 +14,7 @@ const maxCornerInputs = 16;
 const gridIntervals = 16;
 const goldenIterations = 40;
 const maxSweeps = 4;
-const invPhi = (Math.sqrt(5) - 1) / 2;
+const invPhi = 0.6180339887498949; // (√5 − 1)/2 as a literal: no call at module level (tree-shaking)
 
 /**
  * Maximises sign·f over coordinate `i` in [lo, hi], the other coordinates fixed in `x`: a 17-point grid, then a

@@ -166,7 +166,9 @@ export interface FaultSignals {
 export interface CustomEffect {
   readonly kind: "custom";
   readonly node?: FaultNodeName;
+  /** Replaces the value of `node` when it is computed (pure). */
   readonly transformNode?: (value: number, signals: Partial<FaultSignals>) => number;
+  /** Changes the chain description before evaluation (pure). */
   readonly transformChain?: (chain: MeasurementChain) => MeasurementChain;
 }
 

@@ -20,7 +20,7 @@ const runs: string[][] = [
   ["check", "examples/heated-enclosure-adc.json", "--svg", "out/heated-enclosure-trip-bands.svg", "--force"],
   ["sweep", "examples/heated-enclosure-adc.json", "--from", "0", "--to", "150", "--step", "10", "--svg", "out/heated-enclosure-error-sweep.svg", "--force"],
   ["sweep", "examples/ceramic-kiln-cutout.json", "--from", "900", "--to", "1275", "--step", "25", "--svg", "out/ceramic-kiln-error-sweep.svg", "--force"],
-  ["faults", "examples/ceramic-kiln-cutout.json", "--bias", "pull-up", "--output-stage", "de-energize-to-trip"],
+  ["faults", "examples/ceramic-kiln-cutout.json"],
   ["faults", "examples/reflow-oven-trip.json"],
   ["faults", "examples/heated-enclosure-adc.json"],
 ];

@@ -17,13 +17,18 @@ export interface DesignFileErrorDetails {
   readonly moreProblems?: number;
 }
 
+/** Shortens a long part of the message (a deep path, a long list of keys) so the line stays readable. */
+function clip(text: string, max: number): string {
+  return text.length > max ? `${text.slice(0, max - 1)}…` : text;
+}
+
 function messageOf(details: DesignFileErrorDetails): string {
-  const at = details.path.length > 0 ? `at ${details.path}: ` : "";
+  const at = details.path.length > 0 ? `at ${clip(details.path, 160)}: ` : "";
   const more =
     details.moreProblems !== undefined && details.moreProblems > 0
       ? ` (and ${details.moreProblems} more problem${details.moreProblems === 1 ? "" : "s"})`
       : "";
-  return `${details.fileName}: ${at}${details.problem}${more}`.replace(/[\r\n]+/g, " ");
+  return `${clip(details.fileName, 120)}: ${at}${clip(details.problem, 280)}${more}`.replace(/[\r\n]+/g, " ");
 }
 
 /**

@@ -266,6 +266,48 @@ const analysisSchema = z
   })
   .describe("how the design is analysed (command-line options override)");
 
+const protectionSchema = z
+  .strictObject({
+    openCircuitBias: z
+      .enum(["pull-up", "pull-down", "none"])
+      .optional()
+      .describe('where an open thermocouple input goes: "pull-up" (reads high), "pull-down" (reads low), "none" (floats; default)'),
+    outputStage: z
+      .enum(["energize-to-trip", "de-energize-to-trip"])
+      .optional()
+      .describe('behaviour on loss of power: "energize-to-trip" (power loss = no trip; default) or "de-energize-to-trip" (power loss = trip)'),
+    comparatorTripLevel: z.enum(["high", "low"]).optional().describe('comparator output level that means trip (default "high")'),
+    amplifierRailsVolts: z
+      .strictObject({ lowVolts: z.number().min(-100).max(100), highVolts: z.number().min(-100).max(100) })
+      .optional()
+      .describe("output rails of the amplifier, V (default 0 and 5)"),
+    detection: z
+      .strictObject({
+        outOfRangeWindowC: z
+          .strictObject({ lowC: temperatureC("lowest plausible indicated temperature"), highC: temperatureC("highest plausible indicated temperature") })
+          .optional()
+          .describe("a window check on the indicated temperature"),
+        outOfRangeWindowVolts: z
+          .strictObject({ lowVolts: z.number().min(-100).max(100), highVolts: z.number().min(-100).max(100) })
+          .optional()
+          .describe("a window comparator on the amplifier output, V"),
+        openThermocoupleDetection: z.boolean().optional().describe("the design detects an open thermocouple loop"),
+        secondComparatorC: temperatureC("a second comparator on the amplifier output tripping here").optional(),
+        supervisoryReading: z
+          .strictObject({
+            plausibleLowC: temperatureC("readings below this are flagged").optional(),
+            plausibleHighC: temperatureC("readings above this are flagged").optional(),
+            independentSensor: z.boolean().optional().describe("the supervisor has its own sensor"),
+            toleranceC: positive("disagreement the supervisor tolerates, °C (default 10)").optional(),
+          })
+          .optional()
+          .describe("firmware reads the signal and flags implausible values"),
+      })
+      .optional()
+      .describe("how the design notices faults"),
+  })
+  .describe("protection facts for the single-fault review (`faults`); command-line options override");
+
 /** The whole design file, version 1. */
 export const designFileSchema = z
   .strictObject({
@@ -290,6 +332,7 @@ export const designFileSchema = z
       .optional()
       .describe("distribution overrides by error-source name"),
     analysis: analysisSchema.optional(),
+    protection: protectionSchema.optional(),
   })
   .describe("a hotjunction over-temperature protection design");
 

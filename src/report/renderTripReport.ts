@@ -53,6 +53,13 @@ export function tripReportFromResult(result: TripDesignResult, methods: ReportMe
       (n, i) =>
         `Threshold network ${i + 1} (${n.topology}): ${n.resistorsOhms.map(formatOhms).join(" + ")} from the reference to ground, ${_fixed(n.currentMilliamps, 3)} mA.`,
     ),
+    ...(result.midRail === undefined
+      ? []
+      : [
+          `Mid-rail divider (two equal resistors of the same tolerance on this reference): ${_fixed(result.midRail.nominalVolts, 4)} V, ` +
+            `worst case ${_fixed(result.midRail.worstCaseLowVolts, 4)} to ${_fixed(result.midRail.worstCaseHighVolts, 4)} V ` +
+            `(±${_fixed(result.midRail.worstCaseFraction * 100, 3)} %), relative standard uncertainty ${_fixed(result.midRail.relativeStandardUncertainty * 100, 3)} %.`,
+        ]),
   ];
   return {
     title: "Trip design",

@@ -3,6 +3,7 @@
  * Monte Carlo, and margins to the process limits.
  * @module
  */
+import { midRailDivider } from "./midRailDivider.js";
 import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
 import type { DividerElement } from "../chain/types.js";
 import { propagate } from "../uncertainty/propagate.js";
@@ -366,6 +367,9 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     reference: realized.realization,
     setpoints: results,
     acceptanceMethod,
+    midRail: midRailDivider(realized.realization.nominalVolts, resistorTolerance, {
+      referenceToleranceFraction: Math.min(0.5, realized.realization.toleranceFraction),
+    }),
     pass: results.every((r) => r.pass) && realized.realization.problems.length === 0,
     notes: allNotes,
   };

@@ -10,6 +10,7 @@
  * placement) and releases below it.
  * @module
  */
+import type { MidRailDivider } from "./midRailDivider.js";
 import type { PreferredSeriesName } from "../data/preferredSeries.js";
 import type {
   AmbientRange,
@@ -252,6 +253,11 @@ export interface TripDesignResult {
   readonly setpoints: readonly SetpointTripResult[];
   /** Method whose band decides pass/fail. */
   readonly acceptanceMethod: "worst-case" | "rss" | "monte-carlo";
+  /**
+   * A mid-rail divider of two equal resistors of the design's tolerance across the same reference (e.g. a
+   * comparator's second input or a bias point), with its own error: resistors and the reference at their bounds.
+   */
+  readonly midRail: MidRailDivider;
   /** True when every setpoint passes and the reference has no problems. */
   readonly pass: boolean;
   /** How the network was found and what was assumed, in sentences. */

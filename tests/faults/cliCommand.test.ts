@@ -42,6 +42,24 @@ describe("faults command", () => {
     expect(rows.find((r) => r.faultId === "board.supplyLost")?.category).toMatch(/^safe-/);
   });
 
+  it("takes bias, output stage and detection from the design's protection section; options override it", async () => {
+    // examples/ceramic-kiln-cutout.json states pull-up bias and de-energize-to-trip (our own demo design).
+    // Common practice, no source: with pull-up bias an open thermocouple reads high and trips (safe); with
+    // de-energize-to-trip, loss of the board supply trips (safe); with pull-down bias the open loop never trips.
+    const fromFile = JSON.parse(await run(["faults", "examples/ceramic-kiln-cutout.json", "--json", "--step", "5"])) as {
+      reviews: { rows: { faultId: string; category: string }[] }[];
+    };
+    const rows = fromFile.reviews[0]?.rows ?? [];
+    expect(rows.find((r) => r.faultId === "thermocouple.open")?.category).toMatch(/^safe-/);
+    expect(rows.find((r) => r.faultId === "board.supplyLost")?.category).toMatch(/^safe-/);
+    const overridden = JSON.parse(
+      await run(["faults", "examples/ceramic-kiln-cutout.json", "--json", "--step", "5", "--bias", "pull-down", "--output-stage", "energize-to-trip"]),
+    ) as { reviews: { rows: { faultId: string; category: string }[] }[] };
+    const rows2 = overridden.reviews[0]?.rows ?? [];
+    expect(rows2.find((r) => r.faultId === "thermocouple.open")?.category).toMatch(/^dangerous-/);
+    expect(rows2.find((r) => r.faultId === "board.supplyLost")?.category).toMatch(/^dangerous-/);
+  });
+
   it("rejects a malformed pair", async () => {
     await expect(run(["faults", "examples/reflow-oven-trip.json", "--rails", "5"])).rejects.toThrow(/two numbers/);
   });

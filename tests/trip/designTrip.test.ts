@@ -72,6 +72,16 @@ describe("designTrip: hand-checked bands", () => {
     expect(sp.resistorsOhms[0] + sp.resistorsOhms[1]).toBeLessThanOrEqual(1e6);
   });
 
+  it("reports a mid-rail divider of two equal resistors on the same reference with its own error", () => {
+    // Hand check (common practice, no source): two equal 1 % resistors on a 5 V rail good to ±4 % give
+    // 2.5 V · (1 ± 0.04) · (1 ± 0.01) at the extremes: 2.3760 … 2.6260 V.
+    const design: TripDesign = { ...railOnly(0.04, 400), resistors: { series: "E96", toleranceFraction: 0.01 } };
+    const mid = designTrip(design, fast).midRail;
+    expect(mid.nominalVolts).toBe(2.5);
+    expect(mid.worstCaseLowVolts).toBeCloseTo(2.376, 9);
+    expect(mid.worstCaseHighVolts).toBeCloseTo(2.626, 9);
+  });
+
   it("places the release below the trip by the hysteresis over the signal slope", () => {
     // 20 mV hysteresis below the threshold on a ~5.2 mV/°C signal near 120 °C → about 3.9 °C (hand calculation)
     const design: TripDesign = { ...railOnly(0.01, 120), comparator: { kind: "comparator", hysteresisMillivolts: 20, hysteresisPlacement: "below" } };

@@ -13,6 +13,7 @@ import { formatFaultReviewJson } from "../../faults/formatFaultReviewJson.js";
 import { formatFaultReviewMarkdown } from "../../faults/formatFaultReviewMarkdown.js";
 import { formatFaultReviewText } from "../../faults/formatFaultReviewText.js";
 import { reviewTripDesignFaults } from "../../faults/reviewTripDesignFaults.js";
+import type { DesignFile } from "../../design/designSchema.js";
 import type { FaultDetection, FaultReviewReport, ReviewFaultsOptions } from "../../faults/types.js";
 import { designTrip } from "../../trip/designTrip.js";
 import { _analysisSettings, _loadDesign } from "../designOptions.js";
@@ -44,28 +45,47 @@ function pair(text: string): [number, number] {
   return [_parseNumber(parts[0] as string), _parseNumber(parts[1] as string)];
 }
 
-/** The review options of the command line. @internal */
-export function _faultReviewOptions(cwd: string, o: FaultsCommandOptions): ReviewFaultsOptions {
+/**
+ * The review options: the design file's `protection` section, with the command line overriding it item by item.
+ * @internal
+ */
+export function _faultReviewOptions(cwd: string, o: FaultsCommandOptions, protection: DesignFile["protection"] = {}): ReviewFaultsOptions {
+  const fromFile = protection.detection ?? {};
+  const supervisorFile = fromFile.supervisoryReading;
+  const window =
+    o.window !== undefined
+      ? { lowC: o.window[0], highC: o.window[1] }
+      : o.windowVolts !== undefined
+        ? { lowVolts: o.windowVolts[0], highVolts: o.windowVolts[1] }
+        : (fromFile.outOfRangeWindowC ?? fromFile.outOfRangeWindowVolts);
+  const secondC = o.secondComparator ?? fromFile.secondComparatorC;
+  const plausible = o.supervisorRange ?? (supervisorFile ? [supervisorFile.plausibleLowC, supervisorFile.plausibleHighC] : undefined);
+  const independent = o.supervisorIndependent === true || supervisorFile?.independentSensor === true;
+  const toleranceC = o.supervisorTolerance ?? supervisorFile?.toleranceC;
   const detection: FaultDetection = {
-    ...(o.window !== undefined ? { outOfRangeWindow: { lowC: o.window[0], highC: o.window[1] } } : {}),
-    ...(o.windowVolts !== undefined ? { outOfRangeWindow: { lowVolts: o.windowVolts[0], highVolts: o.windowVolts[1] } } : {}),
-    ...(o.openDetection === true ? { openThermocoupleDetection: true } : {}),
-    ...(o.secondComparator !== undefined ? { secondComparator: { thresholdC: o.secondComparator } } : {}),
-    ...(o.supervisorRange !== undefined || o.supervisorIndependent === true
+    ...(window !== undefined ? { outOfRangeWindow: window } : {}),
+    ...(o.openDetection === true || fromFile.openThermocoupleDetection === true ? { openThermocoupleDetection: true } : {}),
+    ...(secondC !== undefined ? { secondComparator: { thresholdC: secondC } } : {}),
+    ...(plausible !== undefined || independent || supervisorFile !== undefined
       ? {
           supervisoryReading: {
-            ...(o.supervisorRange !== undefined ? { plausibleLowC: o.supervisorRange[0], plausibleHighC: o.supervisorRange[1] } : {}),
-            ...(o.supervisorIndependent === true ? { independentSensor: true } : {}),
-            ...(o.supervisorTolerance !== undefined ? { toleranceC: o.supervisorTolerance } : {}),
+            ...(plausible?.[0] !== undefined ? { plausibleLowC: plausible[0] } : {}),
+            ...(plausible?.[1] !== undefined ? { plausibleHighC: plausible[1] } : {}),
+            ...(independent ? { independentSensor: true } : {}),
+            ...(toleranceC !== undefined ? { toleranceC } : {}),
           },
         }
       : {}),
   };
+  const bias = o.bias ?? protection.openCircuitBias;
+  const outputStage = o.outputStage ?? protection.outputStage;
+  const tripLevel = o.tripLevel ?? protection.comparatorTripLevel;
+  const rails = o.rails !== undefined ? { lowVolts: o.rails[0], highVolts: o.rails[1] } : protection.amplifierRailsVolts;
   return {
-    ...(o.bias !== undefined ? { openCircuitBias: o.bias } : {}),
-    ...(o.outputStage !== undefined ? { outputStage: o.outputStage } : {}),
-    ...(o.tripLevel !== undefined ? { comparatorTripLevel: o.tripLevel } : {}),
-    ...(o.rails !== undefined ? { amplifierRailsVolts: { lowVolts: o.rails[0], highVolts: o.rails[1] } } : {}),
+    ...(bias !== undefined ? { openCircuitBias: bias } : {}),
+    ...(outputStage !== undefined ? { outputStage } : {}),
+    ...(tripLevel !== undefined ? { comparatorTripLevel: tripLevel } : {}),
+    ...(rails !== undefined ? { amplifierRailsVolts: rails } : {}),
     ...(o.wireShort !== undefined ? { wireShortC: o.wireShort } : {}),
     ...(o.step !== undefined ? { sweepStepC: o.step } : {}),
     ...(o.extraFaults !== undefined ? { extraFaults: faultsFromJson(readFileSync(resolve(cwd, o.extraFaults), "utf8")) } : {}),
@@ -79,9 +99,9 @@ export function registerFaultsCommand(program: Command, context: CommandContext)
     .command("faults")
     .description("single-fault review of a design's trip chain: what each fault does to the trip, safe or dangerous, detected or not")
     .argument("<design>", "design file (JSON)")
-    .addOption(new Option("--bias <bias>", "open-circuit bias of the thermocouple input (default none: floating)").choices(["pull-up", "pull-down", "none"]))
+    .addOption(new Option("--bias <bias>", "open-circuit bias of the thermocouple input (default: the design's protection section, else none: floating)").choices(["pull-up", "pull-down", "none"]))
     .addOption(
-      new Option("--output-stage <stage>", "output stage on power loss (default energize-to-trip)").choices(["energize-to-trip", "de-energize-to-trip"]),
+      new Option("--output-stage <stage>", "output stage on power loss (default: the design's protection section, else energize-to-trip)").choices(["energize-to-trip", "de-energize-to-trip"]),
     )
     .addOption(new Option("--trip-level <level>", "comparator output level that means trip (default high)").choices(["high", "low"]))
     .option("--rails <low,high>", "amplifier output rails, V (default 0,5)", pair)
@@ -103,7 +123,7 @@ export function registerFaultsCommand(program: Command, context: CommandContext)
   command.action(async (path: string, options: FaultsCommandOptions) => {
     const plan = _planCommandOutputs(context.io, options, [path]);
     const design = _loadDesign(context.io, path);
-    const reviewOptions = _faultReviewOptions(context.io.cwd, options);
+    const reviewOptions = _faultReviewOptions(context.io.cwd, options, design.protection);
     let report: FaultReviewReport;
     if (design.comparator !== undefined) {
       const settings = _analysisSettings(design, {});

@@ -32,7 +32,15 @@ function formatOhms(ohms: number): string {
  * ```ts
  * import { tripReportFromResult } from "hotjunction/design";
  * const report = tripReportFromResult(
- *   { networks: [], reference: { name: "ideal", kind: "ideal", nominalVolts: 2.5, toleranceFraction: 0, problems: [] }, setpoints: [], acceptanceMethod: "worst-case", pass: true, notes: [] },
+ *   {
+ *     networks: [],
+ *     reference: { name: "ideal", kind: "ideal", nominalVolts: 2.5, toleranceFraction: 0, problems: [] },
+ *     midRail: { nominalVolts: 1.25, worstCaseLowVolts: 1.2375, worstCaseHighVolts: 1.2625, worstCaseFraction: 0.01, relativeStandardUncertainty: 0.004 },
+ *     setpoints: [],
+ *     acceptanceMethod: "worst-case",
+ *     pass: true,
+ *     notes: [],
+ *   },
  *   { methods: ["worst-case"], coverage: 0.95 },
  * );
  * console.log(report.title); // "Trip design"
@@ -53,13 +61,11 @@ export function tripReportFromResult(result: TripDesignResult, methods: ReportMe
       (n, i) =>
         `Threshold network ${i + 1} (${n.topology}): ${n.resistorsOhms.map(formatOhms).join(" + ")} from the reference to ground, ${_fixed(n.currentMilliamps, 3)} mA.`,
     ),
-    ...(result.midRail === undefined
-      ? []
-      : [
+    ...[
           `Mid-rail divider (two equal resistors of the same tolerance on this reference): ${_fixed(result.midRail.nominalVolts, 4)} V, ` +
             `worst case ${_fixed(result.midRail.worstCaseLowVolts, 4)} to ${_fixed(result.midRail.worstCaseHighVolts, 4)} V ` +
             `(±${_fixed(result.midRail.worstCaseFraction * 100, 3)} %), relative standard uncertainty ${_fixed(result.midRail.relativeStandardUncertainty * 100, 3)} %.`,
-        ]),
+        ],
   ];
   return {
     title: "Trip design",

@@ -241,7 +241,10 @@ function checkArrays(input: unknown, out: unknown, quantity: string, context: st
   return input.length;
 }
 
-/** Converts elements from `start` while they stay in [lo, hi) and ≤ maxC; returns the index it stopped at. */
+/**
+ * Converts elements from `start` while they stay in [lo, hi) and ≤ maxC, adding type K's exponential term
+ * a0·exp(a1·(t − a2)²) when `hasExp`; returns the index it stopped at.
+ */
 function forwardRun(
   temperaturesC: Float64Array,
   result: Float64Array,
@@ -252,6 +255,10 @@ function forwardRun(
   lo: number,
   hi: number,
   maxC: number,
+  hasExp: boolean,
+  a0: number,
+  a1: number,
+  a2: number,
 ): number {
   // Lengths come in as arguments: no property access inside, which keeps the optimised loop stable.
   let i = start;
@@ -260,7 +267,12 @@ function forwardRun(
     if (!(t >= lo && t < hi && t <= maxC)) break;
     let acc = 0;
     for (let k = degree; k >= 0; k--) acc = acc * t + (c[k] as number);
-    result[i] = acc;
+    if (hasExp) {
+      const d = t - a2;
+      result[i] = acc + a0 * Math.exp(a1 * d * d);
+    } else {
+      result[i] = acc;
+    }
   }
   return i;
 }
@@ -314,33 +326,6 @@ function coefficients10(sub: CompiledSubrange): Float64Array {
   return c;
 }
 
-/** {@link forwardRun} with type K's exponential term a0·exp(a1·(t − a2)²). */
-function forwardRunWithExponential(
-  temperaturesC: Float64Array,
-  result: Float64Array,
-  start: number,
-  n: number,
-  c: Float64Array,
-  degree: number,
-  lo: number,
-  hi: number,
-  maxC: number,
-  a0: number,
-  a1: number,
-  a2: number,
-): number {
-  let i = start;
-  for (; i < n; i++) {
-    const t = temperaturesC[i] as number;
-    if (!(t >= lo && t < hi && t <= maxC)) break;
-    let acc = 0;
-    for (let k = degree; k >= 0; k--) acc = acc * t + (c[k] as number);
-    const d = t - a2;
-    result[i] = acc + a0 * Math.exp(a1 * d * d);
-  }
-  return i;
-}
-
 /** Throws the error that names a bad element of a bulk call (kept out of the hot function). */
 function badElement(ct: CompiledType, temperatureC: number, index: number): never {
   checkTemperature(ct, temperatureC, `temperature [${index}]`);
@@ -377,9 +362,7 @@ export function _emfFromTemperatureArray(
     const next =
       c.length <= 10
         ? forwardRun10(temperaturesC, result, i, n, coefficients10(sub), lo, hi, maxC, sub.hasExp, a0, a1, a2)
-        : sub.hasExp
-          ? forwardRunWithExponential(temperaturesC, result, i, n, c, c.length - 1, lo, hi, maxC, a0, a1, a2)
-          : forwardRun(temperaturesC, result, i, n, c, c.length - 1, lo, hi, maxC);
+        : forwardRun(temperaturesC, result, i, n, c, c.length - 1, lo, hi, maxC, sub.hasExp, a0, a1, a2);
     // The first element lies in its own sub-range, so a run always converts at least one element.
     i = next;
   }

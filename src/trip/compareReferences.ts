@@ -77,15 +77,19 @@ export function compareReferences(
     names.add(option?.name);
     if (option?.cost !== undefined) _requireFinite(option.cost, "cost", undefined, context);
   }
-  const designOptions: DesignTripOptions = { ...options };
+  const { onProgress, ...designOptions } = options;
+  // Two designs per option (with the option, and with an ideal reference on the same resistors).
+  const runs = referenceOptions.length * 2;
+  const progressOf = (run: number): Pick<DesignTripOptions, "onProgress"> =>
+    onProgress === undefined ? {} : { onProgress: (f: number) => onProgress((run + f) / runs) };
   let acceptanceMethod: ReferenceComparison["acceptanceMethod"] = options.acceptanceMethod ?? "worst-case";
 
-  const entries: ReferenceComparisonEntry[] = referenceOptions.map((option) => {
-    const withOption = designTrip({ ...design, reference: option }, designOptions);
+  const entries: ReferenceComparisonEntry[] = referenceOptions.map((option, k) => {
+    const withOption = designTrip({ ...design, reference: option }, { ...designOptions, ...progressOf(2 * k) });
     acceptanceMethod = withOption.acceptanceMethod;
     const ideal = designTrip(
       { ...design, reference: { kind: "ideal", name: "ideal reference", nominalVolts: nominalVoltsOf(option) } },
-      { ...designOptions, networks: withOption.networks },
+      { ...designOptions, ...progressOf(2 * k + 1), networks: withOption.networks },
     );
     const setpoints = withOption.setpoints.map((sp, i) => {
       const b = acceptedBand(withOption, i);

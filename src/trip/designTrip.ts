@@ -49,6 +49,8 @@ export interface DesignTripOptions {
    * N + 1 resistors (taps assigned by threshold, highest first).
    */
   readonly networks?: readonly ThresholdNetwork[];
+  /** Called now and then with the fraction of the Monte Carlo work done (0–1), for a progress display. */
+  readonly onProgress?: (fractionDone: number) => void;
 }
 
 const methods: readonly PropagationMethod[] = ["worst-case", "rss", "monte-carlo"];
@@ -117,6 +119,21 @@ function checkLimits(design: TripDesign): { name: string; tripC: number; limits:
       throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "hazardLimitC", value: hazard, min: maxNormal, unit: "°C", context, problem: "is not above the highest normal operating temperature" });
     }
     return { name: sp.name, tripC, limits: { maxNormalOperatingC: maxNormal, hazardLimitC: hazard } };
+  });
+}
+
+/** The result of "propagating" through a model with no uncertain input: its one value, zero width. */
+function pointResult(model: (x: Readonly<Record<string, number>>) => number, seed: number, coverage: number) {
+  const value = model({});
+  return (method: PropagationMethod): PropagationResult => ({
+    method,
+    estimate: value,
+    standardUncertainty: 0,
+    interval: [value, value],
+    coverage: method === "worst-case" ? 1 : coverage,
+    contributions: {},
+    ...(method === "monte-carlo" ? { trials: 0, seed } : {}),
+    note: "no error source is non-zero: the band is the nominal value",
   });
 }
 
@@ -315,9 +332,22 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     const nominalTripC = _nominalSwitchingC(tc, tap, "trip", plan.tripC);
     const nominalReleaseC = _nominalSwitchingC(tc, tap, "release", plan.tripC);
     const { model, inputs, sources } = _tripTemperatureModel(tc, tap, "trip", plan.tripC);
-    const worst = propagate(model, inputs, { method: "worst-case", normalBoundCoverage });
-    const rss = propagate(model, inputs, { method: "rss", coverage });
-    const mc = propagate(model, inputs, { method: "monte-carlo", coverage, trials, seed });
+    const onProgress = options.onProgress;
+    // A chain with every error source at zero (an ideal design) has nothing to propagate: its band is the
+    // nominal trip itself, by every method.
+    const exact = Object.keys(inputs).length === 0 ? pointResult(model, seed, coverage) : undefined;
+    const worst = exact?.("worst-case") ?? propagate(model, inputs, { method: "worst-case", normalBoundCoverage });
+    const rss = exact?.("rss") ?? propagate(model, inputs, { method: "rss", coverage });
+    const mc =
+      exact?.("monte-carlo") ??
+      propagate(model, inputs, {
+        method: "monte-carlo",
+        coverage,
+        trials,
+        seed,
+        ...(onProgress !== undefined ? { onProgress: (f: number) => onProgress((i + f) / plans.length) } : {}),
+      });
+    onProgress?.((i + 1) / plans.length);
     const bands = { "worst-case": band("worst-case", worst), rss: band("rss", rss), "monte-carlo": band("monte-carlo", mc) };
     const accepted = bands[acceptanceMethod];
     const label = acceptanceMethod === "worst-case" ? "worst case" : `${acceptanceMethod === "rss" ? "RSS" : "Monte Carlo"}, ${coverage * 100} % coverage`;

@@ -246,3 +246,39 @@ describe("designTrip: bad input", () => {
     expect(d).toEqual(copy);
   });
 });
+
+describe("designTrip: an ideal design", () => {
+  it("with every error source at zero, each band is the nominal trip itself (no error to propagate)", () => {
+    const design: TripDesign = { ...railOnly(0.04, 400), reference: { kind: "ideal", name: "perfect 5 V", nominalVolts: 5 } };
+    const sp = designTrip(design, fast).setpoints[0]!;
+    for (const b of [sp.worstCase, sp.rss, sp.monteCarlo]) {
+      expect(b.lowC).toBe(sp.nominalTripC);
+      expect(b.highC).toBe(sp.nominalTripC);
+    }
+  });
+});
+
+describe("designTrip and compareReferences: progress", () => {
+  it("report Monte Carlo progress as non-decreasing fractions in [0, 1] that reach 1", async () => {
+    const { compareReferences } = await import("../../src/trip/compareReferences.js");
+    const design: TripDesign = {
+      ...railOnly(0.04, 400),
+      setpoints: [
+        { name: "low", tripTemperatureC: 300, maxNormalOperatingC: 250, hazardLimitC: 350 },
+        { name: "high", tripTemperatureC: 400, maxNormalOperatingC: 350, hazardLimitC: 450 },
+      ],
+    };
+    for (const run of [
+      (onProgress: (f: number) => void) => designTrip(design, { monteCarloTrials: 20_000, seed: 1, onProgress }),
+      (onProgress: (f: number) => void) =>
+        compareReferences(design, [design.reference, { kind: "ideal", name: "perfect 5 V", nominalVolts: 5 }], { monteCarloTrials: 20_000, seed: 1, onProgress }),
+    ]) {
+      const seen: number[] = [];
+      run((f) => seen.push(f));
+      expect(seen.length).toBeGreaterThan(1);
+      for (let i = 1; i < seen.length; i++) expect(seen[i]).toBeGreaterThanOrEqual(seen[i - 1] as number);
+      expect(Math.min(...seen)).toBeGreaterThanOrEqual(0);
+      expect(seen[seen.length - 1]).toBeCloseTo(1, 12);
+    }
+  });
+});

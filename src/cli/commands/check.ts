@@ -38,14 +38,19 @@ type CheckOptions = OutputOptionValues & AnalysisOptionValues;
 export function _tripReportOfDesign(io: CliIo, design: DesignFile, settings: AnalysisSettings): TripReport {
   const methods = _methodInfo(settings);
   if (design.comparator !== undefined) {
-    // designTrip reports no progress of its own, so no bar here (a bar stuck at 0 % would mislead).
-    const result = designTrip(tripDesignFromDesign(design), {
-      acceptanceMethod: settings.acceptanceMethod,
-      coverage: settings.coverage,
-      monteCarloTrials: settings.trials,
-      seed: settings.seed,
-    });
-    return tripReportFromResult(result, methods);
+    const progress = _startProgress(io, "Monte Carlo");
+    try {
+      const result = designTrip(tripDesignFromDesign(design), {
+        acceptanceMethod: settings.acceptanceMethod,
+        coverage: settings.coverage,
+        monteCarloTrials: settings.trials,
+        seed: settings.seed,
+        onProgress: (fraction) => progress.update(fraction),
+      });
+      return tripReportFromResult(result, methods);
+    } finally {
+      progress.stop();
+    }
   }
   const chain = measurementChainFromDesign(design);
   const setpoints = design.setpoints.map((s) => ({

@@ -7,6 +7,7 @@ import type { Command } from "commander";
 import { referenceOptionFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { renderComparisonReport } from "../../report/renderComparisonReport.js";
 import { compareReferences } from "../../trip/compareReferences.js";
+import { _startProgress } from "../progress.js";
 import { CliError } from "../cliError.js";
 import {
   _addAnalysisOptions,
@@ -44,12 +45,19 @@ export function registerCompareCommand(program: Command, context: CommandContext
     }
     const settings = _analysisSettings(design, options);
     const references = [design.reference, ...(design.referenceAlternatives ?? [])].map(referenceOptionFromDesign);
-    const comparison = compareReferences(tripDesignFromDesign(design), references, {
-      acceptanceMethod: settings.acceptanceMethod,
-      coverage: settings.coverage,
-      monteCarloTrials: settings.trials,
-      seed: settings.seed,
-    });
+    const progress = _startProgress(context.io, "Monte Carlo");
+    let comparison: ReturnType<typeof compareReferences>;
+    try {
+      comparison = compareReferences(tripDesignFromDesign(design), references, {
+        acceptanceMethod: settings.acceptanceMethod,
+        coverage: settings.coverage,
+        monteCarloTrials: settings.trials,
+        seed: settings.seed,
+        onProgress: (fraction) => progress.update(fraction),
+      });
+    } finally {
+      progress.stop();
+    }
     await _emitMain(context.io, plan, renderComparisonReport(comparison, _chosenFormat(options), _methodInfo(settings), design.name));
   });
   return command;

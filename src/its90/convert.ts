@@ -4,10 +4,11 @@
  * @module
  */
 import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
-import { _compile, type CompiledType } from "./compiled.js";
+import { _compile, type CompiledSubrange, type CompiledType } from "./compiled.js";
 import {
   _approximateInverseRanges,
   _approximateTemperatureFromEmf,
+  _coefficients10,
   _emfFromTemperature,
   _emfFromTemperatureArray,
   _seebeckCoefficient,
@@ -23,16 +24,38 @@ import { approximateInverseData, thermocoupleData } from "./resolveType.js";
 /** A type given by its letter or by its data object. */
 export type ThermocoupleTypeInput = ThermocoupleType | ThermocoupleData;
 
-// The last type asked for and its compiled form: a loop over one type skips the lookup entirely.
+// The last type asked for, its compiled form and its sub-ranges' coefficients zero-padded to 10 (undefined for
+// longer ones): a loop over one type skips the lookup entirely and evaluates an unrolled Horner scheme.
 let lastInput: ThermocoupleTypeInput | undefined;
 let lastCompiled: CompiledType | undefined;
+let lastPadded: readonly (Float64Array | undefined)[] = [];
 
 function compiledFor(type: ThermocoupleTypeInput): CompiledType {
   if (type === lastInput && lastCompiled !== undefined) return lastCompiled;
   const ct = _compile(thermocoupleData(type));
   lastInput = type;
   lastCompiled = ct;
+  lastPadded = ct.subranges.map((sub) => (sub.c.length <= 10 ? _coefficients10(sub) : undefined));
   return ct;
+}
+
+/**
+ * E(t) for an in-range temperature of the last compiled type: Horner unrolled over the padded coefficients
+ * (leading zeros add exact zeros, so the result is bit for bit that of the generic loop).
+ */
+function emfUnrolled(ct: CompiledType, t: number): number {
+  const subs = ct.subranges;
+  let i = subs.length - 1;
+  while (i > 0 && t < (subs[i] as CompiledSubrange).minC) i--;
+  const c = lastPadded[i];
+  if (c === undefined) return _emfFromTemperature(ct, t);
+  const e =
+    (c[0] as number) +
+    t * ((c[1] as number) + t * ((c[2] as number) + t * ((c[3] as number) + t * ((c[4] as number) +
+    t * ((c[5] as number) + t * ((c[6] as number) + t * ((c[7] as number) + t * ((c[8] as number) + t * (c[9] as number)))))))));
+  if (!(subs[i] as CompiledSubrange).hasExp) return e;
+  const d = t - ct.a2;
+  return e + ct.a0 * Math.exp(ct.a1 * d * d);
 }
 
 /**
@@ -58,7 +81,11 @@ export function emfFromTemperature(
   temperatureC: number,
   options?: ColdJunctionOptions,
 ): number {
-  return _emfFromTemperature(compiledFor(type), temperatureC, options);
+  const ct = compiledFor(type);
+  if (options === undefined && typeof temperatureC === "number" && temperatureC >= ct.minC && temperatureC <= ct.maxC) {
+    return emfUnrolled(ct, temperatureC);
+  }
+  return _emfFromTemperature(ct, temperatureC, options);
 }
 
 /**

@@ -315,8 +315,8 @@ function forwardRun10(
 
 const padded10 = new WeakMap<CompiledSubrange, Float64Array>();
 
-/** A sub-range's coefficients zero-padded to 10 (built once per sub-range). */
-function coefficients10(sub: CompiledSubrange): Float64Array {
+/** A sub-range's coefficients zero-padded to 10 (built once per sub-range). @internal */
+export function _coefficients10(sub: CompiledSubrange): Float64Array {
   let c = padded10.get(sub);
   if (c === undefined) {
     c = new Float64Array(10);
@@ -361,7 +361,7 @@ export function _emfFromTemperatureArray(
     const hi = index === last ? Infinity : (subs[index + 1] as CompiledSubrange).minC;
     const next =
       c.length <= 10
-        ? forwardRun10(temperaturesC, result, i, n, coefficients10(sub), lo, hi, maxC, sub.hasExp, a0, a1, a2)
+        ? forwardRun10(temperaturesC, result, i, n, _coefficients10(sub), lo, hi, maxC, sub.hasExp, a0, a1, a2)
         : forwardRun(temperaturesC, result, i, n, c, c.length - 1, lo, hi, maxC, sub.hasExp, a0, a1, a2);
     // The first element lies in its own sub-range, so a run always converts at least one element.
     i = next;

@@ -29,13 +29,20 @@ export type ThermocoupleTypeInput = ThermocoupleType | ThermocoupleData;
 let lastInput: ThermocoupleTypeInput | undefined;
 let lastCompiled: CompiledType | undefined;
 let lastPadded: readonly (Float64Array | undefined)[] = [];
+// Built once per type, so code that alternates between types allocates nothing per call.
+const paddedByType = new WeakMap<CompiledType, readonly (Float64Array | undefined)[]>();
 
 function compiledFor(type: ThermocoupleTypeInput): CompiledType {
   if (type === lastInput && lastCompiled !== undefined) return lastCompiled;
   const ct = _compile(thermocoupleData(type));
   lastInput = type;
   lastCompiled = ct;
-  lastPadded = ct.subranges.map((sub) => (sub.c.length <= 10 ? _coefficients10(sub) : undefined));
+  let padded = paddedByType.get(ct);
+  if (padded === undefined) {
+    padded = ct.subranges.map((sub) => (sub.c.length <= 10 ? _coefficients10(sub) : undefined));
+    paddedByType.set(ct, padded);
+  }
+  lastPadded = padded;
   return ct;
 }
 

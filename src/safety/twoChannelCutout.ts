@@ -44,8 +44,9 @@ export function _pairTerms(
   const tGeA = _downTimeHours(a, p, 3, coverageA) ?? 0;
   const tCeB = _downTimeHours(b, p, 2, coverageB) ?? 0;
   const tGeB = _downTimeHours(b, p, 3, coverageB) ?? 0;
-  const ccDu = beta * basisRate(duA, duB, basis);
-  const ccDd = betaD * basisRate(ddA, ddB, basis);
+  // A common-cause failure is a failure of both channels, so its rate never exceeds the smaller channel's.
+  const ccDu = Math.min(beta * basisRate(duA, duB, basis), duA, duB);
+  const ccDd = Math.min(betaD * basisRate(ddA, ddB, basis), ddA, ddB);
   const ccCoverage = Math.min(coverageA, coverageB);
   return {
     independentPfd: indA * indB * (tCeA * tGeB + tGeA * tCeB),
@@ -70,8 +71,9 @@ function ratio(single: number, pair: number): number | null {
  *   each channel's own t_CE, t_GE (Annex B forms with its own rates). For two channels whose unavailabilities
  *   rise as λ_X·t between proof tests it is the exact mean λ_A·λ_B·T1²/3 of their product;
  * - common-cause term: β_D·λ_DD,c·MTTR + β·λ_DU,c·(T1/2 + MRT), where λ_c is the larger of the two channels' rates
- *   (`commonCauseBasis`, default, the higher PFDavg), the smaller, or their geometric mean; with proof-test
- *   coverage the lower of the two channels' coverages;
+ *   (`commonCauseBasis`, default, the higher PFDavg), the smaller, or their geometric mean, capped at the smaller
+ *   channel's rate (a common-cause failure fails both channels); with proof-test coverage the lower of the two
+ *   channels' coverages; the independent parts keep (1 − β)·λ of each channel, as in Annex B;
  * - PFH: λ'_A·t_CE,A·(1 − β)·λ_DU,B + λ'_B·t_CE,B·(1 − β)·λ_DU,A + β_D·λ_DD,c + β·λ_DU,c.
  * The pair shares one proof test and repair (T1, MTTR, MRT, T_M). What the second channel buys is
  * `improvementFactor` (better single channel / pair), set against `commonCauseShare` and a table over β.

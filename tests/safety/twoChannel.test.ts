@@ -54,8 +54,9 @@ describe("different channels (generalisation of src/safety/twoChannelCutout.ts)"
     // t_CE,A = 4388, t_GE,A = 2928; t_CE,B = (1/6)·4388 + (5/6)·8 = 738, t_GE,B = (1/6)·2928 + (5/6)·8 = 494.666…
     // λ'_A = 0.95 × 2.25e-7 = 2.1375e-7; λ'_B = 0.98 × 3e-7 + 0.95 × 6e-8 = 3.51e-7.
     const independent = 2.1375e-7 * 3.51e-7 * (4388 * (2928 / 6 + 40 / 6) + 2928 * 738);
-    // common cause on the larger rates: 0.02 × 3e-7 × 8 + 0.05 × 2.25e-7 × 4388 = 4.8e-8 + 4.93650e-5.
-    const common = 0.02 * 3e-7 * 8 + 0.05 * 2.25e-7 * 4388;
+    // common cause on the larger rates, capped at the smaller channel's: β_D·λ_DD,c = min(0.02 × 3e-7, 0) = 0
+    // (the comparator has no detected failures); 0.05 × 2.25e-7 × 4388 = 4.93650e-5.
+    const common = 0 * 8 + 0.05 * 2.25e-7 * 4388;
     expect(rel(pair.independentPfd, independent)).toBeLessThan(1e-12);
     expect(rel(pair.commonCausePfd, common)).toBeLessThan(1e-12);
     expect(rel(pair.channelA.pfdAvg1oo1, 2.25e-7 * 4388)).toBeLessThan(1e-12);
@@ -63,7 +64,7 @@ describe("different channels (generalisation of src/safety/twoChannelCutout.ts)"
     expect(rel(pair.improvementFactor as number, (6e-8 * 4388 + 3e-7 * 8) / (independent + common))).toBeLessThan(1e-12);
     expect(rel(pair.commonCauseShare as number, common / (independent + common))).toBeLessThan(1e-12);
     // PFH: λ'_A·t_CE,A·0.95·λ_DU,B + λ'_B·t_CE,B·0.95·λ_DU,A + β_D·λ_DD,c + β·λ_DU,c.
-    const pfh = 2.1375e-7 * 4388 * 0.95 * 6e-8 + 3.51e-7 * 738 * 0.95 * 2.25e-7 + 0.02 * 3e-7 + 0.05 * 2.25e-7;
+    const pfh = 2.1375e-7 * 4388 * 0.95 * 6e-8 + 3.51e-7 * 738 * 0.95 * 2.25e-7 + 0 + 0.05 * 2.25e-7;
     expect(rel(pair.pfh1oo2PerHour, pfh)).toBeLessThan(1e-12);
     // The smaller-rate basis takes the common cause on 0.05 × 6e-8 and 0.02 × 0 instead.
     const smaller = twoChannelCutout(
@@ -105,5 +106,23 @@ describe("PFDavg against the proof-test interval", () => {
     const curve = pfdAvgCurve({ lambdaDuFit: 150, lambdaDdFit: 0 }, { proofTestIntervalsHours: [1000], proofTest: { meanTimeToRestorationHours: 8 } });
     expect(curve.points[0]?.pfdAvg1oo2).toBeNull();
     expect(curve.pairName).toBeNull();
+  });
+});
+
+describe("the common-cause rate never exceeds the smaller channel's rate (a common-cause failure fails both; common practice, no source)", () => {
+  it("with the larger-rate basis and a large β, the pair is never worse than the better channel alone", () => {
+    fc.assert(
+      fc.property(rate, rate, rate, rate, frac, frac, (duA, ddA, duB, ddB, beta, betaD) => {
+        const pair = twoChannelCutout(
+          { lambdaDuFit: duA, lambdaDdFit: ddA },
+          { lambdaDuFit: duB, lambdaDdFit: ddB },
+          { beta, betaD, betaSensitivity: [], proofTest: { proofTestIntervalHours: 8760, meanTimeToRestorationHours: 8 } },
+        );
+        const better = Math.min(pair.channelA.pfdAvg1oo1, pair.channelB.pfdAvg1oo1);
+        // the common-cause term alone is at most the better channel's own 1oo1 PFDavg
+        expect(pair.commonCausePfd).toBeLessThanOrEqual(better * (1 + 1e-12) + 1e-300);
+      }),
+      { numRuns: 300 },
+    );
   });
 });

@@ -5,7 +5,14 @@
 import { _checkSafetyReport } from "./_safetyWords.js";
 import type { SafetyFiguresReport } from "./types.js";
 
-/** Format tag of the JSON rendering. */
+/**
+ * Format tag of the JSON rendering (the `format` field), versioned: a new major number for incompatible changes.
+ * @example
+ * ```ts
+ * import { safetyFiguresJsonFormat } from "hotjunction";
+ * console.log(safetyFiguresJsonFormat); // "hotjunction-safety-figures/1"
+ * ```
+ */
 export const safetyFiguresJsonFormat = "hotjunction-safety-figures/1";
 
 /**

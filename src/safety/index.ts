@@ -37,6 +37,7 @@ export { failureDataProblems, failureShareSumTolerance, validateFailureData, typ
 export { classifyFaultShift, defaultNoEffectThresholdC, type ClassifyFaultShiftInput, type FaultShiftClass } from "./classifyFaultShift.js";
 export { safetyFaultClassesFromReview, type FaultReviewForSafety, type SafetyFaultClassesFromReviewOptions } from "./safetyFaultClassesFromReview.js";
 export { safetyFigures } from "./safetyFigures.js";
+export { safetyFiguresFromReviews, type SafetyFiguresFromReviewsOptions } from "./safetyFiguresFromReviews.js";
 export { pfdAvg1oo1 } from "./pfdAvg1oo1.js";
 export { pfdAvg1oo2 } from "./pfdAvg1oo2.js";
 export { pfh1oo1 } from "./pfh1oo1.js";

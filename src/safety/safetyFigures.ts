@@ -24,7 +24,8 @@ function countedAs(safety: SafetyModeRow["safety"], detected: boolean, degradedA
  *   `from memory`). "No effect" failures stay out of both (as IEC 61508-2:2010 asks, `from memory`);
  *   "degraded" ones too, unless `countDegradedAsDangerous`.
  * With `proofTest`, PFDavg ({@link pfdAvg1oo1}) and PFH ({@link pfh1oo1}) of the setpoint as one channel; the
- * proof-test coverage is the stated one, or, with `proofTestRevealsFaultIds`, λ_DU of the revealed faults / λ_DU.
+ * proof-test coverage is the stated one, or, with `proofTestRevealsFaultIds`, λ_DU of the revealed faults / λ_DU
+ * (modes with an `assumed` class have no fault id, so they count as not revealed).
  * @param failureData - per element a rate (FIT) and mode shares (validated, see {@link validateFailureData})
  * @param setpoint - the classified faults (e.g. from {@link safetyFaultClassesFromReview})
  * @param options - proof test, revealed faults, degraded counting

@@ -115,3 +115,23 @@ describe("a modelled chain's review fed through (invented rates; trade facts of 
     expect(f.lambdaTotalFit).toBeCloseTo(2000 + 100 + 30 + 2 + 2 + 20, 9);
   });
 });
+
+describe("every setpoint from its review in one call (the same failure data, classes per setpoint)", () => {
+  it("safetyFiguresFromReviews equals classes-then-figures per review, bands in order", async () => {
+    const { safetyFiguresFromReviews } = await import("../../src/index.js");
+    const low = reviewFaults(ovenChain, { name: "low", maxNormalOperatingC: 250, hazardLimitC: 280 }, { openCircuitBias: "pull-up" });
+    const tight = reviewFaults(ovenChain, { name: "tight", maxNormalOperatingC: 250, hazardLimitC: 262 }, { openCircuitBias: "pull-up" });
+    const bands = [undefined, { lowC: tight.healthyTripC - 5, highC: tight.healthyTripC + 5 }];
+    const proofTest = { proofTestIntervalHours: 4380, meanTimeToRestorationHours: 24 };
+    const all = safetyFiguresFromReviews(ovenFailureData, [low, tight], { healthyBandsC: bands, proofTest });
+    const byHand = [
+      safetyFigures(ovenFailureData, safetyFaultClassesFromReview(low), { proofTest }),
+      safetyFigures(ovenFailureData, safetyFaultClassesFromReview(tight, { healthyBandC: bands[1] as { lowC: number; highC: number } }), { proofTest }),
+    ];
+    expect(all).toEqual(byHand);
+    // The reference drifting high moves the trip about 12.7 °C late: inside a 280 °C hazard limit (degraded), past 262 °C (dangerous).
+    expect(all[0]?.modes.find((m) => m.faultId === "reference.driftedHigh")?.counted).toBe("degraded");
+    expect(all[1]?.modes.find((m) => m.faultId === "reference.driftedHigh")?.counted).toBe("DU");
+    expect(all[1]?.lambdaDuFit as number).toBeGreaterThan(all[0]?.lambdaDuFit as number);
+  });
+});

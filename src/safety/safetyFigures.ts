@@ -10,6 +10,8 @@ import { pfh1oo1 } from "./pfh1oo1.js";
 import type { SafetyFaultClass, SafetyFiguresOptions, SafetyModeRow, SetpointFaultClasses, SetpointSafetyFigures, FailureData } from "./types.js";
 import { validateFailureData } from "./validateFailureData.js";
 
+const safetyWords = ["safe", "dangerous", "degraded", "no-effect"] as const;
+
 function countedAs(safety: SafetyModeRow["safety"], detected: boolean, degradedAsDangerous: boolean): SafetyModeRow["counted"] {
   if (safety === "safe") return detected ? "SD" : "SU";
   if (safety === "dangerous" || (safety === "degraded" && degradedAsDangerous)) return detected ? "DD" : "DU";
@@ -30,7 +32,8 @@ function countedAs(safety: SafetyModeRow["safety"], detected: boolean, degradedA
  * @param setpoint - the classified faults (e.g. from {@link safetyFaultClassesFromReview})
  * @param options - proof test, revealed faults, degraded counting
  * @returns the summary (every figure a field; per-mode rows; unrated faults; notes)
- * @throws as {@link validateFailureData} (a faultId not in `setpoint.faults` is refused with its path),
+ * @throws as {@link validateFailureData} (a faultId not in `setpoint.faults` is refused with its path);
+ *   HotjunctionRangeError for a classified fault with a bad id, safety word or detected flag, or an id given twice;
  *   HotjunctionRangeError for a revealed fault id that is not in the review, or bad proof-test values
  * @example
  * ```ts
@@ -63,7 +66,17 @@ export function safetyFigures(failureData: FailureData, setpoint: SetpointFaultC
     _invalidChoice("setpoint", setpoint, ["classified faults of a setpoint ({ name, faults })"], context);
   }
   const classes = new Map<string, SafetyFaultClass>();
-  for (const f of setpoint.faults) classes.set(f.faultId, f);
+  setpoint.faults.forEach((f: SafetyFaultClass, i) => {
+    const path = `setpoint.faults[${i}]`;
+    if (typeof f !== "object" || f === null) _invalidChoice(path, f, ["a classified fault { faultId, safety, detected }"], context);
+    if (typeof f.faultId !== "string" || f.faultId === "") _invalidChoice(`${path}.faultId`, f.faultId, ["a non-empty fault id"], context);
+    if (!(safetyWords as readonly string[]).includes(f.safety)) _invalidChoice(`${path}.safety`, f.safety, safetyWords, context);
+    if (typeof f.detected !== "boolean") _invalidChoice(`${path}.detected`, f.detected, ["true", "false"], context);
+    if (classes.has(f.faultId)) {
+      throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: `${path}.faultId`, value: f.faultId, context, problem: "appears twice in the setpoint" });
+    }
+    classes.set(f.faultId, f);
+  });
   const data = validateFailureData(failureData, { faultIds: [...classes.keys()] });
   const degradedAsDangerous = options.countDegradedAsDangerous === true;
 

@@ -113,6 +113,13 @@ describe("equations and options", () => {
     oneLine(caught(() => pfdAvg1oo1(r, { ...proofTest, proofTestCoverage: 0.9 })), HotjunctionRangeError, "proofTest.missionTimeHours", "is required");
     oneLine(caught(() => pfdAvg1oo1(r, { ...proofTest, proofTestCoverage: 0.9, missionTimeHours: 100 })), HotjunctionRangeError, "proofTest.missionTimeHours 100 h", "valid range 8760");
   });
+  it("classified faults of a setpoint: a bad safety word, a non-boolean detected flag, an id given twice", () => {
+    const bad = (f: object) => ({ name: "s", faults: [{ faultId: "a.open", safety: "safe", detected: true, shiftC: null, marginC: null, ...f }] }) as never;
+    oneLine(caught(() => safetyFigures(handData, bad({ safety: "fine" }))), HotjunctionRangeError, 'setpoint.faults[0].safety "fine"', "valid: safe, dangerous, degraded, no-effect");
+    oneLine(caught(() => safetyFigures(handData, bad({ detected: "yes" }))), HotjunctionRangeError, 'setpoint.faults[0].detected "yes"');
+    const twice = { name: "s", faults: [...handSetpoint.faults, handSetpoint.faults[0] as never] };
+    oneLine(caught(() => safetyFigures(handData, twice)), HotjunctionRangeError, 'setpoint.faults[5].faultId "a.open" appears twice');
+  });
   it("a revealed fault id the review does not have", () => {
     oneLine(
       caught(() => safetyFigures(handData, handSetpoint, { proofTest, proofTestRevealsFaultIds: ["a.short", "zz"] })),

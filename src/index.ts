@@ -109,3 +109,7 @@ export * from "./trip/index.js";
 
 // Failure-mode review of a trip chain (fault catalogue, single-fault review, renderers)
 export * from "./faults/index.js";
+
+// Safety figures (failure rates, SFF, DC, PFDavg / PFH by IEC 61508-6 Annex B for 1oo1 and 1oo2, two-channel
+// cutouts, PFDavg against the proof-test interval, renderers)
+export * from "./safety/index.js";

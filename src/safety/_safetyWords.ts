@@ -1,0 +1,83 @@
+/**
+ * Shared words and number formats of the safety-figures renderers.
+ * @module
+ * @internal
+ */
+import { _invalidChoice } from "../errors.js";
+import type { SafetyFiguresReport, SetpointSafetyFigures, TwoChannelCutout } from "./types.js";
+
+/** @internal A rate in FIT, 4 significant digits. */
+export function _fit(x: number): string {
+  return x === 0 ? "0" : String(+x.toPrecision(4));
+}
+
+/** @internal A probability or per-hour figure in exponent form. */
+export function _exp(x: number): string {
+  return x === 0 ? "0" : x.toExponential(2);
+}
+
+/** @internal A fraction as a percentage (or "—" for null). */
+export function _pct(x: number | null): string {
+  return x === null ? "—" : `${(x * 100).toFixed(1)} %`;
+}
+
+/** @internal Hours, 6 significant digits. */
+export function _hours(x: number | null): string {
+  return x === null ? "—" : `${+x.toPrecision(6)} h`;
+}
+
+/** @internal A ratio like "×12.3" (or "—"). */
+export function _times(x: number | null): string {
+  return x === null ? "—" : `×${x >= 100 ? x.toFixed(0) : x.toPrecision(3)}`;
+}
+
+/** @internal The rates of a setpoint as label/value pairs. */
+export function _rateEntries(s: SetpointSafetyFigures): [string, string][] {
+  return [
+    ["λ_SD (safe, detected)", `${_fit(s.lambdaSdFit)} FIT`],
+    ["λ_SU (safe, undetected)", `${_fit(s.lambdaSuFit)} FIT`],
+    ["λ_DD (dangerous, detected)", `${_fit(s.lambdaDdFit)} FIT`],
+    ["λ_DU (dangerous, undetected)", `${_fit(s.lambdaDuFit)} FIT`],
+    ["λ_S", `${_fit(s.lambdaSafeFit)} FIT`],
+    ["λ_D", `${_fit(s.lambdaDangerousFit)} FIT`],
+    ["degraded", `${_fit(s.lambdaDegradedFit)} FIT`],
+    ["no effect", `${_fit(s.lambdaNoEffectFit)} FIT`],
+    ["total", `${_fit(s.lambdaTotalFit)} FIT`],
+    ["safe failure fraction (SFF)", _pct(s.safeFailureFraction)],
+    ["diagnostic coverage (DC)", _pct(s.diagnosticCoverage)],
+    ...(s.pfdAvg1oo1 === null
+      ? []
+      : ([
+          ["proof-test interval T1", _hours(s.pfdAvg1oo1.proofTest.proofTestIntervalHours)],
+          ["MTTR / MRT", `${_hours(s.pfdAvg1oo1.proofTest.meanTimeToRestorationHours)} / ${_hours(s.pfdAvg1oo1.proofTest.meanRepairTimeHours)}`],
+          ["proof-test coverage (PTC)", _pct(s.proofTestCoverage)],
+          ...(s.pfdAvg1oo1.proofTest.missionTimeHours !== null ? [["mission time T_M", _hours(s.pfdAvg1oo1.proofTest.missionTimeHours)] as [string, string]] : []),
+          ["PFDavg (1oo1)", _exp(s.pfdAvg1oo1.pfdAvg)],
+          ["PFH (1oo1)", `${_exp(s.pfh1oo1?.pfhPerHour ?? 0)} /h`],
+        ] as [string, string][])),
+  ];
+}
+
+/** @internal The figures of a pair as label/value pairs. */
+export function _pairEntries(t: TwoChannelCutout): [string, string][] {
+  return [
+    [`PFDavg ${t.channelA.name} alone (1oo1)`, _exp(t.channelA.pfdAvg1oo1)],
+    [`PFDavg ${t.channelB.name} alone (1oo1)`, _exp(t.channelB.pfdAvg1oo1)],
+    ["β / β_D", `${_pct(t.beta)} / ${_pct(t.betaD)}`],
+    ["PFDavg pair (1oo2)", _exp(t.pfdAvg1oo2)],
+    ["  independent term", _exp(t.independentPfd)],
+    ["  common-cause term", _exp(t.commonCausePfd)],
+    ["common-cause share of the pair", _pct(t.commonCauseShare)],
+    ["PFH pair (1oo2)", `${_exp(t.pfh1oo2PerHour)} /h`],
+    ["second channel buys (better single / pair)", _times(t.improvementFactor)],
+    ["... with no common cause (β = β_D = 0)", _times(t.improvementFactorWithoutCommonCause)],
+  ];
+}
+
+/** @internal Checks that a value looks like a safety-figures report. */
+export function _checkSafetyReport(report: unknown, context: string): SafetyFiguresReport {
+  const r = report as Partial<SafetyFiguresReport> | null;
+  const ok = typeof r === "object" && r !== null && Array.isArray(r.setpoints) && Array.isArray(r.twoChannel) && Array.isArray(r.curves);
+  if (!ok) _invalidChoice("report", report, ["a safety-figures report"], context);
+  return report as SafetyFiguresReport;
+}

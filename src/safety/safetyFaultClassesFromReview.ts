@@ -1,0 +1,71 @@
+/**
+ * Reads a setpoint's single-fault review as classified faults for the safety figures, reclassifying each
+ * fault with the healthy worst-case band.
+ * @module
+ */
+import { _invalidChoice } from "../errors.js";
+import type { FaultReview, FaultReviewRow } from "../faults/types.js";
+import { classifyFaultShift, defaultNoEffectThresholdC } from "./classifyFaultShift.js";
+import type { SetpointFaultClasses } from "./types.js";
+
+/** The parts of a fault review the safety figures read (a {@link FaultReview} has them). */
+export interface FaultReviewForSafety {
+  readonly name: string;
+  readonly healthyTripC: number;
+  readonly maxNormalOperatingC: number;
+  readonly hazardLimitC: number;
+  readonly rows: readonly Pick<FaultReviewRow, "faultId" | "effect" | "shiftC" | "detected">[];
+}
+
+/** Options of {@link safetyFaultClassesFromReview}. */
+export interface SafetyFaultClassesFromReviewOptions {
+  /** Healthy worst-case trip band of this setpoint, °C. Default the nominal healthy trip (zero width). */
+  readonly healthyBandC?: { readonly lowC: number; readonly highC: number };
+  /** Shift below which a fault is "no effect", °C. Default 3. */
+  readonly noEffectThresholdC?: number;
+}
+
+/**
+ * The classified faults of one setpoint: each row of the review moved by its shift against the healthy
+ * worst-case band ({@link classifyFaultShift}); detection as the review found it. A row that never trips is
+ * dangerous; one that trips immediately is safe.
+ * @param review - a {@link FaultReview} (or any object with its name, limits and rows)
+ * @param options - healthy worst-case band °C, no-effect threshold °C
+ * @returns name, faults (id, safety, detected, shift °C, margin °C) and the threshold used
+ * @throws HotjunctionRangeError when `review.rows` is not an array; as {@link classifyFaultShift} for bad limits
+ * @example
+ * ```ts
+ * import { safetyFaultClassesFromReview } from "hotjunction";
+ * const review = {
+ *   name: "kiln", healthyTripC: 252, maxNormalOperatingC: 230, hazardLimitC: 280,
+ *   rows: [
+ *     { faultId: "reference.driftedLow", effect: "trips-late" as const, shiftC: 24, detected: false },
+ *     { faultId: "thermocouple.open", effect: "trips-immediately" as const, shiftC: -227, detected: true },
+ *   ],
+ * };
+ * const nominal = safetyFaultClassesFromReview(review);
+ * const worstCase = safetyFaultClassesFromReview(review, { healthyBandC: { lowC: 248, highC: 256 } });
+ * console.log(nominal.faults[0]?.safety, worstCase.faults[0]?.safety); // "degraded" "dangerous"
+ * console.log(worstCase.faults[1]?.safety, worstCase.faults[1]?.detected); // "safe" true
+ * ```
+ */
+export function safetyFaultClassesFromReview(review: FaultReviewForSafety | FaultReview, options: SafetyFaultClassesFromReviewOptions = {}): SetpointFaultClasses {
+  if (typeof review !== "object" || review === null || !Array.isArray(review.rows)) {
+    _invalidChoice("review", review, ["a fault review with rows"], "safetyFaultClassesFromReview");
+  }
+  const band = options.healthyBandC ?? { lowC: review.healthyTripC, highC: review.healthyTripC };
+  let threshold = defaultNoEffectThresholdC;
+  const faults = review.rows.map((row) => {
+    const c = classifyFaultShift({
+      shiftC: row.effect === "never-trips" ? null : row.shiftC,
+      tripsImmediately: row.effect === "trips-immediately",
+      healthyBandC: band,
+      maxNormalOperatingC: review.maxNormalOperatingC,
+      hazardLimitC: review.hazardLimitC,
+      ...(options.noEffectThresholdC !== undefined ? { noEffectThresholdC: options.noEffectThresholdC } : {}),
+    });
+    threshold = c.noEffectThresholdC;
+    return { faultId: row.faultId, safety: c.safety, detected: row.detected, shiftC: row.shiftC, marginC: c.marginC };
+  });
+  return { name: review.name, faults, noEffectThresholdC: threshold };
+}

@@ -36,6 +36,7 @@ const requiredFiles = [
   "dist/design.d.ts",
   "dist/design.d.cts",
   "dist/cli.js",
+  "dist/workbench.html",
 ];
 
 /** Paths that must never be published, with the reason given on failure. */

@@ -17,6 +17,7 @@ import { registerSweepCommand } from "./commands/sweep.js";
 import { registerTableCommand } from "./commands/table.js";
 import { registerValidateCommand } from "./commands/validate.js";
 import { registerFaultsCommand } from "./commands/faults.js";
+import { registerWorkbenchCommand } from "./commands/workbench.js";
 import { _packageVersion } from "./version.js";
 
 /** What every command registration receives. */
@@ -63,6 +64,7 @@ export function _createProgram(io: CliIo): Command {
     registerSweepCommand,
     registerFaultsCommand,
     registerSchemaCommand,
+    registerWorkbenchCommand,
   ];
   for (const register of registrations) {
     const command = register(program, context);

@@ -144,7 +144,7 @@ export function ageingBandAt(element: AgeingElement, hours: number): AgeingBandP
     });
   }
   const d = (a.totalC * h) / a.serviceHours;
-  return { hours: h, lowC: a.direction === "up" ? 0 : -d, highC: a.direction === "down" ? 0 : d };
+  return { hours: h, lowC: a.direction === "up" || d === 0 ? 0 : -d, highC: a.direction === "down" ? 0 : d };
 }
 
 /**

@@ -160,6 +160,11 @@ export interface LoopResistanceElement {
   readonly thermocoupleOhms?: number;
   /** Loop resistance of the extension or compensating cable, both conductors, Ω (≥ 0). Default 0. */
   readonly cableOhms?: number;
+  /**
+   * An extension-grade cable by gauge and length (the thermocouple's own alloys); or give `cableOhms`.
+   * Compensating cables are of other alloys: give their `cableOhms`.
+   */
+  readonly cableWire?: ThermocoupleWireRun;
   /** Other series resistance in the loop (filter resistors), Ω (≥ 0). Default 0. */
   readonly otherOhms?: number;
   /** Tolerance of the loop resistance, ± fraction. Default 0. */

@@ -63,6 +63,9 @@ describe("loop resistance and currents", () => {
     const r = loopResistanceOhms({ kind: "loopResistance", thermocoupleWire: { lengthMetres: 10, diameterMm: 0.8128 }, cableOhms: 3, otherOhms: 1 }, "K");
     expect(r.totalOhms).toBeCloseTo(r.thermocoupleOhms + 4, 12);
     expect(r.thermocoupleOhms).toBeCloseTo((10 * (70.6 + 29.4) * 1e-8) / ((Math.PI * 0.8128e-3 ** 2) / 4), 9);
+    // An extension-grade cable by gauge: the same alloys, so 20 m of 20 AWG KX is twice 10 m of 20 AWG K wire.
+    const c = loopResistanceOhms({ kind: "loopResistance", thermocoupleWire: { lengthMetres: 10, awg: 20 }, cableWire: { lengthMetres: 20, awg: 20 } }, "K");
+    expect(c.cableOhms).toBeCloseTo(2 * c.thermocoupleOhms, 12);
   });
 
   it("a long thin thermocouple makes the detection offset dominate: 30 m of 0.2 mm type K with 1 µA pull-up is > 20 °C (Ohm's law, ITS-90 S)", () => {

@@ -8,6 +8,20 @@
  */
 export type * from "../wireTypes.js";
 export {
+  astmExtensionWireTolerances,
+  iecCableTolerances,
+  type CableToleranceEntry,
+  type CableToleranceTable,
+} from "../../data/cableTolerances.js";
+export {
+  contactMetals,
+  thermocoupleLegs,
+  wireAlloySource,
+  type ContactMetalName,
+  type ThermocoupleLegs,
+  type WireAlloy,
+} from "../../data/wireAlloys.js";
+export {
   cableMismatchBound,
   cableTipErrorC,
   cableToleranceMicrovolts,

@@ -62,21 +62,21 @@ export function thermocoupleLoopOhmsPerMetre(type: ThermocoupleType, diameterMm:
   return rho / area;
 }
 
-function wireRunOhms(type: ThermocoupleType, run: ThermocoupleWireRun, context: string): number {
-  const o = _requireObject(run, "thermocoupleWire", context);
-  const length = requireNonNegativeValue(o["lengthMetres"], "thermocoupleWire.lengthMetres", "m", context);
+function wireRunOhms(type: ThermocoupleType, run: ThermocoupleWireRun, context: string, key: string): number {
+  const o = _requireObject(run, key, context);
+  const length = requireNonNegativeValue(o["lengthMetres"], `${key}.lengthMetres`, "m", context);
   const hasD = o["diameterMm"] !== undefined;
   const hasAwg = o["awg"] !== undefined;
   if (hasD === hasAwg) {
     throw new HotjunctionRangeError({
       code: "INVALID_DESIGN",
-      quantity: "thermocoupleWire.diameterMm / thermocoupleWire.awg",
+      quantity: `${key}.diameterMm / ${key}.awg`,
       value: hasD ? "both" : undefined,
       context,
       problem: hasD ? "are both given; give the gauge one way" : "is missing: give the wire's diameter or AWG",
     });
   }
-  const d = hasD ? _requirePositive(o["diameterMm"], "thermocoupleWire.diameterMm", "mm", context) : awgDiameterMm(o["awg"] as number);
+  const d = hasD ? _requirePositive(o["diameterMm"], `${key}.diameterMm`, "mm", context) : awgDiameterMm(o["awg"] as number);
   return thermocoupleLoopOhmsPerMetre(type, d) * length;
 }
 
@@ -106,11 +106,12 @@ export interface LoopResistance {
 }
 
 /**
- * The loop resistance of a loop element: thermocouple wire (by gauge and length, or given) + cable + other.
+ * The loop resistance of a loop element: thermocouple wire (by gauge and length, or given) + cable (an
+ * extension-grade cable by gauge and length, or given) + other.
  * @param element - loop element
  * @param type - thermocouple type letter (for the wire's alloys)
  * @returns the parts and the total, Ω
- * @throws HotjunctionRangeError for a negative length or resistance, a missing or doubled gauge
+ * @throws HotjunctionRangeError for a negative length or resistance, a missing or doubled gauge or resistance
  * @example
  * ```ts
  * import { loopResistanceOhms } from "hotjunction";
@@ -134,9 +135,21 @@ export function loopResistanceOhms(element: LoopResistanceElement, type: Thermoc
     });
   }
   const thermocoupleOhms = hasWire
-    ? wireRunOhms(type, o["thermocoupleWire"] as ThermocoupleWireRun, context)
+    ? wireRunOhms(type, o["thermocoupleWire"] as ThermocoupleWireRun, context, "thermocoupleWire")
     : nonNegative(o["thermocoupleOhms"], "thermocoupleOhms", "Ω", context);
-  const cableOhms = nonNegative(o["cableOhms"], "cableOhms", "Ω", context);
+  if (o["cableWire"] !== undefined && o["cableOhms"] !== undefined) {
+    throw new HotjunctionRangeError({
+      code: "INVALID_DESIGN",
+      quantity: "cableWire / cableOhms",
+      value: "both",
+      context,
+      problem: "are both given; give the cable's resistance one way",
+    });
+  }
+  const cableOhms =
+    o["cableWire"] !== undefined
+      ? wireRunOhms(type, o["cableWire"] as ThermocoupleWireRun, context, "cableWire")
+      : nonNegative(o["cableOhms"], "cableOhms", "Ω", context);
   const otherOhms = nonNegative(o["otherOhms"], "otherOhms", "Ω", context);
   return { thermocoupleOhms, cableOhms, otherOhms, totalOhms: thermocoupleOhms + cableOhms + otherOhms };
 }

@@ -44,6 +44,32 @@ describe("wire properties", () => {
     );
   });
 
+  it("cable.tolerance: the envelope model's EMF limit contains the proportional model's for every junction and cold-end temperature (|k·ΔE| ≤ T(t_j) + T(t_cj))", () => {
+    fc.assert(
+      fc.property(fc.constantFrom(...cableTypes), fc.constantFrom(...tolerances), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (type, tol, f, g) => {
+        const s = cableToleranceStatement(type, "extension", tol);
+        const lo = Math.max(0, s.minC);
+        const tj = lo + f * (s.maxC - lo);
+        const tc = lo + g * (s.maxC - lo);
+        const build = (mismatch: "proportional" | "envelope") =>
+          _extensionCableStage(
+            { kind: "extensionCable", grade: "extension", tolerance: tol, runTemperatureC: { minC: lo, maxC: s.maxC }, junctionTemperatureC: { minC: tj, maxC: tj }, mismatch },
+            type,
+            { minC: tc, maxC: tc },
+            ctx,
+            "p",
+          );
+        const prop = build("proportional");
+        const env = build("envelope");
+        const pLim = prop.sources.find((x) => x.name === "cable.tolerance")?.limit ?? 0;
+        const eLim = env.sources.find((x) => x.name === "cable.tolerance")?.limit ?? 0;
+        const worstProp = Math.abs(prop.emfErrorMillivolts({ "cable.tolerance": pLim }, tc)) * 1000;
+        expect(worstProp).toBeLessThanOrEqual(eLim * (1 + 1e-12));
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   it("connector.*: a zero temperature difference across a connector adds none (law of intermediate metals)", () => {
     fc.assert(
       fc.property(

@@ -11,8 +11,13 @@
  * Between the points of the statement two models: `"proportional"` (default): the cable's EMF is
  * (1 + k)·[E(t_j) − E(t_cj)] with |k| ≤ k_max = min over the rated range of T(t)/|E(t)| (so the deviation from
  * 0 °C stays inside the tolerance everywhere); a cable with both ends at one temperature adds nothing (a
- * homogeneous conductor without a gradient makes no EMF). `"envelope"`: |ΔE| ≤ T(t_j) + T(t_cj), which the
- * statement alone guarantees (D(t_j) − D(t_cj) with |D| ≤ T at each end), for any shape of the deviation.
+ * homogeneous conductor without a gradient makes no EMF); it rests on that assumption about the deviation's
+ * shape. `"envelope"`: |ΔE| ≤ T(t_j) + T(t_cj), which the statement alone guarantees (D(t_j) − D(t_cj) with
+ * |D| ≤ T at each end), for any shape of the deviation. The proportional limit never exceeds the envelope
+ * (proof: |k|·|E(t_j) − E(t_cj)| ≤ k_max·(|E(t_j)| + |E(t_cj)|) ≤ T(t_j) + T(t_cj), as k_max ≤ T(t)/|E(t)| at
+ * every t of the rated range); tests/chain/wireProperties.test.ts checks it over many inputs. The designer's
+ * rule tol·S(t_cable)/S(t_tip) lies between the two; the proportional model meets it where the cable spans its
+ * rating point from 0 °C.
  * @module
  */
 import { astmExtensionWireTolerances, iecCableTolerances, type CableToleranceEntry } from "../../data/cableTolerances.js";

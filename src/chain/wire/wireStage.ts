@@ -11,6 +11,7 @@
  * @module
  */
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
+import { HotjunctionTypeError } from "../../errors.js";
 import { _compile, type CompiledType } from "../../its90/compiled.js";
 import { _emfFromTemperature } from "../../its90/engine.js";
 import { thermocoupleData } from "../../its90/resolveType.js";
@@ -71,7 +72,9 @@ export function _wireStage(
   const amb = _checkAmbient(ambient, context);
   const cable = w["cable"] === undefined ? undefined : _extensionCableStage(wire.cable as ExtensionCableElement, type, amb, ctx, `${context}, cable`);
   const list = w["connectors"] === undefined ? [] : (wire.connectors as readonly ConnectorElement[]);
-  if (!Array.isArray(list)) _requireObject(undefined, "connectors (an array)", context);
+  if (!Array.isArray(list)) {
+    throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "connectors", value: list, context, problem: "is not an array" });
+  }
   const connectors = list.map((c, i) =>
     _connectorStage(c, type, amb, ctx, `${context}, connector ${i + 1}`, list.length === 1 ? "connector" : `connector${i + 1}`),
   );

@@ -68,6 +68,8 @@ describe("wire bad input", () => {
     expect([d.code, d.quantity]).toEqual(["INVALID_DESIGN", "connector.positiveLegDifferenceC / connector.negativeLegDifferenceC"]);
     const t = caught(() => wireErrorSources({ connectors: [{ kind: "connector", arrangement: "inline", contactMetal: "copper", positiveLegDifferenceC: 1, negativeLegDifferenceC: 1 }] }, "K", amb, 800));
     expect([t.code, t.quantity, t.min, t.max]).toEqual(["INVALID_DESIGN", "connector.temperatureC", -20, 100]);
+    const neg = caught(() => wireErrorSources({ connectors: [{ kind: "connector", arrangement: "inline", contactMetal: "matching", positiveLegDifferenceC: -1 }] }, "K", amb, 800));
+    expect([neg.code, neg.quantity, neg.value, neg.min]).toEqual(["OUT_OF_RANGE", "positiveLegDifferenceC", -1, 0]);
     const hot = caught(() => wireErrorSources({ connectors: [{ kind: "connector", arrangement: "inline", contactMetal: "copper", temperatureC: { minC: 20, maxC: 150 }, positiveLegDifferenceC: 1, negativeLegDifferenceC: 1 }] }, "K", amb, 800));
     expect([hot.code, hot.quantity, hot.value, hot.min, hot.max]).toEqual(["OUT_OF_RANGE", "connector temperature", 150, -20, 100]);
   });

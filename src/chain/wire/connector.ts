@@ -214,7 +214,12 @@ export function _connectorStage(
     };
   }
   if (o["arrangement"] === "inline") {
-    if (metal === "matching") return { sources, arrangement: "inline", emfErrorMillivolts: () => 0 };
+    if (metal === "matching") {
+      // Checked even though a matching alloy makes them irrelevant: a negative ± limit is still a typo.
+      _optionalLimit(o["positiveLegDifferenceC"], "positiveLegDifferenceC", "°C", context);
+      _optionalLimit(o["negativeLegDifferenceC"], "negativeLegDifferenceC", "°C", context);
+      return { sources, arrangement: "inline", emfErrorMillivolts: () => 0 };
+    }
     if (o["positiveLegDifferenceC"] === undefined && o["negativeLegDifferenceC"] === undefined) {
       throw new HotjunctionRangeError({
         code: "INVALID_DESIGN",

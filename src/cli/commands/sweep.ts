@@ -62,7 +62,10 @@ export function registerSweepCommand(program: Command, context: CommandContext):
   _addOutputOptions(command, ["json", "markdown", "csv"], true);
   command.action(async (path: string, options: SweepOptions) => {
     if (options.to < options.from) throw new CliError(`--to (${options.to}) is below --from (${options.from})`);
-    const count = Math.floor((options.to - options.from) / options.step + 1e-9) + 1;
+    // (to − from) / step carries the rounding of to − from, relative to the larger magnitude: a step that lands on
+    // --to within that rounding still reaches it.
+    const slack = (8 * Number.EPSILON * Math.max(Math.abs(options.from), Math.abs(options.to))) / options.step + 1e-9;
+    const count = Math.floor((options.to - options.from) / options.step + slack) + 1;
     if (count > maxSweepPoints) throw new CliError(`the sweep has ${count} points; at most ${maxSweepPoints} (use a larger --step)`);
     const format = _chosenFormat(options);
     const smallest = _smallestSweepStepC(options.from, options.to, format);

@@ -81,7 +81,7 @@ export function registerTableCommand(program: Command, context: CommandContext):
     .addHelpText(
       "after",
       "\nExamples:\n  hotjunction table K --kind emfToTemperature --from 0 --to 1200 --max-error 0.05 --out tc_k.h\n" +
-        "  hotjunction table K --kind adcCodeToTemperature --from 0 --to 400 --max-error 0.1 --gain 100 --reference-volts 2.5 --bits 16 --cold-junction 25 --format csv\n",
+        "  hotjunction table K --kind adcCodeToTemperature --from 25 --to 400 --max-error 0.1 --gain 100 --reference-volts 2.5 --bits 16 --cold-junction 25 --format csv\n",
     )
     .action(async (type: ThermocoupleType, options: TableOptions) => {
       const adcKind = options.kind === "adcCodeToTemperature" || options.kind === "temperatureToAdcCode";

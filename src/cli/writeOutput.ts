@@ -14,6 +14,7 @@
  * @module
  */
 import {
+  chmodSync,
   closeSync,
   constants,
   fstatSync,
@@ -312,6 +313,12 @@ function commitOne(entry: OutputContent, temp: string, existed: boolean, force: 
     closeSync(fd);
     renameSync(temp, target);
     return { target, backup: undefined };
+  }
+  // The replacement keeps the permission bits of the file it replaces.
+  try {
+    chmodSync(temp, statSync(target).mode & 0o7777);
+  } catch {
+    // The default mode of a new file is kept.
   }
   let backup: string | undefined = temporaryName(target, "old");
   try {

@@ -8,6 +8,7 @@
  */
 import { execFileSync, spawnSync } from "node:child_process";
 import {
+  chmodSync,
   copyFileSync,
   existsSync,
   lstatSync,
@@ -59,6 +60,18 @@ function expectUntouched(dir: string, before: Map<string, string>): void {
 const refTableArgs = ["ref-table", "K", "--from", "-270", "--to", "1372", "--step", "1", "--csv"];
 
 describe("output writes under faults", () => {
+  it("--force replaces a regular file whole and keeps its permission bits", async () => {
+    const dir = tempDir();
+    writeFileSync(join(dir, "e.txt"), "old\n", { mode: 0o640 });
+    chmodSync(join(dir, "e.txt"), 0o640);
+    const result = await run(["emf", "K", "500", "--out", "e.txt", "--force"], dir);
+    expect(result.code).toBe(0);
+    expect(result.stderr).toBe("hotjunction: wrote e.txt\n");
+    expect(readFileSync(join(dir, "e.txt"), "utf8")).toBe("type K at 500 °C, cold junction 0 °C: 20.644 mV\n");
+    expect(statSync(join(dir, "e.txt")).mode & 0o777).toBe(0o640);
+    expect(readdirSync(dir)).toEqual(["e.txt"]);
+  });
+
   it("short writes are completed by the write loop (5 bytes per call): the file is whole", async () => {
     const dir = tempDir();
     const plain = await run([...refTableArgs, "--out", "plain.csv"], dir);

@@ -67,8 +67,17 @@ export interface _CompiledChain {
   readonly fixedSources: readonly ChainErrorSource[];
 }
 
+/**
+ * @internal Stages already built for the chain's own elements, used instead of building them again (so a
+ * source is computed once on its way from the design file to the trip band). A prebuilt stage must come
+ * from the same element, ambient and `sourceDistributions` as the chain.
+ */
+export interface _PrebuiltStages {
+  readonly reference?: _ReferenceStage;
+}
+
 /** @internal Compiles and checks a chain. */
-export function _compileChain(chain: MeasurementChain): _CompiledChain {
+export function _compileChain(chain: MeasurementChain, prebuilt?: _PrebuiltStages): _CompiledChain {
   const context = "measurement chain";
   const o = _requireObject(chain, "chain", context);
   const thermocouple = _checkThermocouple(o["thermocouple"], `${context}, thermocouple`);
@@ -114,7 +123,7 @@ export function _compileChain(chain: MeasurementChain): _CompiledChain {
   const reference =
     o["reference"] === undefined
       ? undefined
-      : _referenceStage(o["reference"] as ReferenceElement, ambient, ctx, `${context}, reference`);
+      : (prebuilt?.reference ?? _referenceStage(o["reference"] as ReferenceElement, ambient, ctx, `${context}, reference`));
 
   const det = _requireObject(o["detector"], "detector", context);
   let comparator: _ComparatorStage | undefined;
@@ -251,10 +260,17 @@ export function _meansRecord(sources: readonly ChainErrorSource[]): Record<strin
   return out;
 }
 
-/** @internal Record of every source at 0 deviation (the ambient at its center): for nominal designs. */
-export function _zeroRecord(cc: _CompiledChain, sources: readonly ChainErrorSource[]): Record<string, number> {
+/**
+ * @internal Record of every source at 0 deviation, the ambient (when an input) at `coldJunctionC` (default
+ * the center of its range): for nominal designs.
+ */
+export function _zeroRecord(
+  cc: _CompiledChain,
+  sources: readonly ChainErrorSource[],
+  coldJunctionC: number = cc.ambientCenterC,
+): Record<string, number> {
   const out: Record<string, number> = {};
-  for (const s of sources) out[s.name] = s.name === _ambientInputName ? cc.ambientCenterC : 0;
+  for (const s of sources) out[s.name] = s.name === _ambientInputName ? coldJunctionC : 0;
   return out;
 }
 

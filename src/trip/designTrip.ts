@@ -8,7 +8,7 @@ import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors
 import type { DividerElement, MeasurementChain, ReferenceElement } from "../chain/types.js";
 import { propagate } from "../uncertainty/propagate.js";
 import type { PropagationMethod, PropagationResult } from "../uncertainty/types.js";
-import { realizeReference } from "./realizeReference.js";
+import { _realizeReference } from "./realizeReference.js";
 import { selectDividerPair } from "./selectDividerPair.js";
 import { selectLadder } from "./selectLadder.js";
 import { _requireSeries } from "./standardResistorValues.js";
@@ -336,11 +336,13 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
 
   const { networks, place, notes } = planNetworks(design, plans, volts, options.networks);
   const dividerCurrentMilliamps = networks.reduce((sum, n) => sum + n.currentMilliamps, 0);
-  const realized = realizeReference(design.reference, design.ambient, {
-    dividerCurrentMilliamps,
-    resistorSeries: design.resistors.series,
-    resistorToleranceFraction: resistorTolerance,
-  });
+  // The reference's sources are computed once, here, and every threshold network's chain reuses them.
+  const realized = _realizeReference(
+    design.reference,
+    design.ambient,
+    { dividerCurrentMilliamps, resistorSeries: design.resistors.series, resistorToleranceFraction: resistorTolerance },
+    { overrides: design.sourceDistributions },
+  );
 
   const chains: TripChain[] = networks.map((n) => {
     const divider: DividerElement = {
@@ -350,7 +352,7 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
       ...(design.resistors.tempcoPpmPerC !== undefined ? { tempcoPpmPerC: design.resistors.tempcoPpmPerC } : {}),
       ...(design.resistors.matched !== undefined ? { matched: design.resistors.matched } : {}),
     };
-    return buildTripChain(design, realized.element, divider);
+    return buildTripChain(design, realized.element, divider, { reference: realized.stage });
   });
 
   const results: SetpointTripResult[] = plans.map((plan, i) => {

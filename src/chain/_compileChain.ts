@@ -292,15 +292,35 @@ export function _adcFullScale(cc: _CompiledChain, x: Inputs): number {
   return cc.adcUsesReference ? (cc.reference as _ReferenceStage).volts(x) : cc.adcFullScaleVolts;
 }
 
+/**
+ * @internal First node of the signal path: the thermocouple's EMF at the terminals, E(t_h + ε) − E(t_c), with
+ * ε the thermocouple tolerance in the source values (0 when it is no source), mV.
+ */
+export function _junctionEmfMillivolts(cc: _CompiledChain, hotJunctionC: number, x: Inputs, coldJunctionC: number): number {
+  return _emfFromTemperature(cc.ct, hotJunctionC + _toleranceValue(x)) - _emfFromTemperature(cc.ct, coldJunctionC);
+}
+
+/** @internal Second node: the hardware compensation voltage added before the amplifier (0 without one), mV. */
+export function _compensationMillivolts(cc: _CompiledChain, x: Inputs, coldJunctionC: number): number {
+  const cj = cc.coldJunction;
+  return cj !== undefined && cj.method === "hardware" ? cj.compensationMillivolts(x, coldJunctionC) : 0;
+}
+
+/**
+ * @internal Third node: the front end's output for its input (thermocouple EMF, plus the compensation before
+ * a voltage amplifier), with the amplifier's gain and offset or the fixed-scale transfer; no rails, V.
+ */
+export function _frontEndVolts(cc: _CompiledChain, inputMillivolts: number, x: Inputs, coldJunctionC: number): number {
+  if (cc.fixedScale !== undefined) return cc.fixedScale.outputMillivolts(x, inputMillivolts, coldJunctionC) / 1000;
+  return (cc.amplifier.gain(x) * (inputMillivolts + cc.amplifier.inputOffsetMillivolts(x))) / 1000;
+}
+
 /** @internal Detector-input voltage at a hot-junction temperature for the source values, V. */
 export function _signalVolts(cc: _CompiledChain, hotJunctionC: number, x: Inputs): number {
   const tc = _coldJunctionC(cc, x);
-  const eps = _toleranceValue(x);
-  let emf = _emfFromTemperature(cc.ct, hotJunctionC + eps) - _emfFromTemperature(cc.ct, tc);
-  if (cc.fixedScale !== undefined) return cc.fixedScale.outputMillivolts(x, emf, tc) / 1000;
-  const cj = cc.coldJunction as _ColdJunctionStage;
-  if (cj.method === "hardware") emf += cj.compensationMillivolts(x, tc);
-  return (cc.amplifier.gain(x) * (emf + cc.amplifier.inputOffsetMillivolts(x))) / 1000;
+  let emf = _junctionEmfMillivolts(cc, hotJunctionC, x, tc);
+  if (cc.coldJunction?.method === "hardware") emf += cc.coldJunction.compensationMillivolts(x, tc);
+  return _frontEndVolts(cc, emf, x, tc);
 }
 
 /** @internal Unrounded ADC code for a detector-input voltage. */

@@ -70,6 +70,33 @@ export function _requirePositive(value: unknown, quantity: string, unit: string,
   return x;
 }
 
+/**
+ * @internal A finite number strictly above `bound` (equal is refused): e.g. a hazard limit above the highest
+ * normal operating temperature, or a rail above the other rail.
+ */
+export function _requireGreaterThan(
+  value: unknown,
+  bound: number,
+  quantity: string,
+  boundName: string,
+  unit: string | undefined,
+  context: string,
+): number {
+  const x = _requireFinite(value, quantity, unit, context);
+  if (!(x > bound)) {
+    const u = unit === undefined || unit === "" ? "" : ` ${unit}`;
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: x,
+      unit,
+      context,
+      problem: `is not above ${boundName} ${bound}${u}; valid range: more than ${bound}${u}`,
+    });
+  }
+  return x;
+}
+
 /** @internal Optional ± limit, default 0. */
 export function _optionalLimit(value: unknown, quantity: string, unit: string, context: string): number {
   return value === undefined ? 0 : _requireNonNegative(value, quantity, unit, context);

@@ -125,6 +125,75 @@ export function _compileChain(chain: MeasurementChain, prebuilt?: _PrebuiltStage
       ? undefined
       : (prebuilt?.reference ?? _referenceStage(o["reference"] as ReferenceElement, ambient, ctx, `${context}, reference`));
 
+  const { comparator, adc, divider, adcFullScaleVolts, adcUsesReference } = detectorStages(o, reference, coldJunction, ambient, ctx, context);
+
+  const ambientCenterC = (ambient.minC + ambient.maxC) / 2;
+  const hasAmbientInput = ambient.maxC > ambient.minC;
+  const ambientSource: ChainErrorSource | undefined = hasAmbientInput
+    ? {
+        name: _ambientInputName,
+        element: "ambient",
+        description: "cold-junction (terminal) temperature anywhere in the ambient range",
+        unit: "°C",
+        limit: (ambient.maxC - ambient.minC) / 2,
+        distribution: rectangular({ lower: ambient.minC, upper: ambient.maxC }),
+      }
+    : undefined;
+  // Every temperature the cold junction can take must be inside the type's range.
+  _emfFromTemperature(ct, ambient.minC);
+  _emfFromTemperature(ct, ambient.maxC);
+
+  const fixedSources: ChainErrorSource[] = [
+    ...(coldJunction?.sources ?? []),
+    ...amplifier.sources,
+    ...(fixedScale?.sources ?? []),
+    ...(reference?.sources ?? []),
+    ...(divider?.sources ?? []),
+    ...(comparator?.sources ?? []),
+    ...(adc?.sources ?? []),
+  ];
+  if (ambientSource !== undefined) fixedSources.push(ambientSource);
+  checkOverrideNames(chain, fixedSources, context);
+
+  return {
+    chain,
+    context,
+    type,
+    ct,
+    thermocouple,
+    ambient,
+    ctx,
+    coldJunction,
+    amplifier,
+    fixedScale,
+    reference,
+    divider,
+    comparator,
+    adc,
+    adcFullScaleVolts,
+    adcUsesReference,
+    hasAmbientInput,
+    ambientSource,
+    ambientCenterC,
+    fixedSources,
+  };
+}
+
+/** The detector's stages (comparator with its divider, or ADC with its full scale), checked against the chain. */
+function detectorStages(
+  o: Record<string, unknown>,
+  reference: _ReferenceStage | undefined,
+  coldJunction: _ColdJunctionStage | undefined,
+  ambient: AmbientRange,
+  ctx: _SourceContext,
+  context: string,
+): {
+  comparator: _ComparatorStage | undefined;
+  adc: _AdcStage | undefined;
+  divider: _DividerStage | undefined;
+  adcFullScaleVolts: number;
+  adcUsesReference: boolean;
+} {
   const det = _requireObject(o["detector"], "detector", context);
   let comparator: _ComparatorStage | undefined;
   let adc: _AdcStage | undefined;
@@ -183,32 +252,11 @@ export function _compileChain(chain: MeasurementChain, prebuilt?: _PrebuiltStage
     _invalidChoice("detector kind", det["kind"], ["comparator", "adc"], context);
   }
 
-  const ambientCenterC = (ambient.minC + ambient.maxC) / 2;
-  const hasAmbientInput = ambient.maxC > ambient.minC;
-  const ambientSource: ChainErrorSource | undefined = hasAmbientInput
-    ? {
-        name: _ambientInputName,
-        element: "ambient",
-        description: "cold-junction (terminal) temperature anywhere in the ambient range",
-        unit: "°C",
-        limit: (ambient.maxC - ambient.minC) / 2,
-        distribution: rectangular({ lower: ambient.minC, upper: ambient.maxC }),
-      }
-    : undefined;
-  // Every temperature the cold junction can take must be inside the type's range.
-  _emfFromTemperature(ct, ambient.minC);
-  _emfFromTemperature(ct, ambient.maxC);
+  return { comparator, adc, divider, adcFullScaleVolts, adcUsesReference };
+}
 
-  const fixedSources: ChainErrorSource[] = [
-    ...(coldJunction?.sources ?? []),
-    ...amplifier.sources,
-    ...(fixedScale?.sources ?? []),
-    ...(reference?.sources ?? []),
-    ...(divider?.sources ?? []),
-    ...(comparator?.sources ?? []),
-    ...(adc?.sources ?? []),
-  ];
-  if (ambientSource !== undefined) fixedSources.push(ambientSource);
+/** Every `sourceDistributions` key must name a source of the chain (or the thermocouple tolerance). */
+function checkOverrideNames(chain: MeasurementChain, fixedSources: readonly ChainErrorSource[], context: string): void {
   const seen = new Set<string>();
   for (const s of fixedSources) seen.add(s.name);
   for (const name of Object.keys(chain.sourceDistributions ?? {})) {
@@ -224,28 +272,6 @@ export function _compileChain(chain: MeasurementChain, prebuilt?: _PrebuiltStage
     }
   }
 
-  return {
-    chain,
-    context,
-    type,
-    ct,
-    thermocouple,
-    ambient,
-    ctx,
-    coldJunction,
-    amplifier,
-    fixedScale,
-    reference,
-    divider,
-    comparator,
-    adc,
-    adcFullScaleVolts,
-    adcUsesReference,
-    hasAmbientInput,
-    ambientSource,
-    ambientCenterC,
-    fixedSources,
-  };
 }
 
 /** @internal All sources at a hot-junction temperature, in listing order. */

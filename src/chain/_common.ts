@@ -53,6 +53,8 @@ export function _requireNonNegative(value: unknown, quantity: string, unit: stri
   return x;
 }
 
+// Deliberate pair: _requireNonNegative and _requirePositive differ only in the bound and its wording; both
+// move with the other `_require*` helpers into src/errors.ts (one validator home, issue 10).
 /** @internal A finite number > 0. */
 export function _requirePositive(value: unknown, quantity: string, unit: string, context: string): number {
   const x = _requireFinite(value, quantity, unit, context);

@@ -207,6 +207,8 @@ export function tripTemperatureModel(
  * console.log(requiredThresholdVolts(chain, 50).toFixed(4)); // "0.2528"
  * ```
  */
+// The public entry points share a deliberate prologue (compile as a comparator chain, check tap and edge):
+// each validates its own arguments with its own context before reaching the internal API above.
 export function requiredThresholdVolts(
   chain: MeasurementChain,
   hotJunctionC: number,

@@ -40,6 +40,8 @@ const mitigationText = {
   supply: "a de-energise-to-trip output stage (loss of power trips)",
 } as const;
 
+// Deliberate repetition: faults are data, so each per-element list below is a run of fault literals of one
+// shape (id, element, description, effects, mitigation); the duplicate finder sees the shape, not a shared logic.
 /** Thermocouple: open, shorts, reversed, ground offsets. */
 function thermocoupleFaults(offsetMv: number, wireShortC: number | undefined): Fault[] {
   const faults: Fault[] = [];

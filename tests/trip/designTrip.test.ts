@@ -274,3 +274,15 @@ describe("designTrip and compareReferences: progress", () => {
     }
   });
 });
+
+describe("tripDesignFromDesign: an ADC design has no thresholds", () => {
+  it("throws a typed INVALID_DESIGN error (was a plain Error)", async () => {
+    const { readFileSync } = await import("node:fs");
+    const { parseDesign } = await import("../../src/design/parseDesign.js");
+    const { tripDesignFromDesign } = await import("../../src/design/designToObjects.js");
+    const design = parseDesign(readFileSync("examples/heated-enclosure-adc.json", "utf8"));
+    expect(() => tripDesignFromDesign(design)).toThrow(HotjunctionRangeError);
+    expect(() => tripDesignFromDesign(design)).toThrow(expect.objectContaining({ code: "INVALID_DESIGN", quantity: "comparator" }));
+    expect(() => tripDesignFromDesign(design)).toThrow(/an ADC design has no comparator thresholds to design/);
+  });
+});

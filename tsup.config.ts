@@ -17,6 +17,12 @@ export default defineConfig([
     banner: { js: "#!/usr/bin/env node" },
     sourcemap: false,
     clean: false,
+    // Each command's code (and the libraries only it uses) in its own chunk, loaded when that command runs, so
+    // `hotjunction emf K 500` does not load the schema library, the trip or fault code or the chart code.
+    splitting: true,
+    esbuildOptions(options) {
+      options.chunkNames = "cli/[name]-[hash]";
+    },
     target: "node20",
     platform: "node",
   },

@@ -53,6 +53,8 @@ export function _requireNonNegative(value: unknown, quantity: string, unit: stri
   return x;
 }
 
+// Deliberate pair: _requireNonNegative and _requirePositive differ only in the bound and its wording; both
+// move with the other `_require*` helpers into src/errors.ts (one validator home, issue 10).
 /** @internal A finite number > 0. */
 export function _requirePositive(value: unknown, quantity: string, unit: string, context: string): number {
   const x = _requireFinite(value, quantity, unit, context);
@@ -65,6 +67,33 @@ export function _requirePositive(value: unknown, quantity: string, unit: string,
       unit,
       context,
       problem: "is not positive",
+    });
+  }
+  return x;
+}
+
+/**
+ * @internal A finite number strictly above `bound` (equal is refused): e.g. a hazard limit above the highest
+ * normal operating temperature, or a rail above the other rail.
+ */
+export function _requireGreaterThan(
+  value: unknown,
+  bound: number,
+  quantity: string,
+  boundName: string,
+  unit: string | undefined,
+  context: string,
+): number {
+  const x = _requireFinite(value, quantity, unit, context);
+  if (!(x > bound)) {
+    const u = unit === undefined || unit === "" ? "" : ` ${unit}`;
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: x,
+      unit,
+      context,
+      problem: `is not above ${boundName} ${bound}${u}; valid range: more than ${bound}${u}`,
     });
   }
   return x;

@@ -67,8 +67,17 @@ export interface _CompiledChain {
   readonly fixedSources: readonly ChainErrorSource[];
 }
 
+/**
+ * @internal Stages already built for the chain's own elements, used instead of building them again (so a
+ * source is computed once on its way from the design file to the trip band). A prebuilt stage must come
+ * from the same element, ambient and `sourceDistributions` as the chain.
+ */
+export interface _PrebuiltStages {
+  readonly reference?: _ReferenceStage;
+}
+
 /** @internal Compiles and checks a chain. */
-export function _compileChain(chain: MeasurementChain): _CompiledChain {
+export function _compileChain(chain: MeasurementChain, prebuilt?: _PrebuiltStages): _CompiledChain {
   const context = "measurement chain";
   const o = _requireObject(chain, "chain", context);
   const thermocouple = _checkThermocouple(o["thermocouple"], `${context}, thermocouple`);
@@ -114,8 +123,77 @@ export function _compileChain(chain: MeasurementChain): _CompiledChain {
   const reference =
     o["reference"] === undefined
       ? undefined
-      : _referenceStage(o["reference"] as ReferenceElement, ambient, ctx, `${context}, reference`);
+      : (prebuilt?.reference ?? _referenceStage(o["reference"] as ReferenceElement, ambient, ctx, `${context}, reference`));
 
+  const { comparator, adc, divider, adcFullScaleVolts, adcUsesReference } = detectorStages(o, reference, coldJunction, ambient, ctx, context);
+
+  const ambientCenterC = (ambient.minC + ambient.maxC) / 2;
+  const hasAmbientInput = ambient.maxC > ambient.minC;
+  const ambientSource: ChainErrorSource | undefined = hasAmbientInput
+    ? {
+        name: _ambientInputName,
+        element: "ambient",
+        description: "cold-junction (terminal) temperature anywhere in the ambient range",
+        unit: "°C",
+        limit: (ambient.maxC - ambient.minC) / 2,
+        distribution: rectangular({ lower: ambient.minC, upper: ambient.maxC }),
+      }
+    : undefined;
+  // Every temperature the cold junction can take must be inside the type's range.
+  _emfFromTemperature(ct, ambient.minC);
+  _emfFromTemperature(ct, ambient.maxC);
+
+  const fixedSources: ChainErrorSource[] = [
+    ...(coldJunction?.sources ?? []),
+    ...amplifier.sources,
+    ...(fixedScale?.sources ?? []),
+    ...(reference?.sources ?? []),
+    ...(divider?.sources ?? []),
+    ...(comparator?.sources ?? []),
+    ...(adc?.sources ?? []),
+  ];
+  if (ambientSource !== undefined) fixedSources.push(ambientSource);
+  checkOverrideNames(chain, fixedSources, context);
+
+  return {
+    chain,
+    context,
+    type,
+    ct,
+    thermocouple,
+    ambient,
+    ctx,
+    coldJunction,
+    amplifier,
+    fixedScale,
+    reference,
+    divider,
+    comparator,
+    adc,
+    adcFullScaleVolts,
+    adcUsesReference,
+    hasAmbientInput,
+    ambientSource,
+    ambientCenterC,
+    fixedSources,
+  };
+}
+
+/** The detector's stages (comparator with its divider, or ADC with its full scale), checked against the chain. */
+function detectorStages(
+  o: Record<string, unknown>,
+  reference: _ReferenceStage | undefined,
+  coldJunction: _ColdJunctionStage | undefined,
+  ambient: AmbientRange,
+  ctx: _SourceContext,
+  context: string,
+): {
+  comparator: _ComparatorStage | undefined;
+  adc: _AdcStage | undefined;
+  divider: _DividerStage | undefined;
+  adcFullScaleVolts: number;
+  adcUsesReference: boolean;
+} {
   const det = _requireObject(o["detector"], "detector", context);
   let comparator: _ComparatorStage | undefined;
   let adc: _AdcStage | undefined;
@@ -174,32 +252,11 @@ export function _compileChain(chain: MeasurementChain): _CompiledChain {
     _invalidChoice("detector kind", det["kind"], ["comparator", "adc"], context);
   }
 
-  const ambientCenterC = (ambient.minC + ambient.maxC) / 2;
-  const hasAmbientInput = ambient.maxC > ambient.minC;
-  const ambientSource: ChainErrorSource | undefined = hasAmbientInput
-    ? {
-        name: _ambientInputName,
-        element: "ambient",
-        description: "cold-junction (terminal) temperature anywhere in the ambient range",
-        unit: "°C",
-        limit: (ambient.maxC - ambient.minC) / 2,
-        distribution: rectangular({ lower: ambient.minC, upper: ambient.maxC }),
-      }
-    : undefined;
-  // Every temperature the cold junction can take must be inside the type's range.
-  _emfFromTemperature(ct, ambient.minC);
-  _emfFromTemperature(ct, ambient.maxC);
+  return { comparator, adc, divider, adcFullScaleVolts, adcUsesReference };
+}
 
-  const fixedSources: ChainErrorSource[] = [
-    ...(coldJunction?.sources ?? []),
-    ...amplifier.sources,
-    ...(fixedScale?.sources ?? []),
-    ...(reference?.sources ?? []),
-    ...(divider?.sources ?? []),
-    ...(comparator?.sources ?? []),
-    ...(adc?.sources ?? []),
-  ];
-  if (ambientSource !== undefined) fixedSources.push(ambientSource);
+/** Every `sourceDistributions` key must name a source of the chain (or the thermocouple tolerance). */
+function checkOverrideNames(chain: MeasurementChain, fixedSources: readonly ChainErrorSource[], context: string): void {
   const seen = new Set<string>();
   for (const s of fixedSources) seen.add(s.name);
   for (const name of Object.keys(chain.sourceDistributions ?? {})) {
@@ -215,28 +272,6 @@ export function _compileChain(chain: MeasurementChain): _CompiledChain {
     }
   }
 
-  return {
-    chain,
-    context,
-    type,
-    ct,
-    thermocouple,
-    ambient,
-    ctx,
-    coldJunction,
-    amplifier,
-    fixedScale,
-    reference,
-    divider,
-    comparator,
-    adc,
-    adcFullScaleVolts,
-    adcUsesReference,
-    hasAmbientInput,
-    ambientSource,
-    ambientCenterC,
-    fixedSources,
-  };
 }
 
 /** @internal All sources at a hot-junction temperature, in listing order. */
@@ -251,10 +286,17 @@ export function _meansRecord(sources: readonly ChainErrorSource[]): Record<strin
   return out;
 }
 
-/** @internal Record of every source at 0 deviation (the ambient at its center): for nominal designs. */
-export function _zeroRecord(cc: _CompiledChain, sources: readonly ChainErrorSource[]): Record<string, number> {
+/**
+ * @internal Record of every source at 0 deviation, the ambient (when an input) at `coldJunctionC` (default
+ * the center of its range): for nominal designs.
+ */
+export function _zeroRecord(
+  cc: _CompiledChain,
+  sources: readonly ChainErrorSource[],
+  coldJunctionC: number = cc.ambientCenterC,
+): Record<string, number> {
   const out: Record<string, number> = {};
-  for (const s of sources) out[s.name] = s.name === _ambientInputName ? cc.ambientCenterC : 0;
+  for (const s of sources) out[s.name] = s.name === _ambientInputName ? coldJunctionC : 0;
   return out;
 }
 
@@ -276,15 +318,35 @@ export function _adcFullScale(cc: _CompiledChain, x: Inputs): number {
   return cc.adcUsesReference ? (cc.reference as _ReferenceStage).volts(x) : cc.adcFullScaleVolts;
 }
 
+/**
+ * @internal First node of the signal path: the thermocouple's EMF at the terminals, E(t_h + ε) − E(t_c), with
+ * ε the thermocouple tolerance in the source values (0 when it is no source), mV.
+ */
+export function _junctionEmfMillivolts(cc: _CompiledChain, hotJunctionC: number, x: Inputs, coldJunctionC: number): number {
+  return _emfFromTemperature(cc.ct, hotJunctionC + _toleranceValue(x)) - _emfFromTemperature(cc.ct, coldJunctionC);
+}
+
+/** @internal Second node: the hardware compensation voltage added before the amplifier (0 without one), mV. */
+export function _compensationMillivolts(cc: _CompiledChain, x: Inputs, coldJunctionC: number): number {
+  const cj = cc.coldJunction;
+  return cj !== undefined && cj.method === "hardware" ? cj.compensationMillivolts(x, coldJunctionC) : 0;
+}
+
+/**
+ * @internal Third node: the front end's output for its input (thermocouple EMF, plus the compensation before
+ * a voltage amplifier), with the amplifier's gain and offset or the fixed-scale transfer; no rails, V.
+ */
+export function _frontEndVolts(cc: _CompiledChain, inputMillivolts: number, x: Inputs, coldJunctionC: number): number {
+  if (cc.fixedScale !== undefined) return cc.fixedScale.outputMillivolts(x, inputMillivolts, coldJunctionC) / 1000;
+  return (cc.amplifier.gain(x) * (inputMillivolts + cc.amplifier.inputOffsetMillivolts(x))) / 1000;
+}
+
 /** @internal Detector-input voltage at a hot-junction temperature for the source values, V. */
 export function _signalVolts(cc: _CompiledChain, hotJunctionC: number, x: Inputs): number {
   const tc = _coldJunctionC(cc, x);
-  const eps = _toleranceValue(x);
-  let emf = _emfFromTemperature(cc.ct, hotJunctionC + eps) - _emfFromTemperature(cc.ct, tc);
-  if (cc.fixedScale !== undefined) return cc.fixedScale.outputMillivolts(x, emf, tc) / 1000;
-  const cj = cc.coldJunction as _ColdJunctionStage;
-  if (cj.method === "hardware") emf += cj.compensationMillivolts(x, tc);
-  return (cc.amplifier.gain(x) * (emf + cc.amplifier.inputOffsetMillivolts(x))) / 1000;
+  let emf = _junctionEmfMillivolts(cc, hotJunctionC, x, tc);
+  if (cc.coldJunction?.method === "hardware") emf += cc.coldJunction.compensationMillivolts(x, tc);
+  return _frontEndVolts(cc, emf, x, tc);
 }
 
 /** @internal Unrounded ADC code for a detector-input voltage. */

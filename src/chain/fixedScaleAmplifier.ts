@@ -77,6 +77,7 @@ export function _fixedScaleStage(
   const alpha = trimmedMillivoltsPerC(o, ct, context);
   const accuracy = _optionalLimit(o["accuracyC"], "accuracyC", "°C", context);
   const gradient = _optionalLimit(o["isothermalGradientC"], "isothermalGradientC", "°C", context);
+  // Same shape as the cold junction's sensor/gradient sources (deliberate: each element names its own sources).
   const sources: ChainErrorSource[] = [];
   if (accuracy > 0) {
     sources.push(_source(ctx, "fixedScaleAmplifier.accuracy", "fixedScaleAmplifier", "stated accuracy of the part", "°C", accuracy));

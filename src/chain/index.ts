@@ -57,3 +57,4 @@ export {
   tripTemperatureModel,
   type TripTemperatureModelOptions,
 } from "./tripTemperatureModel.js";
+export * from "./wire/index.js";

@@ -15,7 +15,7 @@ import {
   _source,
   type _SourceContext,
 } from "./_common.js";
-import type { AmbientRange, ChainErrorSource, DriftScaling, SeriesReference, TempcoMethod } from "./types.js";
+import type { AmbientRange, ChainErrorSource, DriftScaling, SeriesReference, ShuntReference, TempcoMethod } from "./types.js";
 
 /**
  * Box-method temperature coefficient from the extremes of the output over a temperature range:
@@ -119,6 +119,29 @@ export function _regulationExcursion(
   return spec * Math.max(Math.abs(max - rated), Math.abs(min - rated));
 }
 
+/** @internal Adds a reference source `reference.<name>` (± fraction of the output) when its limit is > 0. */
+export type _AddReferenceSource = (name: string, description: string, limit: number) => void;
+
+/**
+ * @internal The sources every reference variant with a data sheet has (series and shunt): initial accuracy
+ * and tempco over the ambient range. Returns the list and its adder for the variant's own sources.
+ */
+export function _accuracyAndTempcoSources(
+  element: SeriesReference | ShuntReference,
+  ambient: AmbientRange,
+  ctx: _SourceContext,
+  context: string,
+): { out: ChainErrorSource[]; add: _AddReferenceSource } {
+  const out: ChainErrorSource[] = [];
+  const add: _AddReferenceSource = (name, description, limit) => {
+    if (limit > 0) out.push(_source(ctx, `reference.${name}`, "reference", description, "fraction", limit));
+  };
+  add("initialAccuracy", "initial accuracy at 25 °C", _requireFraction(element.initialAccuracyFraction, "initialAccuracyFraction", context));
+  const tc = _optionalLimit(element.tempcoPpmPerC, "tempcoPpmPerC", "ppm/°C", context);
+  add("tempco", "tempco over the ambient range", tempcoExcursionPpm(tc, ambient, element.tempcoMethod ?? "box") / 1e6);
+  return { out, add };
+}
+
 /** @internal Sources of a series reference (± fractions of the output). */
 export function _seriesReferenceSources(
   element: SeriesReference,
@@ -126,13 +149,7 @@ export function _seriesReferenceSources(
   ctx: _SourceContext,
   context: string,
 ): ChainErrorSource[] {
-  const out: ChainErrorSource[] = [];
-  const add = (name: string, description: string, limit: number): void => {
-    if (limit > 0) out.push(_source(ctx, `reference.${name}`, "reference", description, "fraction", limit));
-  };
-  add("initialAccuracy", "initial accuracy at 25 °C", _requireFraction(element.initialAccuracyFraction, "initialAccuracyFraction", context));
-  const tc = _optionalLimit(element.tempcoPpmPerC, "tempcoPpmPerC", "ppm/°C", context);
-  add("tempco", "tempco over the ambient range", tempcoExcursionPpm(tc, ambient, element.tempcoMethod ?? "box") / 1e6);
+  const { out, add } = _accuracyAndTempcoSources(element, ambient, ctx, context);
   const line = _optionalLimit(element.lineRegulationPpmPerVolt, "lineRegulationPpmPerVolt", "ppm/V", context);
   if (line > 0) {
     const [lo, hi] = _requireOrderedPair(element.supplyMinVolts, element.supplyMaxVolts, "supplyMinVolts", "supplyMaxVolts", "V", context);

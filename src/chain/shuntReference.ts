@@ -14,7 +14,7 @@ import {
   _source,
   type _SourceContext,
 } from "./_common.js";
-import { _regulationExcursion, longTermDriftPpm, tempcoExcursionPpm } from "./seriesReference.js";
+import { _accuracyAndTempcoSources, _regulationExcursion, longTermDriftPpm } from "./seriesReference.js";
 import type { AmbientRange, ChainErrorSource, ShuntReference } from "./types.js";
 
 /** Options of {@link shuntResistorSizing}. */
@@ -154,14 +154,8 @@ export function _shuntReferenceSources(
   ctx: _SourceContext,
   context: string,
 ): ChainErrorSource[] {
-  const out: ChainErrorSource[] = [];
-  const add = (name: string, description: string, limit: number): void => {
-    if (limit > 0) out.push(_source(ctx, `reference.${name}`, "reference", description, "fraction", limit));
-  };
+  const { out, add } = _accuracyAndTempcoSources(element, ambient, ctx, context);
   const vNom = element.nominalVolts;
-  add("initialAccuracy", "initial accuracy at 25 °C", _requireFraction(element.initialAccuracyFraction, "initialAccuracyFraction", context));
-  const tc = _optionalLimit(element.tempcoPpmPerC, "tempcoPpmPerC", "ppm/°C", context);
-  add("tempco", "tempco over the ambient range", tempcoExcursionPpm(tc, ambient, element.tempcoMethod ?? "box") / 1e6);
   const [vsMin, vsMax] = _requireOrderedPair(element.supplyMinVolts, element.supplyMaxVolts, "supplyMinVolts", "supplyMaxVolts", "V", context);
   const r = _requirePositive(element.seriesOhms, "seriesOhms", "Ω", context);
   const loadMin = _optionalLimit(element.loadMinMilliamps, "loadMinMilliamps", "mA", context);

@@ -5,7 +5,7 @@
  * @module
  */
 import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
-import type { Distribution } from "../uncertainty/types.js";
+import type { Distribution, Model } from "../uncertainty/types.js";
 import { _requireObject } from "./_common.js";
 import {
   _coldJunctionC,
@@ -17,10 +17,11 @@ import {
   _switchingVolts,
   _zeroRecord,
   type _CompiledChain,
+  type _PrebuiltStages,
 } from "./_compileChain.js";
 import type { _ComparatorStage } from "./comparator.js";
 import type { _ReferenceStage } from "./reference.js";
-import type { ChainModel, ComparatorEdge, MeasurementChain, NominalTrip } from "./types.js";
+import type { ChainErrorSource, ChainModel, ComparatorEdge, MeasurementChain, NominalTrip } from "./types.js";
 
 /** Options of {@link tripTemperatureModel}. */
 export interface TripTemperatureModelOptions {
@@ -28,8 +29,16 @@ export interface TripTemperatureModelOptions {
   readonly edge?: ComparatorEdge;
 }
 
-function comparatorChain(chain: MeasurementChain, context: string): _CompiledChain {
-  const cc = _compileChain(chain);
+/**
+ * @internal Compiles a chain and checks that its detector is a comparator (the chain of every trip model).
+ * `_compileChain`'s `prebuilt` stages pass through (a reference realized once, see `trip/realizeReference`).
+ */
+export function _compileComparatorChain(
+  chain: MeasurementChain,
+  context: string,
+  prebuilt?: _PrebuiltStages,
+): _CompiledChain {
+  const cc = _compileChain(chain, prebuilt);
   if (cc.comparator === undefined) {
     throw new HotjunctionRangeError({
       code: "INVALID_DESIGN",
@@ -58,10 +67,47 @@ function checkEdge(options: unknown, context: string): ComparatorEdge {
   return edge;
 }
 
-function nominalAt(cc: _CompiledChain, tap: number, edge: ComparatorEdge): number {
-  const x = _zeroRecord(cc, cc.fixedSources);
-  const edgeMv = (cc.comparator as _ComparatorStage).edgeMillivolts(edge);
-  return _hotFromVolts(cc, _switchingVolts(cc, x, tap, edgeMv), x, _coldJunctionC(cc, x));
+/** @internal Comparator switching point minus threshold for an edge (hysteresis placement, no offset), mV. */
+export function _edgeMillivolts(cc: _CompiledChain, edge: ComparatorEdge): number {
+  return (cc.comparator as _ComparatorStage).edgeMillivolts(edge);
+}
+
+/**
+ * @internal Nominal detector-input voltage at a hot-junction temperature (every source at zero deviation,
+ * the cold junction at `coldJunctionC`, default mid-ambient), V.
+ */
+export function _nominalSignalVolts(cc: _CompiledChain, hotJunctionC: number, coldJunctionC?: number): number {
+  return _signalVolts(cc, hotJunctionC, _zeroRecord(cc, cc.fixedSources, coldJunctionC));
+}
+
+/**
+ * @internal Nominal hot-junction temperature at which a checked tap of a comparator chain switches on an
+ * edge (every source at zero deviation, the cold junction at `coldJunctionC`, default mid-ambient), °C.
+ */
+export function _nominalSwitchingC(cc: _CompiledChain, tap: number, edge: ComparatorEdge, coldJunctionC?: number): number {
+  const x = _zeroRecord(cc, cc.fixedSources, coldJunctionC);
+  return _hotFromVolts(cc, _switchingVolts(cc, x, tap, _edgeMillivolts(cc, edge)), x, _coldJunctionC(cc, x));
+}
+
+/** @internal A trip model without its nominal value: see {@link _comparatorTripModel}. */
+export interface _TripModel {
+  readonly model: Model;
+  readonly inputs: Readonly<Record<string, Distribution>>;
+  readonly sources: readonly ChainErrorSource[];
+}
+
+/**
+ * @internal The model of the hot-junction temperature at which a checked tap switches on an edge, with the
+ * thermocouple tolerance taken at `toleranceAtC` and the cold junction anywhere in the ambient range.
+ * Allocation-free per call; a zero thermocouple tolerance gives no source and the transfer reads it as 0.
+ */
+export function _comparatorTripModel(cc: _CompiledChain, tap: number, edge: ComparatorEdge, toleranceAtC: number): _TripModel {
+  const edgeMv = _edgeMillivolts(cc, edge);
+  const sources = _sourcesAt(cc, toleranceAtC);
+  const inputs: Record<string, Distribution> = {};
+  for (const s of sources) inputs[s.name] = s.distribution;
+  const model: Model = (x) => _hotFromVolts(cc, _switchingVolts(cc, x, tap, edgeMv), x, _coldJunctionC(cc, x));
+  return { model, inputs, sources };
 }
 
 /**
@@ -89,15 +135,15 @@ function nominalAt(cc: _CompiledChain, tap: number, edge: ComparatorEdge): numbe
  */
 export function nominalTripTemperature(chain: MeasurementChain, tapIndex: number): NominalTrip {
   const context = "nominalTripTemperature";
-  const cc = comparatorChain(chain, context);
+  const cc = _compileComparatorChain(chain, context);
   const tap = checkTap(cc, tapIndex, context);
   const ref = (cc.reference as _ReferenceStage).nominalVolts;
   const tapRatio = cc.divider === undefined ? 1 : cc.divider.nominalRatio(tap);
   return {
     thresholdVolts: ref * tapRatio,
     tapRatio,
-    tripC: nominalAt(cc, tap, "trip"),
-    releaseC: nominalAt(cc, tap, "release"),
+    tripC: _nominalSwitchingC(cc, tap, "trip"),
+    releaseC: _nominalSwitchingC(cc, tap, "release"),
   };
 }
 
@@ -133,15 +179,10 @@ export function tripTemperatureModel(
   options?: TripTemperatureModelOptions,
 ): ChainModel {
   const context = "tripTemperatureModel";
-  const cc = comparatorChain(chain, context);
+  const cc = _compileComparatorChain(chain, context);
   const tap = checkTap(cc, tapIndex, context);
   const edge = checkEdge(options, context);
-  const edgeMv = (cc.comparator as _ComparatorStage).edgeMillivolts(edge);
-  const sources = _sourcesAt(cc, nominalAt(cc, tap, edge));
-  const inputs: Record<string, Distribution> = {};
-  for (const s of sources) inputs[s.name] = s.distribution;
-  const model = (x: Readonly<Record<string, number>>): number =>
-    _hotFromVolts(cc, _switchingVolts(cc, x, tap, edgeMv), x, _coldJunctionC(cc, x));
+  const { model, inputs, sources } = _comparatorTripModel(cc, tap, edge, _nominalSwitchingC(cc, tap, edge));
   return { model, inputs, sources, nominalC: model(_meansRecord(sources)) };
 }
 
@@ -166,16 +207,16 @@ export function tripTemperatureModel(
  * console.log(requiredThresholdVolts(chain, 50).toFixed(4)); // "0.2528"
  * ```
  */
+// The public entry points share a deliberate prologue (compile as a comparator chain, check tap and edge):
+// each validates its own arguments with its own context before reaching the internal API above.
 export function requiredThresholdVolts(
   chain: MeasurementChain,
   hotJunctionC: number,
   options?: TripTemperatureModelOptions,
 ): number {
   const context = "requiredThresholdVolts";
-  const cc = comparatorChain(chain, context);
+  const cc = _compileComparatorChain(chain, context);
   const t = _requireFinite(hotJunctionC, "hot-junction temperature", "°C", context);
   const edge = checkEdge(options, context);
-  const x = _zeroRecord(cc, cc.fixedSources);
-  const edgeMv = (cc.comparator as _ComparatorStage).edgeMillivolts(edge);
-  return _signalVolts(cc, t, x) - edgeMv / 1000;
+  return _nominalSignalVolts(cc, t) - _edgeMillivolts(cc, edge) / 1000;
 }

@@ -1,13 +1,33 @@
 /**
- * Failures of the command-line front and their exit codes: 2 for usage and validation errors, 1 otherwise.
+ * Failures of the command-line front and their exit codes (one table, {@link exitCodes}, printed by `--help` and
+ * in the README).
  * @module
  */
 import { isHotjunctionError } from "../errors.js";
 
-/** Exit code of a usage or validation error (bad argument, bad option, bad design file content). */
+/** Exit code of a usage or validation error (bad argument, bad option, bad design file content, refused output). */
 export const usageExitCode = 2;
-/** Exit code of any other failure (unreadable file, failed write, internal error). */
+/** Exit code of any other failure (unreadable or special input file, failed write, internal error). */
 export const failureExitCode = 1;
+/** Exit code of `check` and `compare` when the design fails its margins (turned off by `--report-only`). */
+export const marginFailExitCode = 3;
+
+/** Every exit code of the CLI and what it means. */
+export const exitCodes: readonly { readonly code: number; readonly meaning: string }[] = [
+  { code: 0, meaning: "success (check/compare: the design keeps its margins, or --report-only)" },
+  {
+    code: 1,
+    meaning: "a file could not be read or written (missing, not a regular file, full disk, permission) or an internal error",
+  },
+  {
+    code: 2,
+    meaning: "usage or validation error: bad argument or option, invalid design file, output refused (exists, input, link, device)",
+  },
+  { code: 3, meaning: "check/compare: the design fails its margins (the report is still printed or written)" },
+];
+
+/** The exit-code table as `--help` prints it. @internal */
+export const _exitCodeHelp: string = ["Exit codes:", ...exitCodes.map((e) => `  ${e.code}  ${e.meaning}`)].join("\n");
 
 /**
  * A failure the CLI reports as one line `hotjunction: <message>` with a chosen exit code.

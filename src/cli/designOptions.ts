@@ -4,12 +4,12 @@
  * @module
  */
 import { Option, type Command } from "commander";
-import { resolve } from "node:path";
-import { loadDesignFile } from "../design/loadDesignFile.js";
 import type { DesignFile } from "../design/designSchema.js";
 import type { ReportMethodInfo } from "../report/reportTypes.js";
 import type { CliIo } from "./io.js";
+import { marginFailExitCode } from "./cliError.js";
 import { _integerParser } from "./parseArgs.js";
+import { _readInputFile, type InputIdentity } from "./readInput.js";
 
 /** Analysis options as parsed. */
 export interface AnalysisOptionValues {
@@ -30,8 +30,8 @@ export interface AnalysisSettings {
 /** Default Monte Carlo trials of the CLI (modest; raise with --trials). */
 export const defaultCliTrials = 20_000;
 
-/** Adds --method, --trials, --seed and --svg. @internal */
-export function _addAnalysisOptions(command: Command, svgWhat: string): Command {
+/** Adds --method, --trials, --seed and, when `svgWhat` is given, --svg. @internal */
+export function _addAnalysisOptions(command: Command, svgWhat: string | undefined): Command {
   command.addOption(
     new Option("--method <method>", "band that decides pass/fail (default: the design's, else worst-case)").choices([
       "worst-case",
@@ -41,8 +41,16 @@ export function _addAnalysisOptions(command: Command, svgWhat: string): Command 
   );
   command.option("--trials <n>", `Monte Carlo trials (default: the design's, else ${defaultCliTrials})`, _integerParser(100, 10_000_000));
   command.option("--seed <n>", "Monte Carlo seed, 0 to 4294967295 (default: the design's, else 1)", _integerParser(0, 4_294_967_295));
-  command.option("--svg <file>", `also write ${svgWhat} as an SVG chart to FILE`);
+  if (svgWhat !== undefined) command.option("--svg <file>", `also write ${svgWhat} as an SVG chart to FILE`);
   return command;
+}
+
+/** Adds `--report-only` to `check` and `compare`. @internal */
+export function _addReportOnlyOption(command: Command): Command {
+  return command.option(
+    "--report-only",
+    `exit 0 even when the design fails its margins (default: exit ${marginFailExitCode}, for CI gates)`,
+  );
 }
 
 /** Command line over design file over defaults. @internal */
@@ -66,7 +74,19 @@ export function _methodInfo(settings: AnalysisSettings): ReportMethodInfo {
   };
 }
 
-/** Loads a design file given on the command line (relative to the CLI's working directory). @internal */
-export function _loadDesign(io: CliIo, path: string): DesignFile {
-  return loadDesignFile(resolve(io.cwd, path), { fileName: path });
+/** A design file as read: the validated design and the input file's identity. */
+export interface LoadedDesign {
+  readonly design: DesignFile;
+  readonly input: InputIdentity;
+}
+
+/**
+ * Loads a design file given on the command line (relative to the CLI's working directory): a regular file only
+ * (exit 1 otherwise), validated by the design module, which is loaded only here (it brings the schema library).
+ * @internal
+ */
+export async function _loadDesign(io: CliIo, path: string): Promise<LoadedDesign> {
+  const file = _readInputFile(io.cwd, path);
+  const { parseDesign } = await import("../design/parseDesign.js");
+  return { design: parseDesign(file.text, { fileName: path }), input: file.identity };
 }

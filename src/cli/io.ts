@@ -2,6 +2,7 @@
  * The CLI's connection to the outside world, passed in so commands can run in-process in tests.
  * @module
  */
+import type { WriteHooks } from "./writeOutput.js";
 
 /** Where a CLI run writes and how it reads its surroundings. */
 export interface CliIo {
@@ -13,6 +14,8 @@ export interface CliIo {
   readonly stderrIsTty: boolean;
   /** Directory relative paths are resolved from. */
   readonly cwd: string;
+  /** Test hooks into output writes (short writes, races); absent in real runs. @internal */
+  readonly writeHooks?: WriteHooks;
 }
 
 /** The real process streams. */

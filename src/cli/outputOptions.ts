@@ -5,7 +5,8 @@
  */
 import { Option, type Command } from "commander";
 import type { CliIo } from "./io.js";
-import { _planOutputs, _writeOutput, type PlannedOutput } from "./writeOutput.js";
+import type { InputIdentity } from "./readInput.js";
+import { _planOutputs, _writeOutputs, type PlannedOutput } from "./writeOutput.js";
 
 /** Output formats of a report. `text` is the terminal table (default). */
 export type OutputFormat = "text" | "json" | "markdown" | "csv";
@@ -20,10 +21,15 @@ export interface OutputOptionValues {
 }
 
 /**
- * Adds the format flags (mutually exclusive) for the formats given, plus `--out` and `--force`.
+ * Adds the format flags (mutually exclusive) for the formats given, plus `--out` and `--force` (whose help names
+ * `--svg` only when the command has it).
  * @internal
  */
-export function _addOutputOptions(command: Command, formats: readonly Exclude<OutputFormat, "text">[]): Command {
+export function _addOutputOptions(
+  command: Command,
+  formats: readonly Exclude<OutputFormat, "text">[],
+  hasSvg: boolean = false,
+): Command {
   const descriptions: Record<Exclude<OutputFormat, "text">, string> = {
     json: "print machine-readable JSON instead of the text table",
     markdown: "print a Markdown report",
@@ -36,7 +42,10 @@ export function _addOutputOptions(command: Command, formats: readonly Exclude<Ou
     command.addOption(option);
   }
   command.option("--out <file>", "write the result to FILE (atomically) instead of standard output");
-  command.option("--force", "allow --out/--svg to replace an existing file (never an input file)");
+  command.option(
+    "--force",
+    `allow ${hasSvg ? "--out/--svg" : "--out"} to replace an existing regular file (never an input, a link or a device)`,
+  );
   return command;
 }
 
@@ -73,15 +82,29 @@ export function _planCommandOutputs(
 }
 
 /**
- * Prints the main result on standard output or writes it to the planned file.
+ * Writes a command's results once everything is computed: the files (`--out` and the extras, e.g. `--svg`) all or
+ * nothing, checked again at this moment against the inputs as read; then the main result on standard output when
+ * no `--out` was given.
+ * @param extras - contents of `plan.extras`, in the same order
  * @internal
  */
-export async function _emitMain(io: CliIo, plan: OutputPlan, text: string): Promise<void> {
-  const body = text.endsWith("\n") ? text : `${text}\n`;
-  if (plan.main === undefined) {
-    io.writeOut(body);
-    return;
+export function _emitOutputs(
+  io: CliIo,
+  plan: OutputPlan,
+  values: OutputOptionValues,
+  mainText: string,
+  extras: readonly string[] = [],
+  inputs: readonly InputIdentity[] = [],
+): void {
+  const body = mainText.endsWith("\n") ? mainText : `${mainText}\n`;
+  if (extras.length !== plan.extras.length) throw new Error("internal: one content per extra output expected");
+  const files = [
+    ...(plan.main !== undefined ? [{ output: plan.main, content: body }] : []),
+    ...plan.extras.map((output, i) => ({ output, content: extras[i] as string })),
+  ];
+  if (files.length > 0) {
+    _writeOutputs(files, { inputs, force: values.force === true, hooks: io.writeHooks });
+    for (const file of files) io.writeErr(`hotjunction: wrote ${file.output.displayPath}\n`);
   }
-  await _writeOutput(plan.main, body);
-  io.writeErr(`hotjunction: wrote ${plan.main.displayPath}\n`);
+  if (plan.main === undefined) io.writeOut(body);
 }

@@ -3,19 +3,19 @@
  * @module
  */
 import { InvalidArgumentError } from "commander";
-
-const decimalPattern = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+import { _looksWhole, _readDecimal, _readWhole } from "./numbers.js";
 
 /**
  * Parses a decimal number (`-12.5`, `1e3`); rejects `NaN`, `Infinity`, hex, blanks and trailing text.
  * @throws InvalidArgumentError (commander reports it as a usage error)
  */
 export function _parseNumber(text: string): number {
-  const trimmed = text.trim();
-  if (!decimalPattern.test(trimmed)) throw new InvalidArgumentError(`expected a decimal number, found "${text}"`);
-  const value = Number(trimmed);
-  if (!Number.isFinite(value)) throw new InvalidArgumentError(`expected a finite number, found "${text}"`);
-  return value;
+  const value = _readDecimal(text);
+  if (value !== undefined) return value;
+  if (!/^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/.test(text.trim())) {
+    throw new InvalidArgumentError(`expected a decimal number, found "${text}"`);
+  }
+  throw new InvalidArgumentError(`expected a finite number, found "${text}"`);
 }
 
 /** Parses a number that must be greater than zero. */
@@ -28,14 +28,9 @@ export function _parsePositiveNumber(text: string): number {
 /** Parses a whole number within [min, max]. */
 export function _integerParser(min: number, max: number): (text: string) => number {
   return (text: string) => {
-    const trimmed = text.trim();
-    if (!/^[+-]?\d+(?:[eE]\+?\d+)?$/.test(trimmed)) {
-      throw new InvalidArgumentError(`expected a whole number, found "${text}"`);
-    }
-    const value = Number(trimmed);
-    if (!Number.isSafeInteger(value) || value < min || value > max) {
-      throw new InvalidArgumentError(`expected a whole number from ${min} to ${max}, found "${text}"`);
-    }
+    if (!_looksWhole(text)) throw new InvalidArgumentError(`expected a whole number, found "${text}"`);
+    const value = _readWhole(text, min, max);
+    if (value === undefined) throw new InvalidArgumentError(`expected a whole number from ${min} to ${max}, found "${text}"`);
     return value;
   };
 }

@@ -1,80 +1,24 @@
 /**
- * The command-line program: builds the commander tree and runs it, turning every failure into one line on
- * standard error (`hotjunction: <message>`) and an exit code (2 usage/validation, 1 otherwise, 0 success).
+ * The command-line program's entry: answers `emf`/`temp` with plain arguments on a fast path, otherwise loads
+ * the commander program (src/cli/program.ts); turns every failure into one line on standard error
+ * (`hotjunction: <message>`) and an exit code (the table in cliError.ts, printed by `--help`).
  * @module
  */
-import { Command, CommanderError } from "commander";
-import { CAUTION_TEXT } from "../report/caution.js";
-import { _describeFailure, _oneLine, usageExitCode } from "./cliError.js";
+import { _describeFailure, usageExitCode } from "./cliError.js";
+import { _tryFastPath } from "./fastPath.js";
 import type { CliIo } from "./io.js";
-import { registerEmfCommand } from "./commands/emf.js";
-import { registerRefTableCommand } from "./commands/refTable.js";
-import { registerTempCommand } from "./commands/temp.js";
-import { registerCheckCommand } from "./commands/check.js";
-import { registerCompareCommand } from "./commands/compare.js";
-import { registerSchemaCommand } from "./commands/schema.js";
-import { registerSweepCommand } from "./commands/sweep.js";
-import { registerTableCommand } from "./commands/table.js";
-import { registerValidateCommand } from "./commands/validate.js";
-import { registerFaultsCommand } from "./commands/faults.js";
-import { registerWorkbenchCommand } from "./commands/workbench.js";
-import { _packageVersion } from "./version.js";
 
 /** What every command registration receives. */
 export interface CommandContext {
   readonly io: CliIo;
+  /** Exit code of a command that completed (0 unless it sets another, e.g. a design failing its margins). */
+  readonly outcome?: { exitCode: number };
 }
 
-function configure(command: Command, io: CliIo): void {
-  command.exitOverride();
-  command.configureOutput({
-    writeOut: (text) => io.writeOut(text),
-    writeErr: (text) => io.writeErr(text),
-    // Commander's own error text is reported by runCli as one line; suppress its multi-line print.
-    outputError: () => undefined,
-  });
-  command.showSuggestionAfterError(true);
-  command.allowExcessArguments(false);
-}
-
-/**
- * Builds the program with all commands.
- * @internal
- */
-export function _createProgram(io: CliIo): Command {
-  const program = new Command("hotjunction");
-  program
-    .description(
-      "Thermocouple conversion per ITS-90, measurement-chain error budgets and over-temperature trip design.",
-    )
-    .version(_packageVersion, "-V, --version", "print the version")
-    .helpOption("-h, --help", "show help")
-    .addHelpCommand(false)
-    .addHelpText("after", `\nCaution: ${CAUTION_TEXT}\n`);
-  configure(program, io);
-  const context: CommandContext = { io };
-  const registrations = [
-    registerEmfCommand,
-    registerTempCommand,
-    registerRefTableCommand,
-    registerTableCommand,
-    registerValidateCommand,
-    registerCheckCommand,
-    registerCompareCommand,
-    registerSweepCommand,
-    registerFaultsCommand,
-    registerSchemaCommand,
-    registerWorkbenchCommand,
-  ];
-  for (const register of registrations) {
-    const command = register(program, context);
-    configure(command, io);
-  }
-  return program;
-}
-
-function commanderMessage(error: CommanderError): string {
-  return _oneLine(error.message.replace(/^error:\s*/i, ""));
+/** Options of {@link _runCli}. @internal */
+export interface RunCliOptions {
+  /** Answer plain `emf`/`temp` calls without the full parser. Default true. */
+  readonly fastPath?: boolean;
 }
 
 /**
@@ -82,26 +26,23 @@ function commanderMessage(error: CommanderError): string {
  * Never throws.
  */
 export async function runCli(argv: readonly string[], io: CliIo): Promise<number> {
+  return _runCli(argv, io, {});
+}
+
+/** {@link runCli} with the fast path switchable (tests compare both paths). @internal */
+export async function _runCli(argv: readonly string[], io: CliIo, options: RunCliOptions): Promise<number> {
   try {
     if (argv.length === 0) {
       io.writeErr("hotjunction: no command given; run `hotjunction --help` for the list of commands\n");
       return usageExitCode;
     }
-    const program = _createProgram(io);
-    await program.parseAsync([...argv], { from: "user" });
-    return 0;
-  } catch (error) {
-    if (error instanceof CommanderError) {
-      if (
-        error.code === "commander.helpDisplayed" ||
-        error.code === "commander.version" ||
-        error.code === "commander.help"
-      ) {
-        return error.exitCode === 0 ? 0 : usageExitCode;
-      }
-      io.writeErr(`hotjunction: ${commanderMessage(error)}\n`);
-      return usageExitCode;
+    if (options.fastPath !== false) {
+      const code = await _tryFastPath(argv, io);
+      if (code !== undefined) return code;
     }
+    const { _runProgram } = await import("./program.js");
+    return await _runProgram(argv, io);
+  } catch (error) {
     const failure = _describeFailure(error);
     io.writeErr(`hotjunction: ${failure.message}\n`);
     return failure.exitCode;

@@ -15,6 +15,7 @@ import type {
 } from "../chain/types.js";
 import type { ReferenceOption, TripDesign, TripResistors, TripSetpoint } from "../trip/types.js";
 import type { DesignFile, DesignReference } from "./designSchema.js";
+import { HotjunctionRangeError } from "../errors.js";
 
 /** Copies an object without its `undefined` members (exact optional properties). */
 function compact<T>(value: Record<string, unknown>): T {
@@ -102,8 +103,8 @@ export function referenceOptionFromDesign(reference: DesignReference): Reference
  * The trip-engine input of a comparator design file.
  * @param design - a validated design with a `comparator`
  * @returns the `TripDesign`
- * @throws DesignFileError-free: call only on a design that `parseDesign` accepted; throws a plain Error when
- *   the design has no comparator (an ADC design has no divider to design)
+ * @throws DesignFileError-free: call only on a design that `parseDesign` accepted; throws HotjunctionRangeError
+ *   (code `INVALID_DESIGN`) when the design has no comparator (an ADC design has no divider to design)
  * @example
  * ```ts
  * import { tripDesignFromDesign, parseDesign } from "hotjunction/design";
@@ -114,7 +115,7 @@ export function referenceOptionFromDesign(reference: DesignReference): Reference
  */
 export function tripDesignFromDesign(design: DesignFile): TripDesign {
   if (design.comparator === undefined || design.resistors === undefined) {
-    throw new Error("an ADC design has no comparator thresholds to design; use the chain instead");
+    throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "comparator", value: undefined, context: "tripDesignFromDesign", problem: "is missing: an ADC design has no comparator thresholds to design; use the chain instead" });
   }
   const setpoints = design.setpoints.map((s) => compact<TripSetpoint>({ ...s }));
   return compact<TripDesign>({

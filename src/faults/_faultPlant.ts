@@ -1,64 +1,56 @@
 /**
- * The nominal signal model of a trip chain that the fault review runs: every node of the signal path
- * (thermocouple EMF → amplifier input → amplifier output → detector, with the reference and threshold),
- * evaluated with every error source at its nominal value, so that a fault can replace any node or element.
- * Its healthy signal equals the chain module's nominal reading (checked in tests).
+ * The fault review's view of a trip chain: the chain's own compiled signal path (`chain/_compileChain`)
+ * evaluated with every error source at its nominal value, node by node (thermocouple EMF → compensation →
+ * amplifier input → amplifier output → detector, with the reference and threshold), so that a fault can
+ * replace any node or transform any stage. What the review adds to the chain is only what a fault needs:
+ * the amplifier's rails, resistors that open or short (a changed amplifier gain or divider), an open
+ * reference, a dead board, and an ideal converter reading against the (possibly faulted) reference.
  * @module
  * @internal
  */
-import { _compileChain } from "../chain/_compileChain.js";
-import type {
-  AmplifierElement,
-  FixedScaleAmplifierElement,
-  MeasurementChain,
-  ResistorGain,
-} from "../chain/types.js";
+import {
+  _compensationMillivolts,
+  _compileChain,
+  _frontEndVolts,
+  _junctionEmfMillivolts,
+  _zeroRecord,
+  type _CompiledChain,
+} from "../chain/_compileChain.js";
+import type { _AdcStage } from "../chain/adc.js";
+import type { _AmplifierStage } from "../chain/amplifier.js";
+import type { _ComparatorStage } from "../chain/comparator.js";
+import type { MeasurementChain, ResistorGain } from "../chain/types.js";
 import type { ThermocoupleType } from "../data/thermocoupleData.js";
 import { HotjunctionRangeError } from "../errors.js";
-import { _compile, type CompiledType } from "../its90/compiled.js";
+import type { CompiledType } from "../its90/compiled.js";
 import { _emfFromTemperature, _temperatureFromEmf } from "../its90/engine.js";
-import { thermocoupleData } from "../its90/resolveType.js";
-import { comparatorSwitchingOffsetMillivolts } from "../chain/comparator.js";
 import type { FaultNodeName, FaultSignals } from "./types.js";
 
-/** @internal Front end: fixed-scale amplifier, or (optional) hardware compensation plus a voltage amplifier. */
-export type _FrontEnd =
-  | { readonly kind: "fixed-scale"; readonly millivoltsPerC: number; readonly alphaMillivoltsPerC: number }
-  | {
-      readonly kind: "amplifier";
-      /** Whether there is an amplifier at all (no amplifier: unity, no rails). */
-      readonly present: boolean;
-      readonly feedbackOhms: number | undefined;
-      readonly groundOhms: number | undefined;
-      readonly nominalGain: number;
-      /** Hardware compensation E(t0) + α(t − t0), or none (software or fixed-scale). */
-      readonly hardware: { readonly e0Millivolts: number; readonly alphaMillivoltsPerC: number; readonly matchedAtC: number } | undefined;
-    };
-
-/** @internal The detector stage. */
-export type _Detector =
-  | { readonly kind: "comparator"; readonly edgeVolts: number }
-  | { readonly kind: "adc"; readonly codes: number; readonly fullScaleVolts: number; readonly usesReference: boolean; readonly tripC: number };
-
-/** @internal A resolved chain with the review's design facts. */
+/** @internal A compiled chain with the review's design facts. */
 export interface _Plant {
   readonly chain: MeasurementChain;
+  readonly compiled: _CompiledChain;
+  /** Every source at its nominal value, the cold junction held at `coldJunctionC`. */
+  readonly nominal: Readonly<Record<string, number>>;
   readonly type: ThermocoupleType;
   readonly ct: CompiledType;
   readonly minC: number;
   readonly maxC: number;
   readonly coldJunctionC: number;
   readonly coldEmfMillivolts: number;
-  readonly front: _FrontEnd;
+  /** Whether the chain has an amplifier (none: unity, no rails). */
+  readonly hasAmplifier: boolean;
   readonly railLowVolts: number;
   readonly railHighVolts: number;
   readonly referenceVolts: number;
-  readonly referenceVariant: "series" | "shunt" | "regulator" | "none";
   readonly shuntSeriesOhms: number;
   readonly shuntSupplyVolts: number;
   readonly dividerOhms: readonly number[] | undefined;
   readonly tap: number;
-  readonly detector: _Detector;
+  /** Comparator: switching point above the threshold on the trip edge (hysteresis, offset at nominal), V. */
+  readonly edgeVolts: number;
+  /** ADC chains: the setpoint the firmware trips at, °C. */
+  readonly adcTripC: number;
   readonly outputStage: "energize-to-trip" | "de-energize-to-trip";
 }
 
@@ -99,88 +91,66 @@ export function _emptyMods(): _Mods {
   };
 }
 
-function gainParts(amp: AmplifierElement): { feedbackOhms: number | undefined; groundOhms: number | undefined; gain: number } {
-  if (amp.gain.setBy === "resistors") {
-    const g = amp.gain as ResistorGain;
-    return { feedbackOhms: g.feedbackOhms, groundOhms: g.groundOhms, gain: 1 + g.feedbackOhms / g.groundOhms };
-  }
-  return { feedbackOhms: undefined, groundOhms: undefined, gain: amp.gain.gain };
-}
-
 /** @internal Builds (and validates, through the chain module) the plant of a chain. */
 export function _buildPlant(chain: MeasurementChain, facts: _PlantFacts, context: string): _Plant {
   const cc = _compileChain(chain);
-  const type = cc.type;
-  const ct = _compile(thermocoupleData(type));
-  const minC = ct.minC;
-  const maxC = ct.maxC;
   const coldJunctionC = facts.coldJunctionC;
-  const amp = chain.amplifier;
-  let front: _FrontEnd;
-  if (amp !== undefined && amp.kind === "fixedScaleAmplifier") {
-    const fs = amp as FixedScaleAmplifierElement;
-    front = {
-      kind: "fixed-scale",
-      millivoltsPerC: fs.millivoltsPerC,
-      alphaMillivoltsPerC: (cc.fixedScale as NonNullable<typeof cc.fixedScale>).alphaMillivoltsPerC,
-    };
-  } else {
-    const parts = amp === undefined ? { feedbackOhms: undefined, groundOhms: undefined, gain: 1 } : gainParts(amp as AmplifierElement);
-    const cj = chain.coldJunction;
-    const hardware =
-      cj !== undefined && cj.method === "hardware"
-        ? {
-            matchedAtC: cj.matchedAtC ?? 25,
-            e0Millivolts: _emfFromTemperature(ct, cj.matchedAtC ?? 25),
-            alphaMillivoltsPerC: cj.compensationMicrovoltsPerC / 1000,
-          }
-        : undefined;
-    front = { kind: "amplifier", present: amp !== undefined, feedbackOhms: parts.feedbackOhms, groundOhms: parts.groundOhms, nominalGain: parts.gain, hardware };
+  if (cc.adc !== undefined && facts.adcTripC === undefined) {
+    throw new HotjunctionRangeError({
+      code: "INVALID_DESIGN",
+      quantity: "tripTemperatureC",
+      value: undefined,
+      context,
+      problem: "is missing: an ADC chain trips in firmware at a setpoint the review must be given",
+    });
   }
-  const ref = chain.reference;
-  const det = chain.detector;
-  let detector: _Detector;
-  if (det.kind === "comparator") {
-    detector = { kind: "comparator", edgeVolts: comparatorSwitchingOffsetMillivolts(det, "trip") / 1000 };
-  } else {
-    if (facts.adcTripC === undefined) {
-      throw new HotjunctionRangeError({
-        code: "INVALID_DESIGN",
-        quantity: "tripTemperatureC",
-        value: undefined,
-        context,
-        problem: "is missing: an ADC chain trips in firmware at a setpoint the review must be given",
-      });
-    }
-    detector = { kind: "adc", codes: 2 ** det.bits, fullScaleVolts: cc.adcFullScaleVolts, usesReference: cc.adcUsesReference, tripC: facts.adcTripC };
-  }
-  const dividerOhms = det.kind === "comparator" ? chain.divider?.resistorsOhms : undefined;
+  const dividerOhms = cc.divider === undefined ? undefined : (chain.divider?.resistorsOhms as readonly number[]);
   const taps = dividerOhms === undefined ? 1 : dividerOhms.length - 1;
-  if (det.kind === "comparator" && !(Number.isInteger(facts.tap) && facts.tap >= 0 && facts.tap < taps)) {
+  if (cc.comparator !== undefined && !(Number.isInteger(facts.tap) && facts.tap >= 0 && facts.tap < taps)) {
     throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "tap", value: facts.tap, min: 0, max: taps - 1, context });
   }
+  const nominal = _zeroRecord(cc, cc.fixedSources, coldJunctionC);
+  const ref = chain.reference;
   const supplyMid =
     ref?.supplyMinVolts !== undefined && ref.supplyMaxVolts !== undefined ? (ref.supplyMinVolts + ref.supplyMaxVolts) / 2 : facts.railHighVolts;
+  const comparator = cc.comparator as _ComparatorStage | undefined;
   return {
     chain,
-    type,
-    ct,
-    minC,
-    maxC,
+    compiled: cc,
+    nominal,
+    type: cc.type,
+    ct: cc.ct,
+    minC: cc.ct.minC,
+    maxC: cc.ct.maxC,
     coldJunctionC,
-    coldEmfMillivolts: _emfFromTemperature(ct, coldJunctionC),
-    front,
+    coldEmfMillivolts: _emfFromTemperature(cc.ct, coldJunctionC),
+    hasAmplifier: chain.amplifier !== undefined,
     railLowVolts: facts.railLowVolts,
     railHighVolts: facts.railHighVolts,
-    referenceVolts: ref?.nominalVolts ?? 0,
-    referenceVariant: ref?.variant ?? "none",
+    referenceVolts: cc.reference === undefined ? 0 : cc.reference.volts(nominal),
     shuntSeriesOhms: ref !== undefined && ref.variant === "shunt" ? ref.seriesOhms : 0,
     shuntSupplyVolts: facts.shuntSupplyVolts ?? supplyMid,
     dividerOhms,
     tap: facts.tap,
-    detector,
+    edgeVolts: comparator === undefined ? 0 : comparator.switchingOffsetVolts(nominal, comparator.edgeMillivolts("trip")),
+    adcTripC: facts.adcTripC ?? Number.NaN,
     outputStage: facts.outputStage,
   };
+}
+
+/**
+ * The chain a fault alternative leaves: the compiled chain with a resistor fault's amplifier gain put in
+ * (feedback or ground resistor open or short), or the chain itself.
+ */
+function faultedChain(p: _Plant, m: _Mods): _CompiledChain {
+  const amp = p.chain.amplifier;
+  if ((m.feedback === undefined && m.ground === undefined) || amp?.kind !== "amplifier" || amp.gain.setBy !== "resistors") return p.compiled;
+  const g = amp.gain as ResistorGain;
+  const rf = m.feedback === "open" ? Infinity : m.feedback === "short" ? 0 : g.feedbackOhms;
+  const rg = m.ground === "open" ? Infinity : m.ground === "short" ? 0 : g.groundOhms;
+  const gain = 1 + rf / rg;
+  const amplifier: _AmplifierStage = { ...p.compiled.amplifier, gain: () => gain };
+  return { ...p.compiled, amplifier };
 }
 
 /** @internal Temperature for an EMF against 0 °C, ±Infinity beyond the type's range. */
@@ -193,14 +163,14 @@ export function _temperatureOrInfinity(p: _Plant, emfMillivolts: number): number
 
 /** @internal The temperature the chain's nominal conversion indicates for an amplifier output, °C. */
 export function _readingFromVolts(p: _Plant, volts: number): number {
-  const f = p.front;
-  if (f.kind === "fixed-scale") return (volts * 1000) / f.millivoltsPerC;
-  let emf = (volts * 1000) / f.nominalGain;
-  if (f.hardware !== undefined) emf -= f.hardware.e0Millivolts + f.hardware.alphaMillivoltsPerC * (p.coldJunctionC - f.hardware.matchedAtC);
+  const cc = p.compiled;
+  if (cc.fixedScale !== undefined) return (volts * 1000) / cc.fixedScale.millivoltsPerC;
+  const emf = (volts * 1000) / cc.amplifier.nominalGain - _compensationMillivolts(cc, p.nominal, p.coldJunctionC);
   return _temperatureOrInfinity(p, emf + p.coldEmfMillivolts);
 }
 
-function dividerRatio(ohms: readonly number[], tap: number, states: ReadonlyMap<number, "open" | "short">): number {
+/** Tap ratio with divider resistors open or shorted (an open above the tap leaves it at ground). */
+function faultedDividerRatio(ohms: readonly number[], tap: number, states: ReadonlyMap<number, "open" | "short">): number {
   let above = 0;
   let below = 0;
   ohms.forEach((r, i) => {
@@ -225,39 +195,26 @@ export function _evaluateSignals(p: _Plant, m: _Mods, hotJunctionC: number): Fau
     return v;
   };
   const clip = (v: number): number => Math.min(Math.max(v, p.railLowVolts), p.railHighVolts);
+  const cc = faultedChain(p, m);
+  const x = p.nominal;
+  const tc = p.coldJunctionC;
 
   let emf: number;
   if (m.openMillivolts !== undefined) emf = m.openMillivolts;
-  else if (m.shortAtC !== undefined) emf = _emfFromTemperature(p.ct, m.shortAtC) - p.coldEmfMillivolts;
-  else emf = _emfFromTemperature(p.ct, hotJunctionC) - p.coldEmfMillivolts;
+  else emf = _junctionEmfMillivolts(cc, m.shortAtC ?? hotJunctionC, x, tc);
   emf = node("thermocoupleEmf", emf);
   s.thermocoupleEmfMillivolts = emf;
 
-  const f = p.front;
-  let input: number;
+  // A fixed-scale amplifier compensates inside: its compensation node is reported, not added.
+  const comp = node("compensation", _compensationMillivolts(cc, x, tc));
+  s.compensationMillivolts = comp;
+  const input = node("amplifierInput", cc.fixedScale !== undefined ? emf : emf + comp);
   let out: number;
-  if (f.kind === "fixed-scale") {
-    s.compensationMillivolts = node("compensation", 0);
-    input = node("amplifierInput", emf);
-    out = clip((f.millivoltsPerC * (input / f.alphaMillivoltsPerC + p.coldJunctionC)) / 1000);
-  } else {
-    let comp = 0;
-    if (f.hardware !== undefined) comp = f.hardware.e0Millivolts + f.hardware.alphaMillivoltsPerC * (p.coldJunctionC - f.hardware.matchedAtC);
-    comp = node("compensation", comp);
-    s.compensationMillivolts = comp;
-    input = node("amplifierInput", emf + comp);
-    if (!f.present) out = input / 1000;
-    else {
-      let gain = f.nominalGain;
-      if (f.feedbackOhms !== undefined && f.groundOhms !== undefined && (m.feedback !== undefined || m.ground !== undefined)) {
-        const rf = m.feedback === "open" ? Infinity : m.feedback === "short" ? 0 : f.feedbackOhms;
-        const rg = m.ground === "open" ? Infinity : m.ground === "short" ? 0 : f.groundOhms;
-        gain = 1 + rf / rg;
-      }
-      // Open loop: the output goes to the rail of the input's sign.
-      out = gain === Infinity ? (input > 0 ? p.railHighVolts : p.railLowVolts) : clip((gain * input) / 1000);
-    }
-  }
+  if (!p.hasAmplifier) out = _frontEndVolts(cc, input, x, tc);
+  else if (cc.fixedScale === undefined && cc.amplifier.gain(x) === Infinity) {
+    // Open loop: the output goes to the rail of the input's sign.
+    out = input > 0 ? p.railHighVolts : p.railLowVolts;
+  } else out = clip(_frontEndVolts(cc, input, x, tc));
   s.amplifierInputMillivolts = input;
   if (m.boardLoss) out = 0;
   out = node("amplifierOutput", out);
@@ -265,7 +222,7 @@ export function _evaluateSignals(p: _Plant, m: _Mods, hotJunctionC: number): Fau
 
   let ref = p.referenceVolts;
   if (m.referenceOpen) {
-    if (p.referenceVariant === "shunt") {
+    if (p.chain.reference?.variant === "shunt") {
       const load = p.dividerOhms === undefined ? Infinity : p.dividerOhms.reduce((a, b) => a + b, 0);
       ref = load === Infinity ? p.shuntSupplyVolts : (p.shuntSupplyVolts * load) / (load + p.shuntSeriesOhms);
     } else ref = 0;
@@ -275,25 +232,29 @@ export function _evaluateSignals(p: _Plant, m: _Mods, hotJunctionC: number): Fau
   s.referenceVolts = ref;
 
   let tripped: boolean;
-  const d = p.detector;
-  if (d.kind === "comparator") {
-    const ratio = p.dividerOhms === undefined ? 1 : dividerRatio(p.dividerOhms, p.tap, m.dividerStates);
+  if (cc.comparator !== undefined) {
+    let ratio = 1;
+    if (cc.divider !== undefined) {
+      ratio = m.dividerStates.size === 0 ? cc.divider.ratio(x, p.tap) : faultedDividerRatio(p.dividerOhms as readonly number[], p.tap, m.dividerStates);
+    }
     const threshold = node("threshold", ref * ratio);
     s.thresholdVolts = threshold;
     s.adcCode = null;
     s.readingC = _readingFromVolts(p, out);
-    tripped = out >= threshold + d.edgeVolts;
+    tripped = out >= threshold + p.edgeVolts;
   } else {
-    const fs = d.usesReference ? ref : d.fullScaleVolts;
+    const adc = cc.adc as _AdcStage;
+    const fs = cc.adcUsesReference ? ref : cc.adcFullScaleVolts;
     let code: number;
-    // Without a reference the converter reads any non-negative input as full scale.
-    if (!(fs > 0)) code = out >= 0 ? d.codes - 1 : 0;
-    else code = Math.min(Math.max(Math.floor((out / fs) * d.codes), 0), d.codes - 1);
+    // An ideal converter against the (possibly faulted) full scale; without a reference it reads any
+    // non-negative input as full scale.
+    if (!(fs > 0)) code = out >= 0 ? adc.codes - 1 : 0;
+    else code = Math.min(Math.max(Math.floor((out / fs) * adc.codes), 0), adc.codes - 1);
     code = node("adcCode", code);
     s.adcCode = code;
     s.thresholdVolts = null;
-    s.readingC = _readingFromVolts(p, (code * d.fullScaleVolts) / d.codes);
-    tripped = s.readingC >= d.tripC;
+    s.readingC = _readingFromVolts(p, (code * cc.adcFullScaleVolts) / adc.codes);
+    tripped = s.readingC >= p.adcTripC;
   }
   if (m.boardLoss) tripped = false;
   tripped = node("detectorOutput", tripped ? 1 : 0) >= 0.5;

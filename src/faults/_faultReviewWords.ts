@@ -1,10 +1,12 @@
 /**
- * Shared words of the fault-review renderers.
+ * Words of the fault review: the sentences the review writes into its rows and notes, and the shared words
+ * of its renderers.
  * @module
  * @internal
  */
 import { _invalidChoice } from "../errors.js";
-import type { FaultCategory, FaultCategoryCounts, FaultReviewReport } from "./types.js";
+import type { _AlternativeResult, _Classification } from "./_faultClassification.js";
+import type { Fault, FaultCategory, FaultCategoryCounts, FaultDetectionMethod, FaultReviewReport } from "./types.js";
 
 /** @internal Category labels for tables. */
 export const _categoryWords: Readonly<Record<FaultCategory, string>> = {
@@ -38,4 +40,96 @@ export function _checkReport(report: unknown, context: string): FaultReviewRepor
   const ok = typeof report === "object" && report !== null && Array.isArray((report as { reviews?: unknown }).reviews);
   if (!ok) _invalidChoice("report", report, ["a fault review report"], context);
   return report as FaultReviewReport;
+}
+
+/** @internal Detection methods in words. */
+export const _detectionWords: Readonly<Record<FaultDetectionMethod, string>> = {
+  "out-of-range-window": "out-of-range window",
+  "open-thermocouple-detection": "open-thermocouple detection",
+  "second-comparator": "second comparator",
+  "supervisory-reading": "supervisory reading",
+};
+
+/** @internal The sentence of a fault's effect on the trip (`fromC`/`toC`: the sweep, °C). */
+export function _effectText(
+  c: _Classification,
+  alternatives: number,
+  limits: { readonly maxNormalC: number; readonly hazardC: number; readonly fromC: number; readonly toC: number },
+): string {
+  let text: string;
+  switch (c.effect) {
+    case "trips-immediately":
+      text = `trips immediately (already tripped at ${_fmt1(limits.fromC)} °C, the start of the sweep)`;
+      break;
+    case "never-trips":
+      text = `never trips up to ${_fmt1(limits.toC)} °C`;
+      break;
+    case "no-change":
+      text = `no change (trip moves ${_fmt1(c.shiftC as number)} °C)`;
+      break;
+    default: {
+      const by = Math.abs(c.shiftC as number);
+      text = `trips ${c.effect === "trips-early" ? "early" : "late"} by ${_fmt1(by)} °C, at ${_fmt1(c.tripC as number)} °C`;
+      if ((c.tripC as number) <= limits.maxNormalC) text += " (within normal operation: a nuisance trip)";
+      else if ((c.tripC as number) >= limits.hazardC) text += " (at or above the hazard limit)";
+    }
+  }
+  if (c.worst.label !== undefined && alternatives > 1) text += ` [worst case: ${c.worst.label}]`;
+  return text;
+}
+
+/** @internal The sentence of how a fault is detected (from which temperature, per method). */
+export function _detectionText(c: _Classification, results: readonly _AlternativeResult[]): string {
+  if (!c.detected) return "not detected";
+  return c.detectedBy
+    .map((m) => `${_detectionWords[m]} (from ${_fmt1(c.worst.firstFlagC.get(m) ?? ((results[0] as _AlternativeResult).firstFlagC.get(m) as number))} °C)`)
+    .join("; ");
+}
+
+/** @internal The mitigations a row suggests. */
+export function _mitigations(fault: Fault, c: _Classification): string[] {
+  const out: string[] = [];
+  if (c.safety !== "no-effect") {
+    if (fault.mitigation !== undefined) out.push(fault.mitigation);
+    else if (!c.detected) out.push("a window comparator or supervisory reading that tells this fault from normal operation");
+    if (c.safety === "dangerous") out.push("an independent, non-resettable thermal cutoff");
+  }
+  return out;
+}
+
+/** @internal Note: a method already flags the healthy chain from a temperature. */
+export function _healthyFlagNote(method: FaultDetectionMethod, fromC: number): string {
+  return `The ${_detectionWords[method]} flags the healthy chain from ${_fmt1(fromC)} °C; a fault counts as detected by it only where the healthy chain is not flagged.`;
+}
+
+/** @internal Why the healthy chain cannot be reviewed. */
+export function _healthyTripProblem(immediate: boolean, fromC: number, toC: number): string {
+  return immediate
+    ? `is at the start of the sweep: the chain without faults is already tripped at the cold junction (${_fmt1(fromC)} °C)`
+    : `is missing: the chain without faults does not trip up to ${_fmt1(toC)} °C`;
+}
+
+/** @internal The review's leading notes: sweep, healthy trip, open-circuit bias, output stage. */
+export function _reviewNotes(r: {
+  readonly coldJunctionC: number;
+  readonly fromC: number;
+  readonly toC: number;
+  readonly stepC: number;
+  readonly healthyTripC: number;
+  readonly intendedTripC: number | undefined;
+  readonly maxNormalC: number;
+  readonly hazardC: number;
+  readonly bias: "pull-up" | "pull-down" | "none";
+  readonly biasMv: number;
+  readonly outputStage: string;
+  readonly outputStageAssumed: boolean;
+}): string[] {
+  return [
+    `Cold junction held at ${_fmt1(r.coldJunctionC)} °C; hot junction swept from ${_fmt1(r.fromC)} to ${_fmt1(r.toC)} °C in ${r.stepC} °C steps (trips refined to 0.001 °C); every error source at its nominal value.`,
+    `Healthy trip of the modelled chain: ${_fmt1(r.healthyTripC)} °C${r.intendedTripC !== undefined ? ` (intended ${_fmt1(r.intendedTripC)} °C)` : ""}; normal operation up to ${_fmt1(r.maxNormalC)} °C, hazard limit ${_fmt1(r.hazardC)} °C.`,
+    r.bias === "none"
+      ? "Open-circuit bias: none stated, so an open thermocouple input is taken as floating (up, near zero or down; the worst counts)."
+      : `Open-circuit bias: ${r.bias} (an open input is driven ${r.bias === "pull-up" ? "up" : "down"} by ${r.biasMv} mV).`,
+    `Output stage: ${r.outputStage}${r.outputStageAssumed ? " (assumed; state it if the design de-energises to trip)" : ""}.`,
+  ];
 }

@@ -40,53 +40,14 @@ const mitigationText = {
   supply: "a de-energise-to-trip output stage (loss of power trips)",
 } as const;
 
-/**
- * The built-in single-fault catalogue of a chain, as data: thermocouple open, shorted at the terminals, shorted
- * along the wire, reversed, ground offset of either sign; hardware cold-junction compensation lost; amplifier
- * output stuck at either rail, supply lost, each gain resistor open or shorted (resistor gain only); fixed-scale
- * amplifier stuck at either rail, supply lost; reference open, shorted, drifted low and high; each divider
- * resistor open or shorted; comparator output stuck high or low (ADC chains: code stuck at zero or full scale);
- * board supply lost. Where an open input goes, the rails and the output-stage polarity are design facts the
- * review takes from its {@link FaultContext}.
- * @param chain - the chain (comparator or ADC detector); read for its elements only
- * @param options - wire-short temperature °C, ground offset mV (> 0, default 1), reference drift fraction (0…1,
- *   default 0.05), comparator trip level (default "high")
- * @returns the faults, in signal-path order
- * @throws HotjunctionTypeError / HotjunctionRangeError for bad options or a chain without a thermocouple or detector
- * @example
- * ```ts
- * import { faultCatalogue, type MeasurementChain } from "hotjunction";
- * const chain: MeasurementChain = {
- *   thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "IEC 60584-1", class: 1 } },
- *   amplifier: { kind: "fixedScaleAmplifier", type: "K", millivoltsPerC: 5 },
- *   reference: { kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: 0.001 },
- *   divider: { kind: "divider", resistorsOhms: [10000, 10000], toleranceFraction: 0.01 },
- *   detector: { kind: "comparator" },
- *   ambient: { minC: 15, maxC: 50 },
- * };
- * const faults = faultCatalogue(chain);
- * console.log(faults.length); // 20
- * console.log(faults[0]?.id, faults[0]?.effects[0]?.kind); // "thermocouple.open" "open-thermocouple"
- * ```
- */
-export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueOptions = {}): Fault[] {
-  if (typeof chain !== "object" || chain === null) {
-    throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "chain", value: chain, context, problem: "is not an object" });
-  }
-  const offsetMv =
-    options.groundOffsetMillivolts === undefined ? 1 : _requireInRange(options.groundOffsetMillivolts, "groundOffsetMillivolts", 1e-6, 1e4, "mV", context);
-  const drift =
-    options.referenceDriftFraction === undefined ? 0.05 : _requireInRange(options.referenceDriftFraction, "referenceDriftFraction", 1e-9, 0.999, undefined, context);
-  const level = options.comparatorTripLevel ?? "high";
-  if (level !== "high" && level !== "low") _invalidChoice("comparatorTripLevel", level, ["high", "low"], context);
-  const wireShortC = options.wireShortC === undefined ? undefined : _requireFinite(options.wireShortC, "wireShortC", "°C", context);
-
+// Deliberate repetition: faults are data, so each per-element list below is a run of fault literals of one
+// shape (id, element, description, effects, mitigation); the duplicate finder sees the shape, not a shared logic.
+/** Thermocouple: open, shorts, reversed, ground offsets. */
+function thermocoupleFaults(offsetMv: number, wireShortC: number | undefined): Fault[] {
   const faults: Fault[] = [];
   const add = (f: Fault): void => {
     faults.push(f);
   };
-
-  // Thermocouple
   add({
     id: "thermocouple.open",
     element: "thermocouple",
@@ -133,7 +94,15 @@ export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueO
     mitigation: mitigationText.ground,
   });
 
-  // Cold junction
+  return faults;
+}
+
+/** Cold junction: a hardware compensation lost. */
+function coldJunctionFaults(chain: MeasurementChain): Fault[] {
+  const faults: Fault[] = [];
+  const add = (f: Fault): void => {
+    faults.push(f);
+  };
   if (chain.coldJunction?.method === "hardware") {
     add({
       id: "coldJunction.compensationLost",
@@ -144,7 +113,15 @@ export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueO
     });
   }
 
-  // Amplifier
+  return faults;
+}
+
+/** Amplifier (either kind): output stuck, supply lost, gain resistors open or shorted. */
+function amplifierFaults(chain: MeasurementChain): Fault[] {
+  const faults: Fault[] = [];
+  const add = (f: Fault): void => {
+    faults.push(f);
+  };
   const amp = chain.amplifier;
   if (amp !== undefined) {
     const el = amp.kind;
@@ -186,7 +163,15 @@ export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueO
     }
   }
 
-  // Reference
+  return faults;
+}
+
+/** Reference: open (a shunt rises toward the supply), shorted, drifted. */
+function referenceFaults(chain: MeasurementChain, drift: number): Fault[] {
+  const faults: Fault[] = [];
+  const add = (f: Fault): void => {
+    faults.push(f);
+  };
   const ref = chain.reference;
   if (ref !== undefined) {
     const shunt = ref.variant === "shunt";
@@ -223,7 +208,15 @@ export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueO
     });
   }
 
-  // Divider and detector
+  return faults;
+}
+
+/** Divider and detector: resistors open or shorted, comparator output stuck; ADC code stuck. */
+function detectorFaults(chain: MeasurementChain, level: "high" | "low"): Fault[] {
+  const faults: Fault[] = [];
+  const add = (f: Fault): void => {
+    faults.push(f);
+  };
   const det = chain.detector;
   if (det?.kind === "comparator") {
     const ohms = chain.divider?.resistorsOhms ?? [];
@@ -267,6 +260,15 @@ export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueO
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "detector", value: det, context, problem: "is missing or of unknown kind" });
   }
 
+  return faults;
+}
+
+/** The board: supply lost. */
+function boardFaults(): Fault[] {
+  const faults: Fault[] = [];
+  const add = (f: Fault): void => {
+    faults.push(f);
+  };
   add({
     id: "board.supplyLost",
     element: "board",
@@ -276,3 +278,55 @@ export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueO
   });
   return faults;
 }
+
+/**
+ * The built-in single-fault catalogue of a chain, as data: thermocouple open, shorted at the terminals, shorted
+ * along the wire, reversed, ground offset of either sign; hardware cold-junction compensation lost; amplifier
+ * output stuck at either rail, supply lost, each gain resistor open or shorted (resistor gain only); fixed-scale
+ * amplifier stuck at either rail, supply lost; reference open, shorted, drifted low and high; each divider
+ * resistor open or shorted; comparator output stuck high or low (ADC chains: code stuck at zero or full scale);
+ * board supply lost. Where an open input goes, the rails and the output-stage polarity are design facts the
+ * review takes from its {@link FaultContext}.
+ * @param chain - the chain (comparator or ADC detector); read for its elements only
+ * @param options - wire-short temperature °C, ground offset mV (> 0, default 1), reference drift fraction (0…1,
+ *   default 0.05), comparator trip level (default "high")
+ * @returns the faults, in signal-path order
+ * @throws HotjunctionTypeError / HotjunctionRangeError for bad options or a chain without a thermocouple or detector
+ * @example
+ * ```ts
+ * import { faultCatalogue, type MeasurementChain } from "hotjunction";
+ * const chain: MeasurementChain = {
+ *   thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "IEC 60584-1", class: 1 } },
+ *   amplifier: { kind: "fixedScaleAmplifier", type: "K", millivoltsPerC: 5 },
+ *   reference: { kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: 0.001 },
+ *   divider: { kind: "divider", resistorsOhms: [10000, 10000], toleranceFraction: 0.01 },
+ *   detector: { kind: "comparator" },
+ *   ambient: { minC: 15, maxC: 50 },
+ * };
+ * const faults = faultCatalogue(chain);
+ * console.log(faults.length); // 20
+ * console.log(faults[0]?.id, faults[0]?.effects[0]?.kind); // "thermocouple.open" "open-thermocouple"
+ * ```
+ */
+export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueOptions = {}): Fault[] {
+  if (typeof chain !== "object" || chain === null) {
+    throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "chain", value: chain, context, problem: "is not an object" });
+  }
+  const offsetMv =
+    options.groundOffsetMillivolts === undefined ? 1 : _requireInRange(options.groundOffsetMillivolts, "groundOffsetMillivolts", 1e-6, 1e4, "mV", context);
+  const drift =
+    options.referenceDriftFraction === undefined ? 0.05 : _requireInRange(options.referenceDriftFraction, "referenceDriftFraction", 1e-9, 0.999, undefined, context);
+  const level = options.comparatorTripLevel ?? "high";
+  if (level !== "high" && level !== "low") _invalidChoice("comparatorTripLevel", level, ["high", "low"], context);
+  const wireShortC = options.wireShortC === undefined ? undefined : _requireFinite(options.wireShortC, "wireShortC", "°C", context);
+
+  return [
+    ...thermocoupleFaults(offsetMv, wireShortC),
+    ...coldJunctionFaults(chain),
+    ...amplifierFaults(chain),
+    ...referenceFaults(chain, drift),
+    ...detectorFaults(chain, level),
+    ...boardFaults(),
+  ];
+}
+

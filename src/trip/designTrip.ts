@@ -5,21 +5,21 @@
  */
 import { midRailDivider } from "./midRailDivider.js";
 import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
-import type { DividerElement } from "../chain/types.js";
+import type { DividerElement, MeasurementChain, ReferenceElement } from "../chain/types.js";
 import { propagate } from "../uncertainty/propagate.js";
 import type { PropagationMethod, PropagationResult } from "../uncertainty/types.js";
-import { realizeReference } from "./realizeReference.js";
+import { _realizeReference } from "./realizeReference.js";
 import { selectDividerPair } from "./selectDividerPair.js";
 import { selectLadder } from "./selectLadder.js";
 import { _requireSeries } from "./standardResistorValues.js";
 import {
-  _buildTripChain,
-  _edgeVolts,
+  _comparatorTripModel,
+  _compileComparatorChain,
+  _edgeMillivolts,
   _nominalSignalVolts,
   _nominalSwitchingC,
-  _tripTemperatureModel,
-  type _TripChain,
-} from "./_tripChain.js";
+} from "../chain/tripTemperatureModel.js";
+import type { _CompiledChain, _PrebuiltStages } from "../chain/_compileChain.js";
 import type {
   ProcessLimits,
   ReferenceOption,
@@ -93,6 +93,36 @@ function totalBounds(design: TripDesign, volts: number): { minTotalOhms: number;
     designError("divider resistance bounds", [minTotalOhms, maxTotalOhms], `are empty (${minTotalOhms} Ω to ${maxTotalOhms} Ω after the current bounds)`);
   }
   return { minTotalOhms, maxTotalOhms };
+}
+
+/** A compiled comparator chain of the design and the cold-junction temperature thresholds are designed at. */
+interface TripChain {
+  readonly compiled: _CompiledChain;
+  readonly designColdJunctionC: number;
+}
+
+/** Builds and compiles the comparator chain of a design with a given reference and divider. */
+function buildTripChain(
+  design: TripDesign,
+  reference: ReferenceElement,
+  divider: DividerElement | undefined,
+  prebuilt?: _PrebuiltStages,
+): TripChain {
+  const chain: MeasurementChain = {
+    thermocouple: design.thermocouple,
+    ...(design.coldJunction !== undefined ? { coldJunction: design.coldJunction } : {}),
+    ...(design.amplifier !== undefined ? { amplifier: design.amplifier } : {}),
+    reference,
+    ...(divider !== undefined ? { divider } : {}),
+    detector: design.comparator,
+    ambient: design.ambient,
+    ...(design.sourceDistributions !== undefined ? { sourceDistributions: design.sourceDistributions } : {}),
+    ...(design.name !== undefined ? { label: design.name } : {}),
+  };
+  const compiled = _compileComparatorChain(chain, "trip design", prebuilt);
+  // Without an ambient span the chain holds the cold junction at the single ambient value.
+  const designColdJunctionC = compiled.hasAmbientInput ? (design.designColdJunctionC ?? compiled.ambientCenterC) : design.ambient.minC;
+  return { compiled, designColdJunctionC };
 }
 
 interface SetpointPlan {
@@ -280,10 +310,11 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
   const resistorTolerance = _requireFinite(design.resistors?.toleranceFraction, "resistors.toleranceFraction", "", "trip design");
 
   // The signal path alone, with an error-free reference and no divider, gives the ideal thresholds.
-  const probe = _buildTripChain(design, { kind: "reference", variant: "series", nominalVolts: volts, initialAccuracyFraction: 0 }, undefined);
-  const tripEdgeVolts = _edgeVolts(probe, "trip");
+  const probe = buildTripChain(design, { kind: "reference", variant: "series", nominalVolts: volts, initialAccuracyFraction: 0 }, undefined);
+  const tripEdgeVolts = _edgeMillivolts(probe.compiled, "trip") / 1000;
+  const signalVolts = (hotJunctionC: number): number => _nominalSignalVolts(probe.compiled, hotJunctionC, probe.designColdJunctionC);
   const plans: SetpointPlan[] = setpoints.map((sp) => {
-    const idealThresholdVolts = _nominalSignalVolts(probe, sp.tripC) - tripEdgeVolts;
+    const idealThresholdVolts = signalVolts(sp.tripC) - tripEdgeVolts;
     const idealRatio = idealThresholdVolts / volts;
     if (!(idealRatio > 0 && idealRatio < 1)) {
       throw new HotjunctionRangeError({
@@ -298,20 +329,22 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
       });
     }
     const stepC = 0.05;
-    const slopeVoltsPerC = (_nominalSignalVolts(probe, sp.tripC + stepC) - _nominalSignalVolts(probe, sp.tripC - stepC)) / (2 * stepC);
+    const slopeVoltsPerC = (signalVolts(sp.tripC + stepC) - signalVolts(sp.tripC - stepC)) / (2 * stepC);
     if (!(slopeVoltsPerC > 0)) designError(`signal slope at setpoint "${sp.name}"`, slopeVoltsPerC, "is not positive; the comparator needs a rising signal");
     return { ...sp, idealThresholdVolts, idealRatio, slopeVoltsPerC };
   });
 
   const { networks, place, notes } = planNetworks(design, plans, volts, options.networks);
   const dividerCurrentMilliamps = networks.reduce((sum, n) => sum + n.currentMilliamps, 0);
-  const realized = realizeReference(design.reference, design.ambient, {
-    dividerCurrentMilliamps,
-    resistorSeries: design.resistors.series,
-    resistorToleranceFraction: resistorTolerance,
-  });
+  // The reference's sources are computed once, here, and every threshold network's chain reuses them.
+  const realized = _realizeReference(
+    design.reference,
+    design.ambient,
+    { dividerCurrentMilliamps, resistorSeries: design.resistors.series, resistorToleranceFraction: resistorTolerance },
+    { overrides: design.sourceDistributions },
+  );
 
-  const chains: _TripChain[] = networks.map((n) => {
+  const chains: TripChain[] = networks.map((n) => {
     const divider: DividerElement = {
       kind: "divider",
       resistorsOhms: n.resistorsOhms,
@@ -319,19 +352,20 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
       ...(design.resistors.tempcoPpmPerC !== undefined ? { tempcoPpmPerC: design.resistors.tempcoPpmPerC } : {}),
       ...(design.resistors.matched !== undefined ? { matched: design.resistors.matched } : {}),
     };
-    return _buildTripChain(design, realized.element, divider);
+    return buildTripChain(design, realized.element, divider, { reference: realized.stage });
   });
 
   const results: SetpointTripResult[] = plans.map((plan, i) => {
     const { network: networkIndex, tap } = place[i] as { network: number; tap: number };
-    const tc = chains[networkIndex] as _TripChain;
+    const tc = chains[networkIndex] as TripChain;
     const net = networks[networkIndex] as ThresholdNetwork;
     const above = net.resistorsOhms.slice(0, tap + 1).reduce((a, b) => a + b, 0);
     const below = net.totalOhms - above;
     const realizedRatio = below / net.totalOhms;
-    const nominalTripC = _nominalSwitchingC(tc, tap, "trip", plan.tripC);
-    const nominalReleaseC = _nominalSwitchingC(tc, tap, "release", plan.tripC);
-    const { model, inputs, sources } = _tripTemperatureModel(tc, tap, "trip", plan.tripC);
+    const nominalTripC = _nominalSwitchingC(tc.compiled, tap, "trip", tc.designColdJunctionC);
+    const nominalReleaseC = _nominalSwitchingC(tc.compiled, tap, "release", tc.designColdJunctionC);
+    // The thermocouple tolerance is taken at the setpoint.
+    const { model, inputs, sources } = _comparatorTripModel(tc.compiled, tap, "trip", plan.tripC);
     const onProgress = options.onProgress;
     // A chain with every error source at zero (an ideal design) has nothing to propagate: its band is the
     // nominal trip itself, by every method.

@@ -5,9 +5,8 @@
 import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
 import type { PreferredSeriesName } from "../data/preferredSeries.js";
 import type { AmbientRange, ReferenceElement, SeriesReference, ShuntReference } from "../chain/types.js";
-import { _regulatorReferenceSources } from "../chain/regulatorReference.js";
-import { _seriesReferenceSources } from "../chain/seriesReference.js";
-import { _shuntReferenceSources } from "../chain/shuntReference.js";
+import type { _SourceContext } from "../chain/_common.js";
+import { _referenceStage, type _ReferenceStage } from "../chain/reference.js";
 import { shuntResistorSizing } from "../chain/shuntReference.js";
 import { _indexAtOrBelow, _requireSeries, standardResistorValues } from "./standardResistorValues.js";
 import type { ReferenceOption, ReferenceRealization } from "./types.js";
@@ -46,16 +45,31 @@ function nonNegative(value: unknown, quantity: string, unit: string, context: st
   return x;
 }
 
-/** Sum of the reference element's error bounds (the chain's reference sources) as a fraction of nominal. */
-function toleranceFractionOf(element: ReferenceElement, ambient: AmbientRange, context: string): number {
-  const ctx = { overrides: undefined };
-  const sources =
-    element.variant === "series"
-      ? _seriesReferenceSources(element, ambient, ctx, context)
-      : element.variant === "shunt"
-        ? _shuntReferenceSources(element, ambient, ctx, context)
-        : _regulatorReferenceSources(element, ctx, context);
-  return sources.reduce((sum, source) => sum + source.limit, 0);
+/** @internal A realized reference with its chain stage: the reference's error sources, computed once. */
+export interface _RealizedReference extends RealizedReference {
+  readonly stage: _ReferenceStage;
+}
+
+/**
+ * The chain's reference stage of a realized element (its sources through the chain's reference module, so an
+ * unknown variant is refused there) and the report: the tolerance figure is the sum of the sources' bounds.
+ */
+function realized(
+  element: ReferenceElement,
+  realization: Omit<ReferenceRealization, "toleranceFraction">,
+  ambient: AmbientRange,
+  ctx: _SourceContext,
+  context: string,
+): _RealizedReference {
+  const stage = _referenceStage(element, ambient, ctx, context);
+  const toleranceFraction = stage.sources.reduce((sum, source) => sum + source.limit, 0);
+  // Key order as the report has always printed it: the tolerance figure after the element.
+  const { name, kind, nominalVolts, element: used, problems, ...shunt } = realization;
+  return {
+    element,
+    realization: { name, kind, nominalVolts, ...(used !== undefined ? { element: used } : {}), toleranceFraction, ...shunt, problems },
+    stage,
+  };
 }
 
 /**
@@ -90,6 +104,20 @@ export function realizeReference(
   ambient: AmbientRange,
   options: RealizeReferenceOptions = {},
 ): RealizedReference {
+  const { element, realization } = _realizeReference(option, ambient, options, { overrides: undefined });
+  return { element, realization };
+}
+
+/**
+ * @internal {@link realizeReference} with the chain's source context (distribution overrides), returning
+ * also the reference stage a trip chain is compiled with (`_compileChain(chain, { reference: stage })`).
+ */
+export function _realizeReference(
+  option: ReferenceOption,
+  ambient: AmbientRange,
+  options: RealizeReferenceOptions,
+  ctx: _SourceContext,
+): _RealizedReference {
   const context = `reference option ${typeof option?.name === "string" ? JSON.stringify(option.name) : ""}`.trim();
   if (typeof option !== "object" || option === null) {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "reference option", value: option, context, problem: "is not an object" });
@@ -103,7 +131,7 @@ export function realizeReference(
     case "ideal": {
       const nominalVolts = positive(option.nominalVolts, "nominalVolts", "V", context);
       const element: SeriesReference = { kind: "reference", variant: "series", nominalVolts, initialAccuracyFraction: 0, label: option.name };
-      return { element, realization: { name: option.name, kind: "ideal", nominalVolts, toleranceFraction: 0, problems: [] } };
+      return realized(element, { name: option.name, kind: "ideal", nominalVolts, problems: [] }, ambient, ctx, context);
     }
     case "element": {
       const given = option.element;
@@ -119,20 +147,10 @@ export function realizeReference(
               loadMaxMilliamps: (given.loadMaxMilliamps ?? given.loadMinMilliamps ?? 0) + dividerMilliamps,
             }
           : given;
-      return {
-        element,
-        realization: {
-          name: option.name,
-          kind: "element",
-          nominalVolts,
-          element,
-          toleranceFraction: toleranceFractionOf(element, ambient, context),
-          problems: [],
-        },
-      };
+      return realized(element, { name: option.name, kind: "element", nominalVolts, element, problems: [] }, ambient, ctx, context);
     }
     case "sized-shunt":
-      return sizeShunt(option, ambient, dividerMilliamps, options, context);
+      return sizeShunt(option, ambient, dividerMilliamps, options, ctx, context);
     default:
       return _invalidChoice("reference option kind", (option as { kind?: unknown }).kind, kinds, context);
   }
@@ -143,8 +161,9 @@ function sizeShunt(
   ambient: AmbientRange,
   dividerMilliamps: number,
   options: RealizeReferenceOptions,
+  ctx: _SourceContext,
   context: string,
-): RealizedReference {
+): _RealizedReference {
   const given = option.element;
   if (typeof given !== "object" || given === null || given.variant !== "shunt") {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "shunt element", value: given, context, problem: "is not a shunt reference element" });
@@ -218,18 +237,20 @@ function sizeShunt(
   // needs, so that a design with a problem still gets its trip band.
   const { shuntMaxMilliamps: _checkedAbove, ...rest } = given;
   const element: ShuntReference = { ...rest, seriesOhms, loadMinMilliamps: loadMin, loadMaxMilliamps: loadMax };
-  return {
+  return realized(
     element,
-    realization: {
+    {
       name: option.name,
       kind: "sized-shunt",
       nominalVolts: vRef,
       element,
-      toleranceFraction: toleranceFractionOf(element, ambient, context),
       shuntCurrentMinMilliamps,
       shuntCurrentMaxMilliamps,
       seriesResistorPowerWatts,
       problems,
     },
-  };
+    ambient,
+    ctx,
+    context,
+  );
 }

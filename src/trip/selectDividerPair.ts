@@ -58,6 +58,11 @@ export function _totalBounds(
   return { minTotal, maxTotal };
 }
 
+/** @internal Throws the error of total-resistance bounds that leave no network (`problem` says which). */
+export function _noNetworkInBounds(minTotal: number, maxTotal: number, context: string, problem: string): never {
+  throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "total resistance bounds", value: maxTotal, min: minTotal, max: maxTotal, unit: "Ω", context, problem });
+}
+
 /**
  * Finds the pair of standard resistors (top R1 from the reference to the tap, bottom R2 from the tap to
  * ground) whose ratio k = R2/(R1+R2) has the least |error| against a target ratio, with R1 + R2 within
@@ -124,16 +129,7 @@ export function selectDividerPair(targetRatio: number, options: SelectDividerPai
     }
   }
   if (best === undefined) {
-    throw new HotjunctionRangeError({
-      code: "INVALID_DESIGN",
-      quantity: "total resistance bounds",
-      value: maxTotal,
-      min: minTotal,
-      max: maxTotal,
-      unit: "Ω",
-      context,
-      problem: `leave no pair of ${series} values`,
-    });
+    _noNetworkInBounds(minTotal, maxTotal, context, `leave no pair of ${series} values`);
   }
   return { ...best, pairsChecked };
 }

@@ -4,7 +4,7 @@
  */
 import { _requireFinite, HotjunctionRangeError } from "../errors.js";
 import type { PreferredSeriesName } from "../data/preferredSeries.js";
-import { _totalBounds } from "./selectDividerPair.js";
+import { _noNetworkInBounds, _totalBounds } from "./selectDividerPair.js";
 import { _indexAtOrBelow, _requireSeries, standardResistorValues } from "./standardResistorValues.js";
 
 /** Options of {@link selectLadder}. */
@@ -182,16 +182,7 @@ export function selectLadder(targetRatios: readonly number[], options: SelectLad
     }
   }
   if (best === undefined) {
-    throw new HotjunctionRangeError({
-      code: "INVALID_DESIGN",
-      quantity: "total resistance bounds",
-      value: maxTotal,
-      min: minTotal,
-      max: maxTotal,
-      unit: "Ω",
-      context,
-      problem: `leave no ${series} ladder for these taps`,
-    });
+    _noNetworkInBounds(minTotal, maxTotal, context, `leave no ${series} ladder for these taps`);
   }
   const resistorsOhms = best.indices.map((index) => values[index] as number);
   const ratios = ratiosOf(best.indices) as number[];

@@ -162,7 +162,7 @@ export interface TripBand {
 
 /** One error source's share of the trip band. */
 export interface TripErrorSource {
-  /** Chain source name (e.g. "thermocouple.tolerance", "reference.initial", "divider.resistor0.tolerance"). */
+  /** Chain source name (e.g. "thermocouple.tolerance", "reference.initialAccuracy", "divider.resistor1.tolerance"). */
   readonly name: string;
   /** What it is, in words. */
   readonly description: string;

@@ -31,8 +31,8 @@ describe("series reference", () => {
     expect(boxMethodTempcoPpmPerC(2.501, 2.4995, 2.5, -40, 85)).toBeCloseTo(4.8, 9);
   });
   it("load regulation: 10 µV change on 2.048 V for 2 mA is 2.441 ppm/mA; error = spec × change (reference sheet §5, (a) data-sheet example)", () => {
-    const ppmPerMilliamp = (10e-6 / 2.048 / 2) * 1e6;
-    expect(ppmPerMilliamp).toBeCloseTo(2.441, 3);
+    // The sheet's figure as printed (4 significant digits) goes in; the library must give back its 10 µV.
+    const ppmPerMilliamp = 2.441;
     const ref: SeriesReference = {
       kind: "reference",
       variant: "series",
@@ -43,9 +43,11 @@ describe("series reference", () => {
       loadMaxMilliamps: 2,
     };
     // Back to volts: the whole 2 mA span moves the output by the 10 µV it was measured from.
-    expect((limit(ref, "reference.loadRegulation") as number) * 2.048).toBeCloseTo(10e-6, 12);
-    // With the rated point known, the largest distance from it counts: 0.5 mA rated, 0…2 mA → 1.5 mA.
-    expect(limit({ ...ref, ratedLoadMilliamps: 0.5 }, "reference.loadRegulation")).toBeCloseTo(ppmPerMilliamp * 1.5e-6, 15);
+    // (2.441 ppm/mA × 2 mA × 2.048 V = 9.998 µV: within the sheet's rounding of 2.441, 5e-9 V.)
+    expect((limit(ref, "reference.loadRegulation") as number) * 2.048).toBeCloseTo(10e-6, 8);
+    // With the rated point known, the largest distance from it counts (common practice, no source):
+    // 0.5 mA rated, 0…2 mA → 1.5 mA, 2.441 ppm/mA × 1.5 mA = 3.6615 ppm.
+    expect(limit({ ...ref, ratedLoadMilliamps: 0.5 }, "reference.loadRegulation")).toBeCloseTo(3.6615e-6, 15);
   });
   it("line regulation: ppm/V × supply span (reference sheet §5, (a))", () => {
     const ref: SeriesReference = {
@@ -99,11 +101,28 @@ describe("series reference", () => {
     );
   });
   it("series references typically 20–50 ppm/°C against ≈15 ppm/°C for good shunt references (common practice, no source)", () => {
-    // Over 0…70 °C, box method: 20 ppm/°C → 0.14 %, 50 ppm/°C → 0.35 %, 15 ppm/°C → 0.105 %.
+    // Over 0…70 °C, box method: 20 ppm/°C → 0.14 %, 50 ppm/°C → 0.35 %, 15 ppm/°C → 0.105 %. The fact checked:
+    // with otherwise equal parts, a good shunt reference's tempco source is below a typical series reference's
+    // at both ends of the series range, through each variant's own source model.
     const range = { minC: 0, maxC: 70 };
-    expect(tempcoExcursionPpm(20, range)).toBe(1400);
-    expect(tempcoExcursionPpm(50, range)).toBe(3500);
-    expect(tempcoExcursionPpm(15, range)).toBe(1050);
+    const seriesAt = (ppm: number) =>
+      limit({ kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: 0.001, tempcoPpmPerC: ppm }, "reference.tempco", range);
+    const shunt: ShuntReference = {
+      kind: "reference",
+      variant: "shunt",
+      nominalVolts: 2.5,
+      initialAccuracyFraction: 0.001,
+      tempcoPpmPerC: 15,
+      seriesOhms: 1000,
+      supplyMinVolts: 4.75,
+      supplyMaxVolts: 5.25,
+    };
+    const shuntTempco = limit(shunt, "reference.tempco", range) as number;
+    expect(seriesAt(20)).toBeCloseTo(1400e-6, 15);
+    expect(seriesAt(50)).toBeCloseTo(3500e-6, 15);
+    expect(shuntTempco).toBeCloseTo(1050e-6, 15);
+    expect(shuntTempco).toBeLessThan(seriesAt(20) as number);
+    expect(shuntTempco / (seriesAt(50) as number)).toBeCloseTo(0.3, 12);
   });
 });
 

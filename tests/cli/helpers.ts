@@ -4,11 +4,16 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { runCli } from "../../src/cli/runCli.js";
+import type { WriteHooks } from "../../src/cli/writeOutput.js";
 
 export const projectRoot = fileURLToPath(new URL("../..", import.meta.url));
 
-/** Runs the CLI in-process with captured streams. */
-export async function run(args: string[], cwd: string = projectRoot): Promise<{ code: number; stdout: string; stderr: string }> {
+/** Runs the CLI in-process with captured streams (and, for fault injection, hooks into the output writes). */
+export async function run(
+  args: string[],
+  cwd: string = projectRoot,
+  writeHooks?: WriteHooks,
+): Promise<{ code: number; stdout: string; stderr: string }> {
   let stdout = "";
   let stderr = "";
   const code = await runCli(args, {
@@ -16,8 +21,18 @@ export async function run(args: string[], cwd: string = projectRoot): Promise<{ 
     writeErr: (t) => (stderr += t),
     stderrIsTty: false,
     cwd,
+    ...(writeHooks !== undefined ? { writeHooks } : {}),
   });
   return { code, stdout, stderr };
+}
+
+/** Asserts a one-line error on standard error (`hotjunction: ...\n`). */
+export function oneLine(stderr: string): string {
+  const lines = stderr.split("\n");
+  if (lines.length !== 2 || lines[1] !== "" || !stderr.startsWith("hotjunction: ")) {
+    throw new Error(`expected one line "hotjunction: ...", found ${JSON.stringify(stderr)}`);
+  }
+  return lines[0] as string;
 }
 
 /** Runs the real binary entry through tsx in a child process. */

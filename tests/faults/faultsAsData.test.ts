@@ -126,6 +126,22 @@ describe("precise errors", () => {
     expect(codeOf(() => reviewFaults(ovenChain, ovenTrip, { faults: [farDivider] }))).toBe("OUT_OF_RANGE");
   });
 
+  it("refuses a hazard limit equal to the normal limit (strictly above; equal limits used to pass)", () => {
+    // Regression: `!(hazard > maxNormal)` was checked with an inclusive range, so 250 = 250 went through.
+    const equal = () => reviewFaults(ovenChain, { ...ovenTrip, hazardLimitC: ovenTrip.maxNormalOperatingC });
+    expect(codeOf(equal)).toBe("OUT_OF_RANGE");
+    expect(equal).toThrow(/hazardLimitC 250 °C is not above maxNormalOperatingC 250 °C; valid range: more than 250 °C/);
+    // The same strict check for equal amplifier rails and an empty out-of-range window.
+    expect(() => reviewFaults(ovenChain, ovenTrip, { amplifierRailsVolts: { lowVolts: 5, highVolts: 5 } })).toThrow(
+      /amplifierRailsVolts.highVolts 5 V is not above amplifierRailsVolts.lowVolts 5 V/,
+    );
+    expect(() => reviewFaults(ovenChain, ovenTrip, { detection: { outOfRangeWindow: { lowC: 0, highC: 0 } } })).toThrow(
+      /outOfRangeWindow.highC 0 °C is not above outOfRangeWindow.lowC 0 °C/,
+    );
+    // Just above is accepted: a limit 0.1 °C over the normal one is a valid (if tight) review.
+    expect(reviewFaults(ovenChain, { ...ovenTrip, hazardLimitC: ovenTrip.maxNormalOperatingC + 0.1 }).hazardLimitC).toBe(250.1);
+  });
+
   it("a healthy chain that never trips within the sweep is a design error", () => {
     const high = { ...ovenChain, divider: { kind: "divider", resistorsOhms: [1000, 24000], toleranceFraction: 0.01 } } as const;
     expect(codeOf(() => reviewFaults(high, ovenTrip))).toBe("INVALID_DESIGN");

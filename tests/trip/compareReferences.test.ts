@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { compareReferences } from "../../src/trip/compareReferences.js";
+import { HotjunctionRangeError } from "../../src/errors.js";
 import { realizeReference } from "../../src/trip/realizeReference.js";
 import type { ReferenceOption, TripDesign } from "../../src/trip/types.js";
 
@@ -91,5 +92,33 @@ describe("realizeReference", () => {
         { minC: 0, maxC: 50 },
       ),
     ).toThrow(/not above the reference voltage/);
+  });
+});
+
+describe("realizeReference refuses an unknown reference variant", () => {
+  // Regression: a variant outside series/shunt/regulator used to be read as a regulator
+  // ("regulator tolerance undefined is missing"); the chain's reference module names the variant and the choices.
+  it("throws INVALID_OPTION naming the variant and series, shunt, regulator", () => {
+    const option = {
+      kind: "element",
+      name: "mystery",
+      element: { kind: "reference", variant: "bandgap", nominalVolts: 2.5, initialAccuracyFraction: 0.001 },
+    } as unknown as ReferenceOption;
+    let caught: unknown;
+    try {
+      realizeReference(option, { minC: 0, maxC: 50 });
+    } catch (e) {
+      caught = e;
+    }
+    expect(caught).toBeInstanceOf(HotjunctionRangeError);
+    const err = caught as HotjunctionRangeError;
+    expect(err.code).toBe("INVALID_OPTION");
+    expect(err.message).toMatch(/reference variant "bandgap" is not a valid choice/);
+    expect(err.message).toMatch(/series, shunt, regulator/);
+    expect(err.message).not.toMatch(/regulator tolerance/);
+  });
+  it("designTrip refuses it the same way", () => {
+    const design = { ...kiln, reference: { kind: "element", name: "mystery", element: { kind: "reference", variant: "bandgap", nominalVolts: 5 } } } as unknown as TripDesign;
+    expect(() => compareReferences(design, [design.reference], fast)).toThrow(/reference variant "bandgap" is not a valid choice/);
   });
 });

@@ -36,6 +36,8 @@ const hotForIndicatedC = (indicated: number): number => temperatureFromEmf("K", 
 describe("designTrip: hand-checked bands", () => {
   it("250 mV threshold from a 5 V ±4 % rail on a 5 mV/°C amplifier trips between 48 and 52 °C indicated", () => {
     // common practice, no source: 250 mV ±4 % = 240…260 mV; /5 mV/°C = 48…52 °C (indicated by the amplifier).
+    // The chain layer asserts this fact (and the 2.00 V → 416 °C one) on the model (tests/chain/tradeFacts);
+    // this layer adds the given network, the propagation through designTrip and the hot junction via ITS-90.
     // 5 V regulator ±4 % grade: error-budget-checks §5 (a). Divider 95 kΩ/5 kΩ gives k = 0.05 exactly.
     const r = designTrip(railOnly(0.04, 50), { ...fast, networks: [{ topology: "two-resistor", resistorsOhms: [95000, 5000], totalOhms: 100000, currentMilliamps: 0.05 }] });
     const sp = r.setpoints[0]!;
@@ -45,15 +47,6 @@ describe("designTrip: hand-checked bands", () => {
     expect(indicatedC(sp.nominalTripC)).toBeCloseTo(50, 6);
     // through ITS-90 (NIST Monograph 175 reference function) the hot junction is a little lower than indicated
     expect(sp.worstCase.lowC).toBeCloseTo(hotForIndicatedC(48), 6);
-  });
-
-  it("a 2.00 V threshold for 400 °C can be as high as 2.08 V, i.e. 416 °C indicated", () => {
-    // common practice, no source: 2.00 V × 1.04 = 2.08 V; /5 mV/°C = 416 °C. Divider 15 kΩ/10 kΩ: k = 0.4.
-    const r = designTrip(railOnly(0.04, 400), { ...fast, networks: [{ topology: "two-resistor", resistorsOhms: [15000, 10000], totalOhms: 25000, currentMilliamps: 0.2 }] });
-    const sp = r.setpoints[0]!;
-    expect(sp.realizedThresholdVolts).toBeCloseTo(2.0, 12);
-    expect(indicatedC(sp.worstCase.highC)).toBeCloseTo(416, 6);
-    expect(indicatedC(sp.worstCase.lowC)).toBeCloseTo(384, 6);
   });
 
   it("the ideal threshold equals the chain's required threshold, and E96 rounding moves the trip < 0.2 °C", () => {
@@ -222,11 +215,10 @@ describe("designTrip: bad input", () => {
   it("throws INVALID_DESIGN for a threshold beyond the reference", () => {
     // 5 mV/°C at 1200 °C is ≈ 6 V, above a 5 V rail
     expect(() => designTrip(railOnly(0.04, 1200), fast)).toThrow(HotjunctionRangeError);
-    try {
-      designTrip(railOnly(0.04, 1200), fast);
-    } catch (e) {
-      expect((e as HotjunctionRangeError).code).toBe("INVALID_DESIGN");
-    }
+    expect(() => designTrip(railOnly(0.04, 1200), fast)).toThrow(
+      expect.objectContaining({ code: "INVALID_DESIGN", quantity: 'threshold of setpoint "rail check"', max: 5, unit: "V" }),
+    );
+    expect(() => designTrip(railOnly(0.04, 1200), fast)).toThrow(/is not within the reference voltage, so no divider can make it/);
   });
   it("throws for missing process limits, a hazard limit not above normal, no setpoints", () => {
     const d = railOnly(0.04, 400);
@@ -280,5 +272,17 @@ describe("designTrip and compareReferences: progress", () => {
       expect(Math.min(...seen)).toBeGreaterThanOrEqual(0);
       expect(seen[seen.length - 1]).toBeCloseTo(1, 12);
     }
+  });
+});
+
+describe("tripDesignFromDesign: an ADC design has no thresholds", () => {
+  it("throws a typed INVALID_DESIGN error (was a plain Error)", async () => {
+    const { readFileSync } = await import("node:fs");
+    const { parseDesign } = await import("../../src/design/parseDesign.js");
+    const { tripDesignFromDesign } = await import("../../src/design/designToObjects.js");
+    const design = parseDesign(readFileSync("examples/heated-enclosure-adc.json", "utf8"));
+    expect(() => tripDesignFromDesign(design)).toThrow(HotjunctionRangeError);
+    expect(() => tripDesignFromDesign(design)).toThrow(expect.objectContaining({ code: "INVALID_DESIGN", quantity: "comparator" }));
+    expect(() => tripDesignFromDesign(design)).toThrow(/an ADC design has no comparator thresholds to design/);
   });
 });

@@ -15,24 +15,26 @@ import { designTrip } from "../../trip/designTrip.js";
 import type { CliIo } from "../io.js";
 import {
   _addAnalysisOptions,
+  _addReportOnlyOption,
   _analysisSettings,
   _loadDesign,
   _methodInfo,
   type AnalysisOptionValues,
   type AnalysisSettings,
 } from "../designOptions.js";
+import { marginFailExitCode } from "../cliError.js";
 import {
   _addOutputOptions,
   _chosenFormat,
-  _emitMain,
+  _emitOutputs,
   _planCommandOutputs,
   type OutputOptionValues,
 } from "../outputOptions.js";
 import { _startProgress } from "../progress.js";
 import type { CommandContext } from "../runCli.js";
-import { _writeOutput } from "../writeOutput.js";
 
-type CheckOptions = OutputOptionValues & AnalysisOptionValues;
+type CheckOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean };
+
 
 /** The trip report of a design (comparator or ADC). @internal */
 export function _tripReportOfDesign(io: CliIo, design: DesignFile, settings: AnalysisSettings): TripReport {
@@ -94,17 +96,19 @@ export function registerCheckCommand(program: Command, context: CommandContext):
       "\nExamples:\n  hotjunction check examples/reflow-oven-trip.json\n  hotjunction check kiln.json --method monte-carlo --trials 100000 --seed 7 --markdown --out kiln-report.md --svg kiln-bands.svg\n",
     );
   _addAnalysisOptions(command, "the trip bands");
-  _addOutputOptions(command, ["json", "markdown", "csv"]);
+  _addOutputOptions(command, ["json", "markdown", "csv"], true);
+  _addReportOnlyOption(command);
   command.action(async (path: string, options: CheckOptions) => {
     const plan = _planCommandOutputs(context.io, options, [path], options.svg !== undefined ? [options.svg] : []);
-    const design = _loadDesign(context.io, path);
+    const { design, input } = await _loadDesign(context.io, path);
     const report = _tripReportOfDesign(context.io, design, _analysisSettings(design, options));
     const named = design.name !== undefined ? { ...report, designName: design.name } : report;
-    await _emitMain(context.io, plan, renderTripReport(named, _chosenFormat(options)));
-    const svg = plan.extras[0];
-    if (svg !== undefined) {
-      await _writeOutput(svg, tripBandChartSvg(named));
-      context.io.writeErr(`hotjunction: wrote ${svg.displayPath}\n`);
+    const text = renderTripReport(named, _chosenFormat(options));
+    const extras = plan.extras.length > 0 ? [tripBandChartSvg(named)] : [];
+    _emitOutputs(context.io, plan, options, text, extras, [input]);
+    if (!named.pass && options.reportOnly !== true) {
+      context.io.writeErr(`hotjunction: ${path}: the design fails its margins (exit ${marginFailExitCode}; --report-only exits 0)\n`);
+      if (context.outcome !== undefined) context.outcome.exitCode = marginFailExitCode;
     }
   });
   return command;

@@ -8,9 +8,10 @@ import { referenceOptionFromDesign, tripDesignFromDesign } from "../../design/de
 import { renderComparisonReport } from "../../report/renderComparisonReport.js";
 import { compareReferences } from "../../trip/compareReferences.js";
 import { _startProgress } from "../progress.js";
-import { CliError } from "../cliError.js";
+import { CliError, marginFailExitCode } from "../cliError.js";
 import {
   _addAnalysisOptions,
+  _addReportOnlyOption,
   _analysisSettings,
   _loadDesign,
   _methodInfo,
@@ -19,13 +20,13 @@ import {
 import {
   _addOutputOptions,
   _chosenFormat,
-  _emitMain,
+  _emitOutputs,
   _planCommandOutputs,
   type OutputOptionValues,
 } from "../outputOptions.js";
 import type { CommandContext } from "../runCli.js";
 
-type CompareOptions = OutputOptionValues & Omit<AnalysisOptionValues, "svg">;
+type CompareOptions = OutputOptionValues & Omit<AnalysisOptionValues, "svg"> & { readonly reportOnly?: boolean };
 
 /** Registers the `compare` command. @internal */
 export function registerCompareCommand(program: Command, context: CommandContext): Command {
@@ -34,12 +35,13 @@ export function registerCompareCommand(program: Command, context: CommandContext
     .description("compare the reference options of a design file (reference and referenceAlternatives)")
     .argument("<design>", "design file (JSON) with a comparator")
     .addHelpText("after", "\nExample:\n  hotjunction compare examples/reflow-oven-trip.json --markdown\n");
-  _addAnalysisOptions(command, "nothing (not available for compare)");
+  // No --svg yet: the chart of the options' bands side by side is still to come (check --svg draws one design's).
+  _addAnalysisOptions(command, undefined);
   _addOutputOptions(command, ["json", "markdown", "csv"]);
-  command.action(async (path: string, options: CompareOptions & { svg?: string }) => {
-    if (options.svg !== undefined) throw new CliError("compare has no chart; use check --svg for the trip bands");
+  _addReportOnlyOption(command);
+  command.action(async (path: string, options: CompareOptions) => {
     const plan = _planCommandOutputs(context.io, options, [path]);
-    const design = _loadDesign(context.io, path);
+    const { design, input } = await _loadDesign(context.io, path);
     if (design.comparator === undefined) {
       throw new CliError(`${path}: compare needs a comparator design (this one trips in firmware from an ADC)`);
     }
@@ -58,7 +60,15 @@ export function registerCompareCommand(program: Command, context: CommandContext
     } finally {
       progress.stop();
     }
-    await _emitMain(context.io, plan, renderComparisonReport(comparison, _chosenFormat(options), _methodInfo(settings), design.name));
+    _emitOutputs(context.io, plan, options, renderComparisonReport(comparison, _chosenFormat(options), _methodInfo(settings), design.name), [], [input]);
+    // The design as drawn is its own reference (the first option); the alternatives failing is what a comparison shows.
+    const own = comparison.options[0];
+    if (own !== undefined && own.verdict !== "adequate" && options.reportOnly !== true) {
+      context.io.writeErr(
+        `hotjunction: ${path}: the design's own reference (${own.name}) fails its margins (exit ${marginFailExitCode}; --report-only exits 0)\n`,
+      );
+      if (context.outcome !== undefined) context.outcome.exitCode = marginFailExitCode;
+    }
   });
   return command;
 }

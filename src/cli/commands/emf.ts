@@ -3,23 +3,13 @@
  * @module
  */
 import { Option, type Command } from "commander";
-import { emfFromTemperature } from "../../its90/convert.js";
 import { thermocoupleTypes } from "../../its90/resolveType.js";
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
-import { _addOutputOptions, _emitMain, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
+import { _addOutputOptions, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _integerParser, _parseNumber } from "../parseArgs.js";
 import type { CommandContext } from "../runCli.js";
-import {
-  _defaultEmfDecimals,
-  _emfSymbol,
-  _fromMillivolts,
-  _temperatureSymbol,
-  _toCelsius,
-  emfUnits,
-  temperatureUnits,
-  type EmfUnit,
-  type TemperatureUnit,
-} from "../temperatureUnits.js";
+import { emfUnits, temperatureUnits, type EmfUnit, type TemperatureUnit } from "../temperatureUnits.js";
+import { _emfText } from "../conversionText.js";
 
 interface EmfOptions extends OutputOptionValues {
   readonly unit: TemperatureUnit;
@@ -46,24 +36,8 @@ export function registerEmfCommand(program: Command, context: CommandContext): C
   _addOutputOptions(command, ["json"]);
   command.action(async (type: ThermocoupleType, temperature: number, options: EmfOptions) => {
     const plan = _planCommandOutputs(context.io, options, []);
-    const temperatureC = _toCelsius(temperature, options.unit);
-    const coldJunctionC = options.coldJunction === undefined ? 0 : _toCelsius(options.coldJunction, options.unit);
-    const emfMillivolts = emfFromTemperature(type, temperatureC, { coldJunctionC });
-    const shown = _fromMillivolts(emfMillivolts, options.emfUnit);
-    let text: string;
-    if (options.json === true) {
-      text = JSON.stringify(
-        { type, temperatureC, coldJunctionC, emfMillivolts, emf: shown, emfUnit: options.emfUnit },
-        null,
-        2,
-      );
-    } else {
-      const symbol = _temperatureSymbol(options.unit);
-      const decimals = options.decimals ?? _defaultEmfDecimals(options.emfUnit);
-      const cj = options.coldJunction === undefined ? `0 °C` : `${options.coldJunction} ${symbol}`;
-      text = `type ${type} at ${temperature} ${symbol}, cold junction ${cj}: ${shown.toFixed(decimals)} ${_emfSymbol(options.emfUnit)}`;
-    }
-    await _emitMain(context.io, plan, text);
+    const text = _emfText(type, temperature, options);
+    _emitOutputs(context.io, plan, options, text);
   });
   return command;
 }

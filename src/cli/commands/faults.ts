@@ -3,8 +3,6 @@
  * the trip: early, late, never; safe or dangerous; detected or not) as a text table, Markdown or JSON.
  * @module
  */
-import { readFileSync } from "node:fs";
-import { resolve } from "node:path";
 import { InvalidArgumentError, Option, type Command } from "commander";
 import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { faultsFromJson } from "../../faults/faultsFromJson.js";
@@ -17,8 +15,9 @@ import type { DesignFile } from "../../design/designSchema.js";
 import type { FaultDetection, FaultReviewReport, ReviewFaultsOptions } from "../../faults/types.js";
 import { designTrip } from "../../trip/designTrip.js";
 import { _analysisSettings, _loadDesign } from "../designOptions.js";
-import { _addOutputOptions, _chosenFormat, _emitMain, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
+import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _parseNumber } from "../parseArgs.js";
+import { _readInputFile } from "../readInput.js";
 import type { CommandContext } from "../runCli.js";
 
 interface FaultsCommandOptions extends OutputOptionValues {
@@ -88,7 +87,7 @@ export function _faultReviewOptions(cwd: string, o: FaultsCommandOptions, protec
     ...(rails !== undefined ? { amplifierRailsVolts: rails } : {}),
     ...(o.wireShort !== undefined ? { wireShortC: o.wireShort } : {}),
     ...(o.step !== undefined ? { sweepStepC: o.step } : {}),
-    ...(o.extraFaults !== undefined ? { extraFaults: faultsFromJson(readFileSync(resolve(cwd, o.extraFaults), "utf8")) } : {}),
+    ...(o.extraFaults !== undefined ? { extraFaults: faultsFromJson(_readInputFile(cwd, o.extraFaults).text) } : {}),
     detection,
   };
 }
@@ -121,8 +120,10 @@ export function registerFaultsCommand(program: Command, context: CommandContext)
     );
   _addOutputOptions(command, ["json", "markdown"]);
   command.action(async (path: string, options: FaultsCommandOptions) => {
-    const plan = _planCommandOutputs(context.io, options, [path]);
-    const design = _loadDesign(context.io, path);
+    const inputPaths = [path, ...(options.extraFaults !== undefined ? [options.extraFaults] : [])];
+    const plan = _planCommandOutputs(context.io, options, inputPaths);
+    const { design, input } = await _loadDesign(context.io, path);
+    const extraInput = options.extraFaults !== undefined ? [_readInputFile(context.io.cwd, options.extraFaults).identity] : [];
     const reviewOptions = _faultReviewOptions(context.io.cwd, options, design.protection);
     let report: FaultReviewReport;
     if (design.comparator !== undefined) {
@@ -143,7 +144,7 @@ export function registerFaultsCommand(program: Command, context: CommandContext)
     const format = _chosenFormat(options);
     const text =
       format === "json" ? formatFaultReviewJson(report) : format === "markdown" ? formatFaultReviewMarkdown(report) : formatFaultReviewText(report);
-    await _emitMain(context.io, plan, text);
+    _emitOutputs(context.io, plan, options, text, [], [input, ...extraInput]);
   });
   return command;
 }

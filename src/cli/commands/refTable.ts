@@ -15,7 +15,7 @@ import { thermocoupleTypes } from "../../its90/resolveType.js";
 import {
   _addOutputOptions,
   _chosenFormat,
-  _emitMain,
+  _emitOutputs,
   _planCommandOutputs,
   type OutputOptionValues,
 } from "../outputOptions.js";
@@ -73,7 +73,7 @@ export function registerRefTableCommand(program: Command, context: CommandContex
           : format === "json"
             ? JSON.stringify(table, null, 2)
             : _formatReferenceTableText(table);
-    await _emitMain(context.io, plan, text);
+    _emitOutputs(context.io, plan, options, text);
   });
   return command;
 }

@@ -4,7 +4,7 @@
  */
 import type { Command } from "commander";
 import { _designJsonSchemaText } from "../../design/designJsonSchema.js";
-import { _emitMain, _planCommandOutputs } from "../outputOptions.js";
+import { _emitOutputs, _planCommandOutputs } from "../outputOptions.js";
 import type { CommandContext } from "../runCli.js";
 
 /** Registers the `schema` command. @internal */
@@ -16,6 +16,6 @@ export function registerSchemaCommand(program: Command, context: CommandContext)
     .option("--force", "allow --out to replace an existing file")
     .action(async (options: { out?: string; force?: boolean }) => {
       const plan = _planCommandOutputs(context.io, options, []);
-      await _emitMain(context.io, plan, _designJsonSchemaText());
+      _emitOutputs(context.io, plan, options, _designJsonSchemaText());
     });
 }

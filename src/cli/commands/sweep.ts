@@ -20,19 +20,33 @@ import {
 import {
   _addOutputOptions,
   _chosenFormat,
-  _emitMain,
+  _emitOutputs,
   _planCommandOutputs,
   type OutputOptionValues,
 } from "../outputOptions.js";
 import { _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
 import { _startProgress } from "../progress.js";
 import type { CommandContext } from "../runCli.js";
-import { _writeOutput } from "../writeOutput.js";
 
 type SweepOptions = OutputOptionValues & AnalysisOptionValues & { from: number; to: number; step: number };
 
 /** Most temperatures one sweep evaluates. */
 const maxSweepPoints = 2001;
+
+/** Significant digits the sweep keeps in its temperatures (JSON and CSV print them so). */
+const sweepSignificantDigits = 12;
+
+/**
+ * The smallest step a sweep's output can show from `fromC` to `toC`: the text and Markdown tables print the
+ * temperature with one decimal (0.1 °C); JSON and CSV keep 12 significant digits, so one unit in the 12th digit
+ * of the largest magnitude.
+ * @internal
+ */
+export function _smallestSweepStepC(fromC: number, toC: number, format: "text" | "json" | "markdown" | "csv"): number {
+  const largest = Math.max(Math.abs(fromC), Math.abs(toC));
+  const digitUnit = largest === 0 ? Number.MIN_VALUE : 10 ** (Math.floor(Math.log10(largest)) - (sweepSignificantDigits - 1));
+  return format === "text" || format === "markdown" ? Math.max(0.1, digitUnit) : digitUnit;
+}
 
 /** Registers the `sweep` command. @internal */
 export function registerSweepCommand(program: Command, context: CommandContext): Command {
@@ -45,17 +59,35 @@ export function registerSweepCommand(program: Command, context: CommandContext):
     .option("--step <C>", "step, °C", _parsePositiveNumber, 10)
     .addHelpText("after", "\nExample:\n  hotjunction sweep examples/heated-enclosure-adc.json --from 20 --to 120 --step 5 --svg enclosure-error.svg\n");
   _addAnalysisOptions(command, "the error bands");
-  _addOutputOptions(command, ["json", "markdown", "csv"]);
+  _addOutputOptions(command, ["json", "markdown", "csv"], true);
   command.action(async (path: string, options: SweepOptions) => {
     if (options.to < options.from) throw new CliError(`--to (${options.to}) is below --from (${options.from})`);
-    const count = Math.floor((options.to - options.from) / options.step + 1e-9) + 1;
+    // (to − from) / step carries the rounding of to − from, relative to the larger magnitude: a step that lands on
+    // --to within that rounding still reaches it.
+    const slack = (8 * Number.EPSILON * Math.max(Math.abs(options.from), Math.abs(options.to))) / options.step + 1e-9;
+    const count = Math.floor((options.to - options.from) / options.step + slack) + 1;
     if (count > maxSweepPoints) throw new CliError(`the sweep has ${count} points; at most ${maxSweepPoints} (use a larger --step)`);
+    const format = _chosenFormat(options);
+    const smallest = _smallestSweepStepC(options.from, options.to, format);
+    if (count > 1 && options.step < smallest) {
+      throw new CliError(
+        `--step ${options.step} °C is finer than the ${format} output shows from ${options.from} to ${options.to} °C; the smallest step is ${Number(smallest.toPrecision(1))} °C`,
+      );
+    }
+    if (options.svg !== undefined && count < 2) throw new CliError("the chart needs at least two temperatures (widen --from/--to)");
     const plan = _planCommandOutputs(context.io, options, [path], options.svg !== undefined ? [options.svg] : []);
-    const design = _loadDesign(context.io, path);
+    const { design, input } = await _loadDesign(context.io, path);
     const settings = _analysisSettings(design, options);
     const methods = _methodInfo(settings);
     const chain = measurementChainFromDesign(design);
-    const temperatures = Array.from({ length: count }, (_, i) => Number((options.from + i * options.step).toPrecision(12)));
+    const temperatures = Array.from({ length: count }, (_, i) =>
+      Number((options.from + i * options.step).toPrecision(sweepSignificantDigits)),
+    );
+    for (let i = 1; i < temperatures.length; i++) {
+      if (!((temperatures[i] as number) > (temperatures[i - 1] as number))) {
+        throw new CliError(`--step ${options.step} °C repeats the temperature ${temperatures[i]} °C; the smallest step is ${Number(smallest.toPrecision(1))} °C`);
+      }
+    }
     const progress = _startProgress(context.io, "sweep");
     const rows: ErrorSweep["rows"][number][] = [];
     try {
@@ -88,13 +120,8 @@ export function registerSweepCommand(program: Command, context: CommandContext):
       ],
       methods: methodsWithoutAcceptance,
     };
-    await _emitMain(context.io, plan, renderSweepReport(sweep, _chosenFormat(options)));
-    const svg = plan.extras[0];
-    if (svg !== undefined) {
-      if (rows.length < 2) throw new CliError("the chart needs at least two temperatures (widen --from/--to)");
-      await _writeOutput(svg, errorBandChartSvg(sweep));
-      context.io.writeErr(`hotjunction: wrote ${svg.displayPath}\n`);
-    }
+    const extras = plan.extras.length > 0 ? [errorBandChartSvg(sweep)] : [];
+    _emitOutputs(context.io, plan, options, renderSweepReport(sweep, format), extras, [input]);
   });
   return command;
 }

@@ -8,7 +8,9 @@ import type { ThermocoupleType } from "../../data/thermocoupleData.js";
 import { firmwareTableFromSpec, type FirmwareTableSpec } from "../../firmware/firmwareTableFromSpec.js";
 import { _firmwareTableKinds, type FirmwareTableKind } from "../../firmware/tableFunction.js";
 import { thermocoupleTypes } from "../../its90/resolveType.js";
-import { _emitMain, _planCommandOutputs } from "../outputOptions.js";
+import { isHotjunctionError } from "../../errors.js";
+import { CliError, usageExitCode } from "../cliError.js";
+import { _emitOutputs, _planCommandOutputs } from "../outputOptions.js";
 import { _integerParser, _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
 import type { CommandContext } from "../runCli.js";
 
@@ -28,6 +30,31 @@ interface TableOptions {
   readonly maxBreakpoints?: number;
   readonly out?: string;
   readonly force?: boolean;
+}
+
+/** The options of an ADC chain, by the spec's key. */
+const adcOptionNames = { gain: "--gain", referenceVolts: "--reference-volts", bits: "--bits" } as const;
+
+/**
+ * Words of the firmware module's messages that name its API, and what the `table` command calls them; advice
+ * about options the command does not have is replaced by what it offers.
+ * @internal
+ */
+export const _tableVocabulary: readonly (readonly [RegExp, string])[] = [
+  [/\(raise the output scale or use a float output\)/g, "(this command stores the output in fixed point: choose a larger --max-error)"],
+  [/\braise the cap\b/g, "raise --max-breakpoints"],
+  [/\bmaxErrorOutputUnits\b/g, "--max-error"],
+  [/\bmaxBreakpoints\b/g, "--max-breakpoints"],
+  [/\bminC\b/g, "--from"],
+  [/\bmaxC\b/g, "--to"],
+  [/\breferenceVolts\b/g, "--reference-volts"],
+  [/\boffsetMillivolts\b/g, "--offset-mv"],
+  [/\bcoldJunctionC\b/g, "--cold-junction"],
+];
+
+/** A firmware-module message in the command's own vocabulary. @internal */
+export function _inTableVocabulary(message: string): string {
+  return _tableVocabulary.reduce((text, [pattern, replacement]) => text.replace(pattern, replacement), message);
 }
 
 /** Registers the `table` command. @internal */
@@ -54,11 +81,25 @@ export function registerTableCommand(program: Command, context: CommandContext):
     .addHelpText(
       "after",
       "\nExamples:\n  hotjunction table K --kind emfToTemperature --from 0 --to 1200 --max-error 0.05 --out tc_k.h\n" +
-        "  hotjunction table K --kind adcCodeToTemperature --from 0 --to 400 --max-error 0.1 --gain 100 --reference-volts 2.5 --bits 16 --cold-junction 25 --format csv\n",
+        "  hotjunction table K --kind adcCodeToTemperature --from 25 --to 400 --max-error 0.1 --gain 100 --reference-volts 2.5 --bits 16 --cold-junction 25 --format csv\n",
     )
     .action(async (type: ThermocoupleType, options: TableOptions) => {
-      const plan = _planCommandOutputs(context.io, options, []);
+      const adcKind = options.kind === "adcCodeToTemperature" || options.kind === "temperatureToAdcCode";
       const adcGiven = [options.gain, options.referenceVolts, options.bits].some((v) => v !== undefined);
+      if (!adcKind && (adcGiven || options.offsetMv !== undefined || options.coldJunction !== undefined)) {
+        throw new CliError(
+          `--gain, --reference-volts, --bits, --offset-mv and --cold-junction apply to the ADC kinds only (adcCodeToTemperature, temperatureToAdcCode), not to --kind ${options.kind}`,
+        );
+      }
+      if (adcKind) {
+        const missing = (Object.keys(adcOptionNames) as (keyof typeof adcOptionNames)[])
+          .filter((key) => options[key] === undefined)
+          .map((key) => adcOptionNames[key]);
+        if (missing.length > 0) {
+          throw new CliError(`--kind ${options.kind} needs --gain, --reference-volts and --bits; missing ${missing.join(", ")}`);
+        }
+      }
+      const plan = _planCommandOutputs(context.io, options, []);
       const spec: FirmwareTableSpec = {
         format: options.format,
         type,
@@ -72,15 +113,22 @@ export function registerTableCommand(program: Command, context: CommandContext):
         ...(adcGiven
           ? {
               chain: {
-                gain: options.gain ?? Number.NaN,
-                referenceVolts: options.referenceVolts ?? Number.NaN,
-                bits: options.bits ?? Number.NaN,
+                gain: options.gain as number,
+                referenceVolts: options.referenceVolts as number,
+                bits: options.bits as number,
                 ...(options.offsetMv !== undefined ? { offsetMillivolts: options.offsetMv } : {}),
                 ...(options.coldJunction !== undefined ? { coldJunctionC: options.coldJunction } : {}),
               },
             }
           : {}),
       };
-      await _emitMain(context.io, plan, firmwareTableFromSpec(spec));
+      let text: string;
+      try {
+        text = firmwareTableFromSpec(spec);
+      } catch (error) {
+        if (isHotjunctionError(error)) throw new CliError(_inTableVocabulary(error.message), usageExitCode);
+        throw error;
+      }
+      _emitOutputs(context.io, plan, options, text);
     });
 }

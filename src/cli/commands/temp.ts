@@ -4,23 +4,13 @@
  * @module
  */
 import { Option, type Command } from "commander";
-import { temperatureFromEmf } from "../../its90/convert.js";
 import { thermocoupleTypes } from "../../its90/resolveType.js";
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
-import { _addOutputOptions, _emitMain, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
+import { _addOutputOptions, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _integerParser, _parseNumber } from "../parseArgs.js";
 import type { CommandContext } from "../runCli.js";
-import {
-  _emfSymbol,
-  _fromCelsius,
-  _temperatureSymbol,
-  _toCelsius,
-  _toMillivolts,
-  emfUnits,
-  temperatureUnits,
-  type EmfUnit,
-  type TemperatureUnit,
-} from "../temperatureUnits.js";
+import { emfUnits, temperatureUnits, type EmfUnit, type TemperatureUnit } from "../temperatureUnits.js";
+import { _tempText } from "../conversionText.js";
 
 interface TempOptions extends OutputOptionValues {
   readonly unit: TemperatureUnit;
@@ -47,23 +37,8 @@ export function registerTempCommand(program: Command, context: CommandContext): 
   _addOutputOptions(command, ["json"]);
   command.action(async (type: ThermocoupleType, emf: number, options: TempOptions) => {
     const plan = _planCommandOutputs(context.io, options, []);
-    const emfMillivolts = _toMillivolts(emf, options.emfUnit);
-    const coldJunctionC = options.coldJunction === undefined ? 0 : _toCelsius(options.coldJunction, options.unit);
-    const temperatureC = temperatureFromEmf(type, emfMillivolts, { coldJunctionC });
-    const shown = _fromCelsius(temperatureC, options.unit);
-    let text: string;
-    if (options.json === true) {
-      text = JSON.stringify(
-        { type, emfMillivolts, coldJunctionC, temperatureC, temperature: shown, temperatureUnit: options.unit },
-        null,
-        2,
-      );
-    } else {
-      const symbol = _temperatureSymbol(options.unit);
-      const cj = options.coldJunction === undefined ? `0 °C` : `${options.coldJunction} ${symbol}`;
-      text = `type ${type}, ${emf} ${_emfSymbol(options.emfUnit)} with cold junction ${cj}: ${shown.toFixed(options.decimals ?? 2)} ${symbol}`;
-    }
-    await _emitMain(context.io, plan, text);
+    const text = _tempText(type, emf, options);
+    _emitOutputs(context.io, plan, options, text);
   });
   return command;
 }

@@ -12,8 +12,8 @@ export function registerValidateCommand(program: Command, context: CommandContex
     .command("validate")
     .description("check a design file against the format (schema and cross-field rules)")
     .argument("<design>", "design file (JSON)")
-    .action((path: string) => {
-      const design = _loadDesign(context.io, path);
+    .action(async (path: string) => {
+      const { design } = await _loadDesign(context.io, path);
       const detector = design.comparator !== undefined ? "comparator (hardware) trip" : "ADC (firmware) trip";
       const count = design.setpoints.length;
       context.io.writeOut(`${path}: valid design, ${detector}, ${count} setpoint${count === 1 ? "" : "s"}\n`);

@@ -8,10 +8,9 @@ import { fileURLToPath } from "node:url";
 import type { Command } from "commander";
 import { withInitialDesign } from "../../workbench/pageFile.js";
 import { CliError } from "../cliError.js";
-import { _loadDesign } from "../designOptions.js";
+import { _emitOutputs, _planCommandOutputs } from "../outputOptions.js";
+import { _readInputFile } from "../readInput.js";
 import type { CommandContext } from "../runCli.js";
-import { _planOutputs, _writeOutput } from "../writeOutput.js";
-import { resolve } from "node:path";
 
 interface WorkbenchOptions {
   readonly out?: string;
@@ -43,16 +42,18 @@ export function registerWorkbenchCommand(program: Command, context: CommandConte
       "\nOpen the written file in a browser (file://); it makes no network request.\n\nExamples:\n  hotjunction workbench\n  hotjunction workbench kiln.json --out kiln-workbench.html\n",
     );
   command.action(async (path: string | undefined, options: WorkbenchOptions) => {
-    const out = options.out ?? "workbench.html";
-    const [planned] = _planOutputs([out], { cwd: context.io.cwd, inputPaths: path !== undefined ? [path] : [], force: options.force === true });
-    if (planned === undefined) throw new CliError("no output file");
+    const values = { out: options.out ?? "workbench.html", ...(options.force === true ? { force: true } : {}) };
+    const plan = _planCommandOutputs(context.io, values, path !== undefined ? [path] : []);
     let page = _workbenchPage();
+    const inputs = [];
     if (path !== undefined) {
-      _loadDesign(context.io, path);
-      page = withInitialDesign(page, readFileSync(resolve(context.io.cwd, path), "utf8"), path);
+      const file = _readInputFile(context.io.cwd, path);
+      const { parseDesign } = await import("../../design/parseDesign.js");
+      parseDesign(file.text, { fileName: path });
+      page = withInitialDesign(page, file.text, path);
+      inputs.push(file.identity);
     }
-    await _writeOutput(planned, page);
-    context.io.writeErr(`hotjunction: wrote ${planned.displayPath}; open it in a browser\n`);
+    _emitOutputs(context.io, plan, values, page, [], inputs);
   });
   return command;
 }

@@ -1,0 +1,97 @@
+/**
+ * Helpers shared by the wire element modules (internal): temperature-range checks and the construction of
+ * named error sources under a wire role.
+ * @module
+ * @internal
+ */
+import { HotjunctionRangeError } from "../../errors.js";
+import { rectangular } from "../../uncertainty/rectangular.js";
+import { _limitDistribution, _requireObject, _requireOrderedPair, type _SourceContext } from "../_common.js";
+import type { ErrorSourceUnit } from "../types.js";
+import type { TemperatureRangeC, WireErrorSource, WireSourceElement } from "../wireTypes.js";
+
+/** @internal Source values by name (as in the chain models). */
+export type _Inputs = Readonly<Record<string, number>>;
+
+/** @internal Checks a temperature range object `{ minC, maxC }` (finite, min ≤ max, not below absolute zero). */
+export function _checkRange(value: unknown, quantity: string, context: string): TemperatureRangeC {
+  const o = _requireObject(value, quantity, context);
+  const [minC, maxC] = _requireOrderedPair(o["minC"], o["maxC"], `${quantity}.minC`, `${quantity}.maxC`, "°C", context);
+  if (minC < -273.15) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: `${quantity}.minC`,
+      value: minC,
+      min: -273.15,
+      unit: "°C",
+      context,
+      problem: "is below absolute zero",
+    });
+  }
+  return { minC, maxC };
+}
+
+/** @internal Throws unless `inner` lies within `outer` (both °C ranges). */
+export function _requireWithin(
+  inner: TemperatureRangeC,
+  outer: TemperatureRangeC,
+  quantity: string,
+  context: string,
+  problem: string,
+): void {
+  for (const [end, v] of [["minC", inner.minC], ["maxC", inner.maxC]] as const) {
+    if (v < outer.minC || v > outer.maxC) {
+      throw new HotjunctionRangeError({
+        code: "OUT_OF_RANGE",
+        quantity: `${quantity}.${end}`,
+        value: v,
+        min: outer.minC,
+        max: outer.maxC,
+        unit: "°C",
+        context,
+        problem,
+      });
+    }
+  }
+}
+
+/** @internal One named ± source of the wire (rectangular unless overridden by name), about `center`. */
+export function _wireSource(
+  ctx: _SourceContext,
+  name: string,
+  element: WireSourceElement,
+  description: string,
+  unit: ErrorSourceUnit,
+  limit: number,
+  center = 0,
+): WireErrorSource {
+  return {
+    name,
+    element,
+    description,
+    unit,
+    limit,
+    distribution: _limitDistribution(name, limit, center, ctx.overrides?.[name]),
+  };
+}
+
+/**
+ * @internal A source spread over a range [lower, upper] (a temperature anywhere in a range): rectangular
+ * with limit half the range, like the chain's ambient input (not overridable: it is a range, not a tolerance).
+ */
+export function _rangeSource(
+  name: string,
+  element: WireSourceElement,
+  description: string,
+  lower: number,
+  upper: number,
+): WireErrorSource {
+  return {
+    name,
+    element,
+    description,
+    unit: "°C",
+    limit: (upper - lower) / 2,
+    distribution: rectangular({ lower, upper }),
+  };
+}

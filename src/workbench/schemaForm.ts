@@ -84,7 +84,8 @@ export function labelOfKey(key: string): string {
     .replace(/([a-z0-9])([A-Z])/g, "$1 $2")
     .replace(/([A-Z]+)([A-Z][a-z])/g, "$1 $2")
     .toLowerCase();
-  return words.charAt(0).toUpperCase() + words.slice(1);
+  const text = words.replace(/\b(adc|rss|lsb|inl|cj|iec|astm)\b/g, (w) => w.toUpperCase());
+  return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
 function singular(label: string): string {

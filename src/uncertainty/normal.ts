@@ -49,10 +49,10 @@ export function normal(options: NormalOptions): Distribution {
   const mean = _requireFinite(o["mean"], "mean", undefined, context);
   let u: number;
   if (form === 0) {
-    u = _requireNonNegative(o["standardDeviation"], "standard deviation", context);
+    u = _requireNonNegative(o["standardDeviation"], "standard deviation", undefined, context);
   } else {
-    const expanded = _requireNonNegative(o["expandedUncertainty"], "expanded uncertainty", context);
-    const k = _requirePositive(o["coverageFactor"], "coverage factor", context);
+    const expanded = _requireNonNegative(o["expandedUncertainty"], "expanded uncertainty", undefined, context);
+    const k = _requirePositive(o["coverageFactor"], "coverage factor", undefined, context);
     u = expanded / k;
   }
   return _makeDistribution("normal", mean, u, undefined, undefined, o["degreesOfFreedom"], context);

@@ -14,7 +14,7 @@ import {
   HotjunctionRangeError,
 } from "../errors.js";
 import { arcsine } from "../uncertainty/arcsine.js";
-import { normal } from "../uncertainty/normal.js";
+import { normalDistribution } from "../uncertainty/normal.js";
 import { rectangular } from "../uncertainty/rectangular.js";
 import { trapezoidal } from "../uncertainty/trapezoidal.js";
 import { triangular } from "../uncertainty/triangular.js";
@@ -96,7 +96,7 @@ export function _limitDistribution(
     }
     case "normal": {
       const k = o["coverageFactor"] === undefined ? 2 : _requirePositive(o["coverageFactor"], "coverage factor", "", context);
-      return normal({ mean: center, standardDeviation: limit / k });
+      return normalDistribution({ mean: center, standardDeviation: limit / k });
     }
     default:
       return _invalidChoice("distribution", o["distribution"], kinds, context);

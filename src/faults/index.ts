@@ -14,6 +14,7 @@ export type {
   FaultCategory,
   FaultCategoryCounts,
   FaultContext,
+  FaultDefinition,
   FaultDetection,
   FaultDetectionMethod,
   FaultEffect,

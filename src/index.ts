@@ -14,6 +14,9 @@ export {
   type HotjunctionError,
 } from "./errors.js";
 
+// The safety caution (one text, carried by every report, firmware table and trip design result)
+export { CAUTION_TEXT, firmwareTableCaution } from "./caution.js";
+
 // Units
 export {
   celsiusToFahrenheit,
@@ -69,7 +72,6 @@ export { approximateInverseData, thermocoupleData, thermocoupleTypes } from "./i
 // Firmware lookup tables
 export {
   buildFirmwareTable,
-  firmwareTableCaution,
   firmwareTableFromSpec,
   firmwareTableJsonFormat,
   formatFirmwareTableC,

@@ -4,7 +4,7 @@
  * @module
  */
 import { Command, CommanderError } from "commander";
-import { CAUTION_TEXT } from "../report/caution.js";
+import { CAUTION_TEXT } from "../caution.js";
 import { _describeFailure, _oneLine, usageExitCode } from "./cliError.js";
 import type { CliIo } from "./io.js";
 import { registerEmfCommand } from "./commands/emf.js";

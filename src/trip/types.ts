@@ -261,8 +261,10 @@ export interface TripDesignResult {
   readonly midRail: MidRailDivider;
   /** True when every setpoint passes and the reference has no problems. */
   readonly pass: boolean;
-  /** How the network was found and what was assumed, in sentences. */
+  /** How the network was found and what was assumed, in sentences (the last one is the caution). */
   readonly notes: readonly string[];
+  /** The safety caution (`CAUTION_TEXT`): these numbers do not certify a safety function. */
+  readonly caution: string;
 }
 
 /** One setpoint under one reference option, beside the ideal reference. */

@@ -8,7 +8,7 @@ import { evaluateChain } from "../../chain/evaluateChain.js";
 import type { DesignFile } from "../../design/designSchema.js";
 import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { firmwareTripReport } from "../../report/firmwareTripReport.js";
-import { renderTripReport, tripReportFromResult } from "../../report/renderTripReport.js";
+import { formatTripReport, tripReportFromResult } from "../../report/renderTripReport.js";
 import type { TripReport } from "../../report/reportTypes.js";
 import { tripBandChartSvg } from "../../report/tripBandChart.js";
 import { designTrip } from "../../trip/designTrip.js";
@@ -100,7 +100,7 @@ export function registerCheckCommand(program: Command, context: CommandContext):
     const design = _loadDesign(context.io, path);
     const report = _tripReportOfDesign(context.io, design, _analysisSettings(design, options));
     const named = design.name !== undefined ? { ...report, designName: design.name } : report;
-    await _emitMain(context.io, plan, renderTripReport(named, _chosenFormat(options)));
+    await _emitMain(context.io, plan, formatTripReport(named, _chosenFormat(options)));
     const svg = plan.extras[0];
     if (svg !== undefined) {
       await _writeOutput(svg, tripBandChartSvg(named));

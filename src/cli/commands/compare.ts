@@ -5,7 +5,7 @@
  */
 import type { Command } from "commander";
 import { referenceOptionFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
-import { renderComparisonReport } from "../../report/renderComparisonReport.js";
+import { formatComparisonReport } from "../../report/renderComparisonReport.js";
 import { compareReferences } from "../../trip/compareReferences.js";
 import { _startProgress } from "../progress.js";
 import { CliError } from "../cliError.js";
@@ -58,7 +58,7 @@ export function registerCompareCommand(program: Command, context: CommandContext
     } finally {
       progress.stop();
     }
-    await _emitMain(context.io, plan, renderComparisonReport(comparison, _chosenFormat(options), _methodInfo(settings), design.name));
+    await _emitMain(context.io, plan, formatComparisonReport(comparison, _chosenFormat(options), _methodInfo(settings), design.name));
   });
   return command;
 }

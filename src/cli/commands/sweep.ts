@@ -7,7 +7,7 @@ import type { Command } from "commander";
 import { evaluateChain } from "../../chain/evaluateChain.js";
 import { measurementChainFromDesign } from "../../design/designToObjects.js";
 import { errorBandChartSvg } from "../../report/errorBandChart.js";
-import { renderSweepReport } from "../../report/renderSweepReport.js";
+import { formatSweepReport } from "../../report/renderSweepReport.js";
 import type { ErrorSweep } from "../../report/reportTypes.js";
 import { CliError } from "../cliError.js";
 import {
@@ -88,7 +88,7 @@ export function registerSweepCommand(program: Command, context: CommandContext):
       ],
       methods: methodsWithoutAcceptance,
     };
-    await _emitMain(context.io, plan, renderSweepReport(sweep, _chosenFormat(options)));
+    await _emitMain(context.io, plan, formatSweepReport(sweep, _chosenFormat(options)));
     const svg = plan.extras[0];
     if (svg !== undefined) {
       if (rows.length < 2) throw new CliError("the chart needs at least two temperatures (widen --from/--to)");

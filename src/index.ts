@@ -109,3 +109,6 @@ export * from "./trip/index.js";
 
 // Failure-mode review of a trip chain (fault catalogue, single-fault review, renderers)
 export * from "./faults/index.js";
+
+// Response time of a trip: runaway, lags, sampling, output stages, noise level crossings (issue 14)
+export * from "./dynamics/index.js";

@@ -49,7 +49,8 @@ export function riceUpCrossingRatePerSecond(options: { readonly levelVolts: numb
   const sigma = _requireInRange(options.rmsVolts, "noise rms (rmsVolts)", 0, NONNEG, "V", CONTEXT);
   const b = positive(options.bandwidthHz, "noise bandwidth (bandwidthHz)", "Hz");
   if (sigma === 0) return 0;
-  return (b / Math.sqrt(3)) * Math.exp(-(u * u) / (2 * sigma * sigma));
+  const z = u / sigma; // ratio first: σ² can underflow where u/σ does not
+  return (b / Math.sqrt(3)) * Math.exp(-0.5 * z * z);
 }
 
 /**

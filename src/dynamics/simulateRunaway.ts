@@ -311,6 +311,7 @@ export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenar
   let peakAt: number | null = null;
   let end = Infinity;
   let gPrev = 0;
+  let onGrid = true;
   const record = (time: number, s: Float64Array, isEvent: boolean) =>
     rec.add(time, start + (s[ti] as number), start + (s[yi] as number), start + (filter === null ? 0 : filter.value), isEvent);
   record(0, x, true);
@@ -329,7 +330,7 @@ export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenar
     const u = heaterOn;
     const gridNext = (grid + 1) * h;
     let segEnd: number = u === 1 && heatOff !== null && heatOff < gridNext ? heatOff : gridNext;
-    let dt: number = segEnd - t;
+    let dt: number = onGrid && segEnd === gridNext ? h : segEnd - t;
     if (dt === h) _step(prop, n, x, u, next);
     else _step(_propagator(system, dt), n, x, u, next);
 
@@ -379,6 +380,7 @@ export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenar
       end = peakAt + Math.max(0.25 * peakAt, 20 * h);
     }
     t = segEnd;
+    onGrid = atGrid;
     if (atGrid) grid++;
     [x, next] = [next, x];
     if (atGrid) record(t, x, t >= end || t === heatOff);

@@ -63,11 +63,11 @@ export interface DynamicsCheck {
 
 /** Assumptions every dynamic check states. */
 export const DYNAMICS_ASSUMPTIONS: readonly string[] = [
-  "The heater sticks on at t = 0 with the process, sensor and electronics at steady state at the highest normal operating temperature.",
-  "Sensor, input filter and amplifier are unity-gain first-order lags in cascade (no loading between stages); the comparator and output stages are pure delays; a solid-state relay is taken at its worst case, half a mains period.",
-  "Firmware: the sample phase is unknown, so the trip is taken at the M-th sample after the filtered value crosses the trip point, at the worst phase (supremum over phases).",
-  "A stated constant rate holds the load at its heat-off temperature (no loss known); a heater-power process cools by its loss and, with an element node, keeps receiving the element's stored heat.",
-  "Linear models are integrated exactly (matrix exponential, zero-order hold on the heater switch); events are located by bisection on the exact propagation.",
+  "Heater stuck on at t = 0, all at steady state at the highest normal operating temperature.",
+  "Sensor, filter and amplifier: unity-gain first-order lags in cascade; comparator and output stages: pure delays (solid-state relay: half a mains period).",
+  "Firmware: worst sample phase, trip at the M-th sample after the filtered value crosses.",
+  "A stated rate holds the load after heat off; a heater-power load cools by its loss and takes the element's stored heat.",
+  "Exact integration of the linear model (matrix exponential); events located on the exact propagation.",
 ];
 
 /**

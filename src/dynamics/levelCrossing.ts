@@ -17,7 +17,7 @@ import { _compileDynamics, _requireObject } from "./_compileDynamics.js";
 import type { DynamicsModel, NoiseSpec, WhiteNoiseDensity, WhiteNoiseRms } from "./types.js";
 
 const CONTEXT = "dynamics";
-const NONNEG = Number.MAX_VALUE;
+const NONNEG = 1.7976931348623157e308; // Number.MAX_VALUE as a literal (no global read at module level)
 
 /** Words on the spectrum and formula, for reports. */
 export const NOISE_SPECTRUM_ASSUMPTION =

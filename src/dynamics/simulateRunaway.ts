@@ -324,7 +324,7 @@ export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenar
         value: segment,
         max: MAX_SEGMENTS,
         context: "dynamics",
-        problem: `exceed the budget before the ${heatOff === null ? "trip" : "peak"} (the runaway settles too close to the trip point, or the sample period is too short for its duration)`,
+        problem: `exceed the budget before the ${heatOff === null ? "trip" : "peak"}`,
       });
     }
     const u = heaterOn;

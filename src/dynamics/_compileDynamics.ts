@@ -97,6 +97,11 @@ export function _checkScenario(scenario: RunawayScenario): RunawayScenario {
   return { startC, tripTemperatureC, hazardLimitC };
 }
 
+/** A time constant that acts as a lag: above zero, and large enough that 1/τ is finite (below ~1e-308 s it is none). @internal */
+export function _isLag(tau: number): boolean {
+  return tau > 0 && Number.isFinite(1 / tau);
+}
+
 /** Time constant of an amplifier's first-order roll-off, τ = 1/(2πf), s. @internal */
 export function _amplifierTimeConstantSeconds(bandwidthHz: unknown): number {
   return 1 / (2 * Math.PI * positive(bandwidthHz, "amplifier bandwidth (amplifierBandwidthHz)", "Hz"));
@@ -112,7 +117,7 @@ function electronicLags(path: SignalPath | undefined): number[] {
     lags.push(r * c);
   }
   if (path.amplifierBandwidthHz !== undefined) lags.push(_amplifierTimeConstantSeconds(path.amplifierBandwidthHz));
-  return lags.filter((t) => t > 0);
+  return lags.filter(_isLag);
 }
 
 function outputDelay(stage: OutputStage, index: number): number {
@@ -211,7 +216,7 @@ export function _compileDynamics(model: DynamicsModel): _CompiledDynamics {
 
   return {
     process,
-    sensorTimeConstantsSeconds: sensorLags.filter((t) => t > 0),
+    sensorTimeConstantsSeconds: sensorLags.filter(_isLag),
     electronicTimeConstantsSeconds: electronicLags(path),
     firmware,
     comparatorDelaySeconds,

@@ -4,7 +4,7 @@
  * @module
  */
 import { _invalidChoice, _requireFinite, _requireInRange } from "../errors.js";
-import { _amplifierTimeConstantSeconds, _compileDynamics } from "./_compileDynamics.js";
+import { _amplifierTimeConstantSeconds, _compileDynamics, _isLag } from "./_compileDynamics.js";
 import { _buildLinearSystem, _propagator, _step } from "./_linearSystem.js";
 import type { HeaterPowerRunaway } from "./types.js";
 
@@ -28,7 +28,7 @@ export function firstOrderRampLagC(options: { readonly rateCPerSecond: number; r
   const rate = _requireFinite(options.rateCPerSecond, "ramp rate (rateCPerSecond)", "°C/s", CONTEXT);
   const tau = _requireInRange(options.timeConstantSeconds, "time constant (timeConstantSeconds)", 0, Number.MAX_VALUE, "s", CONTEXT);
   const t = _requireInRange(options.timeSeconds, "time (timeSeconds)", 0, Number.MAX_VALUE, "s", CONTEXT);
-  return tau === 0 ? 0 : rate * tau * -Math.expm1(-t / tau);
+  return tau === 0 ? 0 : rate * tau * -Math.expm1(-t / tau); // t/τ = Infinity for a subnormal τ gives the limit 0 correctly
 }
 
 /**
@@ -55,7 +55,7 @@ export function rampLagThroughLagsC(options: { readonly rateCPerSecond: number; 
     sensor: { kind: "firstOrder", timeConstantSeconds: 0 },
   });
   (taus as readonly number[]).forEach((tau, i) => _requireInRange(tau, `time constant ${i} (timeConstantsSeconds)`, 0, Number.MAX_VALUE, "s", CONTEXT));
-  const system = _buildLinearSystem({ ...compiled, sensorTimeConstantsSeconds: (taus as readonly number[]).filter((tau) => tau > 0) }, 0);
+  const system = _buildLinearSystem({ ...compiled, sensorTimeConstantsSeconds: (taus as readonly number[]).filter(_isLag) }, 0);
   const out = new Float64Array(system.n);
   _step(_propagator(system, t), system.n, system.x0, 1, out);
   return (out[system.trueIndex] as number) - (out[system.indicatedIndex] as number);

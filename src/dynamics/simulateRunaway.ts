@@ -333,6 +333,9 @@ export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenar
     let dt: number = onGrid && segEnd === gridNext ? h : segEnd - t;
     if (dt === h) _step(prop, n, x, u, next);
     else _step(_propagator(system, dt), n, x, u, next);
+    if (!Number.isFinite(next[ti] as number) || !Number.isFinite(next[yi] as number)) {
+      throw new HotjunctionRangeError({ code: "MODEL_NOT_FINITE", quantity: "simulated temperature", value: next[ti], context: "dynamics", problem: "is not finite (a model value is too extreme for double precision)" });
+    }
 
     if (u === 1 && trueCrossing === null && (next[ti] as number) >= thr) {
       const hit = _locate(system, x, 1, dt, (s) => (s[ti] as number) - thr);

@@ -26,7 +26,9 @@ import { distDir, ensureDist, projectDir } from "./distBuild.js";
 
 const oneTypeBudgetBytes = 3000;
 const letterEntryBudgetBytes = 6_000;
-const fullEntryBudgetBytes = 64_000;
+// Raised from 64,000 B when the root entry gained the response-time (dynamics), safety-figure and wire modules;
+// the one-type and letter-API budgets below are what a consumer that converts only pays.
+const fullEntryBudgetBytes = 96_000;
 /** `hotjunction/design` as a whole (`import * as design`), zod included; measured 102 259 B at the entry split (0.1.0). */
 const designEntryBudgetBytes = 110_000;
 /** Packages only `hotjunction/report` (and the CLI) may pull in. */

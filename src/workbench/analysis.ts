@@ -16,17 +16,8 @@ import {
   type ReviewFaultsOptions,
   type TripDesignResult,
 } from "../index.js";
-import {
-  firmwareTripReport,
-  measurementChainFromDesign,
-  referenceOptionFromDesign,
-  tripDesignFromDesign,
-  tripReportFromResult,
-  type DesignFile,
-  type ReportMethodInfo,
-  type TripReport,
-} from "../design/index.js";
-import { tripBandChartSvg } from "../report/tripBandChart.js";
+import { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign, type DesignFile } from "../design/index.js";
+import { firmwareTripReport, tripBandChartSvg, tripReportFromResult, type ReportMethodInfo, type TripReport } from "../report/index.js";
 
 /** How hard to work. */
 export interface AnalysisSettings {
@@ -211,7 +202,7 @@ export function analyseDesign(design: DesignFile, options: AnalyseOptions = {}):
       const evaluation = evaluateChain(chain, s.tripTemperatureC, {
         methods: methods.methods,
         coverage: settings.coverage,
-        trials,
+        monteCarloTrials: trials,
         seed: settings.seed,
       });
       progress?.((i + 1) / setpoints.length);

@@ -3,7 +3,8 @@
  * Each carries the caution, the methods and the seed. Text formats come from the library's renderers.
  * @module
  */
-import { CAUTION_TEXT, renderComparisonReport, renderTripReport } from "../design/index.js";
+import { CAUTION_TEXT } from "../design/index.js";
+import { formatComparisonReport, formatTripReport } from "../report/index.js";
 import { formatFaultReviewMarkdown } from "../index.js";
 import type { WorkbenchAnalysis } from "./analysis.js";
 import { cautionBlock, methodsSentence, resultSections } from "./results.js";
@@ -11,8 +12,8 @@ import { cautionBlock, methodsSentence, resultSections } from "./results.js";
 /** Markdown: the trip report, the reference comparison and the fault review, as the CLI prints them. */
 export function markdownExport(a: WorkbenchAnalysis, designName: string | undefined): string {
   const parts: string[] = [];
-  if (a.report !== undefined) parts.push(renderTripReport(a.report, "markdown"));
-  if (a.comparison !== undefined) parts.push(renderComparisonReport(a.comparison, "markdown", a.methods, designName));
+  if (a.report !== undefined) parts.push(formatTripReport(a.report, "markdown"));
+  if (a.comparison !== undefined) parts.push(formatComparisonReport(a.comparison, "markdown", a.methods, designName));
   if (a.faults !== undefined) parts.push(formatFaultReviewMarkdown(a.faults));
   if (parts.length === 0) parts.push(`# ${designName ?? "Design"}\n\nNo results.\n\n**Caution:** ${CAUTION_TEXT}\n`);
   return parts.join("\n");
@@ -20,7 +21,7 @@ export function markdownExport(a: WorkbenchAnalysis, designName: string | undefi
 
 /** CSV: the trip report's bands (caution and methods as leading `#` lines). */
 export function csvExport(a: WorkbenchAnalysis): string {
-  if (a.report !== undefined) return renderTripReport(a.report, "csv");
+  if (a.report !== undefined) return formatTripReport(a.report, "csv");
   return `# CAUTION: ${CAUTION_TEXT}\n# ${methodsSentence(a)}\n`;
 }
 

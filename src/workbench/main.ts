@@ -386,7 +386,7 @@ class Workbench {
       if (d.comparator !== undefined) designTrip(tripDesignFromDesign(d), { acceptanceMethod: s.acceptanceMethod, monteCarloTrials: s.trials, seed: s.seed });
       else {
         const chain = measurementChainFromDesign(d);
-        for (const sp of d.setpoints) evaluateChain(chain, sp.tripTemperatureC, { methods: ["worst-case", "rss", "monte-carlo"], trials: s.trials, seed: s.seed });
+        for (const sp of d.setpoints) evaluateChain(chain, sp.tripTemperatureC, { methods: ["worst-case", "rss", "monte-carlo"], monteCarloTrials: s.trials, seed: s.seed });
       }
     }
     return (performance.now() - start) / iterations;

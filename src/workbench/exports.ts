@@ -81,6 +81,10 @@ export function htmlExport(a: WorkbenchAnalysis, design: Record<string, unknown>
   const meta = doc.createElement("meta");
   meta.setAttribute("charset", "utf-8");
   doc.head.prepend(meta);
+  const viewport = doc.createElement("meta");
+  viewport.setAttribute("name", "viewport");
+  viewport.setAttribute("content", "width=device-width, initial-scale=1");
+  doc.head.append(viewport);
   const csp = doc.createElement("meta");
   csp.setAttribute("http-equiv", "Content-Security-Policy");
   csp.setAttribute("content", "default-src 'none'; style-src 'unsafe-inline'; img-src data:");

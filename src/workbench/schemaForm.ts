@@ -406,7 +406,7 @@ export class DesignForm {
     const box = el("input", { id, type: "checkbox" });
     box.checked = present;
     box.addEventListener("change", () => this.host.set(path, box.checked ? defaultValue(schema) : undefined, true));
-    row.append(box, el("label", { for: id }, `Include ${label.toLowerCase()}`));
+    row.append(box, el("label", { for: id }, `Include ${/^[A-Z][a-z]/.test(label) ? label.charAt(0).toLowerCase() + label.slice(1) : label}`));
     fieldset.insertBefore(row, fieldset.children[1] ?? null);
   }
 

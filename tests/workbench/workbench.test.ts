@@ -275,7 +275,7 @@ describe.skipIf(!available)("workbench page in headless Chromium", () => {
     await page.close();
   });
 
-  it("saves a design file that passes validate and gives the CLI's numbers; the exports carry the caution, methods and seed", async () => {
+  it("saves a design file that passes validate, gives the CLI's numbers and opens again; the exports carry the caution, methods and seed", async () => {
     const page = await openPage();
     await page.evaluate(() => window.hotjunctionWorkbench.loadChoice("example:reflow-oven-trip"));
     await page.locator("#hj-f-resistors_toleranceFraction").fill("0.001");
@@ -294,6 +294,14 @@ describe.skipIf(!available)("workbench page in headless Chromium", () => {
         expect(shown[`${i}:${b.method}:high`]).toBeCloseTo(b.highC, 9);
       }
     });
+
+    // The saved file opens again through the file picker, as it was saved.
+    const reopened = await openPage();
+    await reopened.locator("#hj-file").setInputFiles(designPath);
+    await expect.poll(() => reopened.evaluate(() => window.hotjunctionWorkbench.designText())).toBe(readFileSync(designPath, "utf8").trimEnd());
+    await reopened.evaluate(() => window.hotjunctionWorkbench.idle());
+    expect(await bandsOf(reopened)).toEqual(shown);
+    await reopened.close();
 
     const [report] = await Promise.all([page.waitForEvent("download"), page.locator('.hj-export[data-export="html"]').click()]);
     const reportPath = join(scratch, "report.html");

@@ -1,7 +1,7 @@
 import { HotjunctionRangeError, HotjunctionTypeError, _invalidChoice } from "../errors.js";
 import { _requireInteger, _requireOptionsObject, _requireProbability } from "./_checks.js";
 import { _minimumTrials } from "./_coverageIntervalSorted.js";
-import { _propagateMonteCarlo } from "./_propagateMonteCarlo.js";
+import { _adaptiveBatch, _maxModelEvaluations, _propagateMonteCarlo, type _MonteCarloSettings } from "./_propagateMonteCarlo.js";
 import { _propagateRss } from "./_propagateRss.js";
 import { _propagateWorstCase } from "./_propagateWorstCase.js";
 import { _choleskyFactor, _correlationMatrix, _meansOf, _ModelEvaluator, _prepareInputs } from "./_prepare.js";
@@ -67,7 +67,7 @@ export function propagate<Name extends string>(
   }
   _requireOptionsObject(options, context, true);
   const o: PropagateOptions<Name> = options ?? {};
-  const method = o.method ?? "rss";
+  const method = o.method === undefined ? "rss" : o.method;
   if (!methods.includes(method)) _invalidChoice("method", method, methods, context);
   const coverage = o.coverage === undefined ? 0.95 : _requireProbability(o.coverage, "coverage", context);
   const prepared = _prepareInputs(inputs);
@@ -87,43 +87,55 @@ export function propagate<Name extends string>(
         : _requireProbability(o.normalBoundCoverage, "normalBoundCoverage", context);
     result = _propagateWorstCase(prepared, evaluator, correlation, bound);
   } else {
-    const interval = o.interval ?? "symmetric";
-    if (!intervals.includes(interval)) _invalidChoice("interval", interval, intervals, context);
-    const minimum = _minimumTrials(coverage);
-    const seed = o.seed === undefined ? 1 : _requireInteger(o.seed, "seed", 0, 2 ** 32 - 1, context);
-    let adaptive: { significantDigits: number; maxTrials: number } | undefined;
-    if (o.adaptive !== undefined) {
-      _requireOptionsObject(o.adaptive, `${context} adaptive`, false);
-      if (o.trials !== undefined) {
-        throw new HotjunctionRangeError({
-          code: "INVALID_OPTION",
-          quantity: "trials",
-          value: o.trials,
-          context,
-          problem: "cannot be given together with adaptive (give adaptive.maxTrials instead)",
-        });
-      }
-      const significantDigits = _requireInteger(o.adaptive.significantDigits, "significantDigits", 1, 3, `${context} adaptive`);
-      const batch = Math.max(Math.ceil(100 / (1 - coverage) - 1e-9), 10_000);
-      const maxTrials =
-        o.adaptive.maxTrials === undefined
-          ? Math.max(defaultMaxTrials, 2 * batch)
-          : _requireInteger(o.adaptive.maxTrials, "maxTrials", 2 * batch, 1e9, `${context} adaptive`);
-      adaptive = { significantDigits, maxTrials };
-    }
-    const trials =
-      o.trials === undefined ? Math.max(defaultTrials, minimum) : _requireInteger(o.trials, "trials", minimum, 1e9, context);
-    if (o.onProgress !== undefined && typeof o.onProgress !== "function") {
-      throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "onProgress", value: o.onProgress, context, problem: "is not a function" });
-    }
-    result = _propagateMonteCarlo(prepared, evaluator, correlation, {
-      coverage,
-      trials,
-      seed,
-      shortest: interval === "shortest",
-      adaptive,
-      onProgress: o.onProgress,
-    });
+    result = _propagateMonteCarlo(prepared, evaluator, correlation, _monteCarloSettings(o, coverage, 1, context));
   }
   return result as PropagationResult<Name>;
+}
+
+/**
+ * @internal Checks the Monte Carlo options of `propagate` and its relatives; `models` is how many models share
+ * the trials (total work trials × models is capped at {@link _maxModelEvaluations}).
+ */
+export function _monteCarloSettings(o: PropagateOptions, coverage: number, models: number, context: string): _MonteCarloSettings {
+  const interval = o.interval === undefined ? "symmetric" : o.interval;
+  if (!intervals.includes(interval)) _invalidChoice("interval", interval, intervals, context);
+  const minimum = _minimumTrials(coverage);
+  const seed = o.seed === undefined ? 1 : _requireInteger(o.seed, "seed", 0, 2 ** 32 - 1, context);
+  let adaptive: { significantDigits: number; maxTrials: number } | undefined;
+  if (o.adaptive !== undefined) {
+    _requireOptionsObject(o.adaptive, `${context} adaptive`, false);
+    if (o.trials !== undefined) {
+      throw new HotjunctionRangeError({
+        code: "INVALID_OPTION",
+        quantity: "trials",
+        value: o.trials,
+        context,
+        problem: "cannot be given together with adaptive (give adaptive.maxTrials instead)",
+      });
+    }
+    const significantDigits = _requireInteger(o.adaptive.significantDigits, "significantDigits", 1, 3, `${context} adaptive`);
+    const batch = _adaptiveBatch(coverage);
+    const maxTrials =
+      o.adaptive.maxTrials === undefined
+        ? Math.max(defaultMaxTrials, 2 * batch)
+        : _requireInteger(o.adaptive.maxTrials, "maxTrials", 2 * batch, 1e9, `${context} adaptive`);
+    adaptive = { significantDigits, maxTrials };
+  }
+  const trials =
+    o.trials === undefined ? Math.max(defaultTrials, minimum) : _requireInteger(o.trials, "trials", minimum, 1e9, context);
+  const planned = adaptive === undefined ? trials : adaptive.maxTrials;
+  if (planned * models > _maxModelEvaluations) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: models > 1 ? "models × trials" : adaptive === undefined ? "trials" : "adaptive maxTrials",
+      value: planned * models,
+      max: _maxModelEvaluations,
+      context,
+      problem: `is more work than one call may do (${models > 1 ? `${models} models × ${planned} trials` : `${planned} model evaluations`}); split the work or use fewer trials`,
+    });
+  }
+  if (o.onProgress !== undefined && typeof o.onProgress !== "function") {
+    throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "onProgress", value: o.onProgress, context, problem: "is not a function" });
+  }
+  return { coverage, trials, seed, shortest: interval === "shortest", adaptive, onProgress: o.onProgress };
 }

@@ -86,6 +86,16 @@ export interface PropagationResult<Name extends string = string> {
   readonly seed?: number;
   /** Monte Carlo adaptive: whether the JCGM 101 7.9 stopping tolerance was met before `maxTrials`. */
   readonly converged?: boolean;
+  /**
+   * Monte Carlo runs above 4,194,304 trials (bounded memory): the number of segments whose intervals were
+   * averaged; absent when the interval is from all outputs at once.
+   */
+  readonly intervalSegments?: number;
+  /**
+   * Monte Carlo with `intervalSegments`: standard error [low, high] of the averaged interval endpoints, from the
+   * spread between segments (a statistical estimate, not a bound), in the output's unit.
+   */
+  readonly intervalStandardError?: readonly [number, number];
   /** How the result was found, in one sentence (e.g. worst-case search strategy). */
   readonly note: string;
 }

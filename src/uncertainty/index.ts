@@ -18,6 +18,7 @@ export { triangular, type TriangularOptions } from "./triangular.js";
 export { trapezoidal, type TrapezoidalOptions } from "./trapezoidal.js";
 export { arcsine, type ArcsineOptions } from "./arcsine.js";
 export { propagate } from "./propagate.js";
+export { propagateCommonDraws, type PropagateCommonDrawsOptions } from "./propagateCommonDraws.js";
 export {
   createMonteCarloPool,
   propagateParallel,

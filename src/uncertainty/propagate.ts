@@ -89,7 +89,38 @@ export function propagate<Name extends string>(
   } else {
     result = _propagateMonteCarlo(prepared, evaluator, correlation, _monteCarloSettings(o, coverage, 1, context));
   }
-  return result as PropagationResult<Name>;
+  return _requireFiniteResult(result, context) as PropagationResult<Name>;
+}
+
+/**
+ * @internal Throws `OVERFLOW` when a number of the result is not finite (a model whose outputs are finite but so
+ * large that their sums or squares overflow): never a result with Infinity or NaN in it.
+ */
+export function _requireFiniteResult<R extends PropagationResult>(result: R, context: string): R {
+  const fields: [string, number | undefined][] = [
+    ["estimate", result.estimate],
+    ["standard uncertainty", result.standardUncertainty],
+    ["interval low end", result.interval[0]],
+    ["interval high end", result.interval[1]],
+    ["coverage factor", result.coverageFactor],
+  ];
+  for (const [name, c] of Object.entries(result.contributions) as [string, { sensitivity: number; contribution: number; varianceShare: number }][]) {
+    fields.push([`sensitivity to ${name}`, c.sensitivity], [`contribution of ${name}`, c.contribution], [`variance share of ${name}`, c.varianceShare]);
+  }
+  for (const [quantity, value] of fields) {
+    if (value !== undefined && !Number.isFinite(value)) {
+      throw new HotjunctionRangeError({
+        code: "OVERFLOW",
+        quantity,
+        value,
+        min: -Number.MAX_VALUE,
+        max: Number.MAX_VALUE,
+        context: `${context} (${result.method})`,
+        problem: "overflows the float64 range: the model's outputs are too large for this method (rescale the output unit)",
+      });
+    }
+  }
+  return result;
 }
 
 /**

@@ -7,7 +7,7 @@ import { _requireOptionsObject, _requireProbability } from "./_checks.js";
 import { _firstBlockState, _Sampler, _TrialStream } from "./_monteCarloStream.js";
 import { _monteCarloResult, _OutputSummary, _requestSize, _segmentLimit, _usesCopula } from "./_propagateMonteCarlo.js";
 import { _choleskyFactor, _correlationMatrix, _meansOf, _ModelEvaluator, _prepareInputs } from "./_prepare.js";
-import { _monteCarloSettings } from "./propagate.js";
+import { _monteCarloSettings, _requireFiniteResult } from "./propagate.js";
 import type { Distribution, Model, PropagateOptions, PropagationResult } from "./types.js";
 
 /** Options of {@link propagateCommonDraws}: the Monte Carlo options of `propagate` (no adaptive stopping). */
@@ -111,7 +111,7 @@ export function propagateCommonDraws<Name extends string>(
     }
     summaries.forEach((summary, k) => {
       const outcome = { summary: summary.finish(), converged: undefined, batch: undefined };
-      results.push(_monteCarloResult(prepared, group[k] as _ModelEvaluator, correlation, copula, inner, outcome, 1) as PropagationResult<Name>);
+      results.push(_requireFiniteResult(_monteCarloResult(prepared, group[k] as _ModelEvaluator, correlation, copula, inner, outcome, 1), `${context} models[${first + k}]`) as PropagationResult<Name>);
     });
   }
   return results;

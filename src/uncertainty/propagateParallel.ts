@@ -15,7 +15,7 @@ import {
 } from "./_propagateMonteCarlo.js";
 import { _choleskyFactor, _correlationMatrix, _meansOf, _ModelEvaluator, _prepareInputs } from "./_prepare.js";
 import { _deserializeError, _loadModel, type _SerializedError } from "./_workerProtocol.js";
-import { _monteCarloSettings, propagate } from "./propagate.js";
+import { _monteCarloSettings, _requireFiniteResult, propagate } from "./propagate.js";
 import type { Distribution, Model, PropagateOptions, PropagationResult } from "./types.js";
 
 /**
@@ -360,7 +360,7 @@ export async function propagateParallel<Name extends string>(
       try {
         const job = pool.job(reference.module, reference.exportName, inputs as Record<string, unknown>, o.correlations);
         const outcome = await driveOnPool(_monteCarloRun(settings), pool, job, settings.seed, planned);
-        return _monteCarloResult(prepared, evaluator, correlation, copula, settings, outcome, pool.size) as PropagationResult<Name>;
+        return _requireFiniteResult(_monteCarloResult(prepared, evaluator, correlation, copula, settings, outcome, pool.size), context) as PropagationResult<Name>;
       } finally {
         if (givenPool === undefined) await pool.close();
       }
@@ -368,6 +368,6 @@ export async function propagateParallel<Name extends string>(
   }
   const stream = new _TrialStream(sampler, [evaluator], _firstBlockState(settings.seed));
   const outcome = _driveInProcess(_monteCarloRun(settings), stream);
-  return _monteCarloResult(prepared, evaluator, correlation, copula, settings, outcome, 1) as PropagationResult<Name>;
+  return _requireFiniteResult(_monteCarloResult(prepared, evaluator, correlation, copula, settings, outcome, 1), context) as PropagationResult<Name>;
 }
 

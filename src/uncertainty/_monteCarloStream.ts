@@ -212,17 +212,32 @@ export class _TrialStream {
       }
       const start = this.position;
       const size = Math.min(_blockSize - start, count - done);
-      for (let k = 0; k < evaluators.length; k++) {
-        const evaluator = evaluators[k] as _ModelEvaluator;
-        const record = evaluator.record;
-        const model = evaluator.model;
-        const out = outs[k] as Float64Array;
-        const at = offset + done - start;
+      const at = offset + done - start;
+      if (evaluators.length === 1) {
+        const record = e0.record;
+        const model = e0.model;
+        const out = outs[0] as Float64Array;
         for (let t = start; t < start + size; t++) {
           for (let i = 0; i < n; i++) record[names[i] as string] = col[i * _blockSize + t] as number;
           const y = model(record);
-          if (typeof y !== "number" || y - y !== 0) evaluator.fail(y);
+          if (typeof y !== "number" || y - y !== 0) e0.fail(y);
           out[at + t] = y;
+        }
+      } else {
+        // Common draws: the record is filled once per trial and every model reads it.
+        const record = e0.record;
+        const m = evaluators.length;
+        for (let t = start; t < start + size; t++) {
+          for (let i = 0; i < n; i++) record[names[i] as string] = col[i * _blockSize + t] as number;
+          for (let k = 0; k < m; k++) {
+            const evaluator = evaluators[k] as _ModelEvaluator;
+            const y = evaluator.model(record);
+            if (typeof y !== "number" || y - y !== 0) {
+              Object.assign(evaluator.record, record);
+              evaluator.fail(y);
+            }
+            (outs[k] as Float64Array)[at + t] = y;
+          }
         }
       }
       this.position += size;

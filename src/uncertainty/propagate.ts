@@ -3,7 +3,7 @@ import { _requireInteger, _requireOptionsObject, _requireProbability } from "./_
 import { _minimumTrials } from "./_coverageIntervalSorted.js";
 import { _adaptiveBatch, _maxModelEvaluations, _propagateMonteCarlo, type _MonteCarloSettings } from "./_propagateMonteCarlo.js";
 import { _propagateRss } from "./_propagateRss.js";
-import { _propagateWorstCase } from "./_propagateWorstCase.js";
+import { _propagateWorstCase, type _Enclosure } from "./_propagateWorstCase.js";
 import { _choleskyFactor, _correlationMatrix, _meansOf, _ModelEvaluator, _prepareInputs } from "./_prepare.js";
 import type { Distribution, Model, PropagateOptions, PropagationMethod, PropagationResult } from "./types.js";
 
@@ -19,13 +19,22 @@ const defaultMaxTrials = 10_000_000;
  *   Richardson-extrapolated central differences with steps of u(xᵢ)/100, correlations by Eq. (13); coverage factor
  *   from the normal distribution, or from Student's t with Welch–Satterthwaite ν_eff (G.4) when any input has
  *   finite degrees of freedom.
- * - `"worst-case"`: the true extremes of the model over the box of input bounds (bounded shapes: mean ± half-width;
+ * - `"worst-case"`: the extremes of the model over the box of input bounds (bounded shapes: mean ± half-width;
  *   normal inputs: mean ± k·u with k from `normalBoundCoverage`). All 2ⁿ corners are evaluated for n ≤ 16, then a
  *   coordinate-wise grid + golden-section search from the best corner and from the estimates finds interior extremes
  *   of non-monotone models; above 16 inputs the search starts from the corner of per-input extremes. `note` says
- *   which was done. Correlations are not used (the box bounds any dependence).
+ *   which was done. The result's `attained` gives each extreme with a point that reaches it; with
+ *   `modelEnclosure` (an interval extension of the model) a branch and bound over the box adds a proven
+ *   `enclosure` and the `enclosureGap` between the two. Correlations are not used (the box bounds any dependence).
  * - `"monte-carlo"`: JCGM 101:2008 with a seeded xoroshiro128+ generator (same seed, same result bit for bit),
- *   samples per 6.4, probabilistically symmetric (7.7) or shortest interval, optional adaptive stopping (7.9).
+ *   one jump-ahead stream per block of 8192 trials (so `propagateParallel` reproduces it on any number of
+ *   workers), samples per 6.4, probabilistically symmetric (7.7) or shortest interval, optional adaptive
+ *   stopping (7.9). JCGM 101's rule 2·s/√h ≤ δ only says that the average of h batch values lies within δ of its
+ *   expectation with about 95 % probability, for large h and each result separately; here the factor is
+ *   Student's t(0.975, h − 1) and the shortest interval's endpoints count as scattering by s/h^(1/3), so the
+ *   rule also holds when it would stop after few batches and for the shortest interval. Memory is bounded:
+ *   above 4,194,304 trials the interval is averaged over segments (`intervalSegments`,
+ *   `intervalStandardError`). Work is capped at 10⁹ model evaluations.
  *   Correlated inputs: normals via the Cholesky factor of the correlation matrix; bounded inputs through a Gaussian
  *   copula (r applies to the normal scores).
  *
@@ -85,7 +94,10 @@ export function propagate<Name extends string>(
       o.normalBoundCoverage === undefined
         ? undefined
         : _requireProbability(o.normalBoundCoverage, "normalBoundCoverage", context);
-    result = _propagateWorstCase(prepared, evaluator, correlation, bound);
+    if (o.modelEnclosure !== undefined && typeof o.modelEnclosure !== "function") {
+      throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "modelEnclosure", value: o.modelEnclosure, context, problem: "is not a function" });
+    }
+    result = _propagateWorstCase(prepared, evaluator, correlation, bound, o.modelEnclosure as _Enclosure | undefined);
   } else {
     result = _propagateMonteCarlo(prepared, evaluator, correlation, _monteCarloSettings(o, coverage, 1, context));
   }

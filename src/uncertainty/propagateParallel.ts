@@ -119,7 +119,10 @@ class Pool implements MonteCarloPool {
   }
 }
 
-const isNode = typeof process === "object" && typeof process.versions === "object" && typeof process.versions.node === "string";
+/** Whether this runs on Node (a function, not a module-level constant: nothing runs at import time). */
+function isNodeRuntime(): boolean {
+  return typeof process === "object" && typeof process.versions === "object" && typeof process.versions.node === "string";
+}
 
 /** Where the worker entry is: beside this file (built: `monteCarloWorker.js` in `dist/`; source: the .ts). */
 function workerLocation(): { url: URL; fromSource: boolean } | undefined {
@@ -134,7 +137,7 @@ function workerLocation(): { url: URL; fromSource: boolean } | undefined {
 }
 
 async function availableCores(): Promise<number> {
-  if (isNode) {
+  if (isNodeRuntime()) {
     const os = await import("node:os");
     return typeof os.availableParallelism === "function" ? os.availableParallelism() : os.cpus().length;
   }
@@ -145,7 +148,7 @@ async function availableCores(): Promise<number> {
 async function startEndpoints(count: number): Promise<Endpoint[] | undefined> {
   const location = workerLocation();
   if (location === undefined) return undefined;
-  if (isNode) {
+  if (isNodeRuntime()) {
     const { Worker } = await import("node:worker_threads");
     const { existsSync } = await import("node:fs");
     const { fileURLToPath } = await import("node:url");

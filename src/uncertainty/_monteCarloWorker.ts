@@ -60,7 +60,8 @@ function serve(port: Port): void {
 
 const isNode = typeof process === "object" && typeof process.versions === "object" && typeof process.versions.node === "string";
 if (isNode) {
-  void import("node:worker_threads").then(({ parentPort }) => {
+  const specifier = "node:" + "worker_threads"; // computed: bundlers for the browser leave it alone
+  void (import(/* @vite-ignore */ specifier) as Promise<typeof import("node:worker_threads")>).then(({ parentPort }) => {
     if (parentPort === null) return; // imported on the main thread: nothing to serve
     serve({
       post: (message, transfer) => parentPort.postMessage(message, transfer ?? []),

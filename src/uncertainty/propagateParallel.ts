@@ -119,6 +119,15 @@ class Pool implements MonteCarloPool {
   }
 }
 
+/**
+ * Imports a Node built-in by a computed specifier, so that application bundlers (browser or neutral targets)
+ * leave it alone instead of failing to resolve it; it only runs on Node.
+ */
+function importNode<T>(name: string): Promise<T> {
+  const specifier = `node:${name}`;
+  return import(/* @vite-ignore */ specifier) as Promise<T>;
+}
+
 /** Whether this runs on Node (a function, not a module-level constant: nothing runs at import time). */
 function isNodeRuntime(): boolean {
   return typeof process === "object" && typeof process.versions === "object" && typeof process.versions.node === "string";
@@ -138,7 +147,7 @@ function workerLocation(): { url: URL; fromSource: boolean } | undefined {
 
 async function availableCores(): Promise<number> {
   if (isNodeRuntime()) {
-    const os = await import("node:os");
+    const os = await importNode<typeof import("node:os")>("os");
     return typeof os.availableParallelism === "function" ? os.availableParallelism() : os.cpus().length;
   }
   const hardware = (globalThis as { navigator?: { hardwareConcurrency?: number } }).navigator?.hardwareConcurrency;
@@ -149,16 +158,15 @@ async function startEndpoints(count: number): Promise<Endpoint[] | undefined> {
   const location = workerLocation();
   if (location === undefined) return undefined;
   if (isNodeRuntime()) {
-    const { Worker } = await import("node:worker_threads");
-    const { existsSync } = await import("node:fs");
-    const { fileURLToPath } = await import("node:url");
+    const { Worker } = await importNode<typeof import("node:worker_threads")>("worker_threads");
+    const { existsSync } = await importNode<typeof import("node:fs")>("fs");
+    const { fileURLToPath, pathToFileURL } = await importNode<typeof import("node:url")>("url");
     if (!existsSync(fileURLToPath(location.url))) return undefined;
     let bootstrap = "";
     if (location.fromSource) {
       // From source (tests, benches under tsx) the entry is TypeScript: a one-line bootstrap registers the tsx
       // loader in the worker (a worker does not inherit the host's loader hooks), then imports the entry.
-      const { createRequire } = await import("node:module");
-      const { pathToFileURL } = await import("node:url");
+      const { createRequire } = await importNode<typeof import("node:module")>("module");
       const api = pathToFileURL(createRequire(fileURLToPath(location.url)).resolve("tsx/esm/api").replace(/\.cjs$/, ".mjs")).href;
       bootstrap =
         `import(${JSON.stringify(api)}).then((api) => { api.register(); ` +
@@ -299,7 +307,7 @@ async function driveOnPool(
  * @throws (rejects with) the errors of `propagate`; HotjunctionTypeError `INVALID_OPTION` when the module
  *   cannot be imported or has no such function export
  * @example
- * ```ts
+ * ```ts no-run
  * import { propagateParallel, rectangular } from "hotjunction";
  * const result = await propagateParallel(
  *   { module: new URL("./ovenModel.js", import.meta.url).href, exportName: "ovenError" },

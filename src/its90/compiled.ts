@@ -5,7 +5,7 @@
  * @module
  */
 import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
-import type { ExactInverse } from "./exactInverse.js";
+import { HotjunctionRangeError } from "../errors.js";
 
 /** @internal */
 export interface CompiledSubrange {
@@ -17,6 +17,28 @@ export interface CompiledSubrange {
   readonly hasExp: boolean;
 }
 
+/** One forward sub-range's share of the exact inverse. @internal */
+export interface InversePiece {
+  readonly range: number;
+  /** EMF at the piece's lower end (start of the segment grid), mV. */
+  readonly emfStart: number;
+  readonly perMillivolt: number;
+  readonly count: number;
+  readonly lowC: number;
+  readonly highC: number;
+  /** count × 8 monomial coefficients in the local variable s ∈ [−1, 1]. */
+  readonly coefficients: Float64Array;
+  /** 1 where the segment is solved by Newton instead of the interpolant. */
+  readonly newton: Uint8Array;
+  /** Temperatures of the count + 1 segment boundaries, °C. */
+  readonly edgesC: Float64Array;
+}
+
+/** Exact-inverse tables of one type (built by `exactInverse.ts`; declared here so the two modules do not import each other). @internal */
+export interface ExactInverse {
+  readonly pieces: readonly InversePiece[];
+}
+
 /** @internal */
 export interface CompiledType {
   readonly data: ThermocoupleData;
@@ -25,9 +47,11 @@ export interface CompiledType {
   readonly minC: number;
   readonly maxC: number;
   readonly subranges: readonly CompiledSubrange[];
-  /** Second sub-range's lower end (the first seam), or +∞. Fast path for the common two-range types. */
+  /** Type K's exponential term a0·exp(a1·(t − a2)²): a0 in mV (0 for the other types). */
   readonly a0: number;
+  /** a1 in 1/°C² (0 for types without the term). */
   readonly a1: number;
+  /** a2 in °C (0 for types without the term). */
   readonly a2: number;
   /** E at minC and maxC, mV. */
   readonly emfAtMinC: number;
@@ -141,7 +165,38 @@ export function _compile(data: ThermocoupleData): CompiledType {
   return ct;
 }
 
+/**
+ * Checks a data object once, when it is compiled: contiguous increasing sub-ranges with finite ends and
+ * 1 to 16 finite coefficients each, a range within the sub-ranges (a widened range would extrapolate a
+ * polynomial far outside its sub-range) and a finite exponential term. Kept compact: it is in every bundle.
+ */
+function validate(data: ThermocoupleData): void {
+  const subs = data.forward;
+  const e = data.exponential;
+  let end: number = subs[0]?.minC as number;
+  let ok = data.minC >= end;
+  for (const f of subs) {
+    const c = f?.coefficients;
+    // (length − 1) >>> 4 === 0 accepts 1 to 16 coefficients; every() rejects non-numbers and non-finite values.
+    ok &&= f?.minC === end && f.maxC > end && Array.isArray(c) && (c.length - 1) >>> 4 === 0 && [f.maxC, ...c].every(Number.isFinite);
+    end = f?.maxC;
+  }
+  if (!(ok && data.maxC <= end && data.maxC > data.minC && (!e || [e.a0, e.a1, e.a2].every(Number.isFinite)))) {
+    throw new HotjunctionRangeError({
+      code: "INVALID_OPTION",
+      quantity: "thermocouple data range",
+      value: [data.minC, data.maxC],
+      min: subs[0]?.minC,
+      max: end,
+      unit: "°C",
+      problem: "is not valid reference data (joined sub-ranges, finite coefficients)",
+    });
+  }
+}
+
 function build(data: ThermocoupleData): CompiledType {
+  validate(data);
+  const exponential = data.exponential ?? { a0: 0, a1: 0, a2: 0 };
   const subranges: CompiledSubrange[] = data.forward.map((f) => ({
     minC: f.minC,
     maxC: f.maxC,
@@ -155,9 +210,9 @@ function build(data: ThermocoupleData): CompiledType {
     minC: data.minC,
     maxC: data.maxC,
     subranges,
-    a0: data.exponential ? data.exponential.a0 : 0,
-    a1: data.exponential ? data.exponential.a1 : 0,
-    a2: data.exponential ? data.exponential.a2 : 0,
+    a0: exponential.a0,
+    a1: exponential.a1,
+    a2: exponential.a2,
     emfAtMinC: 0,
     emfAtMaxC: 0,
     lowestEmf: 0,

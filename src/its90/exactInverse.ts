@@ -18,31 +18,19 @@
  * @internal
  * @module
  */
-import { _emfInSubrange, _horner, _solveInSubrange, type CompiledSubrange, type CompiledType } from "./compiled.js";
+import {
+  _emfInSubrange,
+  _horner,
+  _solveInSubrange,
+  type CompiledSubrange,
+  type CompiledType,
+  type ExactInverse,
+  type InversePiece,
+} from "./compiled.js";
+
+export type { ExactInverse, InversePiece } from "./compiled.js";
 
 const NODE_COUNT = 8;
-
-/** @internal */
-export interface InversePiece {
-  readonly range: number;
-  /** EMF at the piece's lower end (start of the segment grid), mV. */
-  readonly emfStart: number;
-  readonly perMillivolt: number;
-  readonly count: number;
-  readonly lowC: number;
-  readonly highC: number;
-  /** count × 8 monomial coefficients in the local variable s ∈ [−1, 1]. */
-  readonly coefficients: Float64Array;
-  /** 1 where the segment is solved by Newton instead of the interpolant. */
-  readonly newton: Uint8Array;
-  /** Temperatures of the count + 1 segment boundaries, °C. */
-  readonly edgesC: Float64Array;
-}
-
-/** @internal */
-export interface ExactInverse {
-  readonly pieces: readonly InversePiece[];
-}
 
 /** Fit tolerance: 2e-11 °C, or 2e-12 mV / S(t) where S is small (both well inside the promised bound). */
 const FIT_TOLERANCE_C = 2e-11;

@@ -3,7 +3,7 @@
  * @module
  */
 import { HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
-import type { FirmwareTable } from "./buildFirmwareTable.js";
+import type { FirmwareTable } from "./types.js";
 import { firmwareTableCaution } from "./firmwareCaution.js";
 import { _numberTypeInfo, type FirmwareNumberType } from "./firmwareNumberType.js";
 
@@ -169,6 +169,13 @@ export function formatFirmwareTableC(table: FirmwareTable, options?: FormatFirmw
   lines.push(`#define ${macro}_H`);
   lines.push("");
   lines.push("#include <stdint.h>");
+  if (!outInfo.integer || !inInfo.integer) {
+    lines.push("#include <float.h>");
+    lines.push("");
+    lines.push("#if defined(FLT_EVAL_METHOD) && (FLT_EVAL_METHOD < 0 || FLT_EVAL_METHOD > 2)");
+    lines.push(`#error "${prefix}.h: the error bound assumes float evaluation method 0, 1 or 2 (FLT_EVAL_METHOD)"`);
+    lines.push("#endif");
+  }
   lines.push("");
   lines.push(`#define ${macro}_COUNT ${n}u`);
   lines.push(`#define ${macro}_INPUT_MIN ${_cLiteral(table.input.min, table.input.numberType)}`);
@@ -193,7 +200,11 @@ export function formatFirmwareTableC(table: FirmwareTable, options?: FormatFirmw
   if (outInfo.integer) {
     lines.push(" * Arithmetic: 64-bit integers, the segment result rounded to nearest (halves away from zero). */");
   } else {
-    lines.push(` * Arithmetic: ${outType}. */`);
+    lines.push(` * Arithmetic: ${outType}, one rounding per operation. Bit-identical to the library with FLT_EVAL_METHOD 0`);
+    lines.push(" * and no contraction; a fused multiply-add (-ffp-contract=fast, -march=native) or wider intermediates");
+    lines.push(" * (FLT_EVAL_METHOD 1 or 2, e.g. x87 -mfpmath=387) change the last bits but stay within the error bound,");
+    lines.push(" * which counts 6 unit roundoffs of the largest output with a 1% margin (a fused operation rounds less;");
+    lines.push(" * a double rounding errs by at most u(1 + 2^-11) per operation). Other methods are refused below. */");
   }
   lines.push(`static inline int ${prefix}_lookup(${inType} x, ${outType} *out)`);
   lines.push("{");
@@ -211,10 +222,20 @@ export function formatFirmwareTableC(table: FirmwareTable, options?: FormatFirmw
     lines.push(`    if (lo > ${macro}_COUNT - 2u) lo = ${macro}_COUNT - 2u;`);
     lines.push(`    xl = (int64_t)${macro}_INPUT_MIN + ((int64_t)lo << ${macro}_SHIFT);`);
     lines.push("    {");
-    lines.push(`        const int64_t dx = (int64_t)1 << ${macro}_SHIFT;`);
-    lines.push(`        const int64_t num = ((int64_t)${prefix}_outputs[lo + 1u] - ${prefix}_outputs[lo]) * ((int64_t)x - xl);`);
-    lines.push("        const int64_t q = num >= 0 ? (num + dx / 2) / dx : -((-num + dx / 2) / dx);");
-    lines.push(`        *out = (${outType})(${prefix}_outputs[lo] + q);`);
+    if (outInfo.integer) {
+      lines.push(`        const int64_t dx = (int64_t)1 << ${macro}_SHIFT;`);
+      lines.push(`        const int64_t num = ((int64_t)${prefix}_outputs[lo + 1u] - ${prefix}_outputs[lo]) * ((int64_t)x - xl);`);
+      lines.push("        const int64_t q = num >= 0 ? (num + dx / 2) / dx : -((-num + dx / 2) / dx);");
+      lines.push(`        *out = (${outType})(${prefix}_outputs[lo] + q);`);
+    } else {
+      // A float output interpolates in its own type (never in integers, which would truncate the outputs).
+      lines.push(`        const ${outType} u = (${outType})((int64_t)x - xl);`);
+      lines.push(`        const ${outType} dx = (${outType})((int64_t)1 << ${macro}_SHIFT);`);
+      lines.push(`        const ${outType} dy = ${prefix}_outputs[lo + 1u] - ${prefix}_outputs[lo];`);
+      lines.push(`        const ${outType} r = u / dx;`);
+      lines.push(`        const ${outType} step = dy * r;`);
+      lines.push(`        *out = ${prefix}_outputs[lo] + step;`);
+    }
     lines.push("    }");
   } else {
     lines.push("    while (hi - lo > 1u) {");

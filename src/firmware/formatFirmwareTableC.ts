@@ -63,6 +63,33 @@ export function _cLiteral(value: number, numberType: FirmwareNumberType): string
   return value < 0 ? `(${value})` : String(value);
 }
 
+/**
+ * An exact C99 hexadecimal literal of a float value (`0x1.8p+1f`): exact at any evaluation precision, which a
+ * shortest decimal is not where FLT_EVAL_METHOD 2 evaluates constants in long double. @internal
+ */
+export function _cHexLiteral(value: number, numberType: "float32" | "float64"): string {
+  const suffix = numberType === "float32" ? "f" : "";
+  if (value === 0) return `${Object.is(value, -0) ? "-" : ""}0x0p+0${suffix}`;
+  const sign = value < 0 ? "-" : "";
+  let magnitude = Math.abs(value);
+  let exponent = Math.floor(Math.log2(magnitude));
+  if (2 ** exponent > magnitude) exponent--;
+  else if (2 ** (exponent + 1) <= magnitude) exponent++;
+  // A subnormal double keeps the smallest normal exponent's scaling exact in two steps.
+  magnitude = magnitude / 2 ** Math.max(exponent, -1022) / 2 ** Math.min(0, exponent + 1022);
+  const fraction = Math.round((magnitude - 1) * 2 ** 52)
+    .toString(16)
+    .padStart(13, "0")
+    .replace(/0+$/, "");
+  return `${sign}0x1${fraction === "" ? "" : `.${fraction}`}p${exponent >= 0 ? "+" : ""}${exponent}${suffix}`;
+}
+
+/** The range macros' literal: exact hexadecimal for floats (with the decimal value in a comment). */
+function rangeLiteral(value: number, numberType: FirmwareNumberType): string {
+  if (numberType === "float32" || numberType === "float64") return `${_cHexLiteral(value, numberType)} /* ${_cLiteral(value, numberType)} */`;
+  return _cLiteral(value, numberType);
+}
+
 function arrayBody(values: readonly number[], numberType: FirmwareNumberType): string {
   const perLine = numberType.startsWith("float") ? 4 : 8;
   const lines: string[] = [];
@@ -178,8 +205,8 @@ export function formatFirmwareTableC(table: FirmwareTable, options?: FormatFirmw
   }
   lines.push("");
   lines.push(`#define ${macro}_COUNT ${n}u`);
-  lines.push(`#define ${macro}_INPUT_MIN ${_cLiteral(table.input.min, table.input.numberType)}`);
-  lines.push(`#define ${macro}_INPUT_MAX ${_cLiteral(table.input.max, table.input.numberType)}`);
+  lines.push(`#define ${macro}_INPUT_MIN ${rangeLiteral(table.input.min, table.input.numberType)}`);
+  lines.push(`#define ${macro}_INPUT_MAX ${rangeLiteral(table.input.max, table.input.numberType)}`);
   lines.push(`#define ${macro}_INPUT_SCALE ${table.input.scale}`);
   lines.push(`#define ${macro}_OUTPUT_SCALE ${table.output.scale}`);
   if (uniform) lines.push(`#define ${macro}_SHIFT ${table.spacingLog2}`);

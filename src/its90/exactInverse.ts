@@ -14,13 +14,16 @@
  * Where two sub-ranges meet, the forward function steps by up to 7.5e-8 mV (type J at 760 °C). The
  * inverse selects the sub-range by comparing the EMF with E of the upper sub-range at the seam (the
  * forward convention gives a shared end point to the upper sub-range), and clamps the result to the
- * selected sub-range, so the inverse is monotone and continuous to within step/S(t) at every seam.
+ * selected sub-range, so the inverse is monotone and continuous to within step/S(t) at every seam. Every
+ * result is clamped to its segment's edge temperatures, so the interpolants of neighbouring segments (which
+ * meet only to within the fit tolerance) never step backwards: non-decreasing across every edge.
  * @internal
  * @module
  */
 import {
   _emfInSubrange,
   _horner,
+  _slopeInSubrange,
   _solveInSubrange,
   type CompiledSubrange,
   type CompiledType,
@@ -31,6 +34,76 @@ import {
 export type { ExactInverse, InversePiece } from "./compiled.js";
 
 const NODE_COUNT = 8;
+
+/**
+ * E_index(t) − target by a compensated Horner scheme (error-free transformations: TwoSum of Knuth, TwoProduct
+ * by Dekker's splitting; Graillat, Langlois & Louvet, "Compensated Horner scheme", 2005, from memory), so the
+ * residual is as accurate as if computed in twice the working precision (type K's exponential term, absent
+ * where the Newton segments lie, is added in plain arithmetic).
+ */
+function residualCompensated(ct: CompiledType, index: number, t: number, target: number): number {
+  const sub = ct.subranges[index] as CompiledSubrange;
+  const c = sub.c;
+  const split = 134217729 * t;
+  const th = split - (split - t);
+  const tl = t - th;
+  let s = c[c.length - 1] as number;
+  let e = 0;
+  for (let i = c.length - 2; i >= 0; i--) {
+    const p = s * t;
+    const q = 134217729 * s;
+    const sh = q - (q - s);
+    const sl = s - sh;
+    const pe = sh * th - p + sh * tl + sl * th + sl * tl;
+    const ci = c[i] as number;
+    const sum = p + ci;
+    const bb = sum - p;
+    const se = p - (sum - bb) + (ci - bb);
+    s = sum;
+    e = e * t + (pe + se);
+  }
+  let r = s - target + e;
+  if (sub.hasExp) {
+    const d = t - ct.a2;
+    r += ct.a0 * Math.exp(ct.a1 * d * d);
+  }
+  return r;
+}
+
+/**
+ * The root of E_index(t) = target in [lowC, highC] (E increasing there) from compensated residuals: Newton
+ * inside a shrinking bracket, then an ulp walk to the float nearest the root (of the compensated residual,
+ * whose error is of order u²·Σ|cᵢ||t|ⁱ): a non-decreasing function of the target.
+ */
+function solveMonotone(ct: CompiledType, index: number, target: number, lowC: number, highC: number): number {
+  let lo = lowC;
+  let hi = highC;
+  let t = _solveInSubrange(ct, index, target, lowC, highC);
+  for (let iteration = 0; iteration < 8; iteration++) {
+    const f = residualCompensated(ct, index, t, target);
+    if (f === 0) return t;
+    if (f < 0) lo = t;
+    else hi = t;
+    let next = t - f / _slopeInSubrange(ct, index, t);
+    if (!(next >= lo && next <= hi)) next = 0.5 * (lo + hi);
+    if (next === t) break;
+    t = next;
+  }
+  // Walk by ulps to the two floats that bracket the root, then take the one of smaller |residual|: the
+  // float nearest the root, a non-decreasing function of the target.
+  let f = residualCompensated(ct, index, t, target);
+  const direction = f < 0 ? 1 : -1;
+  for (let step = 0; step < 64 && f !== 0; step++) {
+    const next = t + direction * Math.max(Math.abs(t) * 2 ** -53, 2 ** -1074);
+    const neighbour = next === t ? t + direction * Math.abs(t) * 2 ** -52 : next;
+    if (neighbour < lowC || neighbour > highC) break;
+    const g = residualCompensated(ct, index, neighbour, target);
+    if ((g < 0) !== (f < 0) || g === 0) return Math.abs(g) < Math.abs(f) ? neighbour : t;
+    t = neighbour;
+    f = g;
+  }
+  return t;
+}
 
 /** Fit tolerance: 2e-11 °C, or 2e-12 mV / S(t) where S is small (both well inside the promised bound). */
 const FIT_TOLERANCE_C = 2e-11;
@@ -115,7 +188,7 @@ export function _exactInverse(ct: CompiledType, inv: ExactInverse, emfMillivolts
   else if (k < 0) k = 0;
   let t: number;
   if (piece.newton[k] === 1) {
-    t = _solveInSubrange(
+    t = solveMonotone(
       ct,
       piece.range,
       emfMillivolts,
@@ -136,7 +209,10 @@ export function _exactInverse(ct: CompiledType, inv: ExactInverse, emfMillivolts
                 ((c[o + 3] as number) +
                   s * ((c[o + 4] as number) + s * ((c[o + 5] as number) + s * ((c[o + 6] as number) + s * (c[o + 7] as number)))))));
   }
-  if (t < piece.lowC) return piece.lowC;
-  if (t > piece.highC) return piece.highC;
-  return t;
+  // Clamped to the segment's edge temperatures (increasing roots of the forward polynomial), so that the
+  // inverse never steps backwards across a segment edge, where two interpolants meet; within the piece's
+  // sub-range by the same token.
+  const lo = piece.edgesC[k] as number;
+  const hi = piece.edgesC[k + 1] as number;
+  return t < lo ? lo : t > hi ? hi : t;
 }

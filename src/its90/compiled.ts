@@ -125,30 +125,76 @@ export function _slope(ct: CompiledType, temperatureC: number): number {
 }
 
 /**
- * Solves E_index(t) = target on [lowC, highC] (E increasing there) by safeguarded Newton
- * (Newton steps kept inside a shrinking bracket, bisection when a step leaves it). Plain Horner suffices:
- * a compensated (double-double) evaluation was tried and changed no result of the 40-digit checks.
+ * E_index(t) − target by a compensated Horner scheme (error-free transformations: Knuth's TwoSum, Dekker's
+ * TwoProduct by splitting; Graillat, Langlois & Louvet, "Compensated Horner scheme", 2005, from memory): the
+ * residual is as accurate as if computed in twice the working precision (type K's exponential term is added in
+ * plain arithmetic). @internal
+ */
+export function _residual(ct: CompiledType, index: number, t: number, target: number): number {
+  const sub = ct.subranges[index] as CompiledSubrange;
+  const c = sub.c;
+  const split = 134217729 * t;
+  const th = split - (split - t);
+  const tl = t - th;
+  let s = c[c.length - 1] as number;
+  let e = 0;
+  for (let i = c.length - 2; i >= 0; i--) {
+    const p = s * t;
+    const q = 134217729 * s;
+    const sh = q - (q - s);
+    const sl = s - sh;
+    const ci = c[i] as number;
+    const sum = p + ci;
+    const bb = sum - p;
+    e = e * t + (sh * th - p + sh * tl + sl * th + sl * tl + (p - (sum - bb) + (ci - bb)));
+    s = sum;
+  }
+  if (sub.hasExp) {
+    const d = t - ct.a2;
+    e += ct.a0 * Math.exp(ct.a1 * d * d);
+  }
+  return s - target + e;
+}
+
+/**
+ * Solves E_index(t) = target on [lowC, highC] (E increasing there) by safeguarded Newton on compensated
+ * residuals (Newton steps kept inside a shrinking bracket, bisection when a step leaves it), then walks by
+ * ulps to the float nearest the root: a non-decreasing function of the target (the residual's error, of
+ * order u²·Σ|cᵢ||t|ⁱ, is far below the distance between the roots of adjacent targets).
  * @internal
  */
 export function _solveInSubrange(ct: CompiledType, index: number, target: number, lowC: number, highC: number): number {
   let lo = lowC;
   let hi = highC;
-  const fLo = _emfInSubrange(ct, index, lo) - target;
-  const fHi = _emfInSubrange(ct, index, hi) - target;
+  const fLo = _residual(ct, index, lo, target);
+  const fHi = _residual(ct, index, hi, target);
   if (fLo >= 0) return lo;
   if (fHi <= 0) return hi;
   let t = lo + (hi - lo) * (-fLo / (fHi - fLo));
+  let f = 0;
   for (let iteration = 0; iteration < 100; iteration++) {
-    const f = _emfInSubrange(ct, index, t) - target;
+    f = _residual(ct, index, t, target);
     if (f === 0) return t;
     if (f < 0) lo = t;
     else hi = t;
-    const slope = _slopeInSubrange(ct, index, t);
-    let next = t - f / slope;
+    let next = t - f / _slopeInSubrange(ct, index, t);
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
     const step = Math.abs(next - t);
     t = next;
     if (step <= 2e-16 * (1 + Math.abs(t))) break;
+  }
+  // The ulp walk: step towards the root until the residual changes sign, keep the float of smaller |residual|.
+  f = _residual(ct, index, t, target);
+  const direction = f < 0 ? 1 : -1;
+  for (let k = 0; k < 64 && f !== 0; k++) {
+    // |t|·2⁻⁵³ rounds to the neighbouring float, except up from a power of two (a tie): then |t|·2⁻⁵².
+    let next = t + direction * Math.max(Math.abs(t) * 2 ** -53, 2 ** -1074);
+    if (next === t) next = t + direction * Math.abs(t) * 2 ** -52;
+    if (next < lowC || next > highC) break;
+    const g = _residual(ct, index, next, target);
+    if (g < 0 !== f < 0 || g === 0) return Math.abs(g) < Math.abs(f) ? next : t;
+    t = next;
+    f = g;
   }
   return t;
 }

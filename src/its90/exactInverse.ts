@@ -23,7 +23,6 @@
 import {
   _emfInSubrange,
   _horner,
-  _slopeInSubrange,
   _solveInSubrange,
   type CompiledSubrange,
   type CompiledType,
@@ -34,76 +33,6 @@ import {
 export type { ExactInverse, InversePiece } from "./compiled.js";
 
 const NODE_COUNT = 8;
-
-/**
- * E_index(t) − target by a compensated Horner scheme (error-free transformations: TwoSum of Knuth, TwoProduct
- * by Dekker's splitting; Graillat, Langlois & Louvet, "Compensated Horner scheme", 2005, from memory), so the
- * residual is as accurate as if computed in twice the working precision (type K's exponential term, absent
- * where the Newton segments lie, is added in plain arithmetic).
- */
-function residualCompensated(ct: CompiledType, index: number, t: number, target: number): number {
-  const sub = ct.subranges[index] as CompiledSubrange;
-  const c = sub.c;
-  const split = 134217729 * t;
-  const th = split - (split - t);
-  const tl = t - th;
-  let s = c[c.length - 1] as number;
-  let e = 0;
-  for (let i = c.length - 2; i >= 0; i--) {
-    const p = s * t;
-    const q = 134217729 * s;
-    const sh = q - (q - s);
-    const sl = s - sh;
-    const pe = sh * th - p + sh * tl + sl * th + sl * tl;
-    const ci = c[i] as number;
-    const sum = p + ci;
-    const bb = sum - p;
-    const se = p - (sum - bb) + (ci - bb);
-    s = sum;
-    e = e * t + (pe + se);
-  }
-  let r = s - target + e;
-  if (sub.hasExp) {
-    const d = t - ct.a2;
-    r += ct.a0 * Math.exp(ct.a1 * d * d);
-  }
-  return r;
-}
-
-/**
- * The root of E_index(t) = target in [lowC, highC] (E increasing there) from compensated residuals: Newton
- * inside a shrinking bracket, then an ulp walk to the float nearest the root (of the compensated residual,
- * whose error is of order u²·Σ|cᵢ||t|ⁱ): a non-decreasing function of the target.
- */
-function solveMonotone(ct: CompiledType, index: number, target: number, lowC: number, highC: number): number {
-  let lo = lowC;
-  let hi = highC;
-  let t = _solveInSubrange(ct, index, target, lowC, highC);
-  for (let iteration = 0; iteration < 8; iteration++) {
-    const f = residualCompensated(ct, index, t, target);
-    if (f === 0) return t;
-    if (f < 0) lo = t;
-    else hi = t;
-    let next = t - f / _slopeInSubrange(ct, index, t);
-    if (!(next >= lo && next <= hi)) next = 0.5 * (lo + hi);
-    if (next === t) break;
-    t = next;
-  }
-  // Walk by ulps to the two floats that bracket the root, then take the one of smaller |residual|: the
-  // float nearest the root, a non-decreasing function of the target.
-  let f = residualCompensated(ct, index, t, target);
-  const direction = f < 0 ? 1 : -1;
-  for (let step = 0; step < 64 && f !== 0; step++) {
-    const next = t + direction * Math.max(Math.abs(t) * 2 ** -53, 2 ** -1074);
-    const neighbour = next === t ? t + direction * Math.abs(t) * 2 ** -52 : next;
-    if (neighbour < lowC || neighbour > highC) break;
-    const g = residualCompensated(ct, index, neighbour, target);
-    if ((g < 0) !== (f < 0) || g === 0) return Math.abs(g) < Math.abs(f) ? neighbour : t;
-    t = neighbour;
-    f = g;
-  }
-  return t;
-}
 
 /** Fit tolerance: 2e-11 °C, or 2e-12 mV / S(t) where S is small (both well inside the promised bound). */
 const FIT_TOLERANCE_C = 2e-11;
@@ -188,7 +117,7 @@ export function _exactInverse(ct: CompiledType, inv: ExactInverse, emfMillivolts
   else if (k < 0) k = 0;
   let t: number;
   if (piece.newton[k] === 1) {
-    t = solveMonotone(
+    t = _solveInSubrange(
       ct,
       piece.range,
       emfMillivolts,

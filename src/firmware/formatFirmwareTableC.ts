@@ -112,32 +112,8 @@ function g(value: number): string {
   return Number(value.toPrecision(6)).toString();
 }
 
-/**
- * Emits a firmware table as a self-contained C99 header: `<stdint.h>` types, `static const` arrays,
- * range constants, a caution comment, the error report, and a documented `static inline` interpolation
- * routine `int <prefix>_lookup(x, *out)` that returns 0 and writes the interpolated output for an input
- * within `<PREFIX>_INPUT_MIN … <PREFIX>_INPUT_MAX`, −1 below the range (and for NaN), 1 above it.
- * Integer tables interpolate in 64-bit integers rounded to nearest; uniform tables index by shift.
- * The text is deterministic (byte-identical for the same table and prefix), ASCII only.
- * @param table - a table from {@link buildFirmwareTable}
- * @param options - `prefix`; see {@link FormatFirmwareTableCOptions}
- * @returns the header text, ending in a newline
- * @throws HotjunctionRangeError (`INVALID_OPTION`) for a prefix that is not a usable C identifier
- * @example
- * ```ts
- * import { buildFirmwareTable, formatFirmwareTableC } from "hotjunction";
- * const table = buildFirmwareTable({ type: "T", kind: "temperatureToEmf", minC: 0, maxC: 100, maxErrorOutputUnits: 5 });
- * const header = formatFirmwareTableC(table, { prefix: "oven_tc" });
- * console.log(header.includes("static inline int oven_tc_lookup(int32_t x, int32_t *out)")); // true
- * ```
- */
-export function formatFirmwareTableC(table: FirmwareTable, options?: FormatFirmwareTableCOptions): string {
-  const prefix = _checkPrefix(options?.prefix ?? "tc_table");
-  const macro = prefix.toUpperCase();
-  const inInfo = _numberTypeInfo(table.input.numberType, "input number type");
-  const outInfo = _numberTypeInfo(table.output.numberType, "output number type");
-  const inType = inInfo.cType;
-  const outType = outInfo.cType;
+/** The header's opening comment: caution, columns, chain, range, breakpoints and the error report. */
+function headerComment(table: FirmwareTable, prefix: string, inType: string, outType: string): string[] {
   const n = table.inputs.length;
   const uniform = table.spacingLog2 !== null;
   const inUnit = ASCII_UNIT[table.input.unit] ?? table.input.unit;
@@ -192,6 +168,121 @@ export function formatFirmwareTableC(table: FirmwareTable, options?: FormatFirmw
     ` * Largest error found by a dense search (${f.pointsChecked} inputs): ${g(f.errorOutputUnits)} ${outUnit} at input ${g(f.atInputStored)} (${g(f.atTemperatureC)} degC)`,
   );
   lines.push(" */");
+  return lines;
+}
+
+/** The documented `static inline` lookup routine. */
+function lookupRoutine(
+  table: FirmwareTable,
+  prefix: string,
+  macro: string,
+  integerInput: boolean,
+  integerOutput: boolean,
+  inType: string,
+  outType: string,
+): string[] {
+  const uniform = table.spacingLog2 !== null;
+  const lines: string[] = [];
+  lines.push(`/* Linear interpolation in the table. Returns 0 and writes *out when x is within`);
+  lines.push(` * ${macro}_INPUT_MIN..${macro}_INPUT_MAX; returns -1 below the range${integerInput ? "" : " or for NaN"}, 1 above it,`);
+  lines.push(" * and leaves *out untouched then: never use an out-of-range reading as a temperature.");
+  if (integerOutput) {
+    lines.push(" * Arithmetic: 64-bit integers, the segment result rounded to nearest (halves away from zero). */");
+  } else {
+    lines.push(` * Arithmetic: ${outType}, one rounding per operation. Bit-identical to the library with FLT_EVAL_METHOD 0`);
+    lines.push(" * and no contraction; a fused multiply-add (-ffp-contract=fast, -march=native) or wider intermediates");
+    lines.push(" * (FLT_EVAL_METHOD 1 or 2, e.g. x87 -mfpmath=387) change the last bits but stay within the error bound,");
+    lines.push(" * which counts 6 unit roundoffs of the largest output with a 1% margin (a fused operation rounds less;");
+    lines.push(" * a double rounding errs by at most u(1 + 2^-11) per operation). Other methods are refused below. */");
+  }
+  lines.push(`static inline int ${prefix}_lookup(${inType} x, ${outType} *out)`);
+  lines.push("{");
+  if (uniform) {
+    lines.push("    uint32_t lo;");
+    lines.push("    int64_t xl;");
+  } else {
+    lines.push("    uint32_t lo = 0u;");
+    lines.push(`    uint32_t hi = ${macro}_COUNT - 1u;`);
+  }
+  lines.push(`    if (!(x >= ${macro}_INPUT_MIN)) return -1;`);
+  lines.push(`    if (x > ${macro}_INPUT_MAX) return 1;`);
+  if (uniform) {
+    lines.push(`    lo = (uint32_t)(((int64_t)x - ${macro}_INPUT_MIN) >> ${macro}_SHIFT);`);
+    lines.push(`    if (lo > ${macro}_COUNT - 2u) lo = ${macro}_COUNT - 2u;`);
+    lines.push(`    xl = (int64_t)${macro}_INPUT_MIN + ((int64_t)lo << ${macro}_SHIFT);`);
+    lines.push("    {");
+    if (integerOutput) {
+      lines.push(`        const int64_t dx = (int64_t)1 << ${macro}_SHIFT;`);
+      lines.push(`        const int64_t num = ((int64_t)${prefix}_outputs[lo + 1u] - ${prefix}_outputs[lo]) * ((int64_t)x - xl);`);
+      lines.push("        const int64_t q = num >= 0 ? (num + dx / 2) / dx : -((-num + dx / 2) / dx);");
+      lines.push(`        *out = (${outType})(${prefix}_outputs[lo] + q);`);
+    } else {
+      // A float output interpolates in its own type (never in integers, which would truncate the outputs).
+      lines.push(`        const ${outType} u = (${outType})((int64_t)x - xl);`);
+      lines.push(`        const ${outType} dx = (${outType})((int64_t)1 << ${macro}_SHIFT);`);
+      lines.push(`        const ${outType} dy = ${prefix}_outputs[lo + 1u] - ${prefix}_outputs[lo];`);
+      lines.push(`        const ${outType} r = u / dx;`);
+      lines.push(`        const ${outType} step = dy * r;`);
+      lines.push(`        *out = ${prefix}_outputs[lo] + step;`);
+    }
+    lines.push("    }");
+  } else {
+    lines.push("    while (hi - lo > 1u) {");
+    lines.push("        const uint32_t mid = (lo + hi) >> 1;");
+    lines.push(`        if (x < ${prefix}_inputs[mid]) hi = mid; else lo = mid;`);
+    lines.push("    }");
+    lines.push("    {");
+    if (integerOutput) {
+      lines.push(`        const int64_t dx = (int64_t)${prefix}_inputs[hi] - ${prefix}_inputs[lo];`);
+      lines.push(
+        `        const int64_t num = ((int64_t)${prefix}_outputs[hi] - ${prefix}_outputs[lo]) * ((int64_t)x - ${prefix}_inputs[lo]);`,
+      );
+      lines.push("        const int64_t q = num >= 0 ? (num + dx / 2) / dx : -((-num + dx / 2) / dx);");
+      lines.push(`        *out = (${outType})(${prefix}_outputs[lo] + q);`);
+    } else {
+      const diff = (a: string, c: string): string =>
+        integerInput ? `(${outType})((int64_t)${a} - ${c})` : `(${outType})(${a} - ${c})`;
+      lines.push(`        const ${outType} u = ${diff("x", `${prefix}_inputs[lo]`)};`);
+      lines.push(`        const ${outType} dx = ${diff(`${prefix}_inputs[hi]`, `${prefix}_inputs[lo]`)};`);
+      lines.push(`        const ${outType} dy = ${prefix}_outputs[hi] - ${prefix}_outputs[lo];`);
+      lines.push(`        const ${outType} r = u / dx;`);
+      lines.push(`        const ${outType} step = dy * r;`);
+      lines.push(`        *out = ${prefix}_outputs[lo] + step;`);
+    }
+    lines.push("    }");
+  }
+  return lines;
+}
+
+/**
+ * Emits a firmware table as a self-contained C99 header: `<stdint.h>` types, `static const` arrays,
+ * range constants, a caution comment, the error report, and a documented `static inline` interpolation
+ * routine `int <prefix>_lookup(x, *out)` that returns 0 and writes the interpolated output for an input
+ * within `<PREFIX>_INPUT_MIN … <PREFIX>_INPUT_MAX`, −1 below the range (and for NaN), 1 above it.
+ * Integer tables interpolate in 64-bit integers rounded to nearest; uniform tables index by shift.
+ * The text is deterministic (byte-identical for the same table and prefix), ASCII only.
+ * @param table - a table from {@link buildFirmwareTable}
+ * @param options - `prefix`; see {@link FormatFirmwareTableCOptions}
+ * @returns the header text, ending in a newline
+ * @throws HotjunctionRangeError (`INVALID_OPTION`) for a prefix that is not a usable C identifier
+ * @example
+ * ```ts
+ * import { buildFirmwareTable, formatFirmwareTableC } from "hotjunction";
+ * const table = buildFirmwareTable({ type: "T", kind: "temperatureToEmf", minC: 0, maxC: 100, maxErrorOutputUnits: 5 });
+ * const header = formatFirmwareTableC(table, { prefix: "oven_tc" });
+ * console.log(header.includes("static inline int oven_tc_lookup(int32_t x, int32_t *out)")); // true
+ * ```
+ */
+export function formatFirmwareTableC(table: FirmwareTable, options?: FormatFirmwareTableCOptions): string {
+  const prefix = _checkPrefix(options?.prefix ?? "tc_table");
+  const macro = prefix.toUpperCase();
+  const inInfo = _numberTypeInfo(table.input.numberType, "input number type");
+  const outInfo = _numberTypeInfo(table.output.numberType, "output number type");
+  const inType = inInfo.cType;
+  const outType = outInfo.cType;
+  const n = table.inputs.length;
+  const uniform = table.spacingLog2 !== null;
+  const lines: string[] = headerComment(table, prefix, inType, outType);
   lines.push(`#ifndef ${macro}_H`);
   lines.push(`#define ${macro}_H`);
   lines.push("");
@@ -221,74 +312,7 @@ export function formatFirmwareTableC(table: FirmwareTable, options?: FormatFirmw
   lines.push(arrayBody(table.outputs, table.output.numberType));
   lines.push("};");
   lines.push("");
-  lines.push(`/* Linear interpolation in the table. Returns 0 and writes *out when x is within`);
-  lines.push(` * ${macro}_INPUT_MIN..${macro}_INPUT_MAX; returns -1 below the range${inInfo.integer ? "" : " or for NaN"}, 1 above it,`);
-  lines.push(" * and leaves *out untouched then: never use an out-of-range reading as a temperature.");
-  if (outInfo.integer) {
-    lines.push(" * Arithmetic: 64-bit integers, the segment result rounded to nearest (halves away from zero). */");
-  } else {
-    lines.push(` * Arithmetic: ${outType}, one rounding per operation. Bit-identical to the library with FLT_EVAL_METHOD 0`);
-    lines.push(" * and no contraction; a fused multiply-add (-ffp-contract=fast, -march=native) or wider intermediates");
-    lines.push(" * (FLT_EVAL_METHOD 1 or 2, e.g. x87 -mfpmath=387) change the last bits but stay within the error bound,");
-    lines.push(" * which counts 6 unit roundoffs of the largest output with a 1% margin (a fused operation rounds less;");
-    lines.push(" * a double rounding errs by at most u(1 + 2^-11) per operation). Other methods are refused below. */");
-  }
-  lines.push(`static inline int ${prefix}_lookup(${inType} x, ${outType} *out)`);
-  lines.push("{");
-  if (uniform) {
-    lines.push("    uint32_t lo;");
-    lines.push("    int64_t xl;");
-  } else {
-    lines.push("    uint32_t lo = 0u;");
-    lines.push(`    uint32_t hi = ${macro}_COUNT - 1u;`);
-  }
-  lines.push(`    if (!(x >= ${macro}_INPUT_MIN)) return -1;`);
-  lines.push(`    if (x > ${macro}_INPUT_MAX) return 1;`);
-  if (uniform) {
-    lines.push(`    lo = (uint32_t)(((int64_t)x - ${macro}_INPUT_MIN) >> ${macro}_SHIFT);`);
-    lines.push(`    if (lo > ${macro}_COUNT - 2u) lo = ${macro}_COUNT - 2u;`);
-    lines.push(`    xl = (int64_t)${macro}_INPUT_MIN + ((int64_t)lo << ${macro}_SHIFT);`);
-    lines.push("    {");
-    if (outInfo.integer) {
-      lines.push(`        const int64_t dx = (int64_t)1 << ${macro}_SHIFT;`);
-      lines.push(`        const int64_t num = ((int64_t)${prefix}_outputs[lo + 1u] - ${prefix}_outputs[lo]) * ((int64_t)x - xl);`);
-      lines.push("        const int64_t q = num >= 0 ? (num + dx / 2) / dx : -((-num + dx / 2) / dx);");
-      lines.push(`        *out = (${outType})(${prefix}_outputs[lo] + q);`);
-    } else {
-      // A float output interpolates in its own type (never in integers, which would truncate the outputs).
-      lines.push(`        const ${outType} u = (${outType})((int64_t)x - xl);`);
-      lines.push(`        const ${outType} dx = (${outType})((int64_t)1 << ${macro}_SHIFT);`);
-      lines.push(`        const ${outType} dy = ${prefix}_outputs[lo + 1u] - ${prefix}_outputs[lo];`);
-      lines.push(`        const ${outType} r = u / dx;`);
-      lines.push(`        const ${outType} step = dy * r;`);
-      lines.push(`        *out = ${prefix}_outputs[lo] + step;`);
-    }
-    lines.push("    }");
-  } else {
-    lines.push("    while (hi - lo > 1u) {");
-    lines.push("        const uint32_t mid = (lo + hi) >> 1;");
-    lines.push(`        if (x < ${prefix}_inputs[mid]) hi = mid; else lo = mid;`);
-    lines.push("    }");
-    lines.push("    {");
-    if (outInfo.integer) {
-      lines.push(`        const int64_t dx = (int64_t)${prefix}_inputs[hi] - ${prefix}_inputs[lo];`);
-      lines.push(
-        `        const int64_t num = ((int64_t)${prefix}_outputs[hi] - ${prefix}_outputs[lo]) * ((int64_t)x - ${prefix}_inputs[lo]);`,
-      );
-      lines.push("        const int64_t q = num >= 0 ? (num + dx / 2) / dx : -((-num + dx / 2) / dx);");
-      lines.push(`        *out = (${outType})(${prefix}_outputs[lo] + q);`);
-    } else {
-      const diff = (a: string, c: string): string =>
-        inInfo.integer ? `(${outType})((int64_t)${a} - ${c})` : `(${outType})(${a} - ${c})`;
-      lines.push(`        const ${outType} u = ${diff("x", `${prefix}_inputs[lo]`)};`);
-      lines.push(`        const ${outType} dx = ${diff(`${prefix}_inputs[hi]`, `${prefix}_inputs[lo]`)};`);
-      lines.push(`        const ${outType} dy = ${prefix}_outputs[hi] - ${prefix}_outputs[lo];`);
-      lines.push(`        const ${outType} r = u / dx;`);
-      lines.push(`        const ${outType} step = dy * r;`);
-      lines.push(`        *out = ${prefix}_outputs[lo] + step;`);
-    }
-    lines.push("    }");
-  }
+  lines.push(...lookupRoutine(table, prefix, macro, inInfo.integer, outInfo.integer, inType, outType));
   lines.push("    return 0;");
   lines.push("}");
   lines.push("");

@@ -213,7 +213,7 @@ export function _compile(data: ThermocoupleData): CompiledType {
 
 /**
  * Checks a data object once, when it is compiled: contiguous increasing sub-ranges with finite ends and
- * 1 to 16 finite coefficients each, a range within the sub-ranges (a widened range would extrapolate a
+ * at least one coefficient each, all finite, a range within the sub-ranges (a widened range would extrapolate a
  * polynomial far outside its sub-range) and a finite exponential term. Kept compact: it is in every bundle.
  */
 function validate(data: ThermocoupleData): void {
@@ -223,8 +223,8 @@ function validate(data: ThermocoupleData): void {
   let ok = data.minC >= end;
   for (const f of subs) {
     const c = f?.coefficients;
-    // (length − 1) >>> 4 === 0 accepts 1 to 16 coefficients; every() rejects non-numbers and non-finite values.
-    ok &&= f?.minC === end && f.maxC > end && Array.isArray(c) && (c.length - 1) >>> 4 === 0 && [f.maxC, ...c].every(Number.isFinite);
+    // c[0] makes an empty list fail; every() rejects non-numbers and non-finite values.
+    ok &&= f?.minC === end && f.maxC > end && Array.isArray(c) && [f.maxC, c[0], ...c].every(Number.isFinite);
     end = f?.maxC;
   }
   if (!(ok && data.maxC <= end && data.maxC > data.minC && (!e || [e.a0, e.a1, e.a2].every(Number.isFinite)))) {
@@ -235,7 +235,7 @@ function validate(data: ThermocoupleData): void {
       min: subs[0]?.minC,
       max: end,
       unit: "°C",
-      problem: "is not valid reference data (joined sub-ranges, finite coefficients)",
+      problem: "is not valid reference data",
     });
   }
 }

@@ -69,8 +69,8 @@ function buildPiece(ct: CompiledType, range: number, lowC: number, highC: number
     }
     // Check the interpolant at the Chebyshev extrema (ends included) against the roots there; a segment
     // that misses (S nearly vanishing) is solved by Newton at run time instead.
-    const slopeMvPerC = segHi > segLo ? width / (segHi - segLo) : 0;
-    const allowed = Math.max(FIT_TOLERANCE_C, FIT_TOLERANCE_MV / slopeMvPerC);
+    // 2e-12 mV over the segment's mean slope width / (segHi − segLo).
+    const allowed = Math.max(FIT_TOLERANCE_C, (FIT_TOLERANCE_MV * (segHi - segLo)) / width);
     for (let j = 0; j <= NODE_COUNT; j++) {
       const s = Math.cos((Math.PI * j) / NODE_COUNT);
       const root = _solveInSubrange(ct, range, mid + half * s, segLo, segHi);

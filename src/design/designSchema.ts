@@ -317,7 +317,7 @@ const inputFilterSchema = z
   })
   .describe("first-order input RC filter, τ = R·C");
 const amplifierBandwidthHz = positive("amplifier −3 dB bandwidth, Hz (first-order roll-off, τ = 1/(2πf))").optional();
-const mainsHz = z.union([z.literal(50), z.literal(60)]).describe("mains frequency, Hz");
+const mainsHz = z.literal([50, 60]).describe("mains frequency, Hz: 50 or 60");
 
 const dynamicsSchema = z
   .strictObject({

@@ -277,6 +277,21 @@ export {
   type TripSetpoint,
 } from "./trip/index.js";
 
+// Response time folded into the trip verdict (issue 14)
+export {
+  chainSignalSlope,
+  type ChainSignalSlope,
+  tripDynamics,
+  type TripDynamicsCase,
+  type TripDynamicsInput,
+  type TripDynamicsModel,
+  type TripDynamicsNoise,
+  type TripDynamicsNoiseFigures,
+  type TripDynamicsResult,
+  type TripDynamicsSetpoint,
+  type TripDynamicsSetpointInput,
+} from "./trip/index.js";
+
 // Failure-mode review of a trip chain (fault catalogue, single-fault review, renderers)
 export {
   type AmplifierResistorFaultEffect,

@@ -268,6 +268,16 @@ export {
   type TripErrorSource,
   type TripResistors,
   type TripSetpoint,
+  resistorPositionNames,
+  resistorDesignator,
+  type TripBuildSheet,
+  type BuildSheetSetpoint,
+  type BuildSheetAdcSetpoint,
+  type BuildSheetNetwork,
+  type BuildSheetResistor,
+  type BuildSheetShuntResistor,
+  type BuildSheetMidRail,
+  type BuildSheetPart,
 } from "./trip/index.js";
 
 // Failure-mode review of a trip chain (fault catalogue, single-fault review, renderers)

@@ -4,6 +4,7 @@
  * @module
  */
 import type { TripBand, TripErrorSource } from "../trip/types.js";
+import type { TripBuildSheet } from "../trip/buildSheet.js";
 import type { PropagationMethod } from "../uncertainty/types.js";
 
 /** Report output formats. `text` is the terminal table (readable without colour). */
@@ -54,6 +55,8 @@ export interface TripReport {
   /** Assumptions and how results were found. */
   readonly notes: readonly string[];
   readonly methods: ReportMethodInfo;
+  /** What to build (thresholds, resistors by position, release, shunt resistor, mid-rail, bill of materials). */
+  readonly buildSheet?: TripBuildSheet;
 }
 
 /** One row of an error sweep: the chain's reading error bounds at one true temperature. */

@@ -338,7 +338,7 @@ export function formatTripReport(report: TripReport, format: ReportFormat): stri
     case "csv":
       return renderCsv(report);
     case "json":
-      return `${JSON.stringify({ report: "trip", caution: CAUTION_TEXT, method: report.methods, ...report }, null, 2)}\n`;
+      return `${JSON.stringify({ report: "trip", reportSchemaVersion: 1, caution: CAUTION_TEXT, method: report.methods, ...report }, null, 2)}\n`;
     default:
       return renderText(report);
   }

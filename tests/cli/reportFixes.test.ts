@@ -54,3 +54,19 @@ describe("check --parts-csv", () => {
     expect(lines.some((l) => l.startsWith('"mid-rail top, mid-rail bottom",resistor,') && l.endsWith(",2"))).toBe(true);
   });
 });
+
+describe("compare on an ADC design", () => {
+  it("compares the firmware trip bands of each reference beside an ideal one of the same voltage", async () => {
+    const r = await run(["compare", "examples/heated-enclosure-adc.json", "--json", "--trials", "200"]);
+    expect(r.stderr).toBe("");
+    const c = JSON.parse(r.stdout);
+    expect(c.options.map((o: { name: string }) => o.name)).toEqual(["2.048 V series reference, 0.2 %", "ideal 2.048 V"]);
+    const [real, ideal] = c.options;
+    // an ideal reference adds no width: its band is its own ideal band; the 0.2 % reference widens it (never narrows)
+    expect(ideal.setpoints[0].extraWidthC).toBe(0);
+    expect(real.setpoints[0].highC - real.setpoints[0].lowC).toBeGreaterThan(ideal.setpoints[0].highC - ideal.setpoints[0].lowC);
+    expect(real.setpoints[0].idealLowC).toBeCloseTo(ideal.setpoints[0].lowC, 9);
+    // costed adequate option first (the ideal one has no cost)
+    expect(c.recommended).toBe("2.048 V series reference, 0.2 %");
+  });
+});

@@ -29,6 +29,7 @@ const commandLoaders: readonly (readonly [string, () => Promise<Registration>])[
   ["sweep", async () => (await import("./commands/sweep.js")).registerSweepCommand],
   ["faults", async () => (await import("./commands/faults.js")).registerFaultsCommand],
   ["schema", async () => (await import("./commands/schema.js")).registerSchemaCommand],
+  ["starter", async () => (await import("./commands/starter.js")).registerStarterCommand],
 ];
 
 /** Names of every command. @internal */

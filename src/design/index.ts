@@ -18,3 +18,4 @@ export { loadDesignFile, type LoadDesignFileOptions } from "./loadDesignFile.js"
 export { designJsonSchema } from "./designJsonSchema.js";
 export { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign } from "./designToObjects.js";
 export { CAUTION_TEXT } from "../caution.js";
+export { starterDesign, starterTopologies, type StarterTopology } from "./starterDesigns.js";

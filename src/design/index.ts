@@ -4,7 +4,7 @@
  * @module
  */
 export { designFileSchema, referenceSchema, type DesignFile, type DesignReference } from "./designSchema.js";
-export { DesignFileError, type DesignFileErrorDetails } from "./designFileError.js";
+export { DesignFileError, type DesignFileErrorDetails, type DesignFileProblem } from "./designFileError.js";
 export {
   designFileMaxBytes,
   designFileMaxDepth,

@@ -282,7 +282,7 @@ export interface TripDesignResult {
    */
   readonly midRail: MidRailDivider;
   /** What to build: thresholds, resistors by position, currents, release band, shunt resistor, bill of materials. */
-  readonly buildSheet: TripBuildSheet;
+  readonly buildSheet?: TripBuildSheet;
   /** True when every setpoint passes and the reference has no problems. */
   readonly pass: boolean;
   /** How the network was found and what was assumed, in sentences (the last one is the caution). */

@@ -33,7 +33,7 @@ function gainDesign(hysteresisMillivolts: number): TripDesign {
 describe("build sheet: hand-checked thresholds and release", () => {
   it("threshold = gain × EMF: type J at 350 °C is 19.090 mV (NIST SRD 60 table, 3 decimals), ×100 = 1.9090 V", () => {
     const r = designTrip(gainDesign(0), fast);
-    const sheet = r.buildSheet.setpoints[0]!;
+    const sheet = r.buildSheet!.setpoints[0]!;
     // NIST table value 19.090 mV printed to 0.001 mV: ×100 → ±0.05 mV of the printed rounding.
     expect(Math.abs(sheet.idealThresholdVolts - 1.909)).toBeLessThan(0.5e-3 * 100 / 1000 + 1e-12);
     expect(sheet.idealThresholdVolts).toBeCloseTo((100 * emfFromTemperature("J", 350)) / 1000, 12);
@@ -51,7 +51,7 @@ describe("build sheet: hand-checked thresholds and release", () => {
 
   it("release = threshold − hysteresis: 20 mV below a ×100 signal is 0.2 mV of EMF below the trip's EMF", () => {
     const r = designTrip(gainDesign(20), fast);
-    const sheet = r.buildSheet.setpoints[0]!;
+    const sheet = r.buildSheet!.setpoints[0]!;
     // placement "below": the trip is at the threshold, the release 20 mV lower (comparator convention of the chain).
     const tripEmf = (sheet.realizedThresholdVolts * 1000) / 100;
     const releaseEmf = ((sheet.realizedThresholdVolts - 0.02) * 1000) / 100;
@@ -67,7 +67,7 @@ describe("build sheet: hand-checked thresholds and release", () => {
   it("shunt resistor from (Vs,min − Vref)/(Iload + Ishunt,min): reflow example, 2.25 V / 0.810 mA → E96 2.74 kΩ", () => {
     const design = tripDesignFromDesign(parseDesign(readFileSync("examples/reflow-oven-trip.json", "utf8")));
     const r = designTrip(design, fast);
-    const sheet = r.buildSheet;
+    const sheet = r.buildSheet!;
     const iload = r.networks[0]!.currentMilliamps; // the divider is the only load
     const bound = (4.75 - 2.5) / ((iload + 0.1) / 1000); // Ω
     expect(bound).toBeGreaterThan(2767.4); // 2740 Ω·1.01 fits …
@@ -96,7 +96,7 @@ describe("build sheet: hand-checked thresholds and release", () => {
       ambient: { minC: 25, maxC: 25 },
     };
     const r = designTrip(design, { ...fast, networks: [{ topology: "two-resistor", resistorsOhms: [95000, 5000], totalOhms: 100000, currentMilliamps: 0.05 }] });
-    const sheet = r.buildSheet.setpoints[0]!;
+    const sheet = r.buildSheet!.setpoints[0]!;
     expect(sheet.realizedThresholdVolts).toBeCloseTo(0.25, 12);
     expect(sheet.thresholdLowVolts).toBeCloseTo(0.24, 12);
     expect(sheet.thresholdHighVolts).toBeCloseTo(0.26, 12);

@@ -4,6 +4,7 @@
  * @module
  */
 export { designFileSchema, referenceSchema, type DesignFile, type DesignReference } from "./designSchema.js";
+export type { DesignDynamics } from "./designSchema.js";
 export { DesignFileError, type DesignFileErrorDetails, type DesignFileProblem } from "./designFileError.js";
 export {
   designFileMaxBytes,
@@ -17,5 +18,6 @@ export {
 export { loadDesignFile, type LoadDesignFileOptions } from "./loadDesignFile.js";
 export { designJsonSchema } from "./designJsonSchema.js";
 export { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign } from "./designToObjects.js";
+export { dynamicsModelFromDesign } from "./designToObjects.js";
 export { CAUTION_TEXT } from "../caution.js";
 export { starterDesign, starterTopologies, type StarterTopology } from "./starterDesigns.js";

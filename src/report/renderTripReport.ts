@@ -17,6 +17,7 @@ import {
   _textTable,
 } from "./formatting.js";
 import type { ReportFormat, ReportMethodInfo, TripReport } from "./reportTypes.js";
+import { _dynamicsCsv, _dynamicsMarkdownLines, _dynamicsTextLines } from "./runawayReport.js";
 
 function formatOhms(ohms: number): string {
   if (ohms >= 1e6) return `${+(ohms / 1e6).toPrecision(4)} MΩ`;
@@ -252,6 +253,7 @@ function renderText(report: TripReport): string {
   for (const block of sourceRows(report, 8)) {
     out.push("", `Largest error sources at "${block.name}":`, _textTable(block.rows));
   }
+  if (report.dynamics !== undefined) out.push(..._dynamicsTextLines(report.dynamics));
   out.push("", _describeMethods(report.methods));
   for (const note of report.notes) out.push(`Note: ${note}`);
   out.push("", _cautionLine(), "");
@@ -279,6 +281,7 @@ function renderMarkdown(report: TripReport): string {
     if (lines.length > 0) out.push("", ...lines.map((l) => `- ${l}`));
   }
   for (const block of sourceRows(report, 8)) out.push("", `## Largest error sources at "${block.name}"`, "", _markdownTable(block.rows));
+  if (report.dynamics !== undefined) out.push(..._dynamicsMarkdownLines(report.dynamics));
   out.push("", "## Method", "", _describeMethods(report.methods));
   if (report.notes.length > 0) out.push("", ...report.notes.map((n) => `- ${n}`));
   out.push("");
@@ -313,7 +316,8 @@ function renderCsv(report: TripReport): string {
     for (const s of sheet.adcSetpoints) codeRows.push([s.name, s.signalVolts, s.nominalCode, s.thresholdCode, s.codesPerC, s.codeLow, s.codeHigh]);
     text += `\n# build sheet\n${_csv(codeRows)}`;
   }
-  return text;
+  const dynamics = report.dynamics === undefined ? "" : `# dynamics: runaway response per setpoint and case (the verdict uses the dynamic peak)\n${_dynamicsCsv(report.dynamics)}`;
+  return `${text}${dynamics}`;
 }
 
 /**

@@ -5,6 +5,7 @@
  */
 import type { TripBand, TripErrorSource } from "../trip/types.js";
 import type { TripBuildSheet } from "../trip/buildSheet.js";
+import type { TripDynamicsResult } from "../trip/tripDynamics.js";
 import type { PropagationMethod } from "../uncertainty/types.js";
 
 /** Report output formats. `text` is the terminal table (readable without colour). */
@@ -57,7 +58,12 @@ export interface TripReport {
   readonly methods: ReportMethodInfo;
   /** What to build (thresholds, resistors by position, release, shunt resistor, mid-rail, bill of materials). */
   readonly buildSheet?: TripBuildSheet;
+  /** Response-time results when the design states dynamics; the verdict (`pass`) then uses the dynamic peak. */
+  readonly dynamics?: TripReportDynamics;
 }
+
+/** The dynamic results in a report: the figures of `tripDynamics` without the time series. */
+export type TripReportDynamics = Omit<TripDynamicsResult, "responses">;
 
 /** One row of an error sweep: the chain's reading error bounds at one true temperature. */
 export interface ErrorSweepRow {

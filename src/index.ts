@@ -275,6 +275,16 @@ export {
   type TripErrorSource,
   type TripResistors,
   type TripSetpoint,
+  resistorPositionNames,
+  resistorDesignator,
+  type TripBuildSheet,
+  type BuildSheetSetpoint,
+  type BuildSheetAdcSetpoint,
+  type BuildSheetNetwork,
+  type BuildSheetResistor,
+  type BuildSheetShuntResistor,
+  type BuildSheetMidRail,
+  type BuildSheetPart,
 } from "./trip/index.js";
 
 // Response time folded into the trip verdict (issue 14)

@@ -31,6 +31,7 @@ const commandLoaders: readonly (readonly [string, () => Promise<Registration>])[
   ["runaway", async () => (await import("./commands/runaway.js")).registerRunawayCommand],
   ["schema", async () => (await import("./commands/schema.js")).registerSchemaCommand],
   ["workbench", async () => (await import("./commands/workbench.js")).registerWorkbenchCommand],
+  ["starter", async () => (await import("./commands/starter.js")).registerStarterCommand],
 ];
 
 /** Names of every command. @internal */

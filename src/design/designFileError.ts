@@ -15,6 +15,16 @@ export interface DesignFileErrorDetails {
   readonly problem: string;
   /** How many further problems were found and not shown. Default 0. */
   readonly moreProblems?: number;
+  /** Every problem found (the first one included), each with its path and what was expected and found. */
+  readonly problems?: readonly DesignFileProblem[];
+}
+
+/** One problem of a design file. */
+export interface DesignFileProblem {
+  /** Dotted path of the offending value, empty for the whole file. */
+  readonly path: string;
+  /** What was wrong (`expected …, found …`). */
+  readonly problem: string;
 }
 
 /** Shortens a long part of the message (a deep path, a long list of keys) so the line stays readable. */
@@ -47,11 +57,14 @@ export class DesignFileError extends HotjunctionRangeError {
   readonly path: string;
   /** What was wrong. */
   override readonly problem: string;
+  /** Every problem found, the first one included (one entry when only one is known). */
+  readonly problems: readonly DesignFileProblem[];
   constructor(details: DesignFileErrorDetails) {
     super({ code: "INVALID_DESIGN", quantity: "design file", value: details.fileName, problem: details.problem });
     this.fileName = details.fileName;
     this.path = details.path;
     this.problem = details.problem;
+    this.problems = details.problems ?? [{ path: details.path, problem: details.problem }];
     this.message = messageOf(details);
   }
 }

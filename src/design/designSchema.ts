@@ -439,6 +439,10 @@ export const designFileSchema = z
     hotjunctionDesign: z.literal(1).describe("design file format version"),
     name: label("name of the design").optional(),
     notes: z.string().max(10_000).optional().describe("free text"),
+    sectionNotes: z
+      .record(z.string().min(1).max(64), z.string().max(2000))
+      .optional()
+      .describe("free text per section, by section name (e.g. `{ \"thermocouple\": \"probe in the roof\" }`); ignored by the analysis"),
     setpoints: z.array(setpointSchema).min(1).max(64).describe("trip setpoints"),
     processLimits: processLimitsSchema.optional(),
     thermocouple: thermocoupleSchema,

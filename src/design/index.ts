@@ -5,7 +5,7 @@
  */
 export { designFileSchema, referenceSchema, type DesignFile, type DesignReference } from "./designSchema.js";
 export type { DesignDynamics } from "./designSchema.js";
-export { DesignFileError, type DesignFileErrorDetails } from "./designFileError.js";
+export { DesignFileError, type DesignFileErrorDetails, type DesignFileProblem } from "./designFileError.js";
 export {
   designFileMaxBytes,
   designFileMaxDepth,
@@ -20,3 +20,4 @@ export { designJsonSchema } from "./designJsonSchema.js";
 export { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign } from "./designToObjects.js";
 export { dynamicsModelFromDesign } from "./designToObjects.js";
 export { CAUTION_TEXT } from "../caution.js";
+export { starterDesign, starterTopologies, type StarterTopology } from "./starterDesigns.js";

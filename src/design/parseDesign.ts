@@ -174,7 +174,8 @@ export function validateDesign(value: unknown, options: ParseDesignOptions = {})
     issues.sort((a, b) => Number(b.code === "unrecognized_keys") - Number(a.code === "unrecognized_keys"));
     const first = issues[0];
     const described = first === undefined ? { path: "", problem: "is not a valid design" } : _describeIssue(first, value);
-    throw new DesignFileError({ fileName, path: described.path, problem: described.problem, moreProblems: issues.length - 1 });
+    const all = issues.map((issue) => _describeIssue(issue, value));
+    throw new DesignFileError({ fileName, path: described.path, problem: described.problem, moreProblems: issues.length - 1, problems: all.length > 0 ? all : [described] });
   }
   const problems = _checkDesignRules(result.data);
   const firstProblem = problems[0];
@@ -184,6 +185,7 @@ export function validateDesign(value: unknown, options: ParseDesignOptions = {})
       path: firstProblem.path,
       problem: firstProblem.problem,
       moreProblems: problems.length - 1,
+      problems: problems.map((p) => ({ path: p.path, problem: p.problem })),
     });
   }
   return result.data;

@@ -76,8 +76,9 @@ export function firmwareTripReport(
       pass,
       reason,
       errorSources: [...evaluation.contributions]
+        // worstCaseSwingC is the full swing (max − min); the report prints the half-width (±), as comparator reports do.
         .sort((a, b) => b.worstCaseSwingC - a.worstCaseSwingC)
-        .map((c) => ({ name: c.source, description: c.description, worstCaseC: c.worstCaseSwingC, standardUncertaintyC: c.standardUncertaintyC })),
+        .map((c) => ({ name: c.source, description: c.description, worstCaseC: c.worstCaseSwingC / 2, standardUncertaintyC: c.standardUncertaintyC })),
     };
   });
   return {

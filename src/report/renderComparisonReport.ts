@@ -61,7 +61,7 @@ export function formatComparisonReport(
   const recommended = `Recommended: ${comparison.recommended ?? "none of the options is adequate"}.`;
   switch (format) {
     case "json":
-      return `${JSON.stringify({ report: "reference-comparison", caution: CAUTION_TEXT, method: info, designName, ...comparison }, null, 2)}\n`;
+      return `${JSON.stringify({ report: "reference-comparison", reportSchemaVersion: 1, caution: CAUTION_TEXT, method: info, designName, ...comparison }, null, 2)}\n`;
     case "csv": {
       const table: (string | number | boolean | null)[][] = [
         ["reference", "kind", "cost", "verdict", "setpoint", "low_C", "high_C", "ideal_low_C", "ideal_high_C", "extra_width_C", "margin_to_normal_C", "margin_to_hazard_C", "pass"],

@@ -37,7 +37,7 @@ export function formatSweepReport(sweep: ErrorSweep, format: ReportFormat): stri
   const heading = `${sweep.title}${sweep.designName !== undefined ? `: ${sweep.designName}` : ""}`;
   switch (format) {
     case "json":
-      return `${JSON.stringify({ report: "error-sweep", caution: CAUTION_TEXT, method: sweep.methods, ...sweep }, null, 2)}\n`;
+      return `${JSON.stringify({ report: "error-sweep", reportSchemaVersion: 1, caution: CAUTION_TEXT, method: sweep.methods, ...sweep }, null, 2)}\n`;
     case "csv": {
       const table: (string | number)[][] = [["true_C", "nominal_error_C", "method", "error_low_C", "error_high_C"]];
       for (const r of sweep.rows) for (const b of r.bands) table.push([r.temperatureC, r.nominalErrorC, b.method, b.errorLowC, b.errorHighC]);

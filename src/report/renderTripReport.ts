@@ -4,6 +4,7 @@
  * @module
  */
 import type { TripDesignResult } from "../trip/types.js";
+import type { TripBuildSheet } from "../trip/buildSheet.js";
 import { CAUTION_TEXT } from "./caution.js";
 import {
   _cautionLine,
@@ -90,6 +91,7 @@ export function tripReportFromResult(result: TripDesignResult, methods: ReportMe
     // The caution is printed once by the renderer; drop a copy the engine may add to its notes.
     notes: result.notes.filter((n) => !/do not certify/i.test(n)),
     methods: { ...methods, acceptanceMethod: result.acceptanceMethod },
+    ...(result.buildSheet !== undefined ? { buildSheet: result.buildSheet } : {}),
   };
 }
 
@@ -136,10 +138,118 @@ function sourceRows(report: TripReport, limit: number): { name: string; rows: st
   }));
 }
 
+function bandText4(low: number, high: number): string {
+  return `${_fixed(low, 4)} to ${_fixed(high, 4)}`;
+}
+
+function resistorList(list: readonly { designator: string; ohms: number }[]): string {
+  return list.map((r) => `${r.designator} ${formatOhms(r.ohms)}`).join(" + ");
+}
+
+/** The build sheet's tables: per setpoint, per ADC setpoint, and the bill of materials. @internal */
+export function _buildSheetTables(sheet: TripBuildSheet): { title: string; rows: string[][] }[] {
+  const tables: { title: string; rows: string[][] }[] = [];
+  if (sheet.setpoints.length > 0) {
+    tables.push({
+      title: "Build sheet: thresholds",
+      rows: [
+        ["setpoint", "ideal threshold V", "realized V", "threshold band V", "above tap", "below tap", "divider mA", "nominal release °C", "release band °C", "release margin °C"],
+        ...sheet.setpoints.map((s) => [
+          s.name,
+          _fixed(s.idealThresholdVolts, 5),
+          _fixed(s.realizedThresholdVolts, 5),
+          bandText4(s.thresholdLowVolts, s.thresholdHighVolts),
+          resistorList(s.resistorsAbove),
+          resistorList(s.resistorsBelow),
+          _fixed(s.dividerCurrentMilliamps, 4),
+          _fixed(s.nominalReleaseC, 2),
+          bandText(s.releaseLowC, s.releaseHighC),
+          _signed(s.releaseMarginToNormalC),
+        ]),
+      ],
+    });
+  }
+  if (sheet.adcSetpoints.length > 0) {
+    tables.push({
+      title: "Build sheet: firmware codes",
+      rows: [
+        ["setpoint", "signal V", "nominal code", "trip at code ≥", "LSB/°C", "code band"],
+        ...sheet.adcSetpoints.map((s) => [
+          s.name,
+          _fixed(s.signalVolts, 5),
+          _fixed(s.nominalCode, 2),
+          String(s.thresholdCode),
+          _fixed(s.codesPerC, 3),
+          bandText(s.codeLow, s.codeHigh),
+        ]),
+      ],
+    });
+  }
+  if (sheet.parts.length > 0) {
+    tables.push({
+      title: "Bill of materials",
+      rows: [
+        ["designators", "part", "value", "tolerance", "tempco ppm/°C", "count"],
+        ...sheet.parts.map((p) => [
+          p.designators,
+          p.part,
+          typeof p.value === "number" ? (p.unit === "Ω" ? formatOhms(p.value) : `${p.value} ${p.unit}`) : p.value,
+          p.toleranceUnit === "°C" ? `±${_fixed(p.tolerance, 2)} °C` : `±${+(p.tolerance * 100).toPrecision(4)} %`,
+          _fixed(p.tempcoPpmPerC, 0),
+          String(p.count),
+        ]),
+      ],
+    });
+  }
+  return tables;
+}
+
+/** The build sheet's sentences (shunt series resistor, mid-rail divider). @internal */
+export function _buildSheetLines(sheet: TripBuildSheet): string[] {
+  const lines: string[] = [];
+  const r = sheet.shuntSeriesResistor;
+  if (r !== undefined) {
+    lines.push(
+      `Shunt series resistor: ${formatOhms(r.ohms)} (${r.series}, ±${+(r.toleranceFraction * 100).toPrecision(4)} %), dissipates up to ${_fixed(r.powerWatts * 1000, 1)} mW; choose a rating of ${r.ratingWatts} W or more.`,
+    );
+  }
+  const m = sheet.midRail;
+  if (m !== undefined) {
+    lines.push(`Mid-rail divider: top ${formatOhms(m.topOhms)}, bottom ${formatOhms(m.bottomOhms)}: ${_fixed(m.nominalVolts, 4)} V (${_fixed(m.worstCaseLowVolts, 4)} to ${_fixed(m.worstCaseHighVolts, 4)} V).`);
+  }
+  return lines;
+}
+
+/** The bill of materials as CSV (caution as a leading `#` line). */
+export function formatPartsCsv(sheet: TripBuildSheet): string {
+  const rows: (string | number)[][] = [["designators", "part", "value", "unit", "tolerance", "tolerance_unit", "tempco_ppm_per_C", "count"]];
+  for (const p of sheet.parts) rows.push([p.designators, p.part, p.value, p.unit, p.tolerance, p.toleranceUnit, p.tempcoPpmPerC, p.count]);
+  return `# ${_cautionLine()}\n${_csv(rows)}`;
+}
+
+function coverageLines(report: TripReport): string[] {
+  const out: string[] = [];
+  for (const s of report.setpoints) {
+    const rss = s.bands.find((b) => b.method === "rss");
+    if (rss?.coverageFactor !== undefined && rss.coverageFactor > 0) {
+      out.push(
+        `RSS at "${s.name}": coverage factor k = ${_fixed(rss.coverageFactor, 3)} (${rss.coverageFactorRule === "rectangular-dominant" ? "a rectangular source dominates: quantile of its convolution with the rest" : "normal"})${rss.limitedToWorstCase === true ? ", interval cut to the worst case" : ""}.`,
+      );
+    }
+  }
+  return out;
+}
+
 function renderText(report: TripReport): string {
   const heading = `${report.title}${report.designName !== undefined ? `: ${report.designName}` : ""} — ${report.pass ? "PASS" : "FAIL"}`;
   const out = [heading, "=".repeat([...heading].length), "", ...report.details, "", _textTable(setpointRows(report)), ""];
   for (const s of report.setpoints) out.push(`${s.name}: ${s.reason}`);
+  out.push(...coverageLines(report));
+  if (report.buildSheet !== undefined) {
+    for (const t of _buildSheetTables(report.buildSheet)) out.push("", `${t.title}:`, _textTable(t.rows));
+    const lines = _buildSheetLines(report.buildSheet);
+    if (lines.length > 0) out.push("", ...lines);
+  }
   for (const block of sourceRows(report, 8)) {
     out.push("", `Largest error sources at "${block.name}":`, _textTable(block.rows));
   }
@@ -163,7 +273,13 @@ function renderMarkdown(report: TripReport): string {
     _markdownTable(setpointRows(report)),
     "",
     ...report.setpoints.map((s) => `- **${s.name}**: ${s.reason}`),
+    ...coverageLines(report).map((l) => `- ${l}`),
   ];
+  if (report.buildSheet !== undefined) {
+    for (const t of _buildSheetTables(report.buildSheet)) out.push("", `## ${t.title}`, "", _markdownTable(t.rows));
+    const lines = _buildSheetLines(report.buildSheet);
+    if (lines.length > 0) out.push("", ...lines.map((l) => `- ${l}`));
+  }
   for (const block of sourceRows(report, 8)) out.push("", `## Largest error sources at "${block.name}"`, "", _markdownTable(block.rows));
   if (report.dynamics !== undefined) out.push(..._dynamicsMarkdownLines(report.dynamics));
   out.push("", "## Method", "", _describeMethods(report.methods));
@@ -175,16 +291,33 @@ function renderMarkdown(report: TripReport): string {
 function renderCsv(report: TripReport): string {
   const rows: (string | number | boolean)[][] = [
     ["setpoint", "target_C", "nominal_trip_C", "method", "low_C", "high_C", "coverage", "standard_uncertainty_C", "trials", "seed",
-      "max_normal_operating_C", "hazard_limit_C", "margin_to_normal_C", "margin_to_hazard_C", "pass"],
+      "max_normal_operating_C", "hazard_limit_C", "margin_to_normal_C", "margin_to_hazard_C", "pass", "coverage_factor"],
   ];
   for (const s of report.setpoints) {
     for (const b of s.bands) {
       rows.push([s.name, s.tripTemperatureC, s.nominalTripC, b.method, b.lowC, b.highC, b.coverage, b.standardUncertaintyC,
-        b.trials ?? "", b.seed ?? "", s.maxNormalOperatingC, s.hazardLimitC, s.marginToNormalC, s.marginToHazardC, s.pass]);
+        b.trials ?? "", b.seed ?? "", s.maxNormalOperatingC, s.hazardLimitC, s.marginToNormalC, s.marginToHazardC, s.pass, b.coverageFactor ?? ""]);
     }
   }
+  let text = `# ${_cautionLine()}\n# ${_describeMethods(report.methods)}\n${_csv(rows)}`;
+  const sheet = report.buildSheet;
+  if (sheet !== undefined && sheet.setpoints.length > 0) {
+    const sheetRows: (string | number)[][] = [["setpoint", "ideal_threshold_V", "realized_threshold_V", "threshold_low_V", "threshold_high_V", "resistors_above", "resistors_below", "divider_current_mA",
+      "nominal_trip_C", "nominal_release_C", "hysteresis_C", "release_low_C", "release_high_C", "release_margin_to_normal_C"]];
+    for (const s of sheet.setpoints) {
+      sheetRows.push([s.name, s.idealThresholdVolts, s.realizedThresholdVolts, s.thresholdLowVolts, s.thresholdHighVolts, s.resistorsAbove.map((r) => `${r.designator}=${r.ohms}`).join(" "),
+        s.resistorsBelow.map((r) => `${r.designator}=${r.ohms}`).join(" "), s.dividerCurrentMilliamps, s.nominalTripC, s.nominalReleaseC, s.hysteresisC,
+        s.releaseLowC, s.releaseHighC, s.releaseMarginToNormalC]);
+    }
+    text += `\n# build sheet\n${_csv(sheetRows)}`;
+  }
+  if (sheet !== undefined && sheet.adcSetpoints.length > 0) {
+    const codeRows: (string | number)[][] = [["setpoint", "signal_V", "nominal_code", "threshold_code", "codes_per_C", "code_low", "code_high"]];
+    for (const s of sheet.adcSetpoints) codeRows.push([s.name, s.signalVolts, s.nominalCode, s.thresholdCode, s.codesPerC, s.codeLow, s.codeHigh]);
+    text += `\n# build sheet\n${_csv(codeRows)}`;
+  }
   const dynamics = report.dynamics === undefined ? "" : `# dynamics: runaway response per setpoint and case (the verdict uses the dynamic peak)\n${_dynamicsCsv(report.dynamics)}`;
-  return `# ${_cautionLine()}\n# ${_describeMethods(report.methods)}\n${_csv(rows)}${dynamics}`;
+  return `${text}${dynamics}`;
 }
 
 /**
@@ -209,7 +342,7 @@ export function formatTripReport(report: TripReport, format: ReportFormat): stri
     case "csv":
       return renderCsv(report);
     case "json":
-      return `${JSON.stringify({ report: "trip", caution: CAUTION_TEXT, method: report.methods, ...report }, null, 2)}\n`;
+      return `${JSON.stringify({ report: "trip", reportSchemaVersion: 1, caution: CAUTION_TEXT, method: report.methods, ...report }, null, 2)}\n`;
     default:
       return renderText(report);
   }

@@ -4,6 +4,7 @@
  * @module
  */
 import type { TripBand, TripErrorSource } from "../trip/types.js";
+import type { TripBuildSheet } from "../trip/buildSheet.js";
 import type { TripDynamicsResult } from "../trip/tripDynamics.js";
 import type { PropagationMethod } from "../uncertainty/types.js";
 
@@ -55,6 +56,8 @@ export interface TripReport {
   /** Assumptions and how results were found. */
   readonly notes: readonly string[];
   readonly methods: ReportMethodInfo;
+  /** What to build (thresholds, resistors by position, release, shunt resistor, mid-rail, bill of materials). */
+  readonly buildSheet?: TripBuildSheet;
   /** Response-time results when the design states dynamics; the verdict (`pass`) then uses the dynamic peak. */
   readonly dynamics?: TripReportDynamics;
 }

@@ -12,6 +12,8 @@ import type { PropagationMethod, PropagationResult } from "../uncertainty/types.
 import { _realizeReference } from "./realizeReference.js";
 import { selectDividerPair } from "./selectDividerPair.js";
 import { selectLadder } from "./selectLadder.js";
+import { _comparatorBuildSheet, resistorDesignator } from "./buildSheet.js";
+import { _rssCoverageFactor, _selfConsistentEdge } from "./_bandRules.js";
 import { _requireSeries } from "./standardResistorValues.js";
 import {
   _comparatorTripModel,
@@ -185,6 +187,11 @@ function band(method: PropagationMethod, r: PropagationResult): TripBand {
   };
 }
 
+/** A chain source description with the divider resistor named by its position ("resistor 2 (…)" → "bottom resistor (…)"). */
+function positionDescription(description: string, net: ThresholdNetwork, networkIndex: number, networkCount: number): string {
+  return description.replace(/^resistor (\d+) /, (_m, n: string) => `${resistorDesignator(Number(n) - 1, net.resistorsOhms.length, networkIndex, networkCount)} resistor `);
+}
+
 /** The sentence that explains a verdict. */
 function reasonFor(name: string, b: TripBand, limits: ProcessLimits, label: string): { pass: boolean; reason: string } {
   const low = b.lowC - limits.maxNormalOperatingC;
@@ -298,14 +305,20 @@ function planNetworks(
  * console.log(sp.pass, sp.nominalReleaseC.toFixed(1)); // true 115.9
  * ```
  */
-export function designTrip(design: TripDesign, options: DesignTripOptions = {}): TripDesignResult {
-  if (typeof design !== "object" || design === null) designError("design", design, "is not an object");
-  const acceptanceMethod = options.acceptanceMethod ?? "worst-case";
-  if (!methods.includes(acceptanceMethod)) _invalidChoice("acceptanceMethod", acceptanceMethod, methods, "designTrip");
-  const coverage = options.coverage ?? 0.95;
-  const trials = options.monteCarloTrials ?? 100_000;
-  const seed = options.seed ?? 1;
-  const normalBoundCoverage = options.normalBoundCoverage ?? 0.9973;
+/** @internal Everything of a trip design before propagation: plans, networks, the realized reference, chains. */
+interface _TripPlan {
+  readonly setpoints: { name: string; tripC: number; limits: ProcessLimits }[];
+  readonly volts: number;
+  readonly resistorTolerance: number;
+  readonly plans: SetpointPlan[];
+  readonly networks: ThresholdNetwork[];
+  readonly place: { network: number; tap: number }[];
+  readonly notes: string[];
+  readonly realized: ReturnType<typeof _realizeReference>;
+  readonly chains: TripChain[];
+}
+
+function planTrip(design: TripDesign, given: readonly ThresholdNetwork[] | undefined): _TripPlan {
   const setpoints = checkLimits(design);
   const volts = optionVolts(design.reference);
   const resistorTolerance = _requireFinite(design.resistors?.toleranceFraction, "resistors.toleranceFraction", "", "trip design");
@@ -335,7 +348,7 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     return { ...sp, idealThresholdVolts, idealRatio, slopeVoltsPerC };
   });
 
-  const { networks, place, notes } = planNetworks(design, plans, volts, options.networks);
+  const { networks, place, notes } = planNetworks(design, plans, volts, given);
   const dividerCurrentMilliamps = networks.reduce((sum, n) => sum + n.currentMilliamps, 0);
   // The reference's sources are computed once, here, and every threshold network's chain reuses them.
   const realized = _realizeReference(
@@ -356,6 +369,28 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     return buildTripChain(design, realized.element, divider, { reference: realized.stage });
   });
 
+  return { setpoints, volts, resistorTolerance, plans, networks, place, notes, realized, chains };
+}
+
+/**
+ * @internal The reference element a comparator design uses once realized (a shunt's series resistor sized for
+ * the threshold networks the design finds): the chain `sweep` evaluates.
+ */
+export function _realizedTripReference(design: TripDesign): ReferenceElement {
+  if (typeof design !== "object" || design === null) designError("design", design, "is not an object");
+  return planTrip(design, undefined).realized.element;
+}
+
+export function designTrip(design: TripDesign, options: DesignTripOptions = {}): TripDesignResult {
+  if (typeof design !== "object" || design === null) designError("design", design, "is not an object");
+  const acceptanceMethod = options.acceptanceMethod ?? "worst-case";
+  if (!methods.includes(acceptanceMethod)) _invalidChoice("acceptanceMethod", acceptanceMethod, methods, "designTrip");
+  const coverage = options.coverage ?? 0.95;
+  const trials = options.monteCarloTrials ?? 100_000;
+  const seed = options.seed ?? 1;
+  const normalBoundCoverage = options.normalBoundCoverage ?? 0.9973;
+  const { volts, resistorTolerance, plans, networks, place, notes, realized, chains } = planTrip(design, options.networks);
+  let thermocoupleToleranceC = 0;
   const results: SetpointTripResult[] = plans.map((plan, i) => {
     const { network: networkIndex, tap } = place[i] as { network: number; tap: number };
     const tc = chains[networkIndex] as TripChain;
@@ -365,14 +400,35 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     const realizedRatio = below / net.totalOhms;
     const nominalTripC = _nominalSwitchingC(tc.compiled, tap, "trip", tc.designColdJunctionC);
     const nominalReleaseC = _nominalSwitchingC(tc.compiled, tap, "release", tc.designColdJunctionC);
-    // The thermocouple tolerance is taken at the setpoint.
+    // RSS and Monte Carlo take the thermocouple tolerance at the setpoint; the worst case at the temperature each
+    // band edge lands on (self-consistent, see _selfConsistentEdge).
     const { model, inputs, sources } = _comparatorTripModel(tc.compiled, tap, "trip", plan.tripC);
     const onProgress = options.onProgress;
     // A chain with every error source at zero (an ideal design) has nothing to propagate: its band is the
     // nominal trip itself, by every method.
     const exact = Object.keys(inputs).length === 0 ? pointResult(model, seed, coverage) : undefined;
-    const worst = exact?.("worst-case") ?? propagate(model, inputs, { method: "worst-case", normalBoundCoverage });
-    const rss = exact?.("rss") ?? propagate(model, inputs, { method: "rss", coverage });
+    const worstAt = (toleranceAtC: number): PropagationResult => {
+      const m = _comparatorTripModel(tc.compiled, tap, "trip", toleranceAtC);
+      return Object.keys(m.inputs).length === 0 ? pointResult(m.model, seed, coverage)("worst-case") : propagate(m.model, m.inputs, { method: "worst-case", normalBoundCoverage });
+    };
+    const worstAtSetpoint = exact?.("worst-case") ?? worstAt(plan.tripC);
+    const highEdge = _selfConsistentEdge((t) => worstAt(t).interval[1], plan.tripC);
+    const lowEdge = _selfConsistentEdge((t) => worstAt(t).interval[0], plan.tripC);
+    const worst: PropagationResult = {
+      ...worstAtSetpoint,
+      interval: [lowEdge.edgeC, highEdge.edgeC],
+    };
+    const rssRaw = exact?.("rss") ?? propagate(model, inputs, { method: "rss", coverage });
+    const factor = _rssCoverageFactor(
+      sources.map((s) => ({ contribution: rssRaw.contributions[s.name]?.contribution ?? 0, distribution: s.distribution })),
+      coverage,
+    );
+    const rssHalf = factor.k * rssRaw.standardUncertainty;
+    // Never wider than the guaranteed band: the RSS interval is cut to the worst case where it would reach past it.
+    const rssLow = Math.max(rssRaw.estimate - rssHalf, worst.interval[0]);
+    const rssHigh = Math.min(rssRaw.estimate + rssHalf, worst.interval[1]);
+    const rssLimited = rssLow > rssRaw.estimate - rssHalf || rssHigh < rssRaw.estimate + rssHalf;
+    const rss: PropagationResult = { ...rssRaw, interval: [rssLow, rssHigh] };
     const mc =
       exact?.("monte-carlo") ??
       propagate(model, inputs, {
@@ -383,14 +439,34 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
         ...(onProgress !== undefined ? { onProgress: (f: number) => onProgress((i + f) / plans.length) } : {}),
       });
     onProgress?.((i + 1) / plans.length);
-    const bands = { "worst-case": band("worst-case", worst), rss: band("rss", rss), "monte-carlo": band("monte-carlo", mc) };
+    const rssBand: TripBand = {
+      ...band("rss", rss),
+      coverageFactor: exact !== undefined ? 0 : factor.k,
+      coverageFactorRule: exact !== undefined ? "none" : factor.rule,
+      limitedToWorstCase: rssLimited,
+    };
+    const worstBand: TripBand = {
+      ...band("worst-case", worst),
+      toleranceAtLowC: lowEdge.edgeC,
+      toleranceAtHighC: highEdge.edgeC,
+      iterations: Math.max(lowEdge.iterations, highEdge.iterations),
+    };
+    const bands = { "worst-case": worstBand, rss: rssBand, "monte-carlo": band("monte-carlo", mc) };
+    // Release: the worst case of the falling edge, also self-consistent.
+    const releaseAt = (toleranceAtC: number): PropagationResult => {
+      const m = _comparatorTripModel(tc.compiled, tap, "release", toleranceAtC);
+      return Object.keys(m.inputs).length === 0 ? pointResult(m.model, seed, coverage)("worst-case") : propagate(m.model, m.inputs, { method: "worst-case", normalBoundCoverage });
+    };
+    const releaseLow = _selfConsistentEdge((t) => releaseAt(t).interval[0], nominalReleaseC).edgeC;
+    const releaseHigh = _selfConsistentEdge((t) => releaseAt(t).interval[1], nominalReleaseC).edgeC;
     const accepted = bands[acceptanceMethod];
     const label = acceptanceMethod === "worst-case" ? "worst case" : `${acceptanceMethod === "rss" ? "RSS" : "Monte Carlo"}, ${coverage * 100} % coverage`;
     const verdict = reasonFor(plan.name, accepted, plan.limits, label);
+    if (i === 0) thermocoupleToleranceC = sources.find((s) => s.name === "thermocouple.tolerance")?.limit ?? 0;
     const errorSources: TripErrorSource[] = sources
       .map((s) => ({
         name: s.name,
-        description: s.description,
+        description: positionDescription(s.description, net, networkIndex, networks.length),
         worstCaseC: (worst.contributions[s.name]?.contribution ?? 0) / 2,
         standardUncertaintyC: rss.contributions[s.name]?.contribution ?? 0,
       }))
@@ -418,23 +494,27 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
       pass: verdict.pass,
       reason: verdict.reason,
       errorSources,
+      releaseWorstCase: { lowC: releaseLow, highC: releaseHigh },
+      releaseMarginToNormalC: releaseLow - plan.limits.maxNormalOperatingC,
     };
   });
 
   const allNotes = [
     ...notes,
-    `Trip bands: worst case over every source's bounds; RSS (GUM, ${coverage * 100} % coverage); Monte Carlo (JCGM 101, ${trials} trials, seed ${seed}). Thermocouple tolerance is taken at each setpoint; the cold junction anywhere in the ambient range ${design.ambient.minC} to ${design.ambient.maxC} °C.`,
+    `Trip bands: worst case over every source's bounds; RSS (GUM, ${coverage * 100} % coverage); Monte Carlo (JCGM 101, ${trials} trials, seed ${seed}). The worst case takes the thermocouple tolerance at the trip temperature each band edge lands on (self-consistent, fixed-point iteration); RSS and Monte Carlo at the setpoint. The RSS coverage factor is that of the convolution of the largest rectangular source with a normal of the rest (JCGM 100 G.2.3, G.6.5–G.6.6) and the RSS interval never reaches past the worst case; the cold junction anywhere in the ambient range ${design.ambient.minC} to ${design.ambient.maxC} °C.`,
     CAUTION_TEXT,
   ];
+  const midRail = midRailDivider(realized.realization.nominalVolts, resistorTolerance, {
+    referenceToleranceFraction: Math.min(0.5, realized.realization.toleranceFraction),
+  });
   return {
     ...(design.name !== undefined ? { name: design.name } : {}),
     networks,
     reference: realized.realization,
     setpoints: results,
     acceptanceMethod,
-    midRail: midRailDivider(realized.realization.nominalVolts, resistorTolerance, {
-      referenceToleranceFraction: Math.min(0.5, realized.realization.toleranceFraction),
-    }),
+    midRail,
+    buildSheet: _comparatorBuildSheet(design, networks, results, realized.realization, midRail, thermocoupleToleranceC),
     pass: results.every((r) => r.pass) && realized.realization.problems.length === 0,
     notes: allNotes,
     caution: CAUTION_TEXT,

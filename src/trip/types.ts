@@ -11,6 +11,7 @@
  * @module
  */
 import type { MidRailDivider } from "./midRailDivider.js";
+import type { TripBuildSheet } from "./buildSheet.js";
 import type { PreferredSeriesName } from "../data/preferredSeries.js";
 import type {
   AmbientRange,
@@ -159,6 +160,20 @@ export interface TripBand {
   /** Monte Carlo only: trials and seed (same seed, same band). */
   readonly trials?: number;
   readonly seed?: number;
+  /**
+   * RSS only: the coverage factor k of the interval estimate ± k·u (JCGM 100 G.6.5–G.6.6; 0 when nothing is
+   * propagated), the rule that chose it, and whether the interval was cut to the worst-case band.
+   */
+  readonly coverageFactor?: number;
+  readonly coverageFactorRule?: "normal" | "rectangular-dominant" | "none";
+  readonly limitedToWorstCase?: boolean;
+  /**
+   * Worst case only: the temperatures at which the thermocouple tolerance was taken for the low and high edge
+   * (self-consistent: each equals its edge), °C, and the fixed-point iterations used.
+   */
+  readonly toleranceAtLowC?: number;
+  readonly toleranceAtHighC?: number;
+  readonly iterations?: number;
 }
 
 /** One error source's share of the trip band. */
@@ -242,6 +257,13 @@ export interface SetpointTripResult {
   readonly reason: string;
   /** Error sources, largest worst-case swing first. */
   readonly errorSources: readonly TripErrorSource[];
+  /** Worst-case band of the release temperature (signal falling), °C (self-consistent like the trip's). */
+  readonly releaseWorstCase: { readonly lowC: number; readonly highC: number };
+  /**
+   * releaseWorstCase.lowC − maxNormalOperatingC, °C: > 0 means every unit releases (re-arms) once the process is
+   * back at its highest normal operating temperature; ≤ 0 means it must cool that much further.
+   */
+  readonly releaseMarginToNormalC: number;
 }
 
 /** Result of `designTrip`. */
@@ -259,6 +281,8 @@ export interface TripDesignResult {
    * comparator's second input or a bias point), with its own error: resistors and the reference at their bounds.
    */
   readonly midRail: MidRailDivider;
+  /** What to build: thresholds, resistors by position, currents, release band, shunt resistor, bill of materials. */
+  readonly buildSheet?: TripBuildSheet;
   /** True when every setpoint passes and the reference has no problems. */
   readonly pass: boolean;
   /** How the network was found and what was assumed, in sentences (the last one is the caution). */

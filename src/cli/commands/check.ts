@@ -5,10 +5,13 @@
  */
 import type { Command } from "commander";
 import { evaluateChain } from "../../chain/evaluateChain.js";
+import { readingFromChain } from "../../chain/readingFromChain.js";
+import type { ChainEvaluation, MeasurementChain } from "../../chain/types.js";
+import { thermocouplePart, type BuildSheetAdcSetpoint, type BuildSheetPart, type TripBuildSheet } from "../../trip/buildSheet.js";
 import type { DesignFile } from "../../design/designSchema.js";
 import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { firmwareTripReport } from "../../report/firmwareTripReport.js";
-import { formatTripReport, tripReportFromResult } from "../../report/renderTripReport.js";
+import { formatPartsCsv, formatTripReport, tripReportFromResult } from "../../report/renderTripReport.js";
 import type { TripReport } from "../../report/reportTypes.js";
 import { tripBandChartSvg } from "../../report/tripBandChart.js";
 import { designTrip } from "../../trip/designTrip.js";
@@ -22,7 +25,7 @@ import {
   type AnalysisOptionValues,
   type AnalysisSettings,
 } from "../designOptions.js";
-import { marginFailExitCode } from "../cliError.js";
+import { CliError, marginFailExitCode } from "../cliError.js";
 import {
   _addOutputOptions,
   _chosenFormat,
@@ -34,7 +37,23 @@ import { _startProgress } from "../progress.js";
 import type { CommandContext } from "../runCli.js";
 import { _withDesignDynamics } from "../dynamicsOfDesign.js";
 
-type CheckOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean };
+type CheckOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean; readonly partsCsv?: string };
+
+/** The extra output files of `check`, in order: the SVG chart, then the bill of materials. @internal */
+function checkExtraPaths(options: CheckOptions): string[] {
+  return [...(options.svg !== undefined ? [options.svg] : []), ...(options.partsCsv !== undefined ? [options.partsCsv] : [])];
+}
+
+/** The contents of `check`'s extra files, same order as {@link checkExtraPaths}. @internal */
+function checkExtraContents(options: CheckOptions, report: TripReport): string[] {
+  const out: string[] = [];
+  if (options.svg !== undefined) out.push(tripBandChartSvg(report));
+  if (options.partsCsv !== undefined) {
+    if (report.buildSheet === undefined) throw new CliError("this design has no build sheet to write a bill of materials from");
+    out.push(formatPartsCsv(report.buildSheet));
+  }
+  return out;
+}
 
 
 /** The trip report of a design (comparator or ADC). @internal */
@@ -77,13 +96,56 @@ export function _tripReportOfDesign(io: CliIo, design: DesignFile, settings: Ana
     });
     const reference = design.reference;
     const details = [`Reference: ${reference.name} (${reference.kind}), ${reference.nominalVolts} V.`, `ADC: ${design.adc?.bits ?? "?"} bits.`];
+    const report = firmwareTripReport(setpoints, evaluations, methods, details);
     return {
-      ...firmwareTripReport(setpoints, evaluations, methods, details),
+      ...report,
       ...(design.name !== undefined ? { designName: design.name } : {}),
+      buildSheet: _adcBuildSheet(design, chain, report, evaluations),
     };
   } finally {
     progress.stop();
   }
+}
+
+/**
+ * The build sheet of an ADC design: per setpoint the nominal code at the setpoint, the integer code firmware
+ * compares against (the smallest integer at or above the nominal unrounded code, so the trip comes no earlier),
+ * the code slope and the band of the code read at the true setpoint (slope × the acceptance band's reading
+ * error, first order); the bill of materials (reference, thermocouple). @internal
+ */
+export function _adcBuildSheet(design: DesignFile, chain: MeasurementChain, report: TripReport, evaluations: readonly ChainEvaluation[]): TripBuildSheet {
+  const acceptance = report.methods.acceptanceMethod ?? "worst-case";
+  const adcSetpoints: BuildSheetAdcSetpoint[] = report.setpoints.map((s, i) => {
+    const evaluation = evaluations[i] as ChainEvaluation;
+    const t = s.tripTemperatureC;
+    const stepC = 0.05;
+    const up = readingFromChain(chain, t + stepC).code ?? Number.NaN;
+    const down = readingFromChain(chain, t - stepC).code ?? Number.NaN;
+    const codesPerC = (up - down) / (2 * stepC);
+    const nominalCode = evaluation.reading.code ?? Number.NaN;
+    const bound = evaluation.bounds.find((b) => b.method === acceptance) ?? evaluation.bounds[0];
+    const errLow = bound?.errorLowC ?? 0;
+    const errHigh = bound?.errorHighC ?? 0;
+    return {
+      name: s.name,
+      signalVolts: evaluation.reading.volts,
+      nominalCode,
+      thresholdCode: Math.ceil(nominalCode - 1e-9),
+      codesPerC,
+      codeLow: nominalCode + codesPerC * errLow,
+      codeHigh: nominalCode + codesPerC * errHigh,
+    };
+  });
+  const reference = design.reference;
+  const parts: BuildSheetPart[] = [];
+  if (reference.kind !== "ideal") {
+    const tolerance = "initialAccuracyFraction" in reference ? (reference.initialAccuracyFraction ?? 0) : "totalToleranceFraction" in reference ? (reference.totalToleranceFraction ?? 0) : 0;
+    const tempco = "tempcoPpmPerC" in reference ? (reference.tempcoPpmPerC ?? 0) : 0;
+    parts.push({ designators: "reference", part: "reference", value: reference.nominalVolts, unit: "V", tolerance, toleranceUnit: "fraction", tempcoPpmPerC: tempco, count: 1 });
+  }
+  const first = evaluations[0]?.contributions.find((c) => c.source === "thermocouple.tolerance");
+  parts.push(thermocouplePart(chain.thermocouple, first?.limit ?? 0));
+  return { sheetVersion: 1, setpoints: [], adcSetpoints, networks: [], parts };
 }
 
 /** Registers the `check` command. @internal */
@@ -99,13 +161,14 @@ export function registerCheckCommand(program: Command, context: CommandContext):
   _addAnalysisOptions(command, "the trip bands");
   _addOutputOptions(command, ["json", "markdown", "csv"], true);
   _addReportOnlyOption(command);
+  command.option("--parts-csv <file>", "also write the bill of materials (every part the design chose: value, tolerance, tempco, count) as CSV");
   command.action(async (path: string, options: CheckOptions) => {
-    const plan = _planCommandOutputs(context.io, options, [path], options.svg !== undefined ? [options.svg] : []);
+    const plan = _planCommandOutputs(context.io, options, [path], checkExtraPaths(options));
     const { design, input } = await _loadDesign(context.io, path);
     const report = _tripReportOfDesign(context.io, design, _analysisSettings(design, options));
     const named = _withDesignDynamics(design, design.name !== undefined ? { ...report, designName: design.name } : report);
     const text = formatTripReport(named, _chosenFormat(options));
-    const extras = plan.extras.length > 0 ? [tripBandChartSvg(named)] : [];
+    const extras = checkExtraContents(options, named);
     _emitOutputs(context.io, plan, options, text, extras, [input]);
     if (!named.pass && options.reportOnly !== true) {
       context.io.writeErr(`hotjunction: ${path}: the design fails its margins (exit ${marginFailExitCode}; --report-only exits 0)\n`);

@@ -25,15 +25,86 @@ import {
   type OutputOptionValues,
 } from "../outputOptions.js";
 import type { CommandContext } from "../runCli.js";
+import type { CliIo } from "../io.js";
+import type { AnalysisSettings } from "../designOptions.js";
+import type { DesignFile, DesignReference } from "../../design/designSchema.js";
+import type { ReferenceComparison, ReferenceComparisonEntry, TripBand } from "../../trip/types.js";
+import type { TripReportSetpoint } from "../../report/reportTypes.js";
+import { _tripReportOfDesign } from "./check.js";
 
 type CompareOptions = OutputOptionValues & Omit<AnalysisOptionValues, "svg"> & { readonly reportOnly?: boolean };
+
+/** The ± total tolerance a design-file reference states, fraction (0 for an ideal one). */
+function statedToleranceFraction(reference: DesignReference): number {
+  if (reference.kind === "ideal") return 0;
+  if (reference.kind === "regulator-rail") return reference.totalToleranceFraction ?? 0;
+  return reference.initialAccuracyFraction ?? 0;
+}
+
+/**
+ * The reference comparison of an ADC (firmware-trip) design: each option's firmware trip bands (the chain
+ * evaluated at each setpoint with that reference as the converter's full scale), beside an ideal reference of
+ * the same voltage; recommended is the cheapest adequate option (missing costs after the costed ones, ties by
+ * input order). @internal
+ */
+export function _adcComparison(io: CliIo, design: DesignFile, settings: AnalysisSettings): ReferenceComparison {
+  const all = [design.reference, ...(design.referenceAlternatives ?? [])];
+  const options: ReferenceComparisonEntry[] = all.map((reference) => {
+    const report = _tripReportOfDesign(io, { ...design, reference }, settings);
+    const ideal = _tripReportOfDesign(io, { ...design, reference: { kind: "ideal", name: `ideal ${reference.nominalVolts} V`, nominalVolts: reference.nominalVolts } }, settings);
+    const acceptance = settings.acceptanceMethod;
+    const setpoints = report.setpoints.map((s, i) => {
+      const b = s.bands.find((x) => x.method === acceptance) ?? (s.bands[0] as TripBand);
+      const iSp = ideal.setpoints[i] as TripReportSetpoint;
+      const ib = iSp.bands.find((x) => x.method === acceptance) ?? (iSp.bands[0] as TripBand);
+      return {
+        name: s.name,
+        lowC: b.lowC,
+        highC: b.highC,
+        idealLowC: ib.lowC,
+        idealHighC: ib.highC,
+        extraWidthC: Math.max(0, b.highC - b.lowC - (ib.highC - ib.lowC)),
+        marginToNormalC: s.marginToNormalC,
+        marginToHazardC: s.marginToHazardC,
+        pass: s.pass,
+      };
+    });
+    const adequate = setpoints.every((s) => s.pass);
+    return {
+      name: reference.name,
+      kind: referenceOptionFromDesign(reference).kind,
+      cost: reference.cost ?? null,
+      reference: { name: reference.name, kind: referenceOptionFromDesign(reference).kind, nominalVolts: reference.nominalVolts, toleranceFraction: statedToleranceFraction(reference), problems: [] },
+      networks: [],
+      setpoints,
+      verdict: adequate ? "adequate" : "inadequate",
+      verdictText: adequate
+        ? `With ${reference.name} every setpoint's ${acceptance} firmware trip band stays above normal operation and below the hazard limit.`
+        : `With ${reference.name} at least one setpoint's ${acceptance} firmware trip band reaches normal operation or the hazard limit.`,
+    };
+  });
+  const ranked = options
+    .map((o, i) => ({ o, i }))
+    .filter(({ o }) => o.verdict === "adequate")
+    .sort((a, b) => (a.o.cost ?? Number.POSITIVE_INFINITY) - (b.o.cost ?? Number.POSITIVE_INFINITY) || a.i - b.i);
+  const recommended = ranked[0]?.o.name ?? null;
+  return {
+    acceptanceMethod: settings.acceptanceMethod,
+    options,
+    recommended,
+    summary:
+      recommended === null
+        ? `None of the ${options.length} reference options keeps the firmware trip inside the margins.`
+        : `${ranked.length} of ${options.length} reference options keep the firmware trip inside the margins; the cheapest is ${recommended}.`,
+  };
+}
 
 /** Registers the `compare` command. @internal */
 export function registerCompareCommand(program: Command, context: CommandContext): Command {
   const command = program
     .command("compare")
     .description("compare the reference options of a design file (reference and referenceAlternatives)")
-    .argument("<design>", "design file (JSON) with a comparator")
+    .argument("<design>", "design file (JSON): comparator thresholds or an ADC with firmware trip")
     .addHelpText("after", "\nExample:\n  hotjunction compare examples/reflow-oven-trip.json --markdown\n");
   // No --svg yet: the chart of the options' bands side by side is still to come (check --svg draws one design's).
   _addAnalysisOptions(command, undefined);
@@ -42,15 +113,12 @@ export function registerCompareCommand(program: Command, context: CommandContext
   command.action(async (path: string, options: CompareOptions) => {
     const plan = _planCommandOutputs(context.io, options, [path]);
     const { design, input } = await _loadDesign(context.io, path);
-    if (design.comparator === undefined) {
-      throw new CliError(`${path}: compare needs a comparator design (this one trips in firmware from an ADC)`);
-    }
     const settings = _analysisSettings(design, options);
     const references = [design.reference, ...(design.referenceAlternatives ?? [])].map(referenceOptionFromDesign);
     const progress = _startProgress(context.io, "Monte Carlo");
     let comparison: ReturnType<typeof compareReferences>;
     try {
-      comparison = compareReferences(tripDesignFromDesign(design), references, {
+      comparison = design.comparator === undefined ? _adcComparison(context.io, design, settings) : compareReferences(tripDesignFromDesign(design), references, {
         acceptanceMethod: settings.acceptanceMethod,
         coverage: settings.coverage,
         monteCarloTrials: settings.trials,

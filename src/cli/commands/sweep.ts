@@ -5,7 +5,10 @@
  */
 import type { Command } from "commander";
 import { evaluateChain } from "../../chain/evaluateChain.js";
-import { measurementChainFromDesign } from "../../design/designToObjects.js";
+import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
+import type { DesignFile } from "../../design/designSchema.js";
+import type { MeasurementChain } from "../../chain/types.js";
+import { _realizedTripReference } from "../../trip/designTrip.js";
 import { errorBandChartSvg } from "../../report/errorBandChart.js";
 import { formatSweepReport } from "../../report/renderSweepReport.js";
 import type { ErrorSweep } from "../../report/reportTypes.js";
@@ -48,6 +51,18 @@ export function _smallestSweepStepC(fromC: number, toC: number, format: "text" |
   return format === "text" || format === "markdown" ? Math.max(0.1, digitUnit) : digitUnit;
 }
 
+/**
+ * The chain a sweep evaluates: the design's chain, with a shunt reference whose series resistor the design leaves
+ * to the tool sized as `check` sizes it (for the threshold networks the trip design finds). @internal
+ */
+export function sweepChainOfDesign(design: DesignFile): MeasurementChain {
+  const chain = measurementChainFromDesign(design);
+  if (design.comparator !== undefined && design.reference.kind === "shunt" && design.reference.seriesOhms === undefined) {
+    return { ...chain, reference: _realizedTripReference(tripDesignFromDesign(design)) };
+  }
+  return chain;
+}
+
 /** Registers the `sweep` command. @internal */
 export function registerSweepCommand(program: Command, context: CommandContext): Command {
   const command = program
@@ -79,7 +94,7 @@ export function registerSweepCommand(program: Command, context: CommandContext):
     const { design, input } = await _loadDesign(context.io, path);
     const settings = _analysisSettings(design, options);
     const methods = _methodInfo(settings);
-    const chain = measurementChainFromDesign(design);
+    const chain = sweepChainOfDesign(design);
     const temperatures = Array.from({ length: count }, (_, i) =>
       Number((options.from + i * options.step).toPrecision(sweepSignificantDigits)),
     );

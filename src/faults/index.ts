@@ -37,6 +37,7 @@ export type {
   ThermocoupleShortEffect,
 } from "./types.js";
 export { faultCatalogue, type FaultCatalogueOptions } from "./faultCatalogue.js";
+export { classifyFaultShift, defaultNoEffectThresholdC, type ClassifyFaultShiftInput, type FaultShiftClass } from "./classifyFaultShift.js";
 export { reviewFaults } from "./reviewFaults.js";
 export { faultsFromJson } from "./faultsFromJson.js";
 export { faultReviewReport, faultReviewScope, reviewChainFaults } from "./faultReviewReport.js";
@@ -44,3 +45,4 @@ export { reviewTripDesignFaults, type FaultReviewTripResult } from "./reviewTrip
 export { formatFaultReviewText } from "./formatFaultReviewText.js";
 export { formatFaultReviewMarkdown } from "./formatFaultReviewMarkdown.js";
 export { faultReviewJsonFormat, formatFaultReviewJson } from "./formatFaultReviewJson.js";
+export { formatFaultReviewCsv } from "./formatFaultReviewCsv.js";

@@ -3,6 +3,7 @@
  * unique names, what a shunt reference needs.
  * @module
  */
+import { failureDataProblems } from "../safety/validateFailureData.js";
 import type { DesignFile, DesignReference } from "./designSchema.js";
 
 /** One broken rule. */
@@ -49,6 +50,39 @@ function checkReference(reference: DesignReference, path: string, out: DesignRul
   } else if (reference.seriesResistorSeries !== undefined || reference.seriesResistorToleranceFraction !== undefined) {
     out.push({ path: `${path}.seriesOhms`, problem: "give seriesOhms or seriesResistorSeries/seriesResistorToleranceFraction, not both" });
   }
+}
+
+/**
+ * The failure-data rules a schema cannot state (the shares of each element sum to 1, exactly one of faultId and
+ * assumed per mode), and the second channel's shape. Whether each faultId names a fault of the review needs the
+ * fault catalogue: `validate` and `faults` check that (see `_designFailureDataProblems` in the CLI).
+ */
+function checkFailureData(design: DesignFile, out: DesignRuleProblem[]): void {
+  const data = design.failureData;
+  if (data === undefined) return;
+  const push = (root: string, elements: unknown): void => {
+    for (const e of failureDataProblems({ elements }, { path: root })) {
+      const prefix = `failure data: ${e.quantity} `;
+      out.push({ path: e.quantity, problem: e.message.startsWith(prefix) ? e.message.slice(prefix.length) : e.message });
+    }
+  };
+  push("failureData", data.elements);
+  const second = data.secondChannel;
+  if (second === undefined) return;
+  push("failureData.secondChannel", second.elements);
+  if (second.amplifier?.kind !== "fixed-scale" && second.coldJunction === undefined) {
+    out.push({ path: "failureData.secondChannel.coldJunction", problem: "required key is missing (only a fixed-scale amplifier compensates internally)" });
+  }
+  if (second.amplifier?.kind === "fixed-scale" && second.coldJunction !== undefined) {
+    out.push({ path: "failureData.secondChannel.coldJunction", problem: "a fixed-scale amplifier compensates internally: remove coldJunction" });
+  }
+  if (second.tripTemperaturesC !== undefined && second.tripTemperaturesC.length !== design.setpoints.length) {
+    out.push({
+      path: "failureData.secondChannel.tripTemperaturesC",
+      problem: `has ${second.tripTemperaturesC.length} entries; give one per setpoint (${design.setpoints.length})`,
+    });
+  }
+  if (second.reference !== undefined) checkReference(second.reference, "failureData.secondChannel.reference", out);
 }
 
 /**
@@ -118,6 +152,7 @@ export function _checkDesignRules(design: DesignFile): DesignRuleProblem[] {
   ) {
     out.push({ path: "resistors.minDividerCurrentMilliamps", problem: `is above maxDividerCurrentMilliamps (${resistors.maxDividerCurrentMilliamps})` });
   }
+  checkFailureData(design, out);
   checkReference(design.reference, "reference", out);
   const referenceNames = new Set<string>([design.reference.name]);
   (design.referenceAlternatives ?? []).forEach((reference, i) => {

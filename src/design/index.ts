@@ -2,7 +2,7 @@
  * `hotjunction/design`: design files (zod schema, validation, JSON Schema) and the report renderers.
  * @module
  */
-export { designFileSchema, referenceSchema, type DesignFile, type DesignReference } from "./designSchema.js";
+export { designFileSchema, referenceSchema, type DesignFailureData, type DesignFile, type DesignReference } from "./designSchema.js";
 export { DesignFileError, type DesignFileErrorDetails } from "./designFileError.js";
 export {
   designFileMaxBytes,
@@ -15,7 +15,7 @@ export {
 } from "./parseDesign.js";
 export { loadDesignFile, type LoadDesignFileOptions } from "./loadDesignFile.js";
 export { designJsonSchema } from "./designJsonSchema.js";
-export { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign } from "./designToObjects.js";
+export { failureDataFromDesign, measurementChainFromDesign, referenceOptionFromDesign, secondChannelDesign, tripDesignFromDesign } from "./designToObjects.js";
 export { CAUTION_TEXT } from "../report/caution.js";
 export type {
   ErrorSweep,
@@ -30,4 +30,6 @@ export { renderComparisonReport } from "../report/renderComparisonReport.js";
 export { renderSweepReport } from "../report/renderSweepReport.js";
 export { tripBandChartSvg } from "../report/tripBandChart.js";
 export { errorBandChartSvg } from "../report/errorBandChart.js";
+export { pfdAvgChartSvg, type PfdAvgChartInput } from "../report/pfdAvgChart.js";
+export { safetyFiguresJsonSchema, safetyFiguresOutputSchema } from "./safetyFiguresJsonSchema.js";
 export { firmwareTripReport, type FirmwareTripSetpoint } from "../report/firmwareTripReport.js";

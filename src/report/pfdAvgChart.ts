@@ -43,7 +43,7 @@ function powerLabel(t: number): string {
  * @returns SVG text
  * @example
  * ```ts
- * import { pfdAvgChartSvg } from "hotjunction/design";
+ * import { pfdAvgChartSvg } from "hotjunction/report";
  * import { pfdAvgCurve } from "hotjunction";
  * const curve = pfdAvgCurve({ name: "kiln", lambdaDuFit: 225, lambdaDdFit: 0 }, { // invented rates
  *   proofTestIntervalsHours: [730, 8760, 87600], proofTest: { meanTimeToRestorationHours: 8 }, pair: { beta: 0.05, betaD: 0.02 } });

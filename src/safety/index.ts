@@ -49,3 +49,4 @@ export { formatSafetyFiguresText } from "./formatSafetyFiguresText.js";
 export { formatSafetyFiguresMarkdown } from "./formatSafetyFiguresMarkdown.js";
 export { formatSafetyFiguresJson, safetyFiguresJsonFormat } from "./formatSafetyFiguresJson.js";
 export { formatSafetyFiguresCsv } from "./formatSafetyFiguresCsv.js";
+export { formatSafetyFigures, type SafetyFiguresFormat } from "./formatSafetyFigures.js";

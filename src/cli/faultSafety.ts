@@ -170,7 +170,7 @@ export function _designSafety(
         const channelB = { name: `${setpointName}: ${secondSection.name}`, lambdaDuFit: b.lambdaDuFit, lambdaDdFit: b.lambdaDdFit, proofTestCoverage: b.proofTestCoverage };
         twoChannel.push(twoChannelCutout(channelA, channelB, { beta: secondSection.beta, betaD: secondSection.betaD, proofTest }));
         curves.push({
-          ...pfdAvgCurve(channelA, { proofTestIntervalsHours: hours, proofTest: repair, pair: { secondChannel: channelB, beta: secondSection.beta, betaD: secondSection.betaD, name: "1oo2" } }),
+          ...pfdAvgCurve(channelA, { proofTestIntervalsHours: hours, proofTest: repair, pair: { secondChannel: channelB, beta: secondSection.beta, betaD: secondSection.betaD, name: `1oo2 (${setpointName}: ${firstChannelName} + ${secondSection.name})` } }),
         });
       } else {
         curves.push(pfdAvgCurve(channelA, { proofTestIntervalsHours: hours, proofTest: repair }));

@@ -52,9 +52,9 @@ function powerLabel(t: number): string {
  * ```
  */
 export function pfdAvgChartSvg(input: PfdAvgChartInput): string {
-  const width = 900;
+  const width = 980;
   const height = 600;
-  const margin = { left: 90, right: 230, top: 50, bottom: 170 };
+  const margin = { left: 90, right: 300, top: 50, bottom: 170 };
   const points = input.curves.flatMap((c) => c.points);
   const hours = points.map((p) => p.proofTestIntervalHours);
   const pfds = points.flatMap((p) => [p.pfdAvg1oo1, ...(p.pfdAvg1oo2 === null ? [] : [p.pfdAvg1oo2])]).filter((v) => v > 0);
@@ -110,7 +110,7 @@ export function pfdAvgChartSvg(input: PfdAvgChartInput): string {
     };
     const tag = input.curves.length > 1 ? ` (${c.channelName})` : "";
     draw("pfdAvg1oo1", dashes[(2 * i) % dashes.length] ?? "", `1oo1${tag}`);
-    if (c.pairName !== null) draw("pfdAvg1oo2", dashes[(2 * i + 1) % dashes.length] ?? "4 3", `${c.pairName}${tag}, β ${((c.beta ?? 0) * 100).toFixed(0)} %`);
+    if (c.pairName !== null) draw("pfdAvg1oo2", dashes[(2 * i + 1) % dashes.length] ?? "4 3", `${c.pairName === "1oo2" ? `1oo2${tag}` : c.pairName}, β ${((c.beta ?? 0) * 100).toFixed(0)} %`);
   });
   labels.sort((a, b) => a.y - b.y);
   for (let i = 1; i < labels.length; i++) labels[i]!.y = Math.max(labels[i]!.y, labels[i - 1]!.y + 13);

@@ -187,8 +187,8 @@ export function measurementChainFromDesign(design: DesignFile, reference: Design
  * ```ts
  * import { failureDataFromDesign, parseDesign } from "hotjunction/design";
  * import { readFileSync } from "node:fs";
- * const design = parseDesign(readFileSync("examples/ceramic-kiln-cutout.json", "utf8"));
- * console.log(failureDataFromDesign(design)?.elements[0]?.element); // "thermocouple"
+ * const design = parseDesign(readFileSync("examples/kiln-two-channel-cutout.json", "utf8"));
+ * console.log(failureDataFromDesign(design)?.elements[0]?.element); // "thermocouple (kiln roof)"
  * ```
  */
 export function failureDataFromDesign(design: DesignFile, channel: "first" | "second" = "first"): FailureData | undefined {
@@ -219,7 +219,7 @@ export function failureDataFromDesign(design: DesignFile, channel: "first" | "se
  * ```ts
  * import { parseDesign, secondChannelDesign } from "hotjunction/design";
  * import { readFileSync } from "node:fs";
- * const design = parseDesign(readFileSync("examples/ceramic-kiln-cutout.json", "utf8"));
+ * const design = parseDesign(readFileSync("examples/kiln-two-channel-cutout.json", "utf8"));
  * console.log(secondChannelDesign(design).adc?.bits); // 12
  * ```
  */

@@ -3,6 +3,7 @@
  * unique names, what a shunt reference needs.
  * @module
  */
+import { failureDataProblems } from "../safety/validateFailureData.js";
 import type { DesignFile, DesignReference } from "./designSchema.js";
 
 /** One broken rule. */
@@ -73,6 +74,39 @@ function checkDynamicsRules(design: DesignFile, out: DesignRuleProblem[]): void 
 }
 
 /**
+ * The failure-data rules a schema cannot state (the shares of each element sum to 1, exactly one of faultId and
+ * assumed per mode), and the second channel's shape. Whether each faultId names a fault of the review needs the
+ * fault catalogue: `validate` and `faults` check that (see `_designFailureDataProblems` in the CLI).
+ */
+function checkFailureData(design: DesignFile, out: DesignRuleProblem[]): void {
+  const data = design.failureData;
+  if (data === undefined) return;
+  const push = (root: string, elements: unknown): void => {
+    for (const e of failureDataProblems({ elements }, { path: root })) {
+      const prefix = `failure data: ${e.quantity} `;
+      out.push({ path: e.quantity, problem: e.message.startsWith(prefix) ? e.message.slice(prefix.length) : e.message });
+    }
+  };
+  push("failureData", data.elements);
+  const second = data.secondChannel;
+  if (second === undefined) return;
+  push("failureData.secondChannel", second.elements);
+  if (second.amplifier?.kind !== "fixed-scale" && second.coldJunction === undefined) {
+    out.push({ path: "failureData.secondChannel.coldJunction", problem: "required key is missing (only a fixed-scale amplifier compensates internally)" });
+  }
+  if (second.amplifier?.kind === "fixed-scale" && second.coldJunction !== undefined) {
+    out.push({ path: "failureData.secondChannel.coldJunction", problem: "a fixed-scale amplifier compensates internally: remove coldJunction" });
+  }
+  if (second.tripTemperaturesC !== undefined && second.tripTemperaturesC.length !== design.setpoints.length) {
+    out.push({
+      path: "failureData.secondChannel.tripTemperaturesC",
+      problem: `has ${second.tripTemperaturesC.length} entries; give one per setpoint (${design.setpoints.length})`,
+    });
+  }
+  if (second.reference !== undefined) checkReference(second.reference, "failureData.secondChannel.reference", out);
+}
+
+/**
  * Checks the cross-field rules; returns every broken rule (empty when the design is consistent).
  * @internal
  */
@@ -140,6 +174,7 @@ export function _checkDesignRules(design: DesignFile): DesignRuleProblem[] {
     out.push({ path: "resistors.minDividerCurrentMilliamps", problem: `is above maxDividerCurrentMilliamps (${resistors.maxDividerCurrentMilliamps})` });
   }
   checkDynamicsRules(design, out);
+  checkFailureData(design, out);
   checkReference(design.reference, "reference", out);
   const referenceNames = new Set<string>([design.reference.name]);
   (design.referenceAlternatives ?? []).forEach((reference, i) => {

@@ -282,6 +282,12 @@ const protectionSchema = z
       .strictObject({ lowVolts: z.number().min(-100).max(100), highVolts: z.number().min(-100).max(100) })
       .optional()
       .describe("output rails of the amplifier, V (default 0 and 5)"),
+    noEffectThresholdC: z
+      .number()
+      .min(0)
+      .max(100)
+      .optional()
+      .describe("a fault moving the trip by at most this much, its moved worst-case band inside the limits, is \"no effect\"; beyond it \"degraded\", °C (default 3)"),
     detection: z
       .strictObject({
         outOfRangeWindowC: z
@@ -431,6 +437,79 @@ const dynamicsSchema = z
       .describe("noise at the comparator or ADC input"),
   })
   .describe("response time of the trip through a runaway (heater stuck on): process, sensor, signal path, output stages, noise");
+const assumedClassSchema = z
+  .strictObject({
+    safety: z.enum(["safe", "dangerous", "degraded", "no-effect"]).describe("the class stated for this mode"),
+    detected: z.boolean().describe("a diagnostic reveals it (and brings the safe state) in time"),
+  })
+  .describe("a class stated by the user for a mode the review does not model");
+
+const failureModeSchema = z
+  .strictObject({
+    mode: label("the failure mode in words, e.g. open, short, drift, output stuck low"),
+    share: z.number().min(0).max(1).describe("share of the element's rate, 0 to 1; the shares of one element sum to 1 (±0.0001)"),
+    faultId: z.string().min(1).max(200).optional().describe("the fault of the review this mode is, e.g. divider.resistor0.open (see `faults --json`)"),
+    assumed: assumedClassSchema.optional(),
+  })
+  .describe("one failure mode of an element: give exactly one of faultId and assumed");
+
+const elementFailureSchema = z
+  .strictObject({
+    element: label("the element in words or by position, e.g. thermocouple, divider resistor 0 (top)"),
+    rateFit: z.number().min(0).max(1e9).describe("failure rate of the element, FIT (failures per 10⁹ h)"),
+    rateSource: z.string().max(500).optional().describe("where the rate comes from (handbook, standard, field data); reported only"),
+    modes: z.array(failureModeSchema).min(1).max(64).describe("the element's failure modes"),
+  })
+  .describe("failure data of one element");
+
+const proofTestSchema = z
+  .strictObject({
+    proofTestIntervalHours: z.number().positive().max(1e9).describe("proof-test interval T1, h"),
+    meanTimeToRestorationHours: z.number().min(0).max(1e9).describe("mean time to restoration after a detected failure (MTTR), h"),
+    meanRepairTimeHours: z.number().min(0).max(1e9).optional().describe("mean repair time after a proof test found a failure (MRT), h (default MTTR)"),
+    missionTimeHours: z.number().positive().max(1e9).optional().describe("mission time T_M, h: when what the proof test misses is found (needed when the coverage is below 1)"),
+    proofTestCoverage: z.number().min(0).max(1).optional().describe("share of λ_DU the proof test reveals, 0 to 1 (default 1; ignored when revealsFaultIds is given)"),
+    revealsFaultIds: z
+      .array(z.string().min(1).max(200))
+      .max(256)
+      .optional()
+      .describe("faults an injected-signal test at the interval reveals; the coverage is then their share of λ_DU"),
+  })
+  .describe("the proof test and repair times (IEC 61508-6 Annex B symbols)");
+
+const failureElementsSchema = z.array(elementFailureSchema).min(1).max(256).describe("per element a rate in FIT and mode shares mapped onto fault ids");
+
+const secondChannelSchema = z
+  .strictObject({
+    name: label("label of the second channel in reports"),
+    notes: z.string().max(10_000).optional().describe("free text"),
+    thermocouple: thermocoupleSchema.optional().describe("its own thermocouple (default: a second probe like the first channel's)"),
+    coldJunction: coldJunctionSchema.optional(),
+    amplifier: amplifierSchema.optional(),
+    adc: adcSchema.describe("the ADC whose readings the second channel's firmware compares with the setpoints"),
+    reference: referenceSchema.optional().describe("reference of the second channel's ADC (default the first channel's)"),
+    tripTemperaturesC: z
+      .array(temperatureC("firmware trip of the second channel"))
+      .min(1)
+      .max(64)
+      .optional()
+      .describe("one per setpoint, in order (default each setpoint's tripTemperatureC)"),
+    protection: protectionSchema.optional().describe("the second channel's protection facts (default the first channel's)"),
+    beta: z.number().min(0).max(1).describe("common-cause factor β of undetected dangerous failures, 0 to 1"),
+    betaD: z.number().min(0).max(1).describe("common-cause factor β_D of detected dangerous failures, 0 to 1"),
+    elements: failureElementsSchema,
+  })
+  .describe("a second, independent channel (a thermocouple and a firmware ADC path) combined with the first as 1oo2");
+
+const failureDataSchema = z
+  .strictObject({
+    notes: z.string().max(10_000).optional().describe("free text: where the rates come from, what is invented"),
+    elements: failureElementsSchema,
+    proofTest: proofTestSchema.optional(),
+    countDegradedAsDangerous: z.boolean().optional().describe("count degraded faults as dangerous (default false: left out of λ_S and λ_D)"),
+    secondChannel: secondChannelSchema.optional(),
+  })
+  .describe("failure rates and mode shares for the safety figures of `faults` (supplied by you; the package ships none)");
 
 /** The whole design file, version 1. */
 export const designFileSchema = z
@@ -462,11 +541,14 @@ export const designFileSchema = z
     analysis: analysisSchema.optional(),
     protection: protectionSchema.optional(),
     dynamics: dynamicsSchema.optional(),
+    failureData: failureDataSchema.optional(),
   })
   .describe("a hotjunction over-temperature protection design");
 
 /** A design file as validated (shape only; cross-field rules are checked by `parseDesign`). */
 export type DesignFile = z.infer<typeof designFileSchema>;
+/** The `failureData` section of a design file. */
+export type DesignFailureData = z.infer<typeof failureDataSchema>;
 /** One reference option as written in a design file. */
 export type DesignReference = z.infer<typeof referenceSchema>;
 /** The `dynamics` section as written in a design file. */

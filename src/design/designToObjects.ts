@@ -17,6 +17,7 @@ import type { ReferenceOption, TripDesign, TripResistors, TripSetpoint } from ".
 import type { DesignFile, DesignReference } from "./designSchema.js";
 import { HotjunctionRangeError } from "../errors.js";
 import type { TripDynamicsModel } from "../trip/tripDynamics.js";
+import type { ElementFailureData, FailureData, FailureModeShare } from "../safety/types.js";
 
 /** Copies an object without its `undefined` members (exact optional properties). */
 function compact<T>(value: Record<string, unknown>): T {
@@ -201,4 +202,69 @@ function compactDeep(value: unknown): unknown {
  */
 export function dynamicsModelFromDesign(design: DesignFile): TripDynamicsModel | undefined {
   return design.dynamics === undefined ? undefined : (compactDeep(design.dynamics) as TripDynamicsModel);
+}
+
+/**
+ * The failure data of a design file's `failureData` section (first channel, or with `channel: "second"` the
+ * second channel's) as the safety figures take it, or `undefined` when the design has none.
+ * @param design - a validated design
+ * @param channel - `"first"` (default) or `"second"`
+ * @returns the failure data (per element a rate in FIT and the mode shares), or undefined
+ * @example
+ * ```ts
+ * import { failureDataFromDesign, parseDesign } from "hotjunction/design";
+ * import { readFileSync } from "node:fs";
+ * const design = parseDesign(readFileSync("examples/kiln-two-channel-cutout.json", "utf8"));
+ * console.log(failureDataFromDesign(design)?.elements[0]?.element); // "thermocouple (kiln roof)"
+ * ```
+ */
+export function failureDataFromDesign(design: DesignFile, channel: "first" | "second" = "first"): FailureData | undefined {
+  const section = design.failureData;
+  const elements = channel === "first" ? section?.elements : section?.secondChannel?.elements;
+  if (elements === undefined) return undefined;
+  return {
+    elements: elements.map((e) =>
+      compact<ElementFailureData>({
+        element: e.element,
+        rateFit: e.rateFit,
+        rateSource: e.rateSource,
+        modes: e.modes.map((m) => compact<FailureModeShare>({ mode: m.mode, share: m.share, faultId: m.faultId, assumed: m.assumed === undefined ? undefined : { ...m.assumed } })),
+      }),
+    ),
+  };
+}
+
+/**
+ * The design file of the second channel alone (`failureData.secondChannel`): its own thermocouple (default a
+ * second probe like the first channel's), cold junction, amplifier, ADC and reference (default the first
+ * channel's), the firmware trips (default the setpoints'), and its protection facts (default the first
+ * channel's), so that it can be reviewed and evaluated like any ADC design.
+ * @param design - a validated design with a second channel
+ * @returns a design file describing the second channel as an ADC (firmware-trip) design
+ * @throws HotjunctionRangeError (code `INVALID_DESIGN`) when the design has no second channel
+ * @example
+ * ```ts
+ * import { parseDesign, secondChannelDesign } from "hotjunction/design";
+ * import { readFileSync } from "node:fs";
+ * const design = parseDesign(readFileSync("examples/kiln-two-channel-cutout.json", "utf8"));
+ * console.log(secondChannelDesign(design).adc?.bits); // 12
+ * ```
+ */
+export function secondChannelDesign(design: DesignFile): DesignFile {
+  const second = design.failureData?.secondChannel;
+  if (second === undefined) {
+    throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "failureData.secondChannel", value: undefined, context: "secondChannelDesign", problem: "is missing" });
+  }
+  const { comparator: _comparator, resistors: _resistors, referenceAlternatives: _alternatives, failureData: _failureData, coldJunction: _cj, amplifier: _amp, ...rest } = design;
+  return compact<DesignFile>({
+    ...rest,
+    name: second.name,
+    setpoints: design.setpoints.map((s, i) => ({ ...s, tripTemperatureC: second.tripTemperaturesC?.[i] ?? s.tripTemperatureC })),
+    thermocouple: second.thermocouple ?? design.thermocouple,
+    coldJunction: second.coldJunction,
+    amplifier: second.amplifier,
+    adc: second.adc,
+    reference: second.reference ?? design.reference,
+    protection: second.protection ?? design.protection,
+  });
 }

@@ -3,7 +3,7 @@
  * and the caution. Adds zod only; the report renderers and charts (with d3-scale, d3-shape) are `hotjunction/report`.
  * @module
  */
-export { designFileSchema, referenceSchema, type DesignFile, type DesignReference } from "./designSchema.js";
+export { designFileSchema, referenceSchema, type DesignFailureData, type DesignFile, type DesignReference } from "./designSchema.js";
 export type { DesignDynamics } from "./designSchema.js";
 export { DesignFileError, type DesignFileErrorDetails, type DesignFileProblem } from "./designFileError.js";
 export {
@@ -17,7 +17,8 @@ export {
 } from "./parseDesign.js";
 export { loadDesignFile, type LoadDesignFileOptions } from "./loadDesignFile.js";
 export { designJsonSchema } from "./designJsonSchema.js";
-export { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign } from "./designToObjects.js";
+export { failureDataFromDesign, measurementChainFromDesign, referenceOptionFromDesign, secondChannelDesign, tripDesignFromDesign } from "./designToObjects.js";
 export { dynamicsModelFromDesign } from "./designToObjects.js";
+export { safetyFiguresJsonSchema, safetyFiguresOutputSchema } from "./safetyFiguresJsonSchema.js";
 export { CAUTION_TEXT } from "../caution.js";
 export { starterDesign, starterTopologies, type StarterTopology } from "./starterDesigns.js";

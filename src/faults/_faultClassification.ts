@@ -1,10 +1,12 @@
 /**
  * Classification in the fault review: of a fault's alternatives the latest trip decides; its effect (trips
- * immediately, early, late, never, no change), safety (safe, dangerous, no effect), detection and category.
+ * immediately, early, late, never, no change), safety by the one rule {@link classifyFaultShift} (the healthy
+ * worst-case band moved by the shift: safe, dangerous, degraded, no effect), detection and category.
  * @module
  * @internal
  */
 import { _methodOrder } from "./_faultDetection.js";
+import { classifyFaultShift } from "./classifyFaultShift.js";
 import type { FaultCategory, FaultCategoryCounts, FaultDetectionMethod, FaultSafety, FaultTripEffect } from "./types.js";
 
 /** @internal The outcome of one alternative of a fault. */
@@ -22,6 +24,10 @@ export interface _ClassificationLimits {
   readonly hazardC: number;
   /** A trip that moves by at most this much is "no change". */
   readonly noChangeC: number;
+  /** Healthy worst-case band, °C. */
+  readonly bandC: { readonly lowC: number; readonly highC: number };
+  /** Shift up to which a fault inside the limits is "no effect", °C. */
+  readonly noEffectC: number;
 }
 
 /** @internal A classified fault. */
@@ -32,6 +38,8 @@ export interface _Classification {
   readonly tripC: number | null;
   readonly shiftC: number | null;
   readonly safety: FaultSafety;
+  /** Margin the worst unit of the moved band keeps, °C (null when it never trips). */
+  readonly marginC: number | null;
   /** Methods that detect every alternative. */
   readonly detectedBy: FaultDetectionMethod[];
   readonly detected: boolean;
@@ -51,21 +59,29 @@ export function _classifyFault(results: readonly _AlternativeResult[], limits: _
   else if (tripC === null) effect = "never-trips";
   else if (Math.abs(shiftC as number) <= limits.noChangeC) effect = "no-change";
   else effect = (shiftC as number) < 0 ? "trips-early" : "trips-late";
-  const safety: FaultSafety =
-    tripC === null || tripC >= limits.hazardC ? "dangerous" : worst.immediate || tripC <= limits.maxNormalC ? "safe" : "no-effect";
+  const cls = classifyFaultShift({
+    shiftC,
+    tripsImmediately: worst.immediate,
+    healthyBandC: limits.bandC,
+    maxNormalOperatingC: limits.maxNormalC,
+    hazardLimitC: limits.hazardC,
+    noEffectThresholdC: limits.noEffectC,
+  });
+  const safety: FaultSafety = cls.safety;
   const detected = detectedBy.length > 0;
-  const category: FaultCategory = safety === "no-effect" ? "no-effect" : `${safety}-${detected ? "detected" : "undetected"}`;
-  return { worst, effect, tripC, shiftC, safety, detectedBy, detected, category };
+  const category: FaultCategory = safety === "no-effect" || safety === "degraded" ? safety : `${safety}-${detected ? "detected" : "undetected"}`;
+  return { worst, effect, tripC, shiftC, safety, marginC: cls.marginC, detectedBy, detected, category };
 }
 
 /** @internal Counts rows per category. */
 export function _countCategories(rows: readonly { readonly category: FaultCategory }[]): FaultCategoryCounts {
-  const c = { safeDetected: 0, safeUndetected: 0, dangerousDetected: 0, dangerousUndetected: 0, noEffect: 0, total: rows.length };
+  const c = { safeDetected: 0, safeUndetected: 0, dangerousDetected: 0, dangerousUndetected: 0, degraded: 0, noEffect: 0, total: rows.length };
   for (const r of rows) {
     if (r.category === "safe-detected") c.safeDetected++;
     else if (r.category === "safe-undetected") c.safeUndetected++;
     else if (r.category === "dangerous-detected") c.dangerousDetected++;
     else if (r.category === "dangerous-undetected") c.dangerousUndetected++;
+    else if (r.category === "degraded") c.degraded++;
     else c.noEffect++;
   }
   return c;

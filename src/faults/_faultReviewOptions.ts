@@ -7,6 +7,7 @@
 import type { MeasurementChain } from "../chain/types.js";
 import { _invalidChoice, _requireFinite, _requireGreaterThan, _requireInRange } from "../errors.js";
 import type { _PlantFacts } from "./_faultPlant.js";
+import { defaultNoEffectThresholdC } from "./classifyFaultShift.js";
 import type { FaultDetection, FaultReviewTrip, ReviewFaultsOptions } from "./types.js";
 
 /** @internal The review's settled inputs. */
@@ -27,6 +28,9 @@ export interface _ReviewSettings {
   readonly step: number;
   readonly margin: number;
   readonly noChange: number;
+  readonly noEffect: number;
+  /** The caller's healthy worst-case band, °C (undefined: the nominal trip is used). */
+  readonly band: { readonly lowC: number; readonly highC: number } | undefined;
   readonly facts: _PlantFacts;
 }
 
@@ -100,6 +104,15 @@ export function _reviewSettings(chain: MeasurementChain, trip: FaultReviewTrip, 
   const step = options.sweepStepC === undefined ? 1 : _requireInRange(options.sweepStepC, "sweepStepC", 0.05, 50, "°C", context);
   const margin = options.sweepMarginC === undefined ? 50 : _requireInRange(options.sweepMarginC, "sweepMarginC", 0, 500, "°C", context);
   const noChange = options.noChangeToleranceC === undefined ? 0.5 : _requireInRange(options.noChangeToleranceC, "noChangeToleranceC", 0, 100, "°C", context);
+  const noEffect =
+    options.noEffectThresholdC === undefined ? defaultNoEffectThresholdC : _requireInRange(options.noEffectThresholdC, "noEffectThresholdC", 0, 100, "°C", context);
+  let band: _ReviewSettings["band"];
+  if (trip.healthyBandC !== undefined) {
+    if (typeof trip.healthyBandC !== "object" || trip.healthyBandC === null) _invalidChoice("healthyBandC", trip.healthyBandC, ["{ lowC, highC }"], context);
+    const lowC = _requireFinite(trip.healthyBandC.lowC, "healthyBandC.lowC", "°C", context);
+    const highC = _requireInRange(trip.healthyBandC.highC, "healthyBandC.highC", lowC, Infinity, "°C", context);
+    band = { lowC, highC };
+  }
   const shuntSupply = options.shuntSupplyVolts === undefined ? undefined : _requireInRange(options.shuntSupplyVolts, "shuntSupplyVolts", 0, 1000, "V", context);
   const facts: _PlantFacts = {
     coldJunctionC,
@@ -110,5 +123,5 @@ export function _reviewSettings(chain: MeasurementChain, trip: FaultReviewTrip, 
     outputStage,
     shuntSupplyVolts: shuntSupply,
   };
-  return { context, maxNormal, hazard, bias, biasMv, railLow, railHigh, outputStage, tripLevel, detection, groundMv, drift, coldJunctionC, step, margin, noChange, facts };
+  return { context, maxNormal, hazard, bias, biasMv, railLow, railHigh, outputStage, tripLevel, detection, groundMv, drift, coldJunctionC, step, margin, noChange, noEffect, band, facts };
 }

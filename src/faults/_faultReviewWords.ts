@@ -6,7 +6,7 @@
  */
 import { _invalidChoice } from "../errors.js";
 import type { _AlternativeResult, _Classification } from "./_faultClassification.js";
-import type { Fault, FaultCategory, FaultCategoryCounts, FaultDetectionMethod, FaultReviewReport } from "./types.js";
+import type { Fault, FaultCategory, FaultCategoryCounts, FaultDetectionMethod, FaultReview, FaultReviewReport } from "./types.js";
 
 /** @internal Category labels for tables. */
 export const _categoryWords: Readonly<Record<FaultCategory, string>> = {
@@ -14,6 +14,7 @@ export const _categoryWords: Readonly<Record<FaultCategory, string>> = {
   "safe-undetected": "safe, undetected",
   "dangerous-detected": "DANGEROUS, detected",
   "dangerous-undetected": "DANGEROUS, undetected",
+  degraded: "degraded",
   "no-effect": "no effect",
 };
 
@@ -24,6 +25,7 @@ export function _countEntries(c: FaultCategoryCounts): [string, number][] {
     ["safe, undetected", c.safeUndetected],
     ["dangerous, detected", c.dangerousDetected],
     ["dangerous, undetected", c.dangerousUndetected],
+    ["degraded", c.degraded],
     ["no effect", c.noEffect],
     ["total", c.total],
   ];
@@ -33,6 +35,16 @@ export function _countEntries(c: FaultCategoryCounts): [string, number][] {
 export function _fmt1(x: number): string {
   const v = x.toFixed(1);
   return v === "-0.0" ? "0.0" : v;
+}
+
+/** @internal The line saying which band and threshold the classes were judged with. */
+export function _bandLine(review: FaultReview): string {
+  const band = review.healthyBandC;
+  const judged =
+    band === undefined || review.healthyBandGiven !== true
+      ? "Classes judged with the nominal healthy trip (no worst-case band given)"
+      : `Classes judged with the healthy worst-case band ${_fmt1(band.lowC)}–${_fmt1(band.highC)} °C moved by each fault's shift`;
+  return `${judged}; a shift above ${review.noEffectThresholdC ?? 3} °C inside the limits is degraded, below it no effect.`;
 }
 
 /** @internal Checks that a value looks like a report (has a reviews array). */
@@ -72,8 +84,11 @@ export function _effectText(
       text = `trips ${c.effect === "trips-early" ? "early" : "late"} by ${_fmt1(by)} °C, at ${_fmt1(c.tripC as number)} °C`;
       if ((c.tripC as number) <= limits.maxNormalC) text += " (within normal operation: a nuisance trip)";
       else if ((c.tripC as number) >= limits.hazardC) text += " (at or above the hazard limit)";
+      else if (c.safety === "dangerous") text += " (the worst unit of the moved worst-case band reaches the hazard limit)";
+      else if (c.safety === "safe") text += " (the worst unit of the moved worst-case band trips within normal operation)";
     }
   }
+  if (c.safety === "degraded" && c.marginC !== null) text += `; degraded: the worst unit keeps ${_fmt1(c.marginC)} °C to the nearer limit`;
   if (c.worst.label !== undefined && alternatives > 1) text += ` [worst case: ${c.worst.label}]`;
   return text;
 }
@@ -89,7 +104,9 @@ export function _detectionText(c: _Classification, results: readonly _Alternativ
 /** @internal The mitigations a row suggests. */
 export function _mitigations(fault: Fault, c: _Classification): string[] {
   const out: string[] = [];
-  if (c.safety !== "no-effect") {
+  if (c.safety === "degraded") {
+    out.push("check that the margin left covers drift over the service life, or detect the shift");
+  } else if (c.safety !== "no-effect") {
     if (fault.mitigation !== undefined) out.push(fault.mitigation);
     else if (!c.detected) out.push("a window comparator or supervisory reading that tells this fault from normal operation");
     if (c.safety === "dangerous") out.push("an independent, non-resettable thermal cutoff");
@@ -123,7 +140,16 @@ export function _reviewNotes(r: {
   readonly biasMv: number;
   readonly outputStage: string;
   readonly outputStageAssumed: boolean;
+  readonly bandC: { readonly lowC: number; readonly highC: number };
+  readonly bandGiven: boolean;
+  readonly noEffectC: number;
 }): string[] {
+  const bandNote = r.bandGiven
+    ? `Faults judged with the healthy worst-case band ${_fmt1(r.bandC.lowC)}–${_fmt1(r.bandC.highC)} °C moved by each fault's shift: dangerous when its top reaches the hazard limit, safe when its bottom reaches normal operation, degraded when the shift exceeds ${r.noEffectC} °C inside the limits (margin given), else no effect.`
+    : `No worst-case band given: faults judged with the nominal healthy trip alone (a zero-width band); degraded when the shift exceeds ${r.noEffectC} °C inside the limits, else no effect.`;
+  const crossing: string[] = [];
+  if (r.bandC.highC >= r.hazardC) crossing.push(`The healthy worst-case band already reaches the hazard limit (${_fmt1(r.bandC.highC)} °C): every fault that does not pull the trip down counts as dangerous.`);
+  if (r.bandC.lowC <= r.maxNormalC) crossing.push(`The healthy worst-case band already reaches down to normal operation (${_fmt1(r.bandC.lowC)} °C).`);
   return [
     `Cold junction held at ${_fmt1(r.coldJunctionC)} °C; hot junction swept from ${_fmt1(r.fromC)} to ${_fmt1(r.toC)} °C in ${r.stepC} °C steps (trips refined to 0.001 °C); every error source at its nominal value.`,
     `Healthy trip of the modelled chain: ${_fmt1(r.healthyTripC)} °C${r.intendedTripC !== undefined ? ` (intended ${_fmt1(r.intendedTripC)} °C)` : ""}; normal operation up to ${_fmt1(r.maxNormalC)} °C, hazard limit ${_fmt1(r.hazardC)} °C.`,
@@ -131,5 +157,7 @@ export function _reviewNotes(r: {
       ? "Open-circuit bias: none stated, so an open thermocouple input is taken as floating (up, near zero or down; the worst counts)."
       : `Open-circuit bias: ${r.bias} (an open input is driven ${r.bias === "pull-up" ? "up" : "down"} by ${r.biasMv} mV).`,
     `Output stage: ${r.outputStage}${r.outputStageAssumed ? " (assumed; state it if the design de-energises to trip)" : ""}.`,
+    bandNote,
+    ...crossing,
   ];
 }

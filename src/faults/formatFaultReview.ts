@@ -2,6 +2,7 @@
  * The fault review in one of its formats: the `format…(report, format)` shape every renderer of the library shares.
  * @module
  */
+import { formatFaultReviewCsv } from "./formatFaultReviewCsv.js";
 import { formatFaultReviewJson } from "./formatFaultReviewJson.js";
 import { formatFaultReviewMarkdown } from "./formatFaultReviewMarkdown.js";
 import { formatFaultReviewText } from "./formatFaultReviewText.js";
@@ -9,15 +10,16 @@ import type { FaultReviewReport } from "./types.js";
 import { _invalidChoice } from "../errors.js";
 
 /** Formats of a fault review. */
-export type FaultReviewFormat = "text" | "markdown" | "json";
+export type FaultReviewFormat = "text" | "markdown" | "json" | "csv";
 
-const formats: readonly FaultReviewFormat[] = ["text", "markdown", "json"];
+const formats: readonly FaultReviewFormat[] = ["text", "markdown", "json", "csv"];
 
 /**
- * Renders a fault review report as text, Markdown or JSON (the same as {@link formatFaultReviewText},
- * {@link formatFaultReviewMarkdown} and {@link formatFaultReviewJson}). Every format carries the caution.
+ * Renders a fault review report as text, Markdown, JSON or CSV (the same as {@link formatFaultReviewText},
+ * {@link formatFaultReviewMarkdown}, {@link formatFaultReviewJson} and {@link formatFaultReviewCsv}). Every format
+ * carries the caution.
  * @param report - from `faultReviewReport` or `reviewChainFaults`
- * @param format - `"text"`, `"markdown"` or `"json"`
+ * @param format - `"text"`, `"markdown"`, `"json"` or `"csv"`
  * @returns the report text
  * @throws HotjunctionRangeError (`INVALID_OPTION`) for another format
  * @example
@@ -35,6 +37,8 @@ export function formatFaultReview(report: FaultReviewReport, format: FaultReview
       return formatFaultReviewMarkdown(report);
     case "json":
       return formatFaultReviewJson(report);
+    case "csv":
+      return formatFaultReviewCsv(report);
     default:
       return _invalidChoice("fault review format", format, formats, "formatFaultReview");
   }

@@ -2,7 +2,7 @@
  * Markdown rendering of a fault review report.
  * @module
  */
-import { _categoryWords, _checkReport, _countEntries, _fmt1 } from "./_faultReviewWords.js";
+import { _bandLine, _categoryWords, _checkReport, _countEntries, _fmt1 } from "./_faultReviewWords.js";
 import type { FaultReviewReport } from "./types.js";
 
 function cell(text: string): string {
@@ -30,7 +30,7 @@ export function formatFaultReviewMarkdown(input: FaultReviewReport): string {
     out.push(
       `## Trip: ${cell(review.name)}`,
       "",
-      `Healthy trip ${_fmt1(review.healthyTripC)} °C; normal operation up to ${_fmt1(review.maxNormalOperatingC)} °C; hazard limit ${_fmt1(review.hazardLimitC)} °C.`,
+      `Healthy trip ${_fmt1(review.healthyTripC)} °C; normal operation up to ${_fmt1(review.maxNormalOperatingC)} °C; hazard limit ${_fmt1(review.hazardLimitC)} °C. ${_bandLine(review)}`,
       "",
       "| Fault | Element | Effect on the trip | Class | Detection | Suggested mitigation |",
       "| --- | --- | --- | --- | --- | --- |",

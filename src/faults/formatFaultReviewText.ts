@@ -2,7 +2,7 @@
  * Plain-text rendering of a fault review report.
  * @module
  */
-import { _categoryWords, _checkReport, _countEntries, _fmt1 } from "./_faultReviewWords.js";
+import { _bandLine, _categoryWords, _checkReport, _countEntries, _fmt1 } from "./_faultReviewWords.js";
 import type { FaultReviewReport } from "./types.js";
 
 function wrap(text: string, width: number, indent: string): string[] {
@@ -37,6 +37,7 @@ export function formatFaultReviewText(input: FaultReviewReport): string {
   for (const review of report.reviews) {
     lines.push(
       `Trip "${review.name}": healthy trip ${_fmt1(review.healthyTripC)} °C, normal operation up to ${_fmt1(review.maxNormalOperatingC)} °C, hazard limit ${_fmt1(review.hazardLimitC)} °C`,
+      _bandLine(review),
       "",
     );
     const idWidth = Math.max(5, ...review.rows.map((r) => r.faultId.length));

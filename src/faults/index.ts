@@ -38,6 +38,7 @@ export type {
   ThermocoupleShortEffect,
 } from "./types.js";
 export { faultCatalogue, type FaultCatalogueOptions } from "./faultCatalogue.js";
+export { classifyFaultShift, defaultNoEffectThresholdC, type ClassifyFaultShiftInput, type FaultShiftClass } from "./classifyFaultShift.js";
 export { reviewFaults } from "./reviewFaults.js";
 export { faultsFromJson } from "./faultsFromJson.js";
 export { faultReviewReport, faultReviewScope, reviewChainFaults } from "./faultReviewReport.js";
@@ -46,3 +47,4 @@ export { formatFaultReview, type FaultReviewFormat } from "./formatFaultReview.j
 export { formatFaultReviewText } from "./formatFaultReviewText.js";
 export { formatFaultReviewMarkdown } from "./formatFaultReviewMarkdown.js";
 export { faultReviewJsonFormat, formatFaultReviewJson } from "./formatFaultReviewJson.js";
+export { formatFaultReviewCsv } from "./formatFaultReviewCsv.js";

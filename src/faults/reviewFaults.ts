@@ -21,8 +21,11 @@ import type { Fault, FaultReview, FaultReviewRow, FaultReviewTrip, ReviewFaultsO
  * Reviews one trip of a chain against single faults: for each fault (the built-in {@link faultCatalogue}, or
  * your own list, plus extras) it sweeps the hot junction from the cold junction up past the hazard limit with
  * every error source nominal, finds where the output trips, and classifies the result: trips immediately,
- * early or late (by how many °C), never, or no change; safe (a trip at or below the highest normal
- * temperature: a nuisance), dangerous (no trip below the hazard limit) or no effect; detected or undetected by
+ * early or late (by how many °C), never, or no change. The class comes from one rule ({@link classifyFaultShift}):
+ * the healthy worst-case band (`trip.healthyBandC`, default the nominal trip) moved by the fault's shift is
+ * dangerous when its top reaches the hazard limit (or it never trips), safe when its bottom reaches down to
+ * normal operation (a nuisance trip) or it trips at once, degraded when the shift exceeds the no-effect threshold
+ * (default 3 °C) yet the band stays inside (with the margin left), else no effect; detected or undetected by
  * the design's detection methods (a method detects a fault when it flags it at some temperature below the
  * hazard limit where it does not flag the healthy chain). Vocabulary after IEC 61508-4; no certification is
  * claimed. Covers single faults of the modelled elements only.
@@ -120,7 +123,8 @@ export function reviewFaults(chain: MeasurementChain, trip: FaultReviewTrip, opt
     return { label: alt.label, immediate: run.immediate, tripC: run.tripC, firstFlagC };
   };
 
-  const limits = { healthyTripC, maxNormalC: set.maxNormal, hazardC: hazard, noChangeC: set.noChange, fromC, toC };
+  const bandC = set.band ?? { lowC: healthyTripC, highC: healthyTripC };
+  const limits = { healthyTripC, maxNormalC: set.maxNormal, hazardC: hazard, noChangeC: set.noChange, bandC, noEffectC: set.noEffect, fromC, toC };
   const rows: FaultReviewRow[] = faults.map((fault) => {
     const results = _resolveFault(fault, resolveFacts).map((alt) => runAlternative(fault, alt));
     const c = _classifyFault(results, limits);
@@ -133,6 +137,7 @@ export function reviewFaults(chain: MeasurementChain, trip: FaultReviewTrip, opt
       shiftC: c.shiftC,
       effectText: _effectText(c, results.length, limits),
       safety: c.safety,
+      marginC: c.marginC,
       detected: c.detected,
       detectedBy: c.detectedBy,
       detectionText: _detectionText(c, results),
@@ -156,6 +161,9 @@ export function reviewFaults(chain: MeasurementChain, trip: FaultReviewTrip, opt
       biasMv: set.biasMv,
       outputStage: set.outputStage,
       outputStageAssumed: options.outputStage === undefined,
+      bandC,
+      bandGiven: set.band !== undefined,
+      noEffectC: set.noEffect,
     }),
   );
 
@@ -164,6 +172,9 @@ export function reviewFaults(chain: MeasurementChain, trip: FaultReviewTrip, opt
     healthyTripC,
     maxNormalOperatingC: set.maxNormal,
     hazardLimitC: hazard,
+    healthyBandC: bandC,
+    healthyBandGiven: set.band !== undefined,
+    noEffectThresholdC: set.noEffect,
     coldJunctionC,
     sweep: { fromC, toC, stepC: set.step },
     context: {

@@ -17,17 +17,22 @@ export interface FaultReviewTripResult {
   readonly name?: string;
   readonly networks: readonly Pick<ThresholdNetwork, "resistorsOhms">[];
   readonly reference: Pick<ReferenceRealization, "nominalVolts"> & { readonly element?: ReferenceElement };
-  readonly setpoints: readonly Pick<
+  readonly setpoints: readonly (Pick<
     SetpointTripResult,
     "name" | "tripTemperatureC" | "networkIndex" | "tapIndex" | "maxNormalOperatingC" | "hazardLimitC"
-  >[];
+  > & {
+    /** Healthy worst-case trip band, °C; when present the faults are judged with it (see {@link reviewFaults}). */
+    readonly worstCase?: { readonly lowC: number; readonly highC: number };
+  })[];
 }
 
 /**
  * Reviews every setpoint of a comparator trip design against single faults (see {@link reviewFaults}): the chain
  * of each setpoint is the design's thermocouple, compensation, amplifier and comparator with the result's
  * reference (an ideal reference becomes an error-free series reference of its voltage) and threshold network.
- * The cold junction defaults to the design's `designColdJunctionC`, else the middle of the ambient range.
+ * The cold junction defaults to the design's `designColdJunctionC`, else the middle of the ambient range. Each
+ * setpoint's faults are judged with its healthy worst-case band (`result.setpoints[i].worstCase`) moved by the
+ * fault's shift, so a fault that keeps a nominal unit inside the hazard limit but not the worst unit is dangerous.
  * @param design - the trip design (as given to `designTrip`)
  * @param result - its `designTrip` result (or the same fields for a built board)
  * @param options - as for {@link reviewFaults}
@@ -96,6 +101,7 @@ export function reviewTripDesignFaults(
         tripTemperatureC: sp.tripTemperatureC,
         maxNormalOperatingC: sp.maxNormalOperatingC,
         hazardLimitC: sp.hazardLimitC,
+        ...(sp.worstCase !== undefined ? { healthyBandC: { lowC: sp.worstCase.lowC, highC: sp.worstCase.highC } } : {}),
       },
       coldJunctionC !== undefined ? { ...options, coldJunctionC } : options,
     );

@@ -295,6 +295,12 @@ export interface FaultReviewTrip {
   readonly maxNormalOperatingC: number;
   /** Hazard limit, °C: no trip below it is a dangerous failure. */
   readonly hazardLimitC: number;
+  /**
+   * Healthy worst-case trip band of this trip, °C (e.g. a `designTrip` setpoint's `worstCase` band). Each fault
+   * moves it by the fault's shift of the nominal trip; the moved band is judged against the limits. Default: the
+   * nominal healthy trip alone (a zero-width band).
+   */
+  readonly healthyBandC?: { readonly lowC: number; readonly highC: number };
 }
 
 /** Options of {@link reviewFaults}: the design facts plus the fault list and sweep. */
@@ -311,6 +317,11 @@ export interface ReviewFaultsOptions extends FaultContext {
   readonly sweepMarginC?: number;
   /** A trip moving less than this is "no change", °C, ≥ 0. Default 0.5. */
   readonly noChangeToleranceC?: number;
+  /**
+   * A fault moving the trip by at most this much, with its moved band inside the limits, is "no effect"; beyond it
+   * "degraded", °C, in [0, 100]. Default {@link defaultNoEffectThresholdC} (3 °C).
+   */
+  readonly noEffectThresholdC?: number;
 }
 
 // ---------------------------------------------------------------------------------------------------------
@@ -320,11 +331,15 @@ export interface ReviewFaultsOptions extends FaultContext {
 /** What a fault does to the trip. */
 export type FaultTripEffect = "trips-immediately" | "trips-early" | "trips-late" | "never-trips" | "no-change";
 
-/** Effect on the safety function (IEC 61508-4 vocabulary). */
-export type FaultSafety = "safe" | "dangerous" | "no-effect";
+/**
+ * Effect on the safety function, judged with the healthy worst-case band (see {@link classifyFaultShift}):
+ * `"safe"` and `"dangerous"` (IEC 61508-4 vocabulary), `"degraded"` (the trip moves by more than the no-effect
+ * threshold yet the shifted band stays inside the limits; the margin left is in the row) and `"no-effect"`.
+ */
+export type FaultSafety = "safe" | "dangerous" | "degraded" | "no-effect";
 
-/** Safety class with detection. */
-export type FaultCategory = "safe-detected" | "safe-undetected" | "dangerous-detected" | "dangerous-undetected" | "no-effect";
+/** Safety class with detection (degraded and no-effect faults are not split by detection; the row keeps `detected`). */
+export type FaultCategory = "safe-detected" | "safe-undetected" | "dangerous-detected" | "dangerous-undetected" | "degraded" | "no-effect";
 
 /** A detection method that noticed a fault. */
 export type FaultDetectionMethod = "out-of-range-window" | "open-thermocouple-detection" | "second-comparator" | "supervisory-reading";
@@ -342,6 +357,11 @@ export interface FaultReviewRow {
   /** The effect in words. */
   readonly effectText: string;
   readonly safety: FaultSafety;
+  /**
+   * Margin the worst unit keeps under the fault: hazard limit − top of the moved band, or bottom of the moved
+   * band − highest normal temperature, whichever is smaller, °C (negative when crossed; null when it never trips).
+   */
+  readonly marginC: number | null;
   readonly detected: boolean;
   readonly detectedBy: readonly FaultDetectionMethod[];
   /** How it is detected, in words ("not detected" when not). */
@@ -358,6 +378,7 @@ export interface FaultCategoryCounts {
   readonly safeUndetected: number;
   readonly dangerousDetected: number;
   readonly dangerousUndetected: number;
+  readonly degraded: number;
   readonly noEffect: number;
   readonly total: number;
 }
@@ -369,6 +390,12 @@ export interface FaultReview {
   readonly healthyTripC: number;
   readonly maxNormalOperatingC: number;
   readonly hazardLimitC: number;
+  /** Healthy worst-case band the faults were judged with, °C (the nominal trip when none was given: zero width). */
+  readonly healthyBandC: { readonly lowC: number; readonly highC: number };
+  /** True when `healthyBandC` came from the caller (a worst-case budget), false when it is the nominal trip alone. */
+  readonly healthyBandGiven: boolean;
+  /** Shift of the nominal trip below which a fault inside the limits is "no effect", °C. */
+  readonly noEffectThresholdC: number;
   readonly coldJunctionC: number;
   readonly sweep: { readonly fromC: number; readonly toC: number; readonly stepC: number };
   /** The design facts used, with defaults filled in. */

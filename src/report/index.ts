@@ -19,6 +19,7 @@ export { formatComparisonReport, renderComparisonReport } from "./renderComparis
 export { formatSweepReport, renderSweepReport } from "./renderSweepReport.js";
 export { tripBandChartSvg } from "./tripBandChart.js";
 export { errorBandChartSvg } from "./errorBandChart.js";
+export { pfdAvgChartSvg, type PfdAvgChartInput } from "./pfdAvgChart.js";
 export { firmwareTripReport, type FirmwareTripSetpoint } from "./firmwareTripReport.js";
 export { formatRunawayReport, type RunawayReport } from "./runawayReport.js";
 export { runawayChartSvg, type RunawayChartOptions } from "../dynamics/runawayChartSvg.js";

@@ -34,7 +34,7 @@ export type {
   TwoChannelCutoutOptions,
 } from "./types.js";
 export { failureDataProblems, failureShareSumTolerance, validateFailureData, type ValidateFailureDataOptions } from "./validateFailureData.js";
-export { classifyFaultShift, defaultNoEffectThresholdC, type ClassifyFaultShiftInput, type FaultShiftClass } from "./classifyFaultShift.js";
+// The classification rule lives in faults/ (the review uses it); the root entry exports it from there.
 export { safetyFaultClassesFromReview, type FaultReviewForSafety, type SafetyFaultClassesFromReviewOptions } from "./safetyFaultClassesFromReview.js";
 export { safetyFigures } from "./safetyFigures.js";
 export { safetyFiguresFromReviews, type SafetyFiguresFromReviewsOptions } from "./safetyFiguresFromReviews.js";
@@ -48,3 +48,5 @@ export { safetyFiguresCertification, safetyFiguresReport, safetyFiguresScope, ty
 export { formatSafetyFiguresText } from "./formatSafetyFiguresText.js";
 export { formatSafetyFiguresMarkdown } from "./formatSafetyFiguresMarkdown.js";
 export { formatSafetyFiguresJson, safetyFiguresJsonFormat } from "./formatSafetyFiguresJson.js";
+export { formatSafetyFiguresCsv } from "./formatSafetyFiguresCsv.js";
+export { formatSafetyFigures, type SafetyFiguresFormat } from "./formatSafetyFigures.js";

@@ -5,7 +5,7 @@
  */
 import { _invalidChoice } from "../errors.js";
 import type { FaultReview, FaultReviewRow } from "../faults/types.js";
-import { classifyFaultShift, defaultNoEffectThresholdC } from "./classifyFaultShift.js";
+import { classifyFaultShift, defaultNoEffectThresholdC } from "../faults/classifyFaultShift.js";
 import type { SetpointFaultClasses } from "./types.js";
 
 /** The parts of a fault review the safety figures read (a {@link FaultReview} has them). */
@@ -14,20 +14,25 @@ export interface FaultReviewForSafety {
   readonly healthyTripC: number;
   readonly maxNormalOperatingC: number;
   readonly hazardLimitC: number;
+  /** The band the review judged with (a {@link FaultReview} carries it); used when the options give none. */
+  readonly healthyBandC?: { readonly lowC: number; readonly highC: number };
+  /** The review's no-effect threshold, °C; used when the options give none. */
+  readonly noEffectThresholdC?: number;
   readonly rows: readonly Pick<FaultReviewRow, "faultId" | "effect" | "shiftC" | "detected">[];
 }
 
 /** Options of {@link safetyFaultClassesFromReview}. */
 export interface SafetyFaultClassesFromReviewOptions {
-  /** Healthy worst-case trip band of this setpoint, °C. Default the nominal healthy trip (zero width). */
+  /** Healthy worst-case trip band of this setpoint, °C. Default the review's band, else the nominal healthy trip (zero width). */
   readonly healthyBandC?: { readonly lowC: number; readonly highC: number };
-  /** Shift below which a fault is "no effect", °C. Default 3. */
+  /** Shift below which a fault is "no effect", °C. Default the review's threshold, else 3. */
   readonly noEffectThresholdC?: number;
 }
 
 /**
  * The classified faults of one setpoint: each row of the review moved by its shift against the healthy
- * worst-case band ({@link classifyFaultShift}); detection as the review found it. A row that never trips is
+ * worst-case band by the review's own rule ({@link classifyFaultShift}; the band and threshold default to the
+ * review's, so the classes equal the review's rows); detection as the review found it. A row that never trips is
  * dangerous; one that trips immediately is safe.
  * @param review - a {@link FaultReview} (or any object with its name, limits and rows)
  * @param options - healthy worst-case band °C, no-effect threshold °C
@@ -53,8 +58,9 @@ export function safetyFaultClassesFromReview(review: FaultReviewForSafety | Faul
   if (typeof review !== "object" || review === null || !Array.isArray(review.rows)) {
     _invalidChoice("review", review, ["a fault review with rows"], "safetyFaultClassesFromReview");
   }
-  const band = options.healthyBandC ?? { lowC: review.healthyTripC, highC: review.healthyTripC };
-  let threshold = defaultNoEffectThresholdC;
+  const band = options.healthyBandC ?? review.healthyBandC ?? { lowC: review.healthyTripC, highC: review.healthyTripC };
+  const thresholdOption = options.noEffectThresholdC ?? review.noEffectThresholdC;
+  let threshold = thresholdOption ?? defaultNoEffectThresholdC;
   const faults = review.rows.map((row) => {
     const c = classifyFaultShift({
       shiftC: row.effect === "never-trips" ? null : row.shiftC,
@@ -62,7 +68,7 @@ export function safetyFaultClassesFromReview(review: FaultReviewForSafety | Faul
       healthyBandC: band,
       maxNormalOperatingC: review.maxNormalOperatingC,
       hazardLimitC: review.hazardLimitC,
-      ...(options.noEffectThresholdC !== undefined ? { noEffectThresholdC: options.noEffectThresholdC } : {}),
+      ...(thresholdOption !== undefined ? { noEffectThresholdC: thresholdOption } : {}),
     });
     threshold = c.noEffectThresholdC;
     return { faultId: row.faultId, safety: c.safety, detected: row.detected, shiftC: row.shiftC, marginC: c.marginC };

@@ -15,8 +15,10 @@
 // Failure data (user-supplied)
 // ---------------------------------------------------------------------------------------------------------
 
-/** Effect of a failure on the safety function, judged with the healthy worst-case band (see {@link classifyFaultShift}). */
-export type SafetyFaultSafety = "safe" | "dangerous" | "degraded" | "no-effect";
+import type { FaultSafety } from "../faults/types.js";
+
+/** Effect of a failure on the safety function, judged with the healthy worst-case band (see {@link classifyFaultShift}); the review's {@link FaultSafety}. */
+export type SafetyFaultSafety = FaultSafety;
 
 /** A class stated by the user for a failure mode the review does not model (e.g. a slow resistor drift). */
 export interface AssumedFaultClass {

@@ -1,20 +1,28 @@
 /**
  * `hotjunction faults <design.json>`: single-fault review of a design's trip chain (what each single fault does to
- * the trip: early, late, never; safe or dangerous; detected or not) as a text table, Markdown or JSON.
+ * the trip: early, late, never; safe, dangerous, degraded or no effect against the healthy worst-case band;
+ * detected or not) as a text table, Markdown, CSV or JSON; with the design's `failureData`, the safety figures
+ * (λ by class, SFF, DC, PFDavg and PFH for 1oo1, the 1oo2 pair with a second channel) and `--svg`, the chart of
+ * PFDavg against the proof-test interval.
  * @module
  */
 import { InvalidArgumentError, Option, type Command } from "commander";
-import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
+import { secondChannelDesign } from "../../design/designToObjects.js";
 import { faultsFromJson } from "../../faults/faultsFromJson.js";
-import { reviewChainFaults } from "../../faults/faultReviewReport.js";
+import { formatFaultReviewCsv } from "../../faults/formatFaultReviewCsv.js";
 import { formatFaultReviewJson } from "../../faults/formatFaultReviewJson.js";
 import { formatFaultReviewMarkdown } from "../../faults/formatFaultReviewMarkdown.js";
 import { formatFaultReviewText } from "../../faults/formatFaultReviewText.js";
-import { reviewTripDesignFaults } from "../../faults/reviewTripDesignFaults.js";
 import type { DesignFile } from "../../design/designSchema.js";
 import type { FaultDetection, FaultReviewReport, ReviewFaultsOptions } from "../../faults/types.js";
-import { designTrip } from "../../trip/designTrip.js";
-import { _analysisSettings, _loadDesign } from "../designOptions.js";
+import { pfdAvgChartSvg } from "../../report/pfdAvgChart.js";
+import { formatSafetyFiguresCsv } from "../../safety/formatSafetyFiguresCsv.js";
+import { formatSafetyFiguresJson } from "../../safety/formatSafetyFiguresJson.js";
+import { formatSafetyFiguresMarkdown } from "../../safety/formatSafetyFiguresMarkdown.js";
+import { formatSafetyFiguresText } from "../../safety/formatSafetyFiguresText.js";
+import { CliError } from "../cliError.js";
+import { _loadDesign } from "../designOptions.js";
+import { _designSafety, _reviewDesignFaults, type _DesignSafety } from "../faultSafety.js";
 import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _parseNumber } from "../parseArgs.js";
 import { _readInputFile } from "../readInput.js";
@@ -35,6 +43,8 @@ interface FaultsCommandOptions extends OutputOptionValues {
   readonly wireShort?: number;
   readonly extraFaults?: string;
   readonly step?: number;
+  readonly noEffectThreshold?: number;
+  readonly svg?: string;
 }
 
 /** Parses "a,b" into two numbers. */
@@ -80,7 +90,9 @@ export function _faultReviewOptions(cwd: string, o: FaultsCommandOptions, protec
   const outputStage = o.outputStage ?? protection.outputStage;
   const tripLevel = o.tripLevel ?? protection.comparatorTripLevel;
   const rails = o.rails !== undefined ? { lowVolts: o.rails[0], highVolts: o.rails[1] } : protection.amplifierRailsVolts;
+  const noEffect = o.noEffectThreshold ?? protection.noEffectThresholdC;
   return {
+    ...(noEffect !== undefined ? { noEffectThresholdC: noEffect } : {}),
     ...(bias !== undefined ? { openCircuitBias: bias } : {}),
     ...(outputStage !== undefined ? { outputStage } : {}),
     ...(tripLevel !== undefined ? { comparatorTripLevel: tripLevel } : {}),
@@ -114,37 +126,77 @@ export function registerFaultsCommand(program: Command, context: CommandContext)
     .option("--wire-short <temperature>", "temperature at a short along the wire, °C (default halfway to the trip)", _parseNumber)
     .option("--extra-faults <file>", "JSON file with more faults (an array of { id, element, description, effects })")
     .option("--step <temperature>", "sweep step, °C (default 1)", _parseNumber)
+    .option(
+      "--no-effect-threshold <temperature>",
+      "a fault moving the trip by at most this much, inside the limits, is no effect; beyond it degraded, °C (default: the protection section, else 3)",
+      _parseNumber,
+    )
+    .option("--svg <file>", "write the chart of PFDavg against the proof-test interval (1oo1, 1oo2) as SVG (needs failureData with a proofTest)")
     .addHelpText(
       "after",
-      "\nExamples:\n  hotjunction faults examples/reflow-oven-trip.json\n  hotjunction faults examples/ceramic-kiln-cutout.json --bias pull-up --output-stage de-energize-to-trip --window 0,1350 --markdown --out kiln-faults.md\n",
+      "\nWith a failureData section in the design (rates in FIT and mode shares mapped to fault ids, the proof test, an optional\n" +
+        "second channel with β and β_D), the report adds the safety figures: λ_SD/λ_SU/λ_DD/λ_DU, SFF, DC, PFDavg and PFH\n" +
+        "(IEC 61508-6 Annex B simplified equations, 1oo1 and 1oo2). The rates are yours; no certification is claimed.\n" +
+        "\nExamples:\n  hotjunction faults examples/reflow-oven-trip.json\n  hotjunction faults examples/ceramic-kiln-cutout.json --bias pull-up --output-stage de-energize-to-trip --window 0,1350 --markdown --out kiln-faults.md\n" +
+        "  hotjunction faults examples/kiln-two-channel-cutout.json --svg kiln-pfd.svg\n",
     );
-  _addOutputOptions(command, ["json", "markdown"]);
+  _addOutputOptions(command, ["json", "markdown", "csv"], true);
   command.action(async (path: string, options: FaultsCommandOptions) => {
     const inputPaths = [path, ...(options.extraFaults !== undefined ? [options.extraFaults] : [])];
-    const plan = _planCommandOutputs(context.io, options, inputPaths);
+    const plan = _planCommandOutputs(context.io, options, inputPaths, options.svg !== undefined ? [options.svg] : []);
     const { design, input } = await _loadDesign(context.io, path);
+    if (options.svg !== undefined && design.failureData?.proofTest === undefined) {
+      throw new CliError(`${path}: --svg draws PFDavg against the proof-test interval and needs a failureData section with a proofTest`);
+    }
     const extraInput = options.extraFaults !== undefined ? [_readInputFile(context.io.cwd, options.extraFaults).identity] : [];
     const reviewOptions = _faultReviewOptions(context.io.cwd, options, design.protection);
-    let report: FaultReviewReport;
-    if (design.comparator !== undefined) {
-      const settings = _analysisSettings(design, {});
-      const trip = tripDesignFromDesign(design);
-      const result = designTrip(trip, { acceptanceMethod: settings.acceptanceMethod, monteCarloTrials: settings.trials, seed: settings.seed });
-      report = reviewTripDesignFaults(trip, result, reviewOptions);
-    } else {
-      const trips = design.setpoints.map((s) => ({
-        name: s.name,
-        tripTemperatureC: s.tripTemperatureC,
-        // Presence was checked when the design was validated.
-        maxNormalOperatingC: s.maxNormalOperatingC ?? design.processLimits?.maxNormalOperatingC ?? Number.NaN,
-        hazardLimitC: s.hazardLimitC ?? design.processLimits?.hazardLimitC ?? Number.NaN,
-      }));
-      report = reviewChainFaults(measurementChainFromDesign(design), trips, reviewOptions);
+    const report = _reviewDesignFaults(design, reviewOptions);
+    let safety: _DesignSafety | undefined;
+    if (design.failureData !== undefined) {
+      // The second channel is reviewed by the same code with its own protection facts (command-line detection
+      // options describe the first channel only); sweep step and no-effect threshold apply to both.
+      const second = design.failureData.secondChannel === undefined ? undefined : secondChannelDesign(design);
+      const secondOptions = _faultReviewOptions(
+        context.io.cwd,
+        { ...(options.step !== undefined ? { step: options.step } : {}), ...(options.noEffectThreshold !== undefined ? { noEffectThreshold: options.noEffectThreshold } : {}) },
+        second?.protection,
+      );
+      safety = _designSafety(path, design, report, secondOptions);
     }
-    const format = _chosenFormat(options);
-    const text =
-      format === "json" ? formatFaultReviewJson(report) : format === "markdown" ? formatFaultReviewMarkdown(report) : formatFaultReviewText(report);
-    _emitOutputs(context.io, plan, options, text, [], [input, ...extraInput]);
+    const text = _faultsText(_chosenFormat(options), report, safety);
+    const extras =
+      options.svg !== undefined && safety !== undefined
+        ? [pfdAvgChartSvg({
+            title: `PFDavg against the proof-test interval${design.name !== undefined ? `: ${design.name}` : ""}`,
+            curves: safety.report.curves,
+            ...(safety.statedIntervalHours !== undefined ? { statedIntervalHours: safety.statedIntervalHours } : {}),
+            scope: safety.report.scope,
+          })]
+        : [];
+    _emitOutputs(context.io, plan, options, text, extras, [input, ...extraInput]);
   });
   return command;
+}
+
+/**
+ * The command's main output: the first channel's review, the second channel's review, then the safety figures.
+ * JSON: the fault review's object with `secondChannel` (the second channel's review, same format) and
+ * `safetyFigures` (the `hotjunction-safety-figures/1` object) added when the design has failure data. CSV: the
+ * safety figures when there is failure data, else the fault table.
+ * @internal
+ */
+export function _faultsText(format: "text" | "json" | "markdown" | "csv", report: FaultReviewReport, safety: _DesignSafety | undefined): string {
+  const second = safety?.secondReview;
+  if (format === "json") {
+    const body = JSON.parse(formatFaultReviewJson(report)) as Record<string, unknown>;
+    if (second !== undefined) body["secondChannel"] = JSON.parse(formatFaultReviewJson(second)) as unknown;
+    if (safety !== undefined) body["safetyFigures"] = JSON.parse(formatSafetyFiguresJson(safety.report)) as unknown;
+    return `${JSON.stringify(body, null, 2)}\n`;
+  }
+  if (format === "csv") return safety !== undefined ? formatSafetyFiguresCsv(safety.report) : formatFaultReviewCsv(report);
+  const render = format === "markdown" ? formatFaultReviewMarkdown : formatFaultReviewText;
+  const parts = [render(report)];
+  if (second !== undefined) parts.push(render(second));
+  if (safety !== undefined) parts.push(format === "markdown" ? formatSafetyFiguresMarkdown(safety.report) : formatSafetyFiguresText(safety.report));
+  return parts.join("\n");
 }

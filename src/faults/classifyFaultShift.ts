@@ -1,10 +1,11 @@
 /**
- * Classifies a fault's trip shift with the healthy worst-case band: dangerous, safe, degraded or no effect.
+ * The one classification rule of a fault's trip shift, judged with the healthy worst-case band: dangerous, safe,
+ * degraded or no effect. The single-fault review ({@link reviewFaults}) classifies every row with it, and the
+ * safety figures read those classes.
  * @module
  */
-import { _requireFinite, HotjunctionRangeError } from "../errors.js";
-import { _checkNumber } from "./_safetyChecks.js";
-import type { SafetyFaultSafety } from "./types.js";
+import { _requireFinite, _requireInRange, HotjunctionRangeError } from "../errors.js";
+import type { FaultSafety } from "./types.js";
 
 /**
  * Default shift below which a fault is "no effect", °C (a stated few °C; common practice, no source).
@@ -34,7 +35,8 @@ export interface ClassifyFaultShiftInput {
 
 /** Result of {@link classifyFaultShift}. */
 export interface FaultShiftClass {
-  readonly safety: SafetyFaultSafety;
+  /** The class (IEC 61508-4 vocabulary, plus "degraded": moved beyond the no-effect threshold, still inside the limits). */
+  readonly safety: FaultSafety;
   /**
    * Margin the worst unit keeps: hazard limit − shifted band top, or shifted band bottom − highest normal
    * temperature, whichever is smaller, °C (negative when crossed; null when it never trips).
@@ -68,7 +70,7 @@ export interface FaultShiftClass {
 export function classifyFaultShift(input: ClassifyFaultShiftInput): FaultShiftClass {
   const context = "classifyFaultShift";
   const threshold =
-    input.noEffectThresholdC === undefined ? defaultNoEffectThresholdC : _checkNumber(input.noEffectThresholdC, "noEffectThresholdC", 0, 100, "°C", context);
+    input.noEffectThresholdC === undefined ? defaultNoEffectThresholdC : _requireInRange(input.noEffectThresholdC, "noEffectThresholdC", 0, 100, "°C", context);
   const lowC = _requireFinite(input.healthyBandC?.lowC, "healthyBandC.lowC", "°C", context);
   const highC = _requireFinite(input.healthyBandC?.highC, "healthyBandC.highC", "°C", context);
   if (lowC > highC) {
@@ -84,7 +86,7 @@ export function classifyFaultShift(input: ClassifyFaultShiftInput): FaultShiftCl
   const top = highC + shift;
   const bottom = lowC + shift;
   const marginC = Math.min(hazard - top, bottom - normal);
-  let safety: SafetyFaultSafety;
+  let safety: FaultSafety;
   if (top >= hazard) safety = "dangerous";
   else if (input.tripsImmediately === true || bottom <= normal) safety = "safe";
   else if (Math.abs(shift) > threshold) safety = "degraded";

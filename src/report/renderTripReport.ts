@@ -83,6 +83,7 @@ export function tripReportFromResult(result: TripDesignResult, methods: ReportMe
       pass: s.pass,
       reason: s.reason,
       errorSources: s.errorSources,
+      ...(s.bandOverService !== undefined ? { bandOverService: s.bandOverService } : {}),
     })),
     details,
     // The caution is printed once by the renderer; drop a copy the engine may add to its notes.
@@ -134,10 +135,23 @@ function sourceRows(report: TripReport, limit: number): { name: string; rows: st
   }));
 }
 
+/** One line per setpoint with an ageing drift: how the worst-case band widens with time in service. */
+function serviceLines(report: TripReport): string[] {
+  return report.setpoints
+    .filter((s) => s.bandOverService !== undefined)
+    .map(
+      (s) =>
+        `${s.name}: worst-case band over time in service (probe ageing): ` +
+        (s.bandOverService ?? []).map((p) => `${+p.hours.toPrecision(6)} h ${bandText(p.lowC, p.highC)} °C`).join("; ") +
+        ".",
+    );
+}
+
 function renderText(report: TripReport): string {
   const heading = `${report.title}${report.designName !== undefined ? `: ${report.designName}` : ""} — ${report.pass ? "PASS" : "FAIL"}`;
   const out = [heading, "=".repeat([...heading].length), "", ...report.details, "", _textTable(setpointRows(report)), ""];
   for (const s of report.setpoints) out.push(`${s.name}: ${s.reason}`);
+  out.push(...serviceLines(report));
   for (const block of sourceRows(report, 8)) {
     out.push("", `Largest error sources at "${block.name}":`, _textTable(block.rows));
   }
@@ -160,6 +174,7 @@ function renderMarkdown(report: TripReport): string {
     _markdownTable(setpointRows(report)),
     "",
     ...report.setpoints.map((s) => `- **${s.name}**: ${s.reason}`),
+    ...serviceLines(report).map((l) => `- ${l}`),
   ];
   for (const block of sourceRows(report, 8)) out.push("", `## Largest error sources at "${block.name}"`, "", _markdownTable(block.rows));
   out.push("", "## Method", "", _describeMethods(report.methods));

@@ -3,7 +3,7 @@
  * design, firmware trip from an ADC chain, error sweep).
  * @module
  */
-import type { TripBand, TripErrorSource } from "../trip/types.js";
+import type { TripBand, TripErrorSource, TripServicePoint } from "../trip/types.js";
 
 /** Report output formats. `text` is the terminal table (readable without colour). */
 export type ReportFormat = "text" | "json" | "markdown" | "csv";
@@ -39,6 +39,8 @@ export interface TripReportSetpoint {
   readonly reason: string;
   /** Error sources, largest first. */
   readonly errorSources: readonly TripErrorSource[];
+  /** Worst-case trip band against time in service (the probe's ageing drift grows); present with an ageing drift. */
+  readonly bandOverService?: readonly TripServicePoint[];
 }
 
 /** A trip report. */

@@ -2,7 +2,7 @@ import { defineConfig } from "tsup";
 
 export default defineConfig([
   {
-    entry: { index: "src/index.ts", exact: "src/exact.ts", design: "src/design/index.ts" },
+    entry: { index: "src/index.ts", exact: "src/exact.ts", design: "src/design/index.ts", report: "src/report/index.ts" },
     format: ["esm", "cjs"],
     dts: { compilerOptions: { ignoreDeprecations: "6.0" } },
     sourcemap: false,

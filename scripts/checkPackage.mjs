@@ -35,6 +35,10 @@ const requiredFiles = [
   "dist/design.cjs",
   "dist/design.d.ts",
   "dist/design.d.cts",
+  "dist/report.js",
+  "dist/report.cjs",
+  "dist/report.d.ts",
+  "dist/report.d.cts",
   "dist/cli.js",
 ];
 

@@ -9,6 +9,11 @@
  *
  * `<context>: <quantity> <value> <unit> is <problem>; valid range <min> to <max> <unit>`
  *
+ * This module is also the one home of the input checks (`_require*`, `_invalidChoice`): every other module
+ * imports them from here (`chain/_common.ts` and `uncertainty/_checks.ts` only re-export them), so a message
+ * reads the same wherever it is thrown. They are plain function declarations: a bundle keeps only the checks
+ * it calls.
+ *
  * @module
  */
 
@@ -173,4 +178,236 @@ export function _invalidChoice(quantity: string, value: unknown, allowed: readon
     context,
     problem: "is not a valid choice",
   });
+}
+
+/**
+ * Throws an `INVALID_OPTION` range error unless `value` is one of `allowed` (a string enumeration).
+ * @internal
+ */
+export function _requireChoice<T extends string>(value: unknown, quantity: string, allowed: readonly T[], context?: string): T {
+  if (typeof value !== "string" || !(allowed as readonly string[]).includes(value)) _invalidChoice(quantity, value, allowed, context);
+  return value as T;
+}
+
+/**
+ * Throws unless `value` is a finite number strictly greater than `bound` (an equal value is refused).
+ * `boundName` names the bound in the message when it is another quantity (e.g. `"maxNormalOperatingC 80 °C"`).
+ * @internal
+ */
+export function _requireGreaterThan(
+  value: unknown,
+  quantity: string,
+  bound: number,
+  unit?: string,
+  context?: string,
+  boundName?: string,
+): number {
+  const x = _requireFinite(value, quantity, unit, context);
+  if (!(x > bound)) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: x,
+      min: bound,
+      unit,
+      context,
+      problem: `is not greater than ${boundName ?? bound}`,
+    });
+  }
+  return x;
+}
+
+/**
+ * Throws unless `value` is a finite number > 0.
+ * @internal
+ */
+export function _requirePositive(value: unknown, quantity: string, unit?: string, context?: string): number {
+  return _requireGreaterThan(value, quantity, 0, unit, context);
+}
+
+/**
+ * Throws unless `value` is a finite number ≥ 0 (a ± limit, a half-width, a standard deviation).
+ * @internal
+ */
+export function _requireNonNegative(value: unknown, quantity: string, unit?: string, context?: string): number {
+  const x = _requireFinite(value, quantity, unit, context);
+  if (x < 0) {
+    throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity, value: x, min: 0, unit, context, problem: "is negative" });
+  }
+  return x;
+}
+
+/**
+ * Throws unless `value` is a fraction limit in [0, 1) (0.01 for 1 %).
+ * @internal
+ */
+export function _requireFraction(value: unknown, quantity: string, context?: string): number {
+  const x = _requireNonNegative(value, quantity, "fraction", context);
+  if (x >= 1) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: x,
+      min: 0,
+      max: 1,
+      unit: "fraction",
+      context,
+      problem: "is 1 or more (fractions are stated as 0.01 for 1 %)",
+    });
+  }
+  return x;
+}
+
+/**
+ * Throws unless `value` is a number in the open interval (0, 1).
+ * @internal
+ */
+export function _requireProbability(value: unknown, quantity: string, context?: string): number {
+  const x = _requireFinite(value, quantity, undefined, context);
+  if (!(x > 0 && x < 1)) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: x,
+      min: 0,
+      max: 1,
+      context,
+      problem: "is not strictly between 0 and 1",
+    });
+  }
+  return x;
+}
+
+/**
+ * Throws unless `value` is an integer in [min, max].
+ * @internal
+ */
+export function _requireInteger(value: unknown, quantity: string, min: number, max: number, context?: string): number {
+  const x = _requireFinite(value, quantity, undefined, context);
+  if (!Number.isInteger(x) || x < min || x > max) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: x,
+      min,
+      max,
+      context,
+      problem: Number.isInteger(x) ? "is out of range" : "is not an integer",
+    });
+  }
+  return x;
+}
+
+/**
+ * Throws unless `value` is β of a trapezoid, in [0, 1].
+ * @internal
+ */
+export function _requireBeta(value: unknown, context?: string): number {
+  return _requireInRange(value, "beta", 0, 1, undefined, context);
+}
+
+/**
+ * Degrees of freedom: a number > 0, or `Infinity`; `undefined` means `Infinity`.
+ * @internal
+ */
+export function _requireDegreesOfFreedom(value: unknown, context?: string): number {
+  if (value === undefined || value === Number.POSITIVE_INFINITY) return Number.POSITIVE_INFINITY;
+  if (typeof value !== "number" || Number.isNaN(value)) {
+    throw new HotjunctionTypeError({
+      code: "NOT_A_FINITE_NUMBER",
+      quantity: "degrees of freedom",
+      value,
+      context,
+      problem: "is not a number",
+    });
+  }
+  if (!(value > 0)) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: "degrees of freedom",
+      value,
+      min: 0,
+      context,
+      problem: "is not greater than 0",
+    });
+  }
+  return value;
+}
+
+/**
+ * Throws unless `value` is a plain object (not null, not an array).
+ * @internal
+ */
+export function _requireObject(value: unknown, quantity: string, context?: string): Record<string, unknown> {
+  if (typeof value !== "object" || value === null || Array.isArray(value)) {
+    throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity, value, context, problem: "is not an object" });
+  }
+  return value as Record<string, unknown>;
+}
+
+/**
+ * Throws unless `options` is a plain object (or undefined when `optional`).
+ * @internal
+ */
+export function _requireOptionsObject(options: unknown, context: string, optional: boolean): void {
+  if (options === undefined && optional) return;
+  if (typeof options !== "object" || options === null || Array.isArray(options)) {
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity: "options",
+      value: options,
+      context,
+      problem: "is not an options object",
+    });
+  }
+}
+
+/**
+ * Throws when two mutually exclusive option groups are both given or neither is; returns the index of the
+ * group given.
+ * @internal
+ */
+export function _requireOneOf(options: object, groups: readonly (readonly string[])[], context: string): number {
+  const present = groups.map((group) => group.some((key) => (options as Record<string, unknown>)[key] !== undefined));
+  const count = present.filter(Boolean).length;
+  if (count !== 1) {
+    const described = groups.map((group) => `{ ${group.join(", ")} }`);
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity: "options",
+      value: Object.keys(options).join(", "),
+      context,
+      problem: count === 0 ? "give none of the accepted forms" : "mix more than one accepted form",
+      allowed: described,
+    });
+  }
+  return present.indexOf(true);
+}
+
+/**
+ * Throws unless `min ≤ max` (both finite); returns the pair.
+ * @internal
+ */
+export function _requireOrderedPair(
+  min: unknown,
+  max: unknown,
+  quantityMin: string,
+  quantityMax: string,
+  unit: string,
+  context?: string,
+): readonly [number, number] {
+  const lo = _requireFinite(min, quantityMin, unit, context);
+  const hi = _requireFinite(max, quantityMax, unit, context);
+  if (lo > hi) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: quantityMax,
+      value: hi,
+      min: lo,
+      unit,
+      context,
+      problem: `is below ${quantityMin} ${lo} ${unit}`,
+    });
+  }
+  return [lo, hi];
 }

@@ -16,7 +16,9 @@ export interface ChainBoundsOptions {
   readonly methods?: readonly PropagationMethod[];
   /** Coverage probability of the rss and Monte Carlo intervals, in (0, 1). Default 0.95. */
   readonly coverage?: number;
-  /** Monte Carlo trials. Default 100 000. */
+  /** Monte Carlo trials (the design file's and `designTrip`'s name). Default 100 000. */
+  readonly monteCarloTrials?: number;
+  /** @deprecated use `monteCarloTrials` (kept for one minor version; giving both is an error). */
   readonly trials?: number;
   /** Monte Carlo seed (integer 0 … 2³² − 1). Default 1. */
   readonly seed?: number;
@@ -24,10 +26,28 @@ export interface ChainBoundsOptions {
   readonly normalBoundCoverage?: number;
 }
 
+function checkTrials(o: Record<string, unknown>, context: string): number {
+  if (o["monteCarloTrials"] !== undefined && o["trials"] !== undefined) {
+    _invalidChoice("options", "monteCarloTrials and trials", ["monteCarloTrials (trials is its deprecated name)"], context);
+  }
+  const given = o["monteCarloTrials"] ?? o["trials"];
+  const key = o["monteCarloTrials"] === undefined ? "trials" : "monteCarloTrials";
+  return given === undefined ? 100_000 : _requireFinite(given, key, undefined, context);
+}
+
 const allMethods: readonly PropagationMethod[] = ["worst-case", "rss", "monte-carlo"];
 
+/** @internal Checked options with defaults filled in. */
+export interface _CheckedBoundsOptions {
+  readonly methods: readonly PropagationMethod[];
+  readonly coverage: number;
+  readonly trials: number;
+  readonly seed: number;
+  readonly normalBoundCoverage: number;
+}
+
 /** @internal Checks the options and fills defaults. */
-export function _checkBoundsOptions(options: unknown, context: string): Required<ChainBoundsOptions> {
+export function _checkBoundsOptions(options: unknown, context: string): _CheckedBoundsOptions {
   if (options === undefined) {
     return { methods: ["worst-case", "rss"], coverage: 0.95, trials: 100_000, seed: 1, normalBoundCoverage: 0.9973 };
   }
@@ -38,7 +58,7 @@ export function _checkBoundsOptions(options: unknown, context: string): Required
   return {
     methods,
     coverage: o["coverage"] === undefined ? 0.95 : _requireFinite(o["coverage"], "coverage", undefined, context),
-    trials: o["trials"] === undefined ? 100_000 : _requireFinite(o["trials"], "trials", undefined, context),
+    trials: checkTrials(o, context),
     seed: o["seed"] === undefined ? 1 : _requireFinite(o["seed"], "seed", undefined, context),
     normalBoundCoverage:
       o["normalBoundCoverage"] === undefined ? 0.9973 : _requireFinite(o["normalBoundCoverage"], "normalBoundCoverage", undefined, context),
@@ -52,7 +72,7 @@ export function _checkBoundsOptions(options: unknown, context: string): Required
 export function _chainBounds(
   cm: ChainModel,
   trueC: number,
-  options: Required<ChainBoundsOptions>,
+  options: _CheckedBoundsOptions,
 ): { bounds: ChainBound[]; contributions: ChainContribution[] } {
   const names = Object.keys(cm.inputs);
   if (names.length === 0) {

@@ -1,12 +1,20 @@
 /**
- * Helpers shared by the chain element modules (internal): input checks with the chain's wording, the
+ * Helpers shared by the chain element modules (internal): the input checks (re-exported from errors.ts), the
  * construction of named error sources, and the ambient spans that drifts are taken over.
  * @module
  * @internal
  */
-import { _invalidChoice, _requireFinite, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
+import {
+  _invalidChoice,
+  _requireFinite,
+  _requireNonNegative,
+  _requireObject,
+  _requireOrderedPair,
+  _requirePositive,
+  HotjunctionRangeError,
+} from "../errors.js";
 import { arcsine } from "../uncertainty/arcsine.js";
-import { normal } from "../uncertainty/normal.js";
+import { normalDistribution } from "../uncertainty/normal.js";
 import { rectangular } from "../uncertainty/rectangular.js";
 import { trapezoidal } from "../uncertainty/trapezoidal.js";
 import { triangular } from "../uncertainty/triangular.js";
@@ -22,129 +30,12 @@ import type {
 /** Temperature at which data sheets state initial values and from which drifts are counted, °C. */
 export const _specReferenceC = 25;
 
-/** @internal Throws unless `value` is a plain object. */
-export function _requireObject(value: unknown, quantity: string, context: string): Record<string, unknown> {
-  if (typeof value !== "object" || value === null || Array.isArray(value)) {
-    throw new HotjunctionTypeError({
-      code: "INVALID_OPTION",
-      quantity,
-      value,
-      context,
-      problem: "is not an object",
-    });
-  }
-  return value as Record<string, unknown>;
-}
-
-/** @internal A finite number ≥ 0 (a ± limit). */
-export function _requireNonNegative(value: unknown, quantity: string, unit: string, context: string): number {
-  const x = _requireFinite(value, quantity, unit, context);
-  if (x < 0) {
-    throw new HotjunctionRangeError({
-      code: "OUT_OF_RANGE",
-      quantity,
-      value: x,
-      min: 0,
-      unit,
-      context,
-      problem: "is negative (a ± limit is stated as a non-negative half-width)",
-    });
-  }
-  return x;
-}
-
-// Deliberate pair: _requireNonNegative and _requirePositive differ only in the bound and its wording; both
-// move with the other `_require*` helpers into src/errors.ts (one validator home, issue 10).
-/** @internal A finite number > 0. */
-export function _requirePositive(value: unknown, quantity: string, unit: string, context: string): number {
-  const x = _requireFinite(value, quantity, unit, context);
-  if (!(x > 0)) {
-    throw new HotjunctionRangeError({
-      code: "OUT_OF_RANGE",
-      quantity,
-      value: x,
-      min: 0,
-      unit,
-      context,
-      problem: "is not positive",
-    });
-  }
-  return x;
-}
-
-/**
- * @internal A finite number strictly above `bound` (equal is refused): e.g. a hazard limit above the highest
- * normal operating temperature, or a rail above the other rail.
- */
-export function _requireGreaterThan(
-  value: unknown,
-  bound: number,
-  quantity: string,
-  boundName: string,
-  unit: string | undefined,
-  context: string,
-): number {
-  const x = _requireFinite(value, quantity, unit, context);
-  if (!(x > bound)) {
-    const u = unit === undefined || unit === "" ? "" : ` ${unit}`;
-    throw new HotjunctionRangeError({
-      code: "OUT_OF_RANGE",
-      quantity,
-      value: x,
-      unit,
-      context,
-      problem: `is not above ${boundName} ${bound}${u}; valid range: more than ${bound}${u}`,
-    });
-  }
-  return x;
-}
+// The checks live in the one validator home, src/errors.ts; re-exported so the element modules keep one import.
+export { _requireFraction, _requireNonNegative, _requireObject, _requireOrderedPair, _requirePositive } from "../errors.js";
 
 /** @internal Optional ± limit, default 0. */
 export function _optionalLimit(value: unknown, quantity: string, unit: string, context: string): number {
   return value === undefined ? 0 : _requireNonNegative(value, quantity, unit, context);
-}
-
-/** @internal A fraction limit in [0, 1). */
-export function _requireFraction(value: unknown, quantity: string, context: string): number {
-  const x = _requireNonNegative(value, quantity, "fraction", context);
-  if (x >= 1) {
-    throw new HotjunctionRangeError({
-      code: "OUT_OF_RANGE",
-      quantity,
-      value: x,
-      min: 0,
-      max: 1,
-      unit: "fraction",
-      context,
-      problem: "is 1 or more (fractions are stated as 0.01 for 1 %)",
-    });
-  }
-  return x;
-}
-
-/** @internal A min/max pair with min ≤ max. */
-export function _requireOrderedPair(
-  min: unknown,
-  max: unknown,
-  quantityMin: string,
-  quantityMax: string,
-  unit: string,
-  context: string,
-): readonly [number, number] {
-  const lo = _requireFinite(min, quantityMin, unit, context);
-  const hi = _requireFinite(max, quantityMax, unit, context);
-  if (lo > hi) {
-    throw new HotjunctionRangeError({
-      code: "OUT_OF_RANGE",
-      quantity: quantityMax,
-      value: hi,
-      min: lo,
-      unit,
-      context,
-      problem: `is below ${quantityMin} ${lo} ${unit}`,
-    });
-  }
-  return [lo, hi];
 }
 
 /** @internal Checks an ambient range (within −273.15 … 1000 °C, min ≤ max). */
@@ -205,7 +96,7 @@ export function _limitDistribution(
     }
     case "normal": {
       const k = o["coverageFactor"] === undefined ? 2 : _requirePositive(o["coverageFactor"], "coverage factor", "", context);
-      return normal({ mean: center, standardDeviation: limit / k });
+      return normalDistribution({ mean: center, standardDeviation: limit / k });
     }
     default:
       return _invalidChoice("distribution", o["distribution"], kinds, context);

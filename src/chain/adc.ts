@@ -9,10 +9,29 @@ import { _requireFinite, HotjunctionRangeError } from "../errors.js";
 import { _optionalLimit, _requireFraction, _requireObject, _requirePositive, _source, type _SourceContext } from "./_common.js";
 import type { AdcElement, ChainErrorSource } from "./types.js";
 
-function checkBits(bits: unknown, context: string): number {
-  const b = _requireFinite(bits, "bits", undefined, context);
-  if (!Number.isInteger(b) || b < 1 || b > 32) {
-    throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "bits", value: b, min: 1, max: 32, context, problem: "is not an integer from 1 to 32" });
+/**
+ * The one ADC resolution range of the library, bits: the chain's ADC element and the firmware table's ADC chain
+ * both check through {@link _requireAdcBits}. 1 … 32 is every converter made (a 1-bit comparator-like converter
+ * up to a 32-bit sigma-delta); 2³² − 1 codes are still exact in a double and fit an unsigned 32-bit integer.
+ * @internal
+ */
+export const _adcBitsMin = 1;
+/** @internal Highest ADC resolution, bits (see {@link _adcBitsMin}). */
+export const _adcBitsMax = 32;
+
+/** @internal Throws unless `bits` is an integer from 1 to 32 (the one ADC resolution range). */
+export function _requireAdcBits(bits: unknown, context: string, quantity = "bits"): number {
+  const b = _requireFinite(bits, quantity, undefined, context);
+  if (!Number.isInteger(b) || b < _adcBitsMin || b > _adcBitsMax) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: b,
+      min: _adcBitsMin,
+      max: _adcBitsMax,
+      context,
+      problem: `is not an integer from ${_adcBitsMin} to ${_adcBitsMax}`,
+    });
   }
   return b;
 }
@@ -33,7 +52,7 @@ function checkBits(bits: unknown, context: string): number {
  */
 export function adcLsbVolts(bits: number, fullScaleVolts: number): number {
   const context = "ADC";
-  const n = checkBits(bits, context);
+  const n = _requireAdcBits(bits, context);
   const fs = _requirePositive(fullScaleVolts, "fullScaleVolts", "V", context);
   return fs / 2 ** n;
 }
@@ -53,7 +72,7 @@ export interface _AdcStage {
 /** @internal Builds the stage. */
 export function _adcStage(element: AdcElement, ctx: _SourceContext, context: string): _AdcStage {
   const o = _requireObject(element, "adc", context);
-  const bits = checkBits(o["bits"], context);
+  const bits = _requireAdcBits(o["bits"], context);
   const codes = 2 ** bits;
   const offset = _optionalLimit(o["offsetLsb"], "offsetLsb", "LSB", context);
   const gainErr = o["gainErrorFraction"] === undefined ? 0 : _requireFraction(o["gainErrorFraction"], "gainErrorFraction", context);

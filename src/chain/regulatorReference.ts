@@ -13,11 +13,26 @@ export function _regulatorReferenceSources(
   ctx: _SourceContext,
   context: string,
 ): ChainErrorSource[] {
+  if (element.initialAccuracyFraction !== undefined && element.initialToleranceFraction !== undefined) {
+    throw new HotjunctionRangeError({
+      code: "INVALID_DESIGN",
+      quantity: "initialToleranceFraction",
+      value: element.initialToleranceFraction,
+      context,
+      problem: "is the deprecated name of initialAccuracyFraction, which is given too; give initialAccuracyFraction only",
+    });
+  }
+  // The source keeps its published name "reference.initialTolerance" (sourceDistributions overrides key on it).
   const parts = [
-    ["initialTolerance", "initial tolerance at 25 °C", element.initialToleranceFraction],
-    ["lineRegulation", "line regulation over the supply range", element.lineRegulationFraction],
-    ["loadRegulation", "load regulation over the load range", element.loadRegulationFraction],
-    ["temperatureDrift", "drift over the temperature range", element.temperatureDriftFraction],
+    [
+      "initialTolerance",
+      "initial accuracy at 25 °C",
+      element.initialAccuracyFraction ?? element.initialToleranceFraction,
+      element.initialToleranceFraction === undefined ? "initialAccuracyFraction" : "initialToleranceFraction",
+    ],
+    ["lineRegulation", "line regulation over the supply range", element.lineRegulationFraction, "lineRegulationFraction"],
+    ["loadRegulation", "load regulation over the load range", element.loadRegulationFraction, "loadRegulationFraction"],
+    ["temperatureDrift", "drift over the temperature range", element.temperatureDriftFraction, "temperatureDriftFraction"],
   ] as const;
   const givenParts = parts.filter((p) => p[2] !== undefined);
   if (element.totalToleranceFraction !== undefined) {
@@ -43,8 +58,8 @@ export function _regulatorReferenceSources(
     });
   }
   const out: ChainErrorSource[] = [];
-  for (const [name, description, value] of givenParts) {
-    const limit = _requireFraction(value, `${name}Fraction`, context);
+  for (const [name, description, value, key] of givenParts) {
+    const limit = _requireFraction(value, key, context);
     if (limit > 0) out.push(_source(ctx, `reference.${name}`, "reference", description, "fraction", limit));
   }
   return out;

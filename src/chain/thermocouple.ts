@@ -204,7 +204,10 @@ export function _thermocoupleSources(
 
 /**
  * The thermocouple's EMF at the terminals: E(t_h + ε) − E(t_c), where ε is its deviation from the reference
- * function expressed in °C (within its tolerance).
+ * function expressed in °C. The same function as `emfFromTemperature(type, hotJunctionC + deviationC,
+ * { coldJunctionC })`, bit for bit.
+ * @deprecated use `emfFromTemperature(type, hotJunctionC + deviationC, { coldJunctionC })`; kept for one minor
+ *   version.
  * @param type - thermocouple type letter
  * @param hotJunctionC - hot-junction temperature, °C
  * @param coldJunctionC - terminal (cold-junction) temperature, °C
@@ -213,8 +216,9 @@ export function _thermocoupleSources(
  * @throws HotjunctionRangeError when t_h + ε or t_c leaves the type's range
  * @example
  * ```ts
- * import { thermocoupleEmfMillivolts } from "hotjunction";
+ * import { emfFromTemperature, thermocoupleEmfMillivolts } from "hotjunction";
  * console.log(thermocoupleEmfMillivolts("K", 500, 25).toFixed(3)); // "19.644"
+ * console.log(emfFromTemperature("K", 500, { coldJunctionC: 25 }) === thermocoupleEmfMillivolts("K", 500, 25)); // true
  * ```
  */
 export function thermocoupleEmfMillivolts(
@@ -223,6 +227,5 @@ export function thermocoupleEmfMillivolts(
   coldJunctionC: number,
   deviationC = 0,
 ): number {
-  const ct = _compile(thermocoupleData(type));
-  return _emfFromTemperature(ct, hotJunctionC + deviationC) - _emfFromTemperature(ct, coldJunctionC);
+  return _emfFromTemperature(_compile(thermocoupleData(type)), hotJunctionC + deviationC, { coldJunctionC });
 }

@@ -279,7 +279,13 @@ export interface RegulatorReference extends ReferenceCommon {
    * below (which then add).
    */
   readonly totalToleranceFraction?: number;
-  /** Initial tolerance at 25 °C, ± fraction. */
+  /** Initial accuracy at 25 °C, ± fraction (the same key as the series and shunt references). */
+  readonly initialAccuracyFraction?: number;
+  /**
+   * Initial accuracy at 25 °C, ± fraction.
+   * @deprecated use `initialAccuracyFraction` (the same key as the series and shunt references); kept for one
+   *   minor version. Giving both is an error.
+   */
   readonly initialToleranceFraction?: number;
   /** Line regulation over the supply range, ± fraction. */
   readonly lineRegulationFraction?: number;

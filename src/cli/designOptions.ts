@@ -10,10 +10,11 @@ import type { CliIo } from "./io.js";
 import { marginFailExitCode } from "./cliError.js";
 import { _integerParser } from "./parseArgs.js";
 import { _readInputFile, type InputIdentity } from "./readInput.js";
+import type { PropagationMethod } from "../uncertainty/types.js";
 
 /** Analysis options as parsed. */
 export interface AnalysisOptionValues {
-  readonly method?: "worst-case" | "rss" | "monte-carlo";
+  readonly method?: PropagationMethod;
   readonly trials?: number;
   readonly seed?: number;
   readonly svg?: string;
@@ -21,7 +22,7 @@ export interface AnalysisOptionValues {
 
 /** Resolved analysis settings (command line over design file over defaults). */
 export interface AnalysisSettings {
-  readonly acceptanceMethod: "worst-case" | "rss" | "monte-carlo";
+  readonly acceptanceMethod: PropagationMethod;
   readonly trials: number;
   readonly seed: number;
   readonly coverage: number;

@@ -4,7 +4,7 @@
  * @module
  */
 import { Command, CommanderError } from "commander";
-import { CAUTION_TEXT } from "../report/caution.js";
+import { CAUTION_TEXT } from "../caution.js";
 import { _exitCodeHelp, _oneLine, usageExitCode } from "./cliError.js";
 import type { CliIo } from "./io.js";
 import type { CommandContext } from "./runCli.js";

@@ -25,11 +25,15 @@ function checkReference(reference: DesignReference, path: string, out: DesignRul
   if (reference.kind === "regulator-rail") {
     const parts = [
       reference.totalToleranceFraction,
+      reference.initialAccuracyFraction,
       reference.initialToleranceFraction,
       reference.lineRegulationFraction,
       reference.loadRegulationFraction,
       reference.temperatureDriftFraction,
     ];
+    if (reference.initialAccuracyFraction !== undefined && reference.initialToleranceFraction !== undefined) {
+      out.push({ path: `${path}.initialToleranceFraction`, problem: "is the deprecated name of initialAccuracyFraction, which is given too" });
+    }
     if (parts.every((p) => p === undefined)) {
       out.push({ path, problem: "no tolerance given: add totalToleranceFraction (or its parts)" });
     }

@@ -1,5 +1,6 @@
 /**
- * `hotjunction/design`: design files (zod schema, validation, JSON Schema) and the report renderers.
+ * `hotjunction/design`: design files (zod schema, validation, JSON Schema, design file to chain and trip objects)
+ * and the caution. Adds zod only; the report renderers and charts (with d3-scale, d3-shape) are `hotjunction/report`.
  * @module
  */
 export { designFileSchema, referenceSchema, type DesignFile, type DesignReference } from "./designSchema.js";
@@ -16,18 +17,4 @@ export {
 export { loadDesignFile, type LoadDesignFileOptions } from "./loadDesignFile.js";
 export { designJsonSchema } from "./designJsonSchema.js";
 export { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign } from "./designToObjects.js";
-export { CAUTION_TEXT } from "../report/caution.js";
-export type {
-  ErrorSweep,
-  ErrorSweepRow,
-  ReportFormat,
-  ReportMethodInfo,
-  TripReport,
-  TripReportSetpoint,
-} from "../report/reportTypes.js";
-export { renderTripReport, tripReportFromResult } from "../report/renderTripReport.js";
-export { renderComparisonReport } from "../report/renderComparisonReport.js";
-export { renderSweepReport } from "../report/renderSweepReport.js";
-export { tripBandChartSvg } from "../report/tripBandChart.js";
-export { errorBandChartSvg } from "../report/errorBandChart.js";
-export { firmwareTripReport, type FirmwareTripSetpoint } from "../report/firmwareTripReport.js";
+export { CAUTION_TEXT } from "../caution.js";

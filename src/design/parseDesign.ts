@@ -34,7 +34,7 @@ function describeFound(value: unknown): string {
   if (value === undefined) return "nothing";
   if (value === null) return "null";
   if (typeof value === "string") return JSON.stringify(value.length > 40 ? `${value.slice(0, 37)}...` : value);
-  if (typeof value === "number") return Number.isFinite(value) ? String(value) : String(value);
+  if (typeof value === "number") return String(value);
   if (typeof value === "boolean") return String(value);
   if (Array.isArray(value)) return `an array of ${value.length} item${value.length === 1 ? "" : "s"}`;
   if (typeof value === "object") return "an object";
@@ -121,6 +121,33 @@ export function _describeIssue(issue: z.core.$ZodIssue, input: unknown): { path:
   }
 }
 
+/** Keys refused anywhere in a design, as `parseDesign`'s scanner refuses them in the text. */
+const forbiddenKeys: readonly string[] = ["__proto__", "constructor", "prototype"];
+
+/**
+ * The first own key `__proto__`, `constructor` or `prototype` anywhere in `value` (as `JSON.parse` makes them:
+ * own properties), with the path of the object holding it. Objects seen twice (cycles) are walked once.
+ */
+function findForbiddenKey(value: unknown): { key: string; path: (string | number)[] } | undefined {
+  const seen = new Set<object>();
+  const path: (string | number)[] = [];
+  const walk = (node: unknown): string | undefined => {
+    if (node === null || typeof node !== "object" || seen.has(node)) return undefined;
+    seen.add(node);
+    const keys = Object.keys(node);
+    if (!Array.isArray(node)) for (const key of forbiddenKeys) if (Object.prototype.hasOwnProperty.call(node, key)) return key;
+    for (const key of keys) {
+      path.push(Array.isArray(node) ? Number(key) : key);
+      const found = walk((node as Record<string, unknown>)[key]);
+      if (found !== undefined) return found;
+      path.pop();
+    }
+    return undefined;
+  };
+  const key = walk(value);
+  return key === undefined ? undefined : { key, path };
+}
+
 /**
  * Validates an already-parsed value (e.g. from `JSON.parse`) as a design: schema, then cross-field rules.
  * @param value - anything
@@ -136,6 +163,10 @@ export function _describeIssue(issue: z.core.$ZodIssue, input: unknown): { path:
  */
 export function validateDesign(value: unknown, options: ParseDesignOptions = {}): DesignFile {
   const fileName = options.fileName ?? "design";
+  const forbidden = findForbiddenKey(value);
+  if (forbidden !== undefined) {
+    throw new DesignFileError({ fileName, path: _formatPath(forbidden.path), problem: `key "${forbidden.key}" is not allowed` });
+  }
   const result = designFileSchema.safeParse(value);
   if (!result.success) {
     const issues = [...result.error.issues];

@@ -4,9 +4,8 @@
  * @module
  * @internal
  */
-import { _requireGreaterThan } from "../chain/_common.js";
 import type { MeasurementChain } from "../chain/types.js";
-import { _invalidChoice, _requireFinite, _requireInRange } from "../errors.js";
+import { _invalidChoice, _requireFinite, _requireGreaterThan, _requireInRange } from "../errors.js";
 import type { _PlantFacts } from "./_faultPlant.js";
 import type { FaultDetection, FaultReviewTrip, ReviewFaultsOptions } from "./types.js";
 
@@ -41,7 +40,7 @@ export function _checkDetection(d: unknown, context: string): FaultDetection {
   if (w !== undefined) {
     const [lo, hi, unit] = "lowVolts" in w || "highVolts" in w ? ["lowVolts", "highVolts", "V"] : ["lowC", "highC", "°C"];
     const low = _requireFinite(w[lo], `outOfRangeWindow.${lo}`, unit, ctx);
-    _requireGreaterThan(w[hi], low, `outOfRangeWindow.${hi}`, `outOfRangeWindow.${lo}`, unit, ctx);
+    _requireGreaterThan(w[hi], `outOfRangeWindow.${hi}`, low, unit, ctx, `outOfRangeWindow.${lo} ${low} ${unit}`);
   }
   if (o.openThermocoupleDetection !== undefined && typeof o.openThermocoupleDetection !== "boolean") {
     _invalidChoice("openThermocoupleDetection", o.openThermocoupleDetection, ["true", "false"], ctx);
@@ -73,7 +72,7 @@ export function _reviewSettings(chain: MeasurementChain, trip: FaultReviewTrip, 
   if (typeof trip.name !== "string") _invalidChoice("trip name", trip.name, ["a string"], context);
   context = `fault review (${trip.name})`;
   const maxNormal = _requireFinite(trip.maxNormalOperatingC, "maxNormalOperatingC", "°C", context);
-  const hazard = _requireGreaterThan(trip.hazardLimitC, maxNormal, "hazardLimitC", "maxNormalOperatingC", "°C", context);
+  const hazard = _requireGreaterThan(trip.hazardLimitC, "hazardLimitC", maxNormal, "°C", context, `maxNormalOperatingC ${maxNormal} °C`);
   if (trip.tripTemperatureC !== undefined) _requireFinite(trip.tripTemperatureC, "tripTemperatureC", "°C", context);
   if (typeof options !== "object" || options === null) _invalidChoice("options", options, ["an object"], context);
 
@@ -83,7 +82,7 @@ export function _reviewSettings(chain: MeasurementChain, trip: FaultReviewTrip, 
     options.openCircuitBiasMillivolts === undefined ? 1000 : _requireInRange(options.openCircuitBiasMillivolts, "openCircuitBiasMillivolts", 1e-3, 1e5, "mV", context);
   const rails = options.amplifierRailsVolts ?? { lowVolts: 0, highVolts: 5 };
   const railLow = _requireFinite(rails?.lowVolts, "amplifierRailsVolts.lowVolts", "V", context);
-  const railHigh = _requireGreaterThan(rails?.highVolts, railLow, "amplifierRailsVolts.highVolts", "amplifierRailsVolts.lowVolts", "V", context);
+  const railHigh = _requireGreaterThan(rails?.highVolts, "amplifierRailsVolts.highVolts", railLow, "V", context, `amplifierRailsVolts.lowVolts ${railLow} V`);
   const outputStage = options.outputStage ?? "energize-to-trip";
   if (outputStage !== "energize-to-trip" && outputStage !== "de-energize-to-trip") {
     _invalidChoice("outputStage", outputStage, ["energize-to-trip", "de-energize-to-trip"], context);

@@ -4,7 +4,7 @@
  */
 import type { MeasurementChain } from "../chain/types.js";
 import { _invalidChoice } from "../errors.js";
-import { CAUTION_TEXT } from "../report/caution.js";
+import { CAUTION_TEXT } from "../caution.js";
 import { _countCategories } from "./_faultClassification.js";
 import { reviewFaults } from "./reviewFaults.js";
 import type { FaultReview, FaultReviewReport, FaultReviewTrip, ReviewFaultsOptions } from "./types.js";

@@ -14,6 +14,7 @@ export type {
   FaultCategory,
   FaultCategoryCounts,
   FaultContext,
+  FaultDefinition,
   FaultDetection,
   FaultDetectionMethod,
   FaultEffect,
@@ -41,6 +42,7 @@ export { reviewFaults } from "./reviewFaults.js";
 export { faultsFromJson } from "./faultsFromJson.js";
 export { faultReviewReport, faultReviewScope, reviewChainFaults } from "./faultReviewReport.js";
 export { reviewTripDesignFaults, type FaultReviewTripResult } from "./reviewTripDesignFaults.js";
+export { formatFaultReview, type FaultReviewFormat } from "./formatFaultReview.js";
 export { formatFaultReviewText } from "./formatFaultReviewText.js";
 export { formatFaultReviewMarkdown } from "./formatFaultReviewMarkdown.js";
 export { faultReviewJsonFormat, formatFaultReviewJson } from "./formatFaultReviewJson.js";

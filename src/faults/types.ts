@@ -190,7 +190,7 @@ export type FaultEffect =
  * A single fault: an id, the element it belongs to (a chain element kind, `"board"`, or any name of one's own
  * for a custom element), words, and its effects (applied together).
  */
-export interface Fault {
+export interface FaultDefinition {
   /** Stable id, e.g. `"thermocouple.open"`, `"divider.resistor1.short"`. */
   readonly id: string;
   readonly element: string;
@@ -392,3 +392,6 @@ export interface FaultReviewReport {
   readonly scope: string;
   readonly caution: string;
 }
+
+/** @deprecated use {@link FaultDefinition}; kept for one minor version. */
+export type Fault = FaultDefinition;

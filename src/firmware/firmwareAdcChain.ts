@@ -2,7 +2,8 @@
  * The small, self-contained ADC chain description used by firmware tables.
  * @module
  */
-import { _requireFinite, _requireInRange, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
+import { _requireAdcBits } from "../chain/adc.js";
+import { _requireFinite, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 
 /**
  * An idealised measurement chain for firmware tables: thermocouple EMF, amplified by `gain`, shifted by
@@ -20,7 +21,7 @@ export interface FirmwareAdcChain {
   readonly offsetMillivolts?: number;
   /** ADC reference (full-scale) voltage, V, finite and > 0 (e.g. 2.5). */
   readonly referenceVolts: number;
-  /** ADC resolution, bits, an integer 8 … 31. */
+  /** ADC resolution, bits, an integer 1 … 32 (the one range of the library, `chain/adc.ts`). */
   readonly bits: number;
   /**
    * Fixed cold-junction temperature, °C, within the type's range. When given, the table maps the raw code
@@ -77,17 +78,7 @@ export function _checkAdcChain(chain: unknown, context: string): _CheckedAdcChai
       problem: "is not positive",
     });
   }
-  const bits = _requireInRange(c["bits"], "ADC resolution", 8, 31, "bits", context);
-  if (!Number.isInteger(bits)) {
-    throw new HotjunctionRangeError({
-      code: "OUT_OF_RANGE",
-      quantity: "ADC resolution",
-      value: bits,
-      unit: "bits",
-      context,
-      problem: "is not a whole number",
-    });
-  }
+  const bits = _requireAdcBits(c["bits"], context, "ADC resolution");
   const offsetMillivolts =
     c["offsetMillivolts"] === undefined ? 0 : _requireFinite(c["offsetMillivolts"], "ADC offset", "mV", context);
   const coldJunctionC =

@@ -15,7 +15,7 @@ import { _bottomAxis, _element, _leftAxis, _methodFill, _splitCaution, _svgDocum
  * @returns SVG text
  * @example
  * ```ts
- * import { errorBandChartSvg } from "hotjunction/design";
+ * import { errorBandChartSvg } from "hotjunction/report";
  * const rows = [0, 100].map((t) => ({ temperatureC: t, nominalErrorC: 0, bands: [{ method: "worst-case" as const, errorLowC: -1, errorHighC: 1 }] }));
  * const svg = errorBandChartSvg({ title: "Error sweep", rows, notes: [], methods: { methods: ["worst-case"], coverage: 0.95 } });
  * console.log(svg.includes("true hot-junction temperature, °C")); // true

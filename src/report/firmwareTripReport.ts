@@ -23,10 +23,10 @@ export interface FirmwareTripSetpoint {
  * @param evaluations - `evaluateChain` at each setpoint's temperature, same order
  * @param methods - methods, coverage, trials and seed used (acceptanceMethod decides pass/fail)
  * @param details - lines describing the hardware
- * @returns report data for `renderTripReport` and `tripBandChartSvg`
+ * @returns report data for `formatTripReport` and `tripBandChartSvg`
  * @example
  * ```ts
- * import { firmwareTripReport } from "hotjunction/design";
+ * import { firmwareTripReport } from "hotjunction/report";
  * const report = firmwareTripReport(
  *   [{ name: "plate", tripTemperatureC: 90, maxNormalOperatingC: 80, hazardLimitC: 100 }],
  *   [{ hotJunctionC: 90, reading: { volts: 1 }, indicatedC: 90.2, contributions: [],

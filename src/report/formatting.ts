@@ -4,6 +4,7 @@
  */
 import { CAUTION_TEXT } from "./caution.js";
 import type { ReportMethodInfo } from "./reportTypes.js";
+import type { PropagationMethod } from "../uncertainty/types.js";
 
 /** A number with fixed decimals; `-0.0` shown as `0.0`; non-finite as `n/a`. @internal */
 export function _fixed(value: number, decimals = 1): string {
@@ -63,7 +64,7 @@ export function _csv(rows: readonly (readonly (string | number | boolean | null 
 const methodNames = { "worst-case": "worst case", rss: "RSS (GUM, JCGM 100)", "monte-carlo": "Monte Carlo (JCGM 101)" } as const;
 
 /** A short name of a method for table headers. @internal */
-export function _methodShortName(method: "worst-case" | "rss" | "monte-carlo"): string {
+export function _methodShortName(method: PropagationMethod): string {
   return method === "worst-case" ? "worst case" : method === "rss" ? "RSS" : "Monte Carlo";
 }
 

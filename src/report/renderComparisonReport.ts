@@ -40,8 +40,8 @@ function rows(comparison: ReferenceComparison): string[][] {
  * @returns the report text
  * @example
  * ```ts
- * import { renderComparisonReport } from "hotjunction/design";
- * const text = renderComparisonReport(
+ * import { formatComparisonReport } from "hotjunction/report";
+ * const text = formatComparisonReport(
  *   { acceptanceMethod: "worst-case", options: [], recommended: null, summary: "No options." },
  *   "markdown",
  *   { methods: ["worst-case"], coverage: 0.95 },
@@ -49,7 +49,7 @@ function rows(comparison: ReferenceComparison): string[][] {
  * console.log(text.split("\n")[0]); // "# Reference comparison"
  * ```
  */
-export function renderComparisonReport(
+export function formatComparisonReport(
   comparison: ReferenceComparison,
   format: ReportFormat,
   methods: ReportMethodInfo,
@@ -112,3 +112,6 @@ export function renderComparisonReport(
       ].join("\n");
   }
 }
+
+/** @deprecated use {@link formatComparisonReport} (the one `format…` family of renderers); kept for one minor version. */
+export const renderComparisonReport = formatComparisonReport;

@@ -25,15 +25,15 @@ function rows(sweep: ErrorSweep): string[][] {
  * @returns the report text
  * @example
  * ```ts
- * import { renderSweepReport } from "hotjunction/design";
- * const csv = renderSweepReport(
+ * import { formatSweepReport } from "hotjunction/report";
+ * const csv = formatSweepReport(
  *   { title: "Error sweep", rows: [{ temperatureC: 100, nominalErrorC: 0, bands: [{ method: "worst-case", errorLowC: -2, errorHighC: 2 }] }], notes: [], methods: { methods: ["worst-case"], coverage: 0.95 } },
  *   "csv",
  * );
  * console.log(csv.trim().split("\n").at(-1)); // "100,0,worst-case,-2,2"
  * ```
  */
-export function renderSweepReport(sweep: ErrorSweep, format: ReportFormat): string {
+export function formatSweepReport(sweep: ErrorSweep, format: ReportFormat): string {
   const heading = `${sweep.title}${sweep.designName !== undefined ? `: ${sweep.designName}` : ""}`;
   switch (format) {
     case "json":
@@ -75,3 +75,6 @@ export function renderSweepReport(sweep: ErrorSweep, format: ReportFormat): stri
       ].join("\n");
   }
 }
+
+/** @deprecated use {@link formatSweepReport} (the one `format…` family of renderers); kept for one minor version. */
+export const renderSweepReport = formatSweepReport;

@@ -27,10 +27,10 @@ function formatOhms(ohms: number): string {
  * The report data of a `designTrip` result.
  * @param result - the trip design result
  * @param methods - methods, coverage, trials and seed used
- * @returns the report data for {@link renderTripReport}
+ * @returns the report data for {@link formatTripReport}
  * @example
  * ```ts
- * import { tripReportFromResult } from "hotjunction/design";
+ * import { CAUTION_TEXT, tripReportFromResult } from "hotjunction/report";
  * const report = tripReportFromResult(
  *   {
  *     networks: [],
@@ -40,6 +40,7 @@ function formatOhms(ohms: number): string {
  *     acceptanceMethod: "worst-case",
  *     pass: true,
  *     notes: [],
+ *     caution: CAUTION_TEXT,
  *   },
  *   { methods: ["worst-case"], coverage: 0.95 },
  * );
@@ -204,15 +205,15 @@ function renderCsv(report: TripReport): string {
  * @returns the report text
  * @example
  * ```ts
- * import { renderTripReport } from "hotjunction/design";
- * const text = renderTripReport(
+ * import { formatTripReport } from "hotjunction/report";
+ * const text = formatTripReport(
  *   { title: "Trip design", pass: true, setpoints: [], details: [], notes: [], methods: { methods: ["worst-case"], coverage: 0.95 } },
  *   "text",
  * );
  * console.log(text.includes("do not certify a safety function")); // true
  * ```
  */
-export function renderTripReport(report: TripReport, format: ReportFormat): string {
+export function formatTripReport(report: TripReport, format: ReportFormat): string {
   switch (format) {
     case "markdown":
       return renderMarkdown(report);
@@ -224,3 +225,6 @@ export function renderTripReport(report: TripReport, format: ReportFormat): stri
       return renderText(report);
   }
 }
+
+/** @deprecated use {@link formatTripReport} (the one `format…` family of renderers); kept for one minor version. */
+export const renderTripReport = formatTripReport;

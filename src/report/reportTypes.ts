@@ -4,6 +4,7 @@
  * @module
  */
 import type { TripBand, TripErrorSource, TripServicePoint } from "../trip/types.js";
+import type { PropagationMethod } from "../uncertainty/types.js";
 
 /** Report output formats. `text` is the terminal table (readable without colour). */
 export type ReportFormat = "text" | "json" | "markdown" | "csv";
@@ -11,9 +12,9 @@ export type ReportFormat = "text" | "json" | "markdown" | "csv";
 /** How the numbers were found: methods, coverage, Monte Carlo trials and seed. Printed with every report. */
 export interface ReportMethodInfo {
   /** Methods shown (e.g. `["worst-case", "rss", "monte-carlo"]`). */
-  readonly methods: readonly ("worst-case" | "rss" | "monte-carlo")[];
+  readonly methods: readonly PropagationMethod[];
   /** Method whose band decides pass/fail, when the report judges. */
-  readonly acceptanceMethod?: "worst-case" | "rss" | "monte-carlo";
+  readonly acceptanceMethod?: PropagationMethod;
   /** Coverage probability of the RSS and Monte Carlo intervals (e.g. 0.95). */
   readonly coverage: number;
   /** Monte Carlo trials, when Monte Carlo ran. */
@@ -64,7 +65,7 @@ export interface ErrorSweepRow {
   /** Nominal indicated minus true, °C. */
   readonly nominalErrorC: number;
   /** Error bounds (indicated − true) by method, °C. */
-  readonly bands: readonly { readonly method: "worst-case" | "rss" | "monte-carlo"; readonly errorLowC: number; readonly errorHighC: number }[];
+  readonly bands: readonly { readonly method: PropagationMethod; readonly errorLowC: number; readonly errorHighC: number }[];
 }
 
 /** An error sweep of a chain over temperature. */

@@ -15,7 +15,7 @@ import { _bottomAxis, _element, _methodFill, _splitCaution, _svgDocument, _text,
  * @returns SVG text
  * @example
  * ```ts
- * import { tripBandChartSvg } from "hotjunction/design";
+ * import { tripBandChartSvg } from "hotjunction/report";
  * const svg = tripBandChartSvg({
  *   title: "Trip design", pass: true, details: [], notes: [], methods: { methods: ["worst-case"], coverage: 0.95 },
  *   setpoints: [{ name: "guard", tripTemperatureC: 50, nominalTripC: 50, bands: [{ method: "worst-case", lowC: 48, highC: 52, coverage: 1, standardUncertaintyC: 0 }],

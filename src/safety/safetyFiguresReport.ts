@@ -4,7 +4,7 @@
  * @module
  */
 import { _invalidChoice } from "../errors.js";
-import { CAUTION_TEXT } from "../report/caution.js";
+import { CAUTION_TEXT } from "../caution.js";
 import type { PfdAvgCurve, SafetyFiguresReport, SetpointSafetyFigures, TwoChannelCutout } from "./types.js";
 
 /**

@@ -3,6 +3,7 @@
  * Monte Carlo, and margins to the process limits.
  * @module
  */
+import { CAUTION_TEXT } from "../caution.js";
 import { midRailDivider } from "./midRailDivider.js";
 import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
 import type { DividerElement, MeasurementChain, ReferenceElement } from "../chain/types.js";
@@ -458,7 +459,7 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
   const allNotes = [
     ...notes,
     `Trip bands: worst case over every source's bounds; RSS (GUM, ${coverage * 100} % coverage); Monte Carlo (JCGM 101, ${trials} trials, seed ${seed}). Thermocouple tolerance is taken at each setpoint; the cold junction anywhere in the ambient range ${design.ambient.minC} to ${design.ambient.maxC} °C.`,
-    "These numbers do not certify a safety function: keep an independent, non-resettable thermal cutoff and follow local codes, applicable standards and licensed practice.",
+    CAUTION_TEXT,
   ];
   return {
     ...(design.name !== undefined ? { name: design.name } : {}),
@@ -471,5 +472,6 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     }),
     pass: results.every((r) => r.pass) && realized.realization.problems.length === 0,
     notes: allNotes,
+    caution: CAUTION_TEXT,
   };
 }

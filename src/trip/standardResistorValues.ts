@@ -2,7 +2,7 @@
  * Standard resistor values of a preferred series across decades.
  * @module
  */
-import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _requireChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
 import { preferredSeries, preferredSeriesNames, type PreferredSeriesName } from "../data/preferredSeries.js";
 
 /** Decades searched: 0.1 Ω … 10 GΩ covers every practical threshold divider. */
@@ -10,14 +10,11 @@ const lowestDecadeExponent = -1;
 const highestDecadeExponent = 10;
 
 /**
- * Validates a series name.
+ * Validates a series name (the series list bound to `_requireChoice` of the validator home, errors.ts).
  * @internal
  */
 export function _requireSeries(series: unknown, context?: string): PreferredSeriesName {
-  if (typeof series !== "string" || !(preferredSeriesNames as readonly string[]).includes(series)) {
-    _invalidChoice("resistor series", series, preferredSeriesNames, context);
-  }
-  return series as PreferredSeriesName;
+  return _requireChoice(series, "resistor series", preferredSeriesNames, context);
 }
 
 /**

@@ -27,6 +27,7 @@ import type {
   SourceDistributionOverride,
   ThermocoupleElement,
 } from "../chain/types.js";
+import type { PropagationMethod } from "../uncertainty/types.js";
 
 // ---------------------------------------------------------------------------------------------------------
 // Input
@@ -151,7 +152,7 @@ export interface TripDesign {
 
 /** A temperature band [lowC, highC] by one propagation method. */
 export interface TripBand {
-  readonly method: "worst-case" | "rss" | "monte-carlo";
+  readonly method: PropagationMethod;
   readonly lowC: number;
   readonly highC: number;
   /** Coverage probability (1 for worst case). */
@@ -270,7 +271,7 @@ export interface TripDesignResult {
   /** One entry per setpoint, in input order. */
   readonly setpoints: readonly SetpointTripResult[];
   /** Method whose band decides pass/fail. */
-  readonly acceptanceMethod: "worst-case" | "rss" | "monte-carlo";
+  readonly acceptanceMethod: PropagationMethod;
   /**
    * A mid-rail divider of two equal resistors of the design's tolerance across the same reference (e.g. a
    * comparator's second input or a bias point), with its own error: resistors and the reference at their bounds.
@@ -278,8 +279,10 @@ export interface TripDesignResult {
   readonly midRail: MidRailDivider;
   /** True when every setpoint passes and the reference has no problems. */
   readonly pass: boolean;
-  /** How the network was found and what was assumed, in sentences. */
+  /** How the network was found and what was assumed, in sentences (the last one is the caution). */
   readonly notes: readonly string[];
+  /** The safety caution (`CAUTION_TEXT`): these numbers do not certify a safety function. */
+  readonly caution: string;
 }
 
 /** One setpoint under one reference option, beside the ideal reference. */
@@ -315,7 +318,7 @@ export interface ReferenceComparisonEntry {
 
 /** Result of `compareReferences`. */
 export interface ReferenceComparison {
-  readonly acceptanceMethod: "worst-case" | "rss" | "monte-carlo";
+  readonly acceptanceMethod: PropagationMethod;
   /** Options in input order. */
   readonly options: readonly ReferenceComparisonEntry[];
   /** Name of the cheapest adequate option (by cost; ties and missing costs by input order), or null. */

@@ -3,7 +3,7 @@
  * @module
  * @internal
  */
-import { _requireFinite, HotjunctionRangeError, HotjunctionTypeError, _invalidChoice } from "../errors.js";
+import { _invalidChoice, _requireBeta, _requireFinite, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 import { _requireDegreesOfFreedom, _requireNonNegative } from "./_checks.js";
 import type { Distribution, DistributionKind } from "./types.js";
 
@@ -75,12 +75,12 @@ export function _checkDistribution(value: unknown, name: string): _CheckedDistri
   if (kindCode < 0) _invalidChoice("distribution kind", d["kind"], _distributionKinds, context);
   const kind = _distributionKinds[kindCode] as DistributionKind;
   const mean = _requireFinite(d["mean"], "mean", undefined, context);
-  const u = _requireNonNegative(d["standardUncertainty"], "standard uncertainty", context);
+  const u = _requireNonNegative(d["standardUncertainty"], "standard uncertainty", undefined, context);
   const degreesOfFreedom = _requireDegreesOfFreedom(d["degreesOfFreedom"] ?? undefined, context);
   if (kind === "normal") {
     return { kindCode, kind, mean, standardUncertainty: u, halfWidth: Number.POSITIVE_INFINITY, beta: 0, degreesOfFreedom };
   }
-  const halfWidth = _requireNonNegative(d["halfWidth"], "half-width", context);
+  const halfWidth = _requireNonNegative(d["halfWidth"], "half-width", undefined, context);
   let beta = kind === "rectangular" ? 1 : 0;
   if (kind === "trapezoidal") beta = _requireBeta(d["beta"], context);
   const expected = halfWidth * _standardUncertaintyPerHalfWidth(kind, beta);
@@ -94,15 +94,6 @@ export function _checkDistribution(value: unknown, name: string): _CheckedDistri
     });
   }
   return { kindCode, kind, mean, standardUncertainty: u, halfWidth, beta, degreesOfFreedom };
-}
-
-/** @internal β in [0, 1]. */
-export function _requireBeta(value: unknown, context: string): number {
-  const beta = _requireFinite(value, "beta", undefined, context);
-  if (beta < 0 || beta > 1) {
-    throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "beta", value: beta, min: 0, max: 1, context });
-  }
-  return beta;
 }
 
 /**

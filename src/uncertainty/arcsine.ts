@@ -28,6 +28,6 @@ export function arcsine(options: ArcsineOptions): Distribution {
   const context = "arcsine distribution";
   _requireOptionsObject(options, context, false);
   const center = _requireFinite(options.center, "center", undefined, context);
-  const halfWidth = _requireNonNegative(options.halfWidth, "half-width", context);
+  const halfWidth = _requireNonNegative(options.halfWidth, "half-width", undefined, context);
   return _makeDistribution("arcsine", center, halfWidth * (1 / Math.SQRT2), halfWidth, undefined, options.degreesOfFreedom, context);
 }

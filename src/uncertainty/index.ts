@@ -7,12 +7,14 @@ export type {
   Contribution,
   Distribution,
   DistributionKind,
+  InputDistribution,
   Model,
   PropagateOptions,
   PropagationMethod,
+  PropagationModel,
   PropagationResult,
 } from "./types.js";
-export { normal, type NormalOptions } from "./normal.js";
+export { normal, normalDistribution, type NormalOptions } from "./normal.js";
 export { rectangular, type RectangularOptions } from "./rectangular.js";
 export { triangular, type TriangularOptions } from "./triangular.js";
 export { trapezoidal, type TrapezoidalOptions } from "./trapezoidal.js";

@@ -1,10 +1,10 @@
 import { _requireFinite } from "../errors.js";
 import { _requireNonNegative, _requireOneOf, _requireOptionsObject, _requirePositive } from "./_checks.js";
 import { _makeDistribution } from "./_distribution.js";
-import type { Distribution } from "./types.js";
+import type { InputDistribution } from "./types.js";
 
 /**
- * Options of {@link normal}: either a standard deviation, or an expanded uncertainty with its coverage factor.
+ * Options of {@link normalDistribution}: either a standard deviation, or an expanded uncertainty with its coverage factor.
  */
 export type NormalOptions =
   | {
@@ -36,12 +36,12 @@ export type NormalOptions =
  *   negative standard deviation or expanded uncertainty, a coverage factor ≤ 0, or degrees of freedom ≤ 0
  * @example
  * ```ts
- * import { normal } from "hotjunction";
- * console.log(normal({ mean: 10, expandedUncertainty: 0.5, coverageFactor: 2 }).standardUncertainty); // 0.25
- * console.log("halfWidth" in normal({ mean: 0, standardDeviation: 1 })); // false
+ * import { normalDistribution } from "hotjunction";
+ * console.log(normalDistribution({ mean: 10, expandedUncertainty: 0.5, coverageFactor: 2 }).standardUncertainty); // 0.25
+ * console.log("halfWidth" in normalDistribution({ mean: 0, standardDeviation: 1 })); // false
  * ```
  */
-export function normal(options: NormalOptions): Distribution {
+export function normalDistribution(options: NormalOptions): InputDistribution {
   const context = "normal distribution";
   _requireOptionsObject(options, context, false);
   const form = _requireOneOf(options, [["standardDeviation"], ["expandedUncertainty", "coverageFactor"]], context);
@@ -49,11 +49,14 @@ export function normal(options: NormalOptions): Distribution {
   const mean = _requireFinite(o["mean"], "mean", undefined, context);
   let u: number;
   if (form === 0) {
-    u = _requireNonNegative(o["standardDeviation"], "standard deviation", context);
+    u = _requireNonNegative(o["standardDeviation"], "standard deviation", undefined, context);
   } else {
-    const expanded = _requireNonNegative(o["expandedUncertainty"], "expanded uncertainty", context);
-    const k = _requirePositive(o["coverageFactor"], "coverage factor", context);
+    const expanded = _requireNonNegative(o["expandedUncertainty"], "expanded uncertainty", undefined, context);
+    const k = _requirePositive(o["coverageFactor"], "coverage factor", undefined, context);
     u = expanded / k;
   }
   return _makeDistribution("normal", mean, u, undefined, undefined, o["degreesOfFreedom"], context);
 }
+
+/** @deprecated use {@link normalDistribution} (a name that says what it is); kept for one minor version. */
+export const normal = normalDistribution;

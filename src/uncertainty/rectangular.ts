@@ -45,7 +45,7 @@ export function rectangular(options: RectangularOptions): Distribution {
   let halfWidth: number;
   if (form === 0) {
     center = _requireFinite(o["center"], "center", undefined, context);
-    halfWidth = _requireNonNegative(o["halfWidth"], "half-width", context);
+    halfWidth = _requireNonNegative(o["halfWidth"], "half-width", undefined, context);
   } else {
     const lower = _requireFinite(o["lower"], "lower bound", undefined, context);
     const upper = _requireFinite(o["upper"], "upper bound", undefined, context);

@@ -1,6 +1,6 @@
-import { _requireFinite } from "../errors.js";
+import { _requireBeta, _requireFinite } from "../errors.js";
 import { _requireNonNegative, _requireOptionsObject } from "./_checks.js";
-import { _makeDistribution, _requireBeta } from "./_distribution.js";
+import { _makeDistribution } from "./_distribution.js";
 import type { Distribution } from "./types.js";
 
 /** Options of {@link trapezoidal}. */
@@ -32,7 +32,7 @@ export function trapezoidal(options: TrapezoidalOptions): Distribution {
   const context = "trapezoidal distribution";
   _requireOptionsObject(options, context, false);
   const center = _requireFinite(options.center, "center", undefined, context);
-  const halfWidth = _requireNonNegative(options.halfWidth, "half-width", context);
+  const halfWidth = _requireNonNegative(options.halfWidth, "half-width", undefined, context);
   const beta = _requireBeta(options.beta, context);
   const u = halfWidth * Math.sqrt((1 + beta * beta) / 6);
   return _makeDistribution("trapezoidal", center, u, halfWidth, beta, options.degreesOfFreedom, context);

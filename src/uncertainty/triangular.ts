@@ -28,6 +28,6 @@ export function triangular(options: TriangularOptions): Distribution {
   const context = "triangular distribution";
   _requireOptionsObject(options, context, false);
   const center = _requireFinite(options.center, "center", undefined, context);
-  const halfWidth = _requireNonNegative(options.halfWidth, "half-width", context);
+  const halfWidth = _requireNonNegative(options.halfWidth, "half-width", undefined, context);
   return _makeDistribution("triangular", center, halfWidth * (1 / Math.sqrt(6)), halfWidth, undefined, options.degreesOfFreedom, context);
 }

@@ -7,8 +7,8 @@
 /** Kinds of input distribution (JCGM 100 4.3.7–4.3.9; JCGM 101 6.4). */
 export type DistributionKind = "normal" | "rectangular" | "triangular" | "trapezoidal" | "arcsine";
 
-/** An input distribution: a plain, JSON-serializable object made by a factory (`normal`, `rectangular`, ...). */
-export interface Distribution {
+/** An input distribution: a plain, JSON-serializable object made by a factory (`normalDistribution`, `rectangular`, ...). */
+export interface InputDistribution {
   readonly kind: DistributionKind;
   /** Expectation, in the input's own unit. */
   readonly mean: number;
@@ -25,8 +25,14 @@ export interface Distribution {
 /** Propagation methods. */
 export type PropagationMethod = "worst-case" | "rss" | "monte-carlo";
 
-/** A model: maps a record of input values (by input name) to one output value. */
-export type Model<Name extends string = string> = (inputs: Readonly<Record<Name, number>>) => number;
+/** A propagation model: maps a record of input values (by input name) to one output value. */
+export type PropagationModel<Name extends string = string> = (inputs: Readonly<Record<Name, number>>) => number;
+
+/** @deprecated use {@link PropagationModel}; kept for one minor version. */
+export type Model<Name extends string = string> = PropagationModel<Name>;
+
+/** @deprecated use {@link InputDistribution}; kept for one minor version. */
+export type Distribution = InputDistribution;
 
 /** Options of `propagate`. */
 export interface PropagateOptions<Name extends string = string> {

@@ -67,7 +67,7 @@ describe("amplifier", () => {
 
 describe("evaluateChain", () => {
   it("nominal reading, and bounds by worst case, RSS and Monte Carlo that nest as expected", () => {
-    const e = evaluateChain(kiln, 1000, { methods: ["worst-case", "rss", "monte-carlo"], trials: 20000, seed: 3 });
+    const e = evaluateChain(kiln, 1000, { methods: ["worst-case", "rss", "monte-carlo"], monteCarloTrials: 20000, seed: 3 });
     expect(e.hotJunctionC).toBe(1000);
     expect(e.indicatedC).toBeCloseTo(1000, 1);
     const [w, r, m] = e.bounds;

@@ -88,6 +88,23 @@ describe("parseDesign", () => {
     );
   });
 
+  it("validateDesign refuses __proto__, constructor and prototype keys as parseDesign does: typed error, key and path", () => {
+    for (const key of ["__proto__", "constructor", "prototype"]) {
+      // JSON.parse makes "__proto__" an own key, the way a caller's parsed value reaches validateDesign.
+      const hostile = JSON.parse(`{"ambient": {"minC": 0, "maxC": 40, "${key}": {"polluted": true}}}`) as unknown;
+      const viaValue = messageOf(() => validateDesign({ ...example, ambient: (hostile as { ambient: unknown }).ambient }));
+      const viaText = messageOf(() => parseDesign(JSON.stringify({ ...example, ambient: { minC: 0, maxC: 40 } }).replace('"maxC":40', `"maxC":40,"${key}":{"polluted":true}`)));
+      expect(viaValue).toBe(`design: at ambient: key "${key}" is not allowed`);
+      expect(viaText).toMatch(new RegExp(`^design: not valid JSON at line 1, column \\d+ \\(at ambient\\): key "${key}" is not allowed$`));
+      const deep = JSON.parse(`{"setpoints": [{"name": "a"}, {"${key}": 1}]}`) as unknown;
+      expect(messageOf(() => validateDesign(deep))).toBe(`design: at setpoints[1]: key "${key}" is not allowed`);
+    }
+    expect(({} as Record<string, unknown>)["polluted"]).toBeUndefined();
+    const cyclic: Record<string, unknown> = { ...example };
+    cyclic["self"] = cyclic;
+    expect(messageOf(() => validateDesign(cyclic))).toMatch(/unknown key "self"/);
+  });
+
   it("refuses __proto__, constructor and prototype keys and duplicate keys anywhere", () => {
     for (const key of ["__proto__", "constructor", "prototype"]) {
       expect(messageOf(() => parseDesign(`{"ambient": {"${key}": {"polluted": true}}}`))).toBe(

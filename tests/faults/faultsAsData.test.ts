@@ -130,13 +130,13 @@ describe("precise errors", () => {
     // Regression: `!(hazard > maxNormal)` was checked with an inclusive range, so 250 = 250 went through.
     const equal = () => reviewFaults(ovenChain, { ...ovenTrip, hazardLimitC: ovenTrip.maxNormalOperatingC });
     expect(codeOf(equal)).toBe("OUT_OF_RANGE");
-    expect(equal).toThrow(/hazardLimitC 250 °C is not above maxNormalOperatingC 250 °C; valid range: more than 250 °C/);
+    expect(equal).toThrow(/hazardLimitC 250 °C is not greater than maxNormalOperatingC 250 °C; valid range 250 to Infinity °C/);
     // The same strict check for equal amplifier rails and an empty out-of-range window.
     expect(() => reviewFaults(ovenChain, ovenTrip, { amplifierRailsVolts: { lowVolts: 5, highVolts: 5 } })).toThrow(
-      /amplifierRailsVolts.highVolts 5 V is not above amplifierRailsVolts.lowVolts 5 V/,
+      /amplifierRailsVolts.highVolts 5 V is not greater than amplifierRailsVolts.lowVolts 5 V/,
     );
     expect(() => reviewFaults(ovenChain, ovenTrip, { detection: { outOfRangeWindow: { lowC: 0, highC: 0 } } })).toThrow(
-      /outOfRangeWindow.highC 0 °C is not above outOfRangeWindow.lowC 0 °C/,
+      /outOfRangeWindow.highC 0 °C is not greater than outOfRangeWindow.lowC 0 °C/,
     );
     // Just above is accepted: a limit 0.1 °C over the normal one is a valid (if tight) review.
     expect(reviewFaults(ovenChain, { ...ovenTrip, hazardLimitC: ovenTrip.maxNormalOperatingC + 0.1 }).hazardLimitC).toBe(250.1);

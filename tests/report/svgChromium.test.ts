@@ -4,8 +4,8 @@ import { existsSync } from "node:fs";
 import { inflateSync } from "node:zlib";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { chromium, type Browser } from "playwright-core";
-import { errorBandChartSvg, tripBandChartSvg } from "../../src/design/index.js";
-import type { ErrorSweep, TripReport } from "../../src/design/index.js";
+import { errorBandChartSvg, tripBandChartSvg } from "../../src/report/index.js";
+import type { ErrorSweep, TripReport } from "../../src/report/index.js";
 
 const chromiumPath = "/usr/bin/chromium";
 const available = existsSync(chromiumPath);

@@ -8,7 +8,7 @@ import { evaluateChain } from "../../chain/evaluateChain.js";
 import type { DesignFile } from "../../design/designSchema.js";
 import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { firmwareTripReport } from "../../report/firmwareTripReport.js";
-import { renderTripReport, tripReportFromResult } from "../../report/renderTripReport.js";
+import { formatTripReport, tripReportFromResult } from "../../report/renderTripReport.js";
 import type { TripReport } from "../../report/reportTypes.js";
 import { tripBandChartSvg } from "../../report/tripBandChart.js";
 import { designTrip } from "../../trip/designTrip.js";
@@ -103,7 +103,7 @@ export function registerCheckCommand(program: Command, context: CommandContext):
     const { design, input } = await _loadDesign(context.io, path);
     const report = _tripReportOfDesign(context.io, design, _analysisSettings(design, options));
     const named = design.name !== undefined ? { ...report, designName: design.name } : report;
-    const text = renderTripReport(named, _chosenFormat(options));
+    const text = formatTripReport(named, _chosenFormat(options));
     const extras = plan.extras.length > 0 ? [tripBandChartSvg(named)] : [];
     _emitOutputs(context.io, plan, options, text, extras, [input]);
     if (!named.pass && options.reportOnly !== true) {

@@ -5,7 +5,7 @@
  */
 import type { Command } from "commander";
 import { referenceOptionFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
-import { renderComparisonReport } from "../../report/renderComparisonReport.js";
+import { formatComparisonReport } from "../../report/renderComparisonReport.js";
 import { compareReferences } from "../../trip/compareReferences.js";
 import { _startProgress } from "../progress.js";
 import { CliError, marginFailExitCode } from "../cliError.js";
@@ -60,7 +60,7 @@ export function registerCompareCommand(program: Command, context: CommandContext
     } finally {
       progress.stop();
     }
-    _emitOutputs(context.io, plan, options, renderComparisonReport(comparison, _chosenFormat(options), _methodInfo(settings), design.name), [], [input]);
+    _emitOutputs(context.io, plan, options, formatComparisonReport(comparison, _chosenFormat(options), _methodInfo(settings), design.name), [], [input]);
     // The design as drawn is its own reference (the first option); the alternatives failing is what a comparison shows.
     const own = comparison.options[0];
     if (own !== undefined && own.verdict !== "adequate" && options.reportOnly !== true) {

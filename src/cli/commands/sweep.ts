@@ -7,7 +7,7 @@ import type { Command } from "commander";
 import { evaluateChain } from "../../chain/evaluateChain.js";
 import { measurementChainFromDesign } from "../../design/designToObjects.js";
 import { errorBandChartSvg } from "../../report/errorBandChart.js";
-import { renderSweepReport } from "../../report/renderSweepReport.js";
+import { formatSweepReport } from "../../report/renderSweepReport.js";
 import type { ErrorSweep } from "../../report/reportTypes.js";
 import { CliError } from "../cliError.js";
 import {
@@ -121,7 +121,7 @@ export function registerSweepCommand(program: Command, context: CommandContext):
       methods: methodsWithoutAcceptance,
     };
     const extras = plan.extras.length > 0 ? [errorBandChartSvg(sweep)] : [];
-    _emitOutputs(context.io, plan, options, renderSweepReport(sweep, format), extras, [input]);
+    _emitOutputs(context.io, plan, options, formatSweepReport(sweep, format), extras, [input]);
   });
   return command;
 }

@@ -1,0 +1,21 @@
+/**
+ * hotjunction/report: the report renderers (text, Markdown, CSV, JSON) and the SVG charts. This entry adds the
+ * chart scales (d3-scale, d3-shape); the core (`hotjunction`) and the design-file entry (`hotjunction/design`)
+ * stay free of them.
+ * @module
+ */
+export { CAUTION_TEXT } from "../caution.js";
+export type {
+  ErrorSweep,
+  ErrorSweepRow,
+  ReportFormat,
+  ReportMethodInfo,
+  TripReport,
+  TripReportSetpoint,
+} from "./reportTypes.js";
+export { formatTripReport, renderTripReport, tripReportFromResult } from "./renderTripReport.js";
+export { formatComparisonReport, renderComparisonReport } from "./renderComparisonReport.js";
+export { formatSweepReport, renderSweepReport } from "./renderSweepReport.js";
+export { tripBandChartSvg } from "./tripBandChart.js";
+export { errorBandChartSvg } from "./errorBandChart.js";
+export { firmwareTripReport, type FirmwareTripSetpoint } from "./firmwareTripReport.js";

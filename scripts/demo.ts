@@ -24,6 +24,11 @@ const runs: string[][] = [
   ["faults", "examples/ceramic-kiln-cutout.json"],
   ["faults", "examples/reflow-oven-trip.json"],
   ["faults", "examples/heated-enclosure-adc.json"],
+  // The wire matters here: a long extension cable along a warm furnace shell, a terminal block warmer than the
+  // cold-junction sensor, bias and detection currents through a filtered loop, leakage and ageing.
+  ["check", "examples/heat-treat-furnace-wire.json", "--svg", "out/heat-treat-furnace-trip-bands.svg", "--force", "--report-only"],
+  ["sweep", "examples/heat-treat-furnace-wire.json", "--from", "600", "--to", "900", "--step", "50", "--svg", "out/heat-treat-furnace-error-sweep.svg", "--force"],
+  ["faults", "examples/heat-treat-furnace-wire.json"],
 ];
 
 let failures = 0;

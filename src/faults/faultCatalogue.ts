@@ -4,7 +4,7 @@
  */
 import type { MeasurementChain } from "../chain/types.js";
 import { _compile } from "../its90/compiled.js";
-import { _emfFromTemperature } from "../its90/engine.js";
+import { _emfFromTemperature, _seebeckCoefficient } from "../its90/engine.js";
 import { thermocoupleData } from "../its90/resolveType.js";
 import { _invalidChoice, _requireFinite, _requireInRange, HotjunctionRangeError } from "../errors.js";
 import { detectionOffsetMicrovolts, loopResistanceOhms } from "../chain/wire/loopResistance.js";
@@ -46,6 +46,7 @@ const mitigationText = {
   cableReversed: "polarized, colour-coded cable and connectors checked at commissioning; a range check that flags readings below the cold junction",
   connector: "connectors with captive, polarized contacts; open-thermocouple detection (a pull-up detection current trips an open loop)",
   leakage: "a probe whose insulation is rated at the working temperature; a proof test against a reference probe; a second, independent sensor",
+  recalibration: "a recalibration schedule with a hard stop (the service life in the design); a proof test against a reference probe",
   detection: "supervise the detection current (a periodic open-loop test); keep margin to the hazard limit for its offset",
 } as const;
 
@@ -158,6 +159,22 @@ function wireFaults(chain: MeasurementChain): Fault[] {
       description: "probe insulation collapsed at temperature to the loop's own resistance (R_shunt = R_loop): the EMF at the input halves",
       effects: [{ kind: "scale-node", node: "thermocoupleEmf", factor: 0.5 }],
       mitigation: mitigationText.leakage,
+    });
+  }
+  const ageing = wire.ageing;
+  const drift = ageing === undefined ? 0 : (ageing.totalDriftC ?? ((ageing.driftCPer1000Hours ?? 0) * ageing.serviceHours) / 1000);
+  if (ageing !== undefined && drift > 0) {
+    // A missed recalibration: the drift runs on to twice its total, in its direction (the low side, which
+    // delays a trip, for a symmetric drift), as an EMF through S at the temperature the drift is stated at.
+    const ct = _compile(thermocoupleData(chain.thermocouple.type));
+    const sign = ageing.direction === "up" ? 1 : -1;
+    const mv = (sign * 2 * drift * _seebeckCoefficient(ct, ageing.statedAtC)) / 1000;
+    add({
+      id: "probe.recalibrationMissed",
+      element: "probe",
+      description: `probe not recalibrated after ${ageing.serviceHours} h: its drift runs on to ${sign > 0 ? "+" : "−"}${+(2 * drift).toPrecision(6)} °C (${(mv * 1000).toPrecision(4)} µV at ${ageing.statedAtC} °C)`,
+      effects: [{ kind: "offset-node", node: "thermocoupleEmf", millivolts: mv }],
+      mitigation: mitigationText.recalibration,
     });
   }
   const loop = wire.loop;

@@ -2,7 +2,14 @@ import { defineConfig } from "tsup";
 
 export default defineConfig([
   {
-    entry: { index: "src/index.ts", exact: "src/exact.ts", design: "src/design/index.ts", report: "src/report/index.ts" },
+    entry: {
+      index: "src/index.ts",
+      exact: "src/exact.ts",
+      design: "src/design/index.ts",
+      report: "src/report/index.ts",
+      // Worker entry of propagateParallel: must sit beside the chunk that starts it (dist/monteCarloWorker.js).
+      monteCarloWorker: "src/uncertainty/_monteCarloWorker.ts",
+    },
     format: ["esm", "cjs"],
     dts: { compilerOptions: { ignoreDeprecations: "6.0" } },
     sourcemap: false,

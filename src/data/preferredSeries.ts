@@ -10,35 +10,36 @@
  * value by value against published reproductions of IEC 60063 and against the rule above (tests/trip).
  * @module
  */
+import { _deepFreeze } from "./deepFreeze.js";
 
 /** Names of the preferred-number series. */
 export type PreferredSeriesName = "E6" | "E12" | "E24" | "E48" | "E96" | "E192";
 
 /** Names of the series, from coarsest to finest. */
-export const preferredSeriesNames: readonly PreferredSeriesName[] = ["E6", "E12", "E24", "E48", "E96", "E192"];
+export const preferredSeriesNames: readonly PreferredSeriesName[] = /* @__PURE__ */ _deepFreeze(["E6", "E12", "E24", "E48", "E96", "E192"]);
 
 /** E6 significands (IEC 60063). */
-export const seriesE6: readonly number[] = [1.0, 1.5, 2.2, 3.3, 4.7, 6.8];
+export const seriesE6: readonly number[] = /* @__PURE__ */ _deepFreeze([1.0, 1.5, 2.2, 3.3, 4.7, 6.8]);
 
 /** E12 significands (IEC 60063). */
-export const seriesE12: readonly number[] = [1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2];
+export const seriesE12: readonly number[] = /* @__PURE__ */ _deepFreeze([1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2]);
 
 /** E24 significands (IEC 60063), with the eight historical values 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 8.2. */
-export const seriesE24: readonly number[] = [
+export const seriesE24: readonly number[] = /* @__PURE__ */ _deepFreeze([
   1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0,
   3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1,
-];
+]);
 
 /** E48 significands (IEC 60063): round(10^(i/48), 2). */
-export const seriesE48: readonly number[] = [
+export const seriesE48: readonly number[] = /* @__PURE__ */ _deepFreeze([
   1.00, 1.05, 1.10, 1.15, 1.21, 1.27, 1.33, 1.40, 1.47, 1.54, 1.62, 1.69,
   1.78, 1.87, 1.96, 2.05, 2.15, 2.26, 2.37, 2.49, 2.61, 2.74, 2.87, 3.01,
   3.16, 3.32, 3.48, 3.65, 3.83, 4.02, 4.22, 4.42, 4.64, 4.87, 5.11, 5.36,
   5.62, 5.90, 6.19, 6.49, 6.81, 7.15, 7.50, 7.87, 8.25, 8.66, 9.09, 9.53,
-];
+]);
 
 /** E96 significands (IEC 60063): round(10^(i/96), 2). */
-export const seriesE96: readonly number[] = [
+export const seriesE96: readonly number[] = /* @__PURE__ */ _deepFreeze([
   1.00, 1.02, 1.05, 1.07, 1.10, 1.13, 1.15, 1.18, 1.21, 1.24, 1.27, 1.30,
   1.33, 1.37, 1.40, 1.43, 1.47, 1.50, 1.54, 1.58, 1.62, 1.65, 1.69, 1.74,
   1.78, 1.82, 1.87, 1.91, 1.96, 2.00, 2.05, 2.10, 2.15, 2.21, 2.26, 2.32,
@@ -47,10 +48,10 @@ export const seriesE96: readonly number[] = [
   4.22, 4.32, 4.42, 4.53, 4.64, 4.75, 4.87, 4.99, 5.11, 5.23, 5.36, 5.49,
   5.62, 5.76, 5.90, 6.04, 6.19, 6.34, 6.49, 6.65, 6.81, 6.98, 7.15, 7.32,
   7.50, 7.68, 7.87, 8.06, 8.25, 8.45, 8.66, 8.87, 9.09, 9.31, 9.53, 9.76,
-];
+]);
 
 /** E192 significands (IEC 60063): round(10^(i/192), 2), except index 185 = 9.20. */
-export const seriesE192: readonly number[] = [
+export const seriesE192: readonly number[] = /* @__PURE__ */ _deepFreeze([
   1.00, 1.01, 1.02, 1.04, 1.05, 1.06, 1.07, 1.09, 1.10, 1.11, 1.13, 1.14,
   1.15, 1.17, 1.18, 1.20, 1.21, 1.23, 1.24, 1.26, 1.27, 1.29, 1.30, 1.32,
   1.33, 1.35, 1.37, 1.38, 1.40, 1.42, 1.43, 1.45, 1.47, 1.49, 1.50, 1.52,
@@ -67,28 +68,28 @@ export const seriesE192: readonly number[] = [
   6.49, 6.57, 6.65, 6.73, 6.81, 6.90, 6.98, 7.06, 7.15, 7.23, 7.32, 7.41,
   7.50, 7.59, 7.68, 7.77, 7.87, 7.96, 8.06, 8.16, 8.25, 8.35, 8.45, 8.56,
   8.66, 8.76, 8.87, 8.98, 9.09, 9.20, 9.31, 9.42, 9.53, 9.65, 9.76, 9.88,
-];
+]);
 
 /** Significands of one decade of each series, by name. */
-export const preferredSeries: Readonly<Record<PreferredSeriesName, readonly number[]>> = {
+export const preferredSeries: Readonly<Record<PreferredSeriesName, readonly number[]>> = /* @__PURE__ */ _deepFreeze({
   E6: seriesE6,
   E12: seriesE12,
   E24: seriesE24,
   E48: seriesE48,
   E96: seriesE96,
   E192: seriesE192,
-};
+});
 
 /**
  * Customary tolerances of each series as fractions (IEC 60063 and common trade use): the first entry is the
  * usual one. E24 5 % (also 2 %, 1 %), E48 2 %, E96 1 %, E192 0.5 % and tighter; E12 10 % and E6 20 %
  * (from memory).
  */
-export const customaryToleranceFractions: Readonly<Record<PreferredSeriesName, readonly number[]>> = {
+export const customaryToleranceFractions: Readonly<Record<PreferredSeriesName, readonly number[]>> = /* @__PURE__ */ _deepFreeze({
   E6: [0.2],
   E12: [0.1],
   E24: [0.05, 0.02, 0.01],
   E48: [0.02],
   E96: [0.01],
   E192: [0.005, 0.0025, 0.001],
-};
+});

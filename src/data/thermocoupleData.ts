@@ -30,7 +30,7 @@ export interface ExponentialTerm {
 }
 
 /** One sub-range of the published approximate inverse t = Σ dᵢ·Eⁱ (°C, mV) with its stated error band. */
-export interface InverseSubrange {
+export interface ApproximateInverseRange {
   readonly minEmfMillivolts: number;
   readonly maxEmfMillivolts: number;
   readonly minC: number;
@@ -42,6 +42,12 @@ export interface InverseSubrange {
   /** d₀…dₙ in °C/mVⁱ. */
   readonly coefficients: readonly number[];
 }
+
+/**
+ * One sub-range of the published approximate inverse.
+ * @deprecated Use {@link ApproximateInverseRange} (the same type); this name goes in the next minor version.
+ */
+export type InverseSubrange = ApproximateInverseRange;
 
 /** All reference data of one thermocouple type. */
 export interface ThermocoupleData {
@@ -61,5 +67,5 @@ export interface ApproximateInverseData {
   readonly type: ThermocoupleType;
   /** Where the numbers come from. */
   readonly source: string;
-  readonly ranges: readonly InverseSubrange[];
+  readonly ranges: readonly ApproximateInverseRange[];
 }

@@ -7,6 +7,7 @@
  * `fractionOfReading·|t|`. Bands of one grade are contiguous and in ascending temperature order.
  * @module
  */
+import { _deepFreeze } from "./deepFreeze.js";
 import type { ThermocoupleType } from "./thermocoupleData.js";
 
 /** One temperature band of a tolerance statement. */
@@ -60,7 +61,7 @@ const largerOf = (minC: number, maxC: number, toleranceC: number, fractionOfRead
  * published copies of the standard's table. Types R and S class 2 start at 0 °C (some reproductions
  * start it at −40 °C; the narrower range is kept).
  */
-export const iecToleranceClasses: ToleranceTable<1 | 2 | 3> = {
+export const iecToleranceClasses: ToleranceTable<1 | 2 | 3> = /* @__PURE__ */ _deepFreeze({
   source: "IEC 60584-1:2013, table of tolerance classes",
   grades: {
     1: {
@@ -90,13 +91,13 @@ export const iecToleranceClasses: ToleranceTable<1 | 2 | 3> = {
       B: [fixed(600, 800, 4.0), proportional(800, 1700, 0.005)],
     },
   },
-};
+});
 
 /**
  * ASTM E230 Table 1 initial tolerances (larger of a fixed value and a percentage of the temperature in
  * °C). Below 0 °C only types T, E and K have standard limits; special limits are not established there.
  */
-export const astmE230Tolerances: ToleranceTable<"standard" | "special"> = {
+export const astmE230Tolerances: ToleranceTable<"standard" | "special"> = /* @__PURE__ */ _deepFreeze({
   source: "ASTM E230, Table 1 (initial tolerances)",
   grades: {
     standard: {
@@ -120,4 +121,4 @@ export const astmE230Tolerances: ToleranceTable<"standard" | "special"> = {
       B: [largerOf(870, 1700, 0, 0.0025)],
     },
   },
-};
+});

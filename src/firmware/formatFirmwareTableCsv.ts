@@ -2,7 +2,7 @@
  * CSV emitter for firmware tables.
  * @module
  */
-import type { FirmwareTable } from "./buildFirmwareTable.js";
+import type { FirmwareTable } from "./types.js";
 
 const UNIT_WORD: Record<string, string> = { "µV": "microvolts", "°C": "celsius", code: "codes" };
 

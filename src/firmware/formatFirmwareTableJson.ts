@@ -2,7 +2,7 @@
  * JSON emitter for firmware tables.
  * @module
  */
-import type { FirmwareTable } from "./buildFirmwareTable.js";
+import type { FirmwareTable } from "./types.js";
 import { firmwareTableCaution } from "./firmwareCaution.js";
 
 /** Value of the `format` key of emitted JSON tables. */

@@ -3,8 +3,10 @@
  * @module
  */
 import { _requireFinite, HotjunctionRangeError } from "../errors.js";
-import type { FirmwareTable } from "./buildFirmwareTable.js";
-import { _numberTypeInfo, type _NumberTypeInfo, type FirmwareNumberType } from "./firmwareNumberType.js";
+import { _numberTypeInfo, type _NumberTypeInfo } from "./firmwareNumberType.js";
+import type { _InterpolationData, FirmwareTable } from "./types.js";
+
+export type { _InterpolationData } from "./types.js";
 
 /**
  * Integer division rounded to nearest, halves away from zero, as the C routine computes it:
@@ -19,16 +21,6 @@ export function _roundedDivide(num: number, den: number): number {
   if (q * den > a) q -= 1;
   else if ((q + 1) * den <= a) q += 1;
   return num < 0 ? -q : q;
-}
-
-/** The table data the interpolation needs. @internal */
-export interface _InterpolationData {
-  readonly inputs: ArrayLike<number>;
-  readonly outputs: ArrayLike<number>;
-  /** log2 of the uniform spacing (stored input units), or null for a searched table. */
-  readonly spacingLog2: number | null;
-  readonly inputNumberType: FirmwareNumberType;
-  readonly outputNumberType: FirmwareNumberType;
 }
 
 /** Segment index holding x (x within the table's input range). @internal */

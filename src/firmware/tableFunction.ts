@@ -17,6 +17,7 @@ import {
 } from "../its90/compiled.js";
 import { _exactInverse, _exactInverseTables } from "../its90/exactInverse.js";
 import { thermocoupleData } from "../its90/resolveType.js";
+import { _emfEvaluationBound, _encloseEmfDerivative, _magnitude, type _Interval } from "./curvatureEnclosure.js";
 import { _checkAdcChain, type _CheckedAdcChain } from "./firmwareAdcChain.js";
 
 /**
@@ -68,8 +69,18 @@ export interface _TableFunction {
   inDomain(input: number): boolean;
   /** Exact output, natural units. */
   value(input: number): number;
-  /** d²(output)/d(input)², natural units. */
+  /** d²(output)/d(input)², natural units (a point value: for tests and sampling). */
   curvature(input: number): number;
+  /**
+   * Upper bound on |d²(output)/d(input)²| over natural inputs [a, b] (an interval enclosure with outward
+   * rounding, sub-range by sub-range; seams are bounded separately). Infinity where it cannot be bounded
+   * (the Seebeck coefficient's enclosure reaches 0 on an inverse segment).
+   */
+  curvatureBound(a: number, b: number): number;
+  /** Bound on |value(x) − exact(x)| over natural inputs [a, b], output natural units (see `referenceErrorProof`). */
+  referenceError(a: number, b: number): number;
+  /** How `curvatureBound` is obtained, in words, for the table's metadata. */
+  readonly curvatureMethod: string;
   /** Hot-junction (or cold-junction sensor) temperature belonging to an input, °C. */
   temperatureAt(input: number): number;
   /**
@@ -84,6 +95,11 @@ export interface _Seam {
   readonly input: number;
   readonly slopeJump: number;
   readonly valueJump: number;
+}
+
+/** x rounded up by a few ulps (a product or quotient of enclosed magnitudes, rounded outward). */
+function up3(x: number): number {
+  return x * (1 + 8 * U) + 2 ** -1000;
 }
 
 function seebeckMicrovolts(ct: CompiledType, temperatureC: number): number {
@@ -117,6 +133,39 @@ function temperatureSeams(ct: CompiledType): { temperatureC: number; emfJump: nu
   }
   return seams;
 }
+
+const U = 2 ** -53;
+
+/** Sub-range pieces of a temperature interval: [index, clipped interval] for every sub-range it meets. */
+function pieces(ct: CompiledType, t: _Interval): [number, _Interval][] {
+  const out: [number, _Interval][] = [];
+  ct.subranges.forEach((sub, i) => {
+    const lo = Math.max(t[0], sub.minC);
+    const hi = Math.min(t[1], sub.maxC);
+    if (lo <= hi) out.push([i, [lo, hi]]);
+  });
+  return out;
+}
+
+/** max over the pieces of |E''| and the evaluation bound, and min of E' (mV, °C). */
+function encloseOver(ct: CompiledType, t: _Interval): { maxSecond: number; minFirst: number; maxFirst: number; evaluation: number } {
+  let maxSecond = 0;
+  let minFirst = Infinity;
+  let maxFirst = 0;
+  let evaluation = 0;
+  for (const [i, piece] of pieces(ct, t)) {
+    maxSecond = Math.max(maxSecond, _magnitude(_encloseEmfDerivative(ct, i, 2, piece)));
+    const first = _encloseEmfDerivative(ct, i, 1, piece);
+    minFirst = Math.min(minFirst, first[0]);
+    maxFirst = Math.max(maxFirst, _magnitude(first));
+    evaluation = Math.max(evaluation, _emfEvaluationBound(ct, i, piece));
+  }
+  return { maxSecond, minFirst, maxFirst, evaluation };
+}
+
+/** Fit tolerance of the exact inverse's interpolants (`its90/exactInverse.ts`), °C and mV. */
+const INVERSE_FIT_C = 2e-11;
+const INVERSE_FIT_MV = 2e-12;
 
 /** @internal */
 export function _tableFunction(
@@ -167,6 +216,25 @@ export function _tableFunction(
       emfAtZeroInput = 0;
     }
     const emfOf = (x: number): number => emfPerInput * x + emfAtZeroInput;
+    // Reference error of t̂(E(x)): the EMF's own rounding (2 ulps of |E| and |E₀|) and the forward
+    // evaluation error, both over the smallest Seebeck coefficient; the Newton roots the interpolant passes
+    // through carry the forward error once more; the interpolant's fit (tested at 9 points per segment, not
+    // proven: its90/exactInverse.ts) and 20 ulps of t for the Horner step in s.
+    const inverseReferenceError = (a: number, b: number): number => {
+      const t = inverseTemperatures(a, b);
+      const e = encloseOver(ct, t);
+      if (!(e.minFirst > 0)) return Infinity;
+      const emfMagnitude = Math.max(Math.abs(emfOf(a)), Math.abs(emfOf(b))) + Math.abs(emfAtZeroInput);
+      const emfError = 2 * e.evaluation + 4 * U * emfMagnitude;
+      const fit = Math.max(INVERSE_FIT_C, INVERSE_FIT_MV / e.minFirst);
+      return up3(emfError / e.minFirst + fit + 20 * U * Math.max(Math.abs(t[0]), Math.abs(t[1])));
+    };
+    // Temperatures of a segment of inputs, widened by 1e-7 °C (the reference error is far below it).
+    const inverseTemperatures = (a: number, b: number): _Interval => {
+      const ta = _exactInverse(ct, tables, emfOf(a));
+      const tb = _exactInverse(ct, tables, emfOf(b));
+      return [Math.max(ct.monotonicFromC, Math.min(ta, tb) - 1e-7), Math.min(ct.maxC, Math.max(ta, tb) + 1e-7)];
+    };
     const kx = emfPerInput * 1000; // µV per input unit
     const seams: _Seam[] = temperatureSeams(ct)
       .filter((m) => m.temperatureC > ct.monotonicFromC)
@@ -197,6 +265,22 @@ export function _tableFunction(
         return (-kx * kx * seebeckSlope(ct, t)) / (s * s * s);
       },
       temperatureAt: (x) => _exactInverse(ct, tables, emfOf(x)),
+      curvatureMethod: "interval enclosure of t''(E) = -E''(t)/E'(t)^3 over each segment's temperatures",
+      curvatureBound: (a, b) => {
+        // In 4 parts: the maximum of |E''| and the minimum of E' then come from nearby temperatures.
+        const t = inverseTemperatures(a, b);
+        const k = emfPerInput * emfPerInput;
+        let bound = 0;
+        for (let p = 0; p < 4; p++) {
+          const lo = p === 0 ? t[0] : t[0] + ((t[1] - t[0]) * p) / 4;
+          const hi = p === 3 ? t[1] : t[0] + ((t[1] - t[0]) * (p + 1)) / 4;
+          const e = encloseOver(ct, [lo, hi]);
+          if (!(e.minFirst > 0)) return Infinity;
+          bound = Math.max(bound, up3((k * e.maxSecond) / (e.minFirst * e.minFirst * e.minFirst)));
+        }
+        return bound;
+      },
+      referenceError: (a, b) => inverseReferenceError(a, b),
     };
   }
   // Temperature input: output = outputPerMillivolt · (E(t) − subtracted) + outputAtZero.
@@ -231,5 +315,16 @@ export function _tableFunction(
     value: (t) => outputPerMillivolt * (_emf(ct, t) - subtracted) + outputAtZero,
     curvature: (t) => (outputPerMillivolt / 1000) * seebeckSlope(ct, t),
     temperatureAt: (t) => t,
+    curvatureMethod: "interval enclosure of E''(t) over each segment",
+    curvatureBound: (a, b) => up3(Math.abs(outputPerMillivolt) * encloseOver(ct, [a, b]).maxSecond),
+    // The forward evaluation error plus the input's own rounding (x/scale: 1 ulp of t times the slope),
+    // then 4 ulps of the affine map to the output.
+    referenceError: (a, b) => {
+      const e = encloseOver(ct, [a, b]);
+      const t = Math.max(Math.abs(a), Math.abs(b));
+      const emf = Math.max(Math.abs(_emf(ct, a)), Math.abs(_emf(ct, b))) * 1.01 + e.maxFirst * (b - a);
+      const outputMagnitude = Math.abs(outputPerMillivolt) * (emf + Math.abs(subtracted)) + Math.abs(outputAtZero);
+      return up3(Math.abs(outputPerMillivolt) * (e.evaluation + 2 * U * t * e.maxFirst) + 8 * U * outputMagnitude);
+    },
   };
 }

@@ -5,7 +5,7 @@
  * @module
  */
 import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
-import type { ExactInverse } from "./exactInverse.js";
+import { HotjunctionRangeError } from "../errors.js";
 
 /** @internal */
 export interface CompiledSubrange {
@@ -17,6 +17,28 @@ export interface CompiledSubrange {
   readonly hasExp: boolean;
 }
 
+/** One forward sub-range's share of the exact inverse. @internal */
+export interface InversePiece {
+  readonly range: number;
+  /** EMF at the piece's lower end (start of the segment grid), mV. */
+  readonly emfStart: number;
+  readonly perMillivolt: number;
+  readonly count: number;
+  readonly lowC: number;
+  readonly highC: number;
+  /** count × 8 monomial coefficients in the local variable s ∈ [−1, 1]. */
+  readonly coefficients: Float64Array;
+  /** 1 where the segment is solved by Newton instead of the interpolant. */
+  readonly newton: Uint8Array;
+  /** Temperatures of the count + 1 segment boundaries, °C. */
+  readonly edgesC: Float64Array;
+}
+
+/** Exact-inverse tables of one type (built by `exactInverse.ts`; declared here so the two modules do not import each other). @internal */
+export interface ExactInverse {
+  readonly pieces: readonly InversePiece[];
+}
+
 /** @internal */
 export interface CompiledType {
   readonly data: ThermocoupleData;
@@ -25,9 +47,11 @@ export interface CompiledType {
   readonly minC: number;
   readonly maxC: number;
   readonly subranges: readonly CompiledSubrange[];
-  /** Second sub-range's lower end (the first seam), or +∞. Fast path for the common two-range types. */
+  /** Type K's exponential term a0·exp(a1·(t − a2)²): a0 in mV (0 for the other types). */
   readonly a0: number;
+  /** a1 in 1/°C² (0 for types without the term). */
   readonly a1: number;
+  /** a2 in °C (0 for types without the term). */
   readonly a2: number;
   /** E at minC and maxC, mV. */
   readonly emfAtMinC: number;
@@ -101,30 +125,76 @@ export function _slope(ct: CompiledType, temperatureC: number): number {
 }
 
 /**
- * Solves E_index(t) = target on [lowC, highC] (E increasing there) by safeguarded Newton
- * (Newton steps kept inside a shrinking bracket, bisection when a step leaves it). Plain Horner suffices:
- * a compensated (double-double) evaluation was tried and changed no result of the 40-digit checks.
+ * E_index(t) − target by a compensated Horner scheme (error-free transformations: Knuth's TwoSum, Dekker's
+ * TwoProduct by splitting; Graillat, Langlois & Louvet, "Compensated Horner scheme", 2005, from memory): the
+ * residual is as accurate as if computed in twice the working precision (type K's exponential term is added in
+ * plain arithmetic). @internal
+ */
+export function _residual(ct: CompiledType, index: number, t: number, target: number): number {
+  const sub = ct.subranges[index] as CompiledSubrange;
+  const c = sub.c;
+  const split = 134217729 * t;
+  const th = split - (split - t);
+  const tl = t - th;
+  let s = c[c.length - 1] as number;
+  let e = 0;
+  for (let i = c.length - 2; i >= 0; i--) {
+    const p = s * t;
+    const q = 134217729 * s;
+    const sh = q - (q - s);
+    const sl = s - sh;
+    const ci = c[i] as number;
+    const sum = p + ci;
+    const bb = sum - p;
+    e = e * t + (sh * th - p + sh * tl + sl * th + sl * tl + (p - (sum - bb) + (ci - bb)));
+    s = sum;
+  }
+  if (sub.hasExp) {
+    const d = t - ct.a2;
+    e += ct.a0 * Math.exp(ct.a1 * d * d);
+  }
+  return s - target + e;
+}
+
+/**
+ * Solves E_index(t) = target on [lowC, highC] (E increasing there) by safeguarded Newton on compensated
+ * residuals (Newton steps kept inside a shrinking bracket, bisection when a step leaves it), then walks by
+ * ulps to the float nearest the root: a non-decreasing function of the target (the residual's error, of
+ * order u²·Σ|cᵢ||t|ⁱ, is far below the distance between the roots of adjacent targets).
  * @internal
  */
 export function _solveInSubrange(ct: CompiledType, index: number, target: number, lowC: number, highC: number): number {
   let lo = lowC;
   let hi = highC;
-  const fLo = _emfInSubrange(ct, index, lo) - target;
-  const fHi = _emfInSubrange(ct, index, hi) - target;
+  const fLo = _residual(ct, index, lo, target);
+  const fHi = _residual(ct, index, hi, target);
   if (fLo >= 0) return lo;
   if (fHi <= 0) return hi;
   let t = lo + (hi - lo) * (-fLo / (fHi - fLo));
+  let f = 0;
   for (let iteration = 0; iteration < 100; iteration++) {
-    const f = _emfInSubrange(ct, index, t) - target;
+    f = _residual(ct, index, t, target);
     if (f === 0) return t;
     if (f < 0) lo = t;
     else hi = t;
-    const slope = _slopeInSubrange(ct, index, t);
-    let next = t - f / slope;
+    let next = t - f / _slopeInSubrange(ct, index, t);
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
     const step = Math.abs(next - t);
     t = next;
     if (step <= 2e-16 * (1 + Math.abs(t))) break;
+  }
+  // The ulp walk: step towards the root until the residual changes sign, keep the float of smaller |residual|.
+  f = _residual(ct, index, t, target);
+  const direction = f < 0 ? 1 : -1;
+  for (let k = 0; k < 64 && f !== 0; k++) {
+    // |t|·2⁻⁵³ rounds to the neighbouring float, except up from a power of two (a tie): then |t|·2⁻⁵².
+    let next = t + direction * Math.max(Math.abs(t) * 2 ** -53, 2 ** -1074);
+    if (next === t) next = t + direction * Math.abs(t) * 2 ** -52;
+    if (next < lowC || next > highC) break;
+    const g = _residual(ct, index, next, target);
+    if (g < 0 !== f < 0 || g === 0) return Math.abs(g) < Math.abs(f) ? next : t;
+    t = next;
+    f = g;
   }
   return t;
 }
@@ -141,7 +211,38 @@ export function _compile(data: ThermocoupleData): CompiledType {
   return ct;
 }
 
+/**
+ * Checks a data object once, when it is compiled: contiguous increasing sub-ranges with finite ends and
+ * at least one coefficient each, all finite, a range within the sub-ranges (a widened range would extrapolate a
+ * polynomial far outside its sub-range) and a finite exponential term. Kept compact: it is in every bundle.
+ */
+function validate(data: ThermocoupleData): void {
+  const subs = data.forward;
+  const e = data.exponential;
+  let end: number = subs[0]?.minC as number;
+  let ok = data.minC >= end;
+  for (const f of subs) {
+    const c = f?.coefficients;
+    // c[0] makes an empty list fail; every() rejects non-numbers and non-finite values.
+    ok &&= f?.minC === end && f.maxC > end && Array.isArray(c) && [f.maxC, c[0], ...c].every(Number.isFinite);
+    end = f?.maxC;
+  }
+  if (!(ok && data.maxC <= end && data.maxC > data.minC && (!e || [e.a0, e.a1, e.a2].every(Number.isFinite)))) {
+    throw new HotjunctionRangeError({
+      code: "INVALID_OPTION",
+      quantity: "thermocouple data range",
+      value: [data.minC, data.maxC],
+      min: subs[0]?.minC,
+      max: end,
+      unit: "°C",
+      problem: "is not valid reference data",
+    });
+  }
+}
+
 function build(data: ThermocoupleData): CompiledType {
+  validate(data);
+  const exponential = data.exponential ?? { a0: 0, a1: 0, a2: 0 };
   const subranges: CompiledSubrange[] = data.forward.map((f) => ({
     minC: f.minC,
     maxC: f.maxC,
@@ -155,9 +256,9 @@ function build(data: ThermocoupleData): CompiledType {
     minC: data.minC,
     maxC: data.maxC,
     subranges,
-    a0: data.exponential ? data.exponential.a0 : 0,
-    a1: data.exponential ? data.exponential.a1 : 0,
-    a2: data.exponential ? data.exponential.a2 : 0,
+    a0: exponential.a0,
+    a1: exponential.a1,
+    a2: exponential.a2,
     emfAtMinC: 0,
     emfAtMaxC: 0,
     lowestEmf: 0,

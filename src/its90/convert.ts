@@ -5,17 +5,13 @@
  */
 import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
 import { _compile, type CompiledSubrange, type CompiledType } from "./compiled.js";
+import { _approximateInverseRanges, _approximateTemperatureFromEmf, type ApproximateInverseRange } from "./approximateInverse.js";
+import { _coefficients10, _emfFromTemperatureArray, _temperatureFromEmfArray } from "./bulk.js";
 import {
-  _approximateInverseRanges,
-  _approximateTemperatureFromEmf,
-  _coefficients10,
   _emfFromTemperature,
-  _emfFromTemperatureArray,
   _seebeckCoefficient,
   _temperatureFromEmf,
-  _temperatureFromEmfArray,
   _temperatureRange,
-  type ApproximateInverseRange,
   type ColdJunctionOptions,
   type ThermocoupleRange,
 } from "./engine.js";

@@ -14,35 +14,25 @@
  * Where two sub-ranges meet, the forward function steps by up to 7.5e-8 mV (type J at 760 °C). The
  * inverse selects the sub-range by comparing the EMF with E of the upper sub-range at the seam (the
  * forward convention gives a shared end point to the upper sub-range), and clamps the result to the
- * selected sub-range, so the inverse is monotone and continuous to within step/S(t) at every seam.
+ * selected sub-range, so the inverse is monotone and continuous to within step/S(t) at every seam. Every
+ * result is clamped to its segment's edge temperatures, so the interpolants of neighbouring segments (which
+ * meet only to within the fit tolerance) never step backwards: non-decreasing across every edge.
  * @internal
  * @module
  */
-import { _emfInSubrange, _horner, _solveInSubrange, type CompiledSubrange, type CompiledType } from "./compiled.js";
+import {
+  _emfInSubrange,
+  _horner,
+  _solveInSubrange,
+  type CompiledSubrange,
+  type CompiledType,
+  type ExactInverse,
+  type InversePiece,
+} from "./compiled.js";
+
+export type { ExactInverse, InversePiece } from "./compiled.js";
 
 const NODE_COUNT = 8;
-
-/** @internal */
-export interface InversePiece {
-  readonly range: number;
-  /** EMF at the piece's lower end (start of the segment grid), mV. */
-  readonly emfStart: number;
-  readonly perMillivolt: number;
-  readonly count: number;
-  readonly lowC: number;
-  readonly highC: number;
-  /** count × 8 monomial coefficients in the local variable s ∈ [−1, 1]. */
-  readonly coefficients: Float64Array;
-  /** 1 where the segment is solved by Newton instead of the interpolant. */
-  readonly newton: Uint8Array;
-  /** Temperatures of the count + 1 segment boundaries, °C. */
-  readonly edgesC: Float64Array;
-}
-
-/** @internal */
-export interface ExactInverse {
-  readonly pieces: readonly InversePiece[];
-}
 
 /** Fit tolerance: 2e-11 °C, or 2e-12 mV / S(t) where S is small (both well inside the promised bound). */
 const FIT_TOLERANCE_C = 2e-11;
@@ -79,8 +69,8 @@ function buildPiece(ct: CompiledType, range: number, lowC: number, highC: number
     }
     // Check the interpolant at the Chebyshev extrema (ends included) against the roots there; a segment
     // that misses (S nearly vanishing) is solved by Newton at run time instead.
-    const slopeMvPerC = segHi > segLo ? width / (segHi - segLo) : 0;
-    const allowed = Math.max(FIT_TOLERANCE_C, FIT_TOLERANCE_MV / slopeMvPerC);
+    // 2e-12 mV over the segment's mean slope width / (segHi − segLo).
+    const allowed = Math.max(FIT_TOLERANCE_C, (FIT_TOLERANCE_MV * (segHi - segLo)) / width);
     for (let j = 0; j <= NODE_COUNT; j++) {
       const s = Math.cos((Math.PI * j) / NODE_COUNT);
       const root = _solveInSubrange(ct, range, mid + half * s, segLo, segHi);
@@ -148,7 +138,10 @@ export function _exactInverse(ct: CompiledType, inv: ExactInverse, emfMillivolts
                 ((c[o + 3] as number) +
                   s * ((c[o + 4] as number) + s * ((c[o + 5] as number) + s * ((c[o + 6] as number) + s * (c[o + 7] as number)))))));
   }
-  if (t < piece.lowC) return piece.lowC;
-  if (t > piece.highC) return piece.highC;
-  return t;
+  // Clamped to the segment's edge temperatures (increasing roots of the forward polynomial), so that the
+  // inverse never steps backwards across a segment edge, where two interpolants meet; within the piece's
+  // sub-range by the same token.
+  const lo = piece.edgesC[k] as number;
+  const hi = piece.edgesC[k + 1] as number;
+  return t < lo ? lo : t > hi ? hi : t;
 }

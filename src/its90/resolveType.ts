@@ -12,10 +12,11 @@ import { typeN, typeNApproximateInverse } from "../data/typeN.js";
 import { typeR, typeRApproximateInverse } from "../data/typeR.js";
 import { typeS, typeSApproximateInverse } from "../data/typeS.js";
 import { typeT, typeTApproximateInverse } from "../data/typeT.js";
+import { _deepFreeze } from "../data/deepFreeze.js";
 import { HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 
 /** The eight letter-designated types of IEC 60584-1 / NIST Monograph 175, in alphabetical order. */
-export const thermocoupleTypes: readonly ThermocoupleType[] = ["B", "E", "J", "K", "N", "R", "S", "T"];
+export const thermocoupleTypes: readonly ThermocoupleType[] = /* @__PURE__ */ _deepFreeze(["B", "E", "J", "K", "N", "R", "S", "T"]);
 
 /**
  * Returns the reference data of a type given by letter (or passes a data object through).

@@ -17,6 +17,28 @@ export const _distributionKinds: readonly DistributionKind[] = [
 ];
 
 /**
+ * @internal Largest |mean|, standard uncertainty and half-width accepted (1e150): the squares and sums of
+ * squares the methods form (variances, RSS sums, sample variances) then stay far inside the float64 range.
+ */
+export const _maxMagnitude = 1e150;
+
+/** @internal Throws OUT_OF_RANGE unless |x| ≤ {@link _maxMagnitude}. */
+export function _requireMagnitude(x: number, quantity: string, context: string): number {
+  if (!(Math.abs(x) <= _maxMagnitude)) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity,
+      value: x,
+      min: -_maxMagnitude,
+      max: _maxMagnitude,
+      context,
+      problem: "is too large in magnitude (its square would leave the float64 range)",
+    });
+  }
+  return x;
+}
+
+/**
  * @internal Builds the plain result object. `degreesOfFreedom` is stored only when finite, so the object
  * survives `JSON.stringify` (Infinity would become `null`).
  */
@@ -30,6 +52,9 @@ export function _makeDistribution(
   context: string,
 ): Distribution {
   const dof = _requireDegreesOfFreedom(degreesOfFreedom, context);
+  _requireMagnitude(mean, "mean", context);
+  if (halfWidth !== undefined) _requireMagnitude(halfWidth, "half-width", context);
+  _requireMagnitude(standardUncertainty, "standard uncertainty", context);
   const result: {
     kind: DistributionKind;
     mean: number;
@@ -74,13 +99,13 @@ export function _checkDistribution(value: unknown, name: string): _CheckedDistri
   const kindCode = _distributionKinds.indexOf(d["kind"] as DistributionKind);
   if (kindCode < 0) _invalidChoice("distribution kind", d["kind"], _distributionKinds, context);
   const kind = _distributionKinds[kindCode] as DistributionKind;
-  const mean = _requireFinite(d["mean"], "mean", undefined, context);
-  const u = _requireNonNegative(d["standardUncertainty"], "standard uncertainty", undefined, context);
+  const mean = _requireMagnitude(_requireFinite(d["mean"], "mean", undefined, context), "mean", context);
+  const u = _requireMagnitude(_requireNonNegative(d["standardUncertainty"], "standard uncertainty", undefined, context), "standard uncertainty", context);
   const degreesOfFreedom = _requireDegreesOfFreedom(d["degreesOfFreedom"] ?? undefined, context);
   if (kind === "normal") {
     return { kindCode, kind, mean, standardUncertainty: u, halfWidth: Number.POSITIVE_INFINITY, beta: 0, degreesOfFreedom };
   }
-  const halfWidth = _requireNonNegative(d["halfWidth"], "half-width", undefined, context);
+  const halfWidth = _requireMagnitude(_requireNonNegative(d["halfWidth"], "half-width", undefined, context), "half-width", context);
   let beta = kind === "rectangular" ? 1 : 0;
   if (kind === "trapezoidal") beta = _requireBeta(d["beta"], context);
   const expected = halfWidth * _standardUncertaintyPerHalfWidth(kind, beta);

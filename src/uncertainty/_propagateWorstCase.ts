@@ -3,7 +3,7 @@
  * @module
  * @internal
  */
-import { HotjunctionRangeError } from "../errors.js";
+import { HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 import { _normalQuantile } from "./normalQuantile.js";
 import { _contributionsRecord, _linearise } from "./_propagateRss.js";
 import { _meansOf, type _ModelEvaluator, type _PreparedInputs } from "./_prepare.js";
@@ -107,12 +107,125 @@ function coordinateSearch(
   return value;
 }
 
+/** @internal An interval extension of the model over a box (the caller's `modelEnclosure`). */
+export type _Enclosure = (box: Readonly<Record<string, readonly [number, number]>>) => readonly [number, number];
+
+/** Enclosure calls per side (maximum, minimum) of the branch and bound. */
+const maxEnclosureCalls = 4096;
+
+/**
+ * @internal Branch and bound over the input box with an interval extension: for each side, boxes are kept in
+ * order of their bound; the best box is split in half along its widest input (relative to the input's range),
+ * the model is evaluated at each half's midpoint (raising the attained extreme when it is better), and halves
+ * whose bound cannot beat the attained extreme are dropped. The enclosure is the attained extreme joined with
+ * the bounds of the boxes left: it holds whenever the extension does, however early the search stops. Updates
+ * `attained` and `points` (canonical order) in place.
+ */
+export function _branchAndBound(
+  enclosure: _Enclosure,
+  names: readonly string[],
+  lower: Float64Array,
+  upper: Float64Array,
+  evaluator: _ModelEvaluator,
+  attained: { low: { value: number }; high: { value: number } },
+  points: Float64Array[],
+): { low: number; high: number; calls: number; complete: boolean } {
+  const n = names.length;
+  let calls = 0;
+  const bound = (lo: Float64Array, hi: Float64Array): readonly [number, number] => {
+    const box: Record<string, readonly [number, number]> = {};
+    for (let i = 0; i < n; i++) box[names[i] as string] = [lo[i] as number, hi[i] as number];
+    calls++;
+    const r: unknown = enclosure(box);
+    if (!Array.isArray(r) || r.length !== 2 || typeof r[0] !== "number" || typeof r[1] !== "number" || !Number.isFinite(r[0]) || !Number.isFinite(r[1]) || r[0] > r[1]) {
+      throw new HotjunctionTypeError({
+        code: "INVALID_OPTION",
+        quantity: "modelEnclosure result",
+        value: r,
+        context: "propagate worst-case",
+        problem: "is not a [low, high] pair of finite numbers with low ≤ high",
+      });
+    }
+    return r as unknown as readonly [number, number];
+  };
+  const root = bound(lower, upper);
+  const result = { low: root[0], high: root[1], calls: 0, complete: true };
+  const mid = new Float64Array(n);
+  for (let s = 0; s < 2; s++) {
+    const sign = s === 0 ? 1 : -1; // 0: maximum, 1: minimum
+    const best = () => (s === 0 ? attained.high.value : -attained.low.value);
+    const rootBound = sign * (s === 0 ? root[1] : root[0]);
+    if (rootBound < best()) {
+      throw new HotjunctionRangeError({
+        code: "INVALID_OPTION",
+        quantity: "modelEnclosure",
+        value: s === 0 ? root[1] : root[0],
+        context: "propagate worst-case",
+        problem: `does not contain the attained ${s === 0 ? "maximum" : "minimum"} ${s === 0 ? attained.high.value : attained.low.value} (it is not an enclosure of the model)`,
+      });
+    }
+    let boxes: { lo: Float64Array; hi: Float64Array; ub: number }[] = [{ lo: Float64Array.from(lower), hi: Float64Array.from(upper), ub: rootBound }];
+    const tolerance = 1e-12 * (Math.abs(root[1] - root[0]) + Math.abs(best()));
+    const budget = calls + maxEnclosureCalls;
+    while (boxes.length > 0 && calls < budget) {
+      let top = 0;
+      for (let b = 1; b < boxes.length; b++) if ((boxes[b]?.ub as number) > (boxes[top]?.ub as number)) top = b;
+      const box = boxes[top] as { lo: Float64Array; hi: Float64Array; ub: number };
+      if (box.ub <= best() + tolerance) {
+        boxes = [];
+        break;
+      }
+      boxes.splice(top, 1);
+      let split = 0;
+      let widest = -1;
+      for (let i = 0; i < n; i++) {
+        const range = (upper[i] as number) - (lower[i] as number);
+        const w = range > 0 ? ((box.hi[i] as number) - (box.lo[i] as number)) / range : 0;
+        if (w > widest) {
+          widest = w;
+          split = i;
+        }
+      }
+      if (!(widest > 0)) {
+        // a point box: its bound stays
+        boxes.push(box);
+        break;
+      }
+      const cut = ((box.lo[split] as number) + (box.hi[split] as number)) / 2;
+      for (const half of [0, 1]) {
+        const lo = Float64Array.from(box.lo);
+        const hi = Float64Array.from(box.hi);
+        if (half === 0) hi[split] = cut;
+        else lo[split] = cut;
+        for (let i = 0; i < n; i++) mid[i] = ((lo[i] as number) + (hi[i] as number)) / 2;
+        const v = sign * evaluator.evaluate(mid);
+        if (v > best()) {
+          if (s === 0) attained.high.value = v;
+          else attained.low.value = -v;
+          points[s]?.set(mid);
+        }
+        const e = bound(lo, hi);
+        const ub = sign * (s === 0 ? e[1] : e[0]);
+        if (ub > best() + tolerance) boxes.push({ lo, hi, ub });
+      }
+    }
+    let remaining = best();
+    for (const b of boxes) remaining = Math.max(remaining, b.ub);
+    if (boxes.length > 0) result.complete = false;
+    if (s === 0) result.high = Math.min(root[1], remaining);
+    else result.low = Math.max(root[0], -remaining);
+  }
+  result.calls = calls;
+  return result;
+}
+
 /** @internal */
 export function _propagateWorstCase(
   prepared: _PreparedInputs,
   evaluator: _ModelEvaluator,
   correlation: Float64Array | undefined,
   normalBoundCoverage: number | undefined,
+  enclosure?: _Enclosure,
 ): PropagationResult {
   const { distributions, names } = prepared;
   const n = distributions.length;
@@ -176,13 +289,16 @@ export function _propagateWorstCase(
     strategy = `${n} inputs are too many for all 2^${n} corners, so the corner of per-input (one-at-a-time) extremes was used, then`;
   }
   const extremes = [Number.NEGATIVE_INFINITY, Number.POSITIVE_INFINITY];
+  const points = [Float64Array.from(means), Float64Array.from(means)]; // [argmax, argmin]
   for (let s = 0; s < 2; s++) {
     const sign = s === 0 ? 1 : -1;
     for (const start of [bestCorner[s] as Float64Array, means]) {
       x.set(start);
       const v = sign * coordinateSearch(evaluator, x, lower, upper, sign);
-      if (s === 0) extremes[0] = Math.max(extremes[0] as number, v);
-      else extremes[1] = Math.min(extremes[1] as number, v);
+      if (s === 0 ? v > (extremes[0] as number) : v < (extremes[1] as number)) {
+        extremes[s] = v;
+        points[s]?.set(x);
+      }
     }
   }
   // One-at-a-time swings for the contributions.
@@ -198,13 +314,46 @@ export function _propagateWorstCase(
     swingSquares += (high - low) ** 2;
   }
   const lin = _linearise(prepared, evaluator, correlation);
-  const low = extremes[1] as number;
-  const high = extremes[0] as number;
+  let low = extremes[1] as number;
+  let high = extremes[0] as number;
+  // The estimate is a point of the box too.
+  if (lin.estimate < low) {
+    low = lin.estimate;
+    points[1]?.set(means);
+  }
+  if (lin.estimate > high) {
+    high = lin.estimate;
+    points[0]?.set(means);
+  }
+  const pointRecord = (values: Float64Array): Record<string, number> => {
+    const record: Record<string, number> = {};
+    prepared.callerOrder.forEach((name) => (record[name] = values[names.indexOf(name)] as number));
+    return record;
+  };
+  const attained = {
+    low: { value: low, at: pointRecord(points[1] as Float64Array) },
+    high: { value: high, at: pointRecord(points[0] as Float64Array) },
+  };
+  let bracketNote = "; no enclosure was computed (the model is a black box: give modelEnclosure for a proven bracket)";
+  let enclosureFields: { enclosure: readonly [number, number]; enclosureGap: readonly [number, number] } | undefined;
+  if (enclosure !== undefined) {
+    const bound = _branchAndBound(enclosure, names, lower, upper, evaluator, attained, points);
+    low = attained.low.value;
+    high = attained.high.value;
+    attained.low.at = pointRecord(points[1] as Float64Array);
+    attained.high.at = pointRecord(points[0] as Float64Array);
+    enclosureFields = { enclosure: [bound.low, bound.high], enclosureGap: [low - bound.low, bound.high - high] };
+    bracketNote =
+      `; enclosure [${bound.low}, ${bound.high}] by branch and bound over the input box with the given interval extension ` +
+      `(${bound.calls} enclosure calls${bound.complete ? ", gap closed" : ", budget reached"}), gap ${low - bound.low} below and ${bound.high - high} above the attained extremes`;
+  }
   return {
     method: "worst-case",
     estimate: lin.estimate,
     standardUncertainty: lin.standardUncertainty,
-    interval: [Math.min(low, lin.estimate), Math.max(high, lin.estimate)],
+    interval: [low, high],
+    attained,
+    ...enclosureFields,
     coverage: 1,
     contributions: _contributionsRecord(prepared, (i) => ({
       sensitivity: lin.sensitivities[i] as number,
@@ -217,6 +366,7 @@ export function _propagateWorstCase(
       `non-monotone models are found` +
       (normalK !== undefined ? `; normal inputs bounded at ±${normalK.toPrecision(4)}·u (${normalBoundCoverage as number} coverage)` : "") +
       (correlation !== undefined ? "; correlations are not used (the box bounds any dependence)" : "") +
+      bracketNote +
       `; contributions are one-at-a-time output swings, varianceShare their squared shares; standardUncertainty is the GUM (RSS) value.`,
   };
 }

@@ -20,6 +20,14 @@ export { triangular, type TriangularOptions } from "./triangular.js";
 export { trapezoidal, type TrapezoidalOptions } from "./trapezoidal.js";
 export { arcsine, type ArcsineOptions } from "./arcsine.js";
 export { propagate } from "./propagate.js";
+export { propagateCommonDraws, type PropagateCommonDrawsOptions } from "./propagateCommonDraws.js";
+export {
+  createMonteCarloPool,
+  propagateParallel,
+  type ModelReference,
+  type MonteCarloPool,
+  type PropagateParallelOptions,
+} from "./propagateParallel.js";
 export { normalCdf } from "./normalCdf.js";
 export { normalQuantile } from "./normalQuantile.js";
 export { studentTQuantile } from "./studentTQuantile.js";

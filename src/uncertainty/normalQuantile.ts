@@ -22,10 +22,29 @@ function acklam(p: number): number {
   return ((((((a0 * r + a1) * r + a2) * r + a3) * r + a4) * r + a5) * q) / (((((b0 * r + b1) * r + b2) * r + b3) * r + b4) * r + 1);
 }
 
+/**
+ * Far lower tail (p < 1e-200, x < −30): Newton on log Φ(x) = log p with the asymptotic series of the Mills ratio,
+ * Φ(x) = φ(x)/(−x)·(1 − 1/x² + 3/x⁴ − 15/x⁶ + 105/x⁸ − 945/x¹⁰ + …) (Abramowitz & Stegun 26.2.12); at x < −30 the
+ * first omitted term is below 2e-14 relative, so x is good to about 1e-15. Works down to the smallest subnormal
+ * p = 5e-324, where exp(x²/2) of the Halley step would overflow.
+ */
+function farTail(p: number, start: number): number {
+  const logP = Math.log(p);
+  let x = start;
+  for (let i = 0; i < 4; i++) {
+    const r = 1 / (x * x);
+    const series = 1 + r * (-1 + r * (3 + r * (-15 + r * (105 - 945 * r))));
+    const logPhi = -0.5 * x * x - Math.log(-x) - 0.9189385332046728 + Math.log(series); // 0.918… = ½·ln 2π
+    x -= ((logPhi - logP) * series) / -x;
+  }
+  return x;
+}
+
 /** @internal Quantile of the standard normal for p in (0, 1), no checks. */
 export function _normalQuantile(p: number): number {
   // Work in the lower half, where Φ(x) − p has no cancellation; 1 − p is exact for p ≥ 0.5.
   if (p > 0.5) return -_normalQuantile(1 - p);
+  if (p < 1e-200) return farTail(p, acklam(p));
   let x = acklam(p);
   // Two Halley steps on Φ(x) − p (Acklam's suggested refinement), with an accurate erfc.
   for (let i = 0; i < 2; i++) {
@@ -39,8 +58,10 @@ export function _normalQuantile(p: number): number {
 /**
  * Quantile (inverse distribution function) of the standard normal distribution: the z with Φ(z) = p.
  * Coverage factor of a normal output for coverage p is `normalQuantile((1 + p) / 2)`.
- * Acklam's rational approximation refined by Halley steps; absolute accuracy better than 1e-12.
- * @param probability - p, strictly between 0 and 1
+ * Acklam's rational approximation refined by Halley steps; absolute accuracy better than 1e-12. Below p = 1e-200
+ * (z < −30) a Newton iteration on log Φ with the asymptotic Mills-ratio series takes over, so every p down to the
+ * smallest subnormal (5e-324, z ≈ −38.47) gives a finite z.
+ * @param probability - p, strictly between 0 and 1 (any double in the open interval, subnormals included)
  * @returns z (unitless)
  * @throws HotjunctionTypeError for a non-finite p; HotjunctionRangeError for p outside (0, 1)
  * @example

@@ -1,9 +1,9 @@
 import { HotjunctionRangeError, HotjunctionTypeError, _invalidChoice } from "../errors.js";
 import { _requireInteger, _requireOptionsObject, _requireProbability } from "./_checks.js";
 import { _minimumTrials } from "./_coverageIntervalSorted.js";
-import { _propagateMonteCarlo } from "./_propagateMonteCarlo.js";
+import { _adaptiveBatch, _maxModelEvaluations, _propagateMonteCarlo, type _MonteCarloSettings } from "./_propagateMonteCarlo.js";
 import { _propagateRss } from "./_propagateRss.js";
-import { _propagateWorstCase } from "./_propagateWorstCase.js";
+import { _propagateWorstCase, type _Enclosure } from "./_propagateWorstCase.js";
 import { _choleskyFactor, _correlationMatrix, _meansOf, _ModelEvaluator, _prepareInputs } from "./_prepare.js";
 import type { Distribution, Model, PropagateOptions, PropagationMethod, PropagationResult } from "./types.js";
 
@@ -19,13 +19,22 @@ const defaultMaxTrials = 10_000_000;
  *   Richardson-extrapolated central differences with steps of u(xᵢ)/100, correlations by Eq. (13); coverage factor
  *   from the normal distribution, or from Student's t with Welch–Satterthwaite ν_eff (G.4) when any input has
  *   finite degrees of freedom.
- * - `"worst-case"`: the true extremes of the model over the box of input bounds (bounded shapes: mean ± half-width;
+ * - `"worst-case"`: the extremes of the model over the box of input bounds (bounded shapes: mean ± half-width;
  *   normal inputs: mean ± k·u with k from `normalBoundCoverage`). All 2ⁿ corners are evaluated for n ≤ 16, then a
  *   coordinate-wise grid + golden-section search from the best corner and from the estimates finds interior extremes
  *   of non-monotone models; above 16 inputs the search starts from the corner of per-input extremes. `note` says
- *   which was done. Correlations are not used (the box bounds any dependence).
+ *   which was done. The result's `attained` gives each extreme with a point that reaches it; with
+ *   `modelEnclosure` (an interval extension of the model) a branch and bound over the box adds a proven
+ *   `enclosure` and the `enclosureGap` between the two. Correlations are not used (the box bounds any dependence).
  * - `"monte-carlo"`: JCGM 101:2008 with a seeded xoroshiro128+ generator (same seed, same result bit for bit),
- *   samples per 6.4, probabilistically symmetric (7.7) or shortest interval, optional adaptive stopping (7.9).
+ *   one jump-ahead stream per block of 8192 trials (so `propagateParallel` reproduces it on any number of
+ *   workers), samples per 6.4, probabilistically symmetric (7.7) or shortest interval, optional adaptive
+ *   stopping (7.9). JCGM 101's rule 2·s/√h ≤ δ only says that the average of h batch values lies within δ of its
+ *   expectation with about 95 % probability, for large h and each result separately; here the factor is
+ *   Student's t(0.975, h − 1) and the shortest interval's endpoints count as scattering by s/h^(1/3), so the
+ *   rule also holds when it would stop after few batches and for the shortest interval. Memory is bounded:
+ *   above 4,194,304 trials the interval is averaged over segments (`intervalSegments`,
+ *   `intervalStandardError`). Work is capped at 10⁹ model evaluations.
  *   Correlated inputs: normals via the Cholesky factor of the correlation matrix; bounded inputs through a Gaussian
  *   copula (r applies to the normal scores).
  *
@@ -67,7 +76,7 @@ export function propagate<Name extends string>(
   }
   _requireOptionsObject(options, context, true);
   const o: PropagateOptions<Name> = options ?? {};
-  const method = o.method ?? "rss";
+  const method = o.method === undefined ? "rss" : o.method;
   if (!methods.includes(method)) _invalidChoice("method", method, methods, context);
   const coverage = o.coverage === undefined ? 0.95 : _requireProbability(o.coverage, "coverage", context);
   const prepared = _prepareInputs(inputs);
@@ -85,45 +94,91 @@ export function propagate<Name extends string>(
       o.normalBoundCoverage === undefined
         ? undefined
         : _requireProbability(o.normalBoundCoverage, "normalBoundCoverage", context);
-    result = _propagateWorstCase(prepared, evaluator, correlation, bound);
+    if (o.modelEnclosure !== undefined && typeof o.modelEnclosure !== "function") {
+      throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "modelEnclosure", value: o.modelEnclosure, context, problem: "is not a function" });
+    }
+    result = _propagateWorstCase(prepared, evaluator, correlation, bound, o.modelEnclosure as _Enclosure | undefined);
   } else {
-    const interval = o.interval ?? "symmetric";
-    if (!intervals.includes(interval)) _invalidChoice("interval", interval, intervals, context);
-    const minimum = _minimumTrials(coverage);
-    const seed = o.seed === undefined ? 1 : _requireInteger(o.seed, "seed", 0, 2 ** 32 - 1, context);
-    let adaptive: { significantDigits: number; maxTrials: number } | undefined;
-    if (o.adaptive !== undefined) {
-      _requireOptionsObject(o.adaptive, `${context} adaptive`, false);
-      if (o.trials !== undefined) {
-        throw new HotjunctionRangeError({
-          code: "INVALID_OPTION",
-          quantity: "trials",
-          value: o.trials,
-          context,
-          problem: "cannot be given together with adaptive (give adaptive.maxTrials instead)",
-        });
-      }
-      const significantDigits = _requireInteger(o.adaptive.significantDigits, "significantDigits", 1, 3, `${context} adaptive`);
-      const batch = Math.max(Math.ceil(100 / (1 - coverage) - 1e-9), 10_000);
-      const maxTrials =
-        o.adaptive.maxTrials === undefined
-          ? Math.max(defaultMaxTrials, 2 * batch)
-          : _requireInteger(o.adaptive.maxTrials, "maxTrials", 2 * batch, 1e9, `${context} adaptive`);
-      adaptive = { significantDigits, maxTrials };
+    result = _propagateMonteCarlo(prepared, evaluator, correlation, _monteCarloSettings(o, coverage, 1, context));
+  }
+  return _requireFiniteResult(result, context) as PropagationResult<Name>;
+}
+
+/**
+ * @internal Throws `OVERFLOW` when a number of the result is not finite (a model whose outputs are finite but so
+ * large that their sums or squares overflow): never a result with Infinity or NaN in it.
+ */
+export function _requireFiniteResult<R extends PropagationResult>(result: R, context: string): R {
+  const fields: [string, number | undefined][] = [
+    ["estimate", result.estimate],
+    ["standard uncertainty", result.standardUncertainty],
+    ["interval low end", result.interval[0]],
+    ["interval high end", result.interval[1]],
+    ["coverage factor", result.coverageFactor],
+  ];
+  for (const [name, c] of Object.entries(result.contributions) as [string, { sensitivity: number; contribution: number; varianceShare: number }][]) {
+    fields.push([`sensitivity to ${name}`, c.sensitivity], [`contribution of ${name}`, c.contribution], [`variance share of ${name}`, c.varianceShare]);
+  }
+  for (const [quantity, value] of fields) {
+    if (value !== undefined && !Number.isFinite(value)) {
+      throw new HotjunctionRangeError({
+        code: "OVERFLOW",
+        quantity,
+        value,
+        min: -Number.MAX_VALUE,
+        max: Number.MAX_VALUE,
+        context: `${context} (${result.method})`,
+        problem: "overflows the float64 range: the model's outputs are too large for this method (rescale the output unit)",
+      });
     }
-    const trials =
-      o.trials === undefined ? Math.max(defaultTrials, minimum) : _requireInteger(o.trials, "trials", minimum, 1e9, context);
-    if (o.onProgress !== undefined && typeof o.onProgress !== "function") {
-      throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "onProgress", value: o.onProgress, context, problem: "is not a function" });
+  }
+  return result;
+}
+
+/**
+ * @internal Checks the Monte Carlo options of `propagate` and its relatives; `models` is how many models share
+ * the trials (total work trials × models is capped at {@link _maxModelEvaluations}).
+ */
+export function _monteCarloSettings(o: PropagateOptions, coverage: number, models: number, context: string): _MonteCarloSettings {
+  const interval = o.interval === undefined ? "symmetric" : o.interval;
+  if (!intervals.includes(interval)) _invalidChoice("interval", interval, intervals, context);
+  const minimum = _minimumTrials(coverage);
+  const seed = o.seed === undefined ? 1 : _requireInteger(o.seed, "seed", 0, 2 ** 32 - 1, context);
+  let adaptive: { significantDigits: number; maxTrials: number } | undefined;
+  if (o.adaptive !== undefined) {
+    _requireOptionsObject(o.adaptive, `${context} adaptive`, false);
+    if (o.trials !== undefined) {
+      throw new HotjunctionRangeError({
+        code: "INVALID_OPTION",
+        quantity: "trials",
+        value: o.trials,
+        context,
+        problem: "cannot be given together with adaptive (give adaptive.maxTrials instead)",
+      });
     }
-    result = _propagateMonteCarlo(prepared, evaluator, correlation, {
-      coverage,
-      trials,
-      seed,
-      shortest: interval === "shortest",
-      adaptive,
-      onProgress: o.onProgress,
+    const significantDigits = _requireInteger(o.adaptive.significantDigits, "significantDigits", 1, 3, `${context} adaptive`);
+    const batch = _adaptiveBatch(coverage);
+    const maxTrials =
+      o.adaptive.maxTrials === undefined
+        ? Math.max(defaultMaxTrials, 2 * batch)
+        : _requireInteger(o.adaptive.maxTrials, "maxTrials", 2 * batch, 1e9, `${context} adaptive`);
+    adaptive = { significantDigits, maxTrials };
+  }
+  const trials =
+    o.trials === undefined ? Math.max(defaultTrials, minimum) : _requireInteger(o.trials, "trials", minimum, 1e9, context);
+  const planned = adaptive === undefined ? trials : adaptive.maxTrials;
+  if (planned * models > _maxModelEvaluations) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: models > 1 ? "models × trials" : adaptive === undefined ? "trials" : "adaptive maxTrials",
+      value: planned * models,
+      max: _maxModelEvaluations,
+      context,
+      problem: `is more work than one call may do (${models > 1 ? `${models} models × ${planned} trials` : `${planned} model evaluations`}); split the work or use fewer trials`,
     });
   }
-  return result as PropagationResult<Name>;
+  if (o.onProgress !== undefined && typeof o.onProgress !== "function") {
+    throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "onProgress", value: o.onProgress, context, problem: "is not a function" });
+  }
+  return { coverage, trials, seed, shortest: interval === "shortest", adaptive, onProgress: o.onProgress };
 }

@@ -28,7 +28,7 @@ export type RectangularOptions =
  * @param options - `{ center, halfWidth }` or `{ lower, upper }` in the input's unit, plus optional `degreesOfFreedom`
  * @returns a plain, JSON-serializable {@link Distribution}
  * @throws HotjunctionTypeError for a non-finite value or a mix of both forms; HotjunctionRangeError for a
- *   negative half-width or lower > upper
+ *   negative half-width, lower > upper, or a center or half-width beyond ±1e150 (`OUT_OF_RANGE`)
  * @example
  * ```ts
  * import { rectangular } from "hotjunction";
@@ -59,8 +59,15 @@ export function rectangular(options: RectangularOptions): Distribution {
         problem: "is above the upper bound",
       });
     }
-    center = lower + (upper - lower) / 2;
-    halfWidth = (upper - lower) / 2;
+    const width = upper - lower;
+    if (Number.isFinite(width)) {
+      center = lower + width / 2;
+      halfWidth = width / 2;
+    } else {
+      // The width overflows (e.g. −1e308 to 1e308): halve first. The magnitude check then refuses it.
+      center = lower / 2 + upper / 2;
+      halfWidth = upper / 2 - lower / 2;
+    }
   }
   return _makeDistribution("rectangular", center, halfWidth / Math.sqrt(3), halfWidth, undefined, o["degreesOfFreedom"], context);
 }

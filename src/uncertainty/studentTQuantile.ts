@@ -1,3 +1,4 @@
+import { HotjunctionRangeError } from "../errors.js";
 import { _requireDegreesOfFreedom, _requireProbability } from "./_checks.js";
 import { _normalQuantile } from "./normalQuantile.js";
 
@@ -78,9 +79,15 @@ function cornishFisher(z: number, nu: number): number {
 
 /** @internal Student t quantile, p in (0, 1), ν > 0 or Infinity; no checks. */
 export function _studentTQuantile(p: number, nu: number): number {
-  if (p < 0.5) return -_studentTQuantile(1 - p, nu);
   if (p === 0.5) return 0;
-  const q = 1 - p; // upper tail wanted
+  // The tail probability is taken from the side it is on (1 − p is exact for p ≥ 0.5; p itself below), so a
+  // tiny lower-tail p keeps its precision.
+  if (p < 0.5) return -upperQuantile(p, nu);
+  return upperQuantile(1 - p, nu);
+}
+
+/** t with P(T > t) = q, q in (0, 0.5). */
+function upperQuantile(q: number, nu: number): number {
   if (!Number.isFinite(nu)) return -_normalQuantile(q);
   if (nu === 1) return 1 / Math.tan(Math.PI * q);
   if (nu === 2) return (1 - 2 * q) / Math.sqrt(2 * q * (1 - q));
@@ -118,7 +125,8 @@ export function _studentTQuantile(p: number, nu: number): number {
  * @param probability - p, strictly between 0 and 1
  * @param degreesOfFreedom - ν > 0 (unitless); `Infinity` gives the normal quantile
  * @returns t (unitless)
- * @throws HotjunctionTypeError for a non-numeric argument; HotjunctionRangeError for p outside (0, 1) or ν ≤ 0
+ * @throws HotjunctionTypeError for a non-numeric argument; HotjunctionRangeError for p outside (0, 1) or ν ≤ 0,
+ *   and `OVERFLOW` for a p so far in a tail that |t| exceeds the float64 range (e.g. ν = 1, p < 1e-308)
  * @example
  * ```ts
  * import { studentTQuantile } from "hotjunction";
@@ -129,5 +137,15 @@ export function _studentTQuantile(p: number, nu: number): number {
 export function studentTQuantile(probability: number, degreesOfFreedom: number): number {
   const p = _requireProbability(probability, "probability", "studentTQuantile");
   const nu = _requireDegreesOfFreedom(degreesOfFreedom, "studentTQuantile");
-  return _studentTQuantile(p, nu);
+  const t = _studentTQuantile(p, nu);
+  if (!Number.isFinite(t)) {
+    throw new HotjunctionRangeError({
+      code: "OVERFLOW",
+      quantity: "probability",
+      value: p,
+      context: `studentTQuantile (ν = ${nu})`,
+      problem: "is so far in a tail that the t quantile is beyond the float64 range",
+    });
+  }
+  return t;
 }

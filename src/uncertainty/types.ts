@@ -55,6 +55,13 @@ export interface PropagateOptions<Name extends string = string> {
    * input is normal and the method is worst-case.
    */
   readonly normalBoundCoverage?: number;
+  /**
+   * Worst case: an interval extension of the model, `box → [low, high]` that contains the model's value at every
+   * point of the box (each input in its `[low, high]`), e.g. the model written in interval arithmetic with
+   * outward rounding. With it the result carries a proven `enclosure` (branch and bound over the input box)
+   * beside the `attained` extremes. The bracket holds only as far as the extension is a true enclosure.
+   */
+  readonly modelEnclosure?: (box: Readonly<Record<Name, readonly [number, number]>>) => readonly [number, number];
   /** Monte Carlo: called now and then with the fraction done (0–1), for progress display. */
   readonly onProgress?: (fractionDone: number) => void;
 }
@@ -92,6 +99,36 @@ export interface PropagationResult<Name extends string = string> {
   readonly seed?: number;
   /** Monte Carlo adaptive: whether the JCGM 101 7.9 stopping tolerance was met before `maxTrials`. */
   readonly converged?: boolean;
+  /**
+   * Monte Carlo runs above 4,194,304 trials (bounded memory): the number of segments whose intervals were
+   * averaged; absent when the interval is from all outputs at once.
+   */
+  readonly intervalSegments?: number;
+  /**
+   * Monte Carlo with `intervalSegments`: standard error [low, high] of the averaged interval endpoints, from the
+   * spread between segments (a statistical estimate, not a bound), in the output's unit.
+   */
+  readonly intervalStandardError?: readonly [number, number];
+  /**
+   * Worst case: the attained extremes, each with a point of the input box where the model reaches it (input
+   * values by name). `interval` is [attained.low.value, attained.high.value]: a search result, a lower bound of the
+   * true range for a non-monotone model.
+   */
+  readonly attained?: {
+    readonly low: { readonly value: number; readonly at: Readonly<Record<Name, number>> };
+    readonly high: { readonly value: number; readonly at: Readonly<Record<Name, number>> };
+  };
+  /**
+   * Worst case with `modelEnclosure`: [low, high] that contains the model's value over the whole input box (as
+   * far as the given extension is an enclosure), by branch and bound. The true range lies between `attained` and
+   * `enclosure`.
+   */
+  readonly enclosure?: readonly [number, number];
+  /**
+   * Worst case with `modelEnclosure`: [attained.low − enclosure low, enclosure high − attained.high], both ≥ 0; 0
+   * when the bracket is closed (monotone models with a tight extension: the corners reach the bounds).
+   */
+  readonly enclosureGap?: readonly [number, number];
   /** How the result was found, in one sentence (e.g. worst-case search strategy). */
   readonly note: string;
 }

@@ -1,0 +1,83 @@
+/**
+ * Messages between `propagateParallel` and its workers, errors across threads, and loading a model from a
+ * module (internal; shared by the host and the worker entry).
+ * @module
+ * @internal
+ */
+import { HotjunctionRangeError, HotjunctionTypeError, isHotjunctionError } from "../errors.js";
+import type { Model } from "./types.js";
+
+/** @internal A job as the host sends it. */
+export interface _WorkerJob {
+  readonly kind: "job";
+  readonly job: number;
+  readonly module: string;
+  readonly exportName: string;
+  readonly inputs: Record<string, unknown>;
+  readonly correlations: unknown;
+}
+
+/** @internal A request for the outputs of `count` trials from a block boundary with stream `state`. */
+export interface _WorkerRun {
+  readonly kind: "run";
+  readonly job: number;
+  readonly id: number;
+  readonly state: readonly number[];
+  readonly count: number;
+}
+
+/** @internal An error as it crosses threads. */
+export interface _SerializedError {
+  readonly typed: "range" | "type" | undefined;
+  readonly message: string;
+  readonly details: Record<string, unknown>;
+}
+
+/** @internal Serializes an error for postMessage. */
+export function _serializeError(error: unknown): _SerializedError {
+  if (isHotjunctionError(error)) {
+    const details: Record<string, unknown> = {};
+    for (const key of ["code", "quantity", "value", "min", "max", "unit", "context", "problem", "allowed"]) {
+      const v = (error as unknown as Record<string, unknown>)[key];
+      if (v !== undefined) details[key] = typeof v === "function" || typeof v === "symbol" ? String(v) : v;
+    }
+    return { typed: error instanceof HotjunctionRangeError ? "range" : "type", message: error.message, details };
+  }
+  return { typed: undefined, message: error instanceof Error ? error.message : String(error), details: {} };
+}
+
+/** @internal Rebuilds an error sent by {@link _serializeError}. */
+export function _deserializeError(e: _SerializedError): Error {
+  if (e.typed === "range") return new HotjunctionRangeError(e.details as never);
+  if (e.typed === "type") return new HotjunctionTypeError(e.details as never);
+  return new Error(e.message);
+}
+
+/** @internal Loads a model export from a module. */
+export async function _loadModel(module: string, exportName: string, context: string): Promise<Model> {
+  let namespace: Record<string, unknown>;
+  try {
+    namespace = (await import(/* @vite-ignore */ module)) as Record<string, unknown>;
+  } catch (error) {
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity: "model module",
+      value: module,
+      context,
+      problem: `cannot be imported (${error instanceof Error ? error.message : String(error)})`,
+    });
+  }
+  const model = namespace[exportName];
+  if (typeof model !== "function") {
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity: "model export",
+      value: exportName,
+      context,
+      problem: `is not a function exported by ${module}`,
+      allowed: Object.keys(namespace).filter((k) => typeof namespace[k] === "function"),
+    });
+  }
+  return model as Model;
+}
+

@@ -1,0 +1,114 @@
+/**
+ * Reference data cannot be changed under later results (deeply frozen), a data object is validated once when
+ * compiled, and booleans or null are never read as temperatures. The widened-range case is the one reported
+ * in review: type K's polynomial evaluated at 4000 °C (far outside its 0…1372 °C sub-range of NIST SRD 60)
+ * returned −254,308 mV.
+ */
+import { describe, expect, it } from "vitest";
+import * as hj from "../../src/index.js";
+import { HotjunctionRangeError, HotjunctionTypeError, createThermocouple, typeK, type ThermocoupleData } from "../../src/index.js";
+
+/** Every object reachable from `value` (arrays and plain objects), with its path. */
+function reachable(value: unknown, path: string, out: [string, object][] = []): [string, object][] {
+  if (typeof value === "object" && value !== null) {
+    out.push([path, value]);
+    for (const [k, v] of Object.entries(value)) reachable(v, `${path}.${k}`, out);
+  }
+  return out;
+}
+
+const exportedData: Record<string, unknown> = {
+  typeB: hj.typeB, typeE: hj.typeE, typeJ: hj.typeJ, typeK: hj.typeK, typeN: hj.typeN, typeR: hj.typeR, typeS: hj.typeS, typeT: hj.typeT,
+  typeBApproximateInverse: hj.typeBApproximateInverse, typeEApproximateInverse: hj.typeEApproximateInverse,
+  typeJApproximateInverse: hj.typeJApproximateInverse, typeKApproximateInverse: hj.typeKApproximateInverse,
+  typeNApproximateInverse: hj.typeNApproximateInverse, typeRApproximateInverse: hj.typeRApproximateInverse,
+  typeSApproximateInverse: hj.typeSApproximateInverse, typeTApproximateInverse: hj.typeTApproximateInverse,
+  thermocoupleTypes: hj.thermocoupleTypes,
+};
+
+describe("exported reference data is deeply frozen", () => {
+  it("every object and array reachable from the type data, inverse data and type list", () => {
+    let objects = 0;
+    for (const [name, value] of Object.entries(exportedData)) {
+      for (const [path, obj] of reachable(value, name)) {
+        objects++;
+        expect(Object.isFrozen(obj), path).toBe(true);
+      }
+    }
+    expect(objects).toBeGreaterThan(16 * 3);
+  });
+
+  it("an attempt to change a coefficient throws in strict mode and changes no result", () => {
+    const before = hj.emfFromTemperature("K", 500);
+    const coefficients = typeK.forward[1]?.coefficients as number[];
+    expect(() => {
+      coefficients[1] = 1;
+    }).toThrow(TypeError);
+    expect(hj.emfFromTemperature("K", 500)).toBe(before);
+  });
+});
+
+describe("a data object is validated when compiled", () => {
+  const forged = (patch: Partial<ThermocoupleData>): ThermocoupleData => ({ ...typeK, ...patch });
+
+  it("a range widened beyond the sub-ranges is refused (it extrapolated to −254,308 mV at 4000 °C)", () => {
+    const e = (() => {
+      try {
+        createThermocouple(forged({ maxC: 4000 }));
+      } catch (error) {
+        return error;
+      }
+      return undefined;
+    })();
+    expect(e).toBeInstanceOf(HotjunctionRangeError);
+    expect((e as HotjunctionRangeError).code).toBe("INVALID_OPTION");
+    expect((e as Error).message).toMatch(/thermocouple data range .*; valid range -270 to 1372 °C/);
+    expect(() => createThermocouple(forged({ minC: -300 }))).toThrow(HotjunctionRangeError);
+    expect(() => createThermocouple(forged({ minC: 100, maxC: 100 }))).toThrow(HotjunctionRangeError);
+  });
+
+  it("non-finite or missing coefficients, gaps between sub-ranges and a broken exponential term are refused", () => {
+    const [low, high] = typeK.forward as [ThermocoupleData["forward"][number], ThermocoupleData["forward"][number]];
+    const cases: ThermocoupleData["forward"][] = [
+      [low, { ...high, coefficients: [...high.coefficients.slice(0, 3), Number.NaN] }],
+      [low, { ...high, coefficients: [...high.coefficients.slice(0, 3), Infinity] }],
+      [low, { ...high, coefficients: ["1" as unknown as number] }],
+      [low, { ...high, coefficients: [] }],
+      [low, { ...high, minC: 10 }],
+      [{ ...low, maxC: -300 }, high],
+      [low, null as unknown as typeof high],
+      [],
+    ];
+    for (const forward of cases) expect(() => createThermocouple(forged({ forward }))).toThrow(/thermocouple data|data/);
+    expect(() => createThermocouple(forged({ exponential: { a0: Number.NaN, a1: 0, a2: 0 } }))).toThrow(HotjunctionRangeError);
+  });
+
+  it("a valid copy of a type's data gives the same numbers as the original (the check accepts the standard's data)", () => {
+    for (const letter of hj.thermocoupleTypes) {
+      const data = hj[`type${letter}`];
+      const copy = createThermocouple(JSON.parse(JSON.stringify(data)) as ThermocoupleData);
+      const t = (data.minC + data.maxC) / 2;
+      expect(copy.emfFromTemperature(t)).toBe(hj.emfFromTemperature(letter, t));
+    }
+  });
+});
+
+describe("null and booleans are not temperatures", () => {
+  it("every scalar its90 input refuses null, true and false with a typed error", () => {
+    const k = createThermocouple(typeK);
+    for (const bad of [null, true, false]) {
+      const calls: (() => unknown)[] = [
+        () => hj.emfFromTemperature("K", bad as unknown as number),
+        () => hj.temperatureFromEmf("K", bad as unknown as number),
+        () => hj.seebeckCoefficient("K", bad as unknown as number),
+        () => hj.approximateTemperatureFromEmf("K", bad as unknown as number),
+        () => hj.emfFromTemperature("K", 100, { coldJunctionC: bad as unknown as number }),
+        () => hj.temperatureFromEmf("K", 1, { coldJunctionC: bad as unknown as number }),
+        () => k.emfFromTemperature(bad as unknown as number),
+        () => k.temperatureFromEmf(bad as unknown as number),
+        () => k.seebeckCoefficient(bad as unknown as number),
+      ];
+      for (const call of calls) expect(call).toThrow(HotjunctionTypeError);
+    }
+  });
+});

@@ -66,6 +66,11 @@ export interface ErrorSweepRow {
   readonly nominalErrorC: number;
   /** Error bounds (indicated − true) by method, °C. */
   readonly bands: readonly { readonly method: PropagationMethod; readonly errorLowC: number; readonly errorHighC: number }[];
+  /**
+   * The largest error sources at this temperature by name, largest first, with half the worst-case swing each
+   * causes alone (± °C, the trip table's measure); absent when not computed.
+   */
+  readonly largestSources?: readonly { readonly source: string; readonly halfSwingC: number }[];
 }
 
 /** An error sweep of a chain over temperature. */

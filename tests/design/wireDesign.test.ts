@@ -147,6 +147,33 @@ describe("the wire through a design file and the trip design", () => {
   });
 });
 
+describe("the sweep's per-source table", () => {
+  it("evaluateChain on the heat-treat furnace example lists every wire source by name, the cable largest (the sweep's largest-sources column; common practice, no source)", async () => {
+    const { readFileSync } = await import("node:fs");
+    const { evaluateChain } = await import("../../src/index.js");
+    const chain = measurementChainFromDesign(parseDesign(readFileSync("examples/heat-treat-furnace-wire.json", "utf8")));
+    const e = evaluateChain(chain, 850, { methods: ["worst-case"] });
+    const names = e.contributions.map((c) => c.source);
+    // The envelope model (the default) takes the junction's worst temperature itself: no junction-range source.
+    for (const n of ["cable.tolerance", "connector.aboveColdJunction", "loop.biasOffset", "loop.detectionOffset", "probe.leakage", "probe.ageing"]) {
+      expect(names, n).toContain(n);
+    }
+    expect(names).not.toContain("cable.junctionTemperature");
+    const largest = [...e.contributions].sort((a, b) => b.worstCaseSwingC - a.worstCaseSwingC)[0]!;
+    expect(largest.source).toBe("cable.tolerance");
+    // Envelope of ASTM E230 KX standard limits (±2.2 °C at the cable's temperature, from memory): the largest
+    // 2.2·S(t) over the junction's range 80…150 °C plus over the terminals' 20…45 °C, through S at 850 °C
+    // (ITS-90 Seebeck coefficients), to first order.
+    const maxS = (lo: number, hi: number): number => {
+      let m = 0;
+      for (let t = lo; t <= hi; t += 0.5) m = Math.max(m, seebeckCoefficient("K", t));
+      return m;
+    };
+    const expected = (2.2 * (maxS(80, 150) + maxS(20, 45))) / seebeckCoefficient("K", 850);
+    expect(largest.worstCaseSwingC / 2).toBeCloseTo(expected, 1);
+  });
+});
+
 describe("properties of the wire through the whole chain", () => {
   const chainOf = (wire: WireDescription | undefined, ambient = { minC: 20, maxC: 30 }): MeasurementChain => {
     const d = design({ ambient });

@@ -31,6 +31,11 @@ const runs: string[][] = [
   ["faults", "examples/heated-enclosure-adc.json"],
   // Safety figures from invented failure data (marked so in the file's notes), with a second, firmware channel as 1oo2.
   ["faults", "examples/kiln-two-channel-cutout.json", "--svg", "out/kiln-two-channel-pfdavg.svg", "--force"],
+  // The wire matters here: a long extension cable along a warm furnace shell, a terminal block warmer than the
+  // cold-junction sensor, bias and detection currents through a filtered loop, leakage and ageing.
+  ["check", "examples/heat-treat-furnace-wire.json", "--svg", "out/heat-treat-furnace-trip-bands.svg", "--force", "--report-only"],
+  ["sweep", "examples/heat-treat-furnace-wire.json", "--from", "600", "--to", "900", "--step", "50", "--svg", "out/heat-treat-furnace-error-sweep.svg", "--force"],
+  ["faults", "examples/heat-treat-furnace-wire.json"],
 ];
 
 let failures = 0;

@@ -273,6 +273,7 @@ export {
   type TripDesign,
   type TripDesignResult,
   type TripErrorSource,
+  type TripServicePoint,
   type TripResistors,
   type TripSetpoint,
   resistorPositionNames,

@@ -19,6 +19,7 @@ import { _dividerStage, type _DividerStage } from "./divider.js";
 import { _fixedScaleStage, type _FixedScaleStage } from "./fixedScaleAmplifier.js";
 import { _referenceStage, type _ReferenceStage } from "./reference.js";
 import { _checkThermocouple, _thermocoupleSources } from "./thermocouple.js";
+import { _wireStage, type _WireStage, type WireDescription } from "./wire/wireStage.js";
 import type {
   AdcElement,
   AmbientRange,
@@ -65,6 +66,13 @@ export interface _CompiledChain {
   readonly ambientCenterC: number;
   /** Every source that does not depend on the hot-junction temperature, in listing order. */
   readonly fixedSources: readonly ChainErrorSource[];
+  /** The wire between the probe and the amplifier input, when the chain has one. */
+  readonly wire: _WireStage | undefined;
+  /**
+   * Names of the wire's range sources (a cable junction's or a connector's temperature anywhere in a range):
+   * their values are temperatures, not deviations, and nominal records take them at their means.
+   */
+  readonly wireRangeNames: ReadonlySet<string>;
 }
 
 /**
@@ -127,6 +135,11 @@ export function _compileChain(chain: MeasurementChain, prebuilt?: _PrebuiltStage
 
   const { comparator, adc, divider, adcFullScaleVolts, adcUsesReference } = detectorStages(o, reference, coldJunction, ambient, ctx, context);
 
+  const wire = o["wire"] === undefined ? undefined : _wireStage(o["wire"] as WireDescription, type, ambient, ctx, `${context}, wire`);
+  if (wire !== undefined) checkWireAgainstChain(o, wire, context);
+  const wireRangeNames = new Set<string>();
+  for (const s of wire?.fixedSources ?? []) if (/\.(junctionTemperature|temperature|aboveColdJunction)$/.test(s.name)) wireRangeNames.add(s.name);
+
   const ambientCenterC = (ambient.minC + ambient.maxC) / 2;
   const hasAmbientInput = ambient.maxC > ambient.minC;
   const ambientSource: ChainErrorSource | undefined = hasAmbientInput
@@ -144,6 +157,7 @@ export function _compileChain(chain: MeasurementChain, prebuilt?: _PrebuiltStage
   _emfFromTemperature(ct, ambient.maxC);
 
   const fixedSources: ChainErrorSource[] = [
+    ...(wire?.fixedSources ?? []),
     ...(coldJunction?.sources ?? []),
     ...amplifier.sources,
     ...(fixedScale?.sources ?? []),
@@ -153,7 +167,7 @@ export function _compileChain(chain: MeasurementChain, prebuilt?: _PrebuiltStage
     ...(adc?.sources ?? []),
   ];
   if (ambientSource !== undefined) fixedSources.push(ambientSource);
-  checkOverrideNames(chain, fixedSources, context);
+  checkOverrideNames(chain, fixedSources, wire?.ageing !== undefined, context);
 
   return {
     chain,
@@ -176,7 +190,50 @@ export function _compileChain(chain: MeasurementChain, prebuilt?: _PrebuiltStage
     ambientSource,
     ambientCenterC,
     fixedSources,
+    wire,
+    wireRangeNames,
   };
+}
+
+/**
+ * The wire must not state a physical effect the chain already models: the amplifier's bias current through
+ * its source resistance is the loop's bias offset, and an isothermal gradient at the instrument's terminals
+ * is a terminating connector of copper there. Either is refused with the way to state it once.
+ */
+function checkWireAgainstChain(o: Record<string, unknown>, wire: _WireStage, context: string): void {
+  const amp = o["amplifier"] as Record<string, unknown> | undefined;
+  if (wire.loop !== undefined && amp !== undefined && amp["kind"] === "amplifier") {
+    const bias = amp["biasCurrentNanoamps"];
+    const r = amp["sourceResistanceOhms"];
+    if (typeof bias === "number" && bias > 0 && typeof r === "number" && r > 0) {
+      throw new HotjunctionRangeError({
+        code: "INVALID_DESIGN",
+        quantity: "amplifier.sourceResistanceOhms",
+        value: r,
+        context,
+        problem:
+          "is given together with wire.loop: the bias current through the loop is counted once; state it as wire.loop.biasCurrentNanoamps (the loop's resistance is computed there) and drop amplifier.sourceResistanceOhms",
+      });
+    }
+  }
+  if (wire.connectors.some((c) => c.arrangement === "terminates")) {
+    for (const [slot, el] of [
+      ["coldJunction", o["coldJunction"]],
+      ["amplifier", o["amplifier"]],
+    ] as const) {
+      const g = (el as Record<string, unknown> | undefined)?.["isothermalGradientC"];
+      if (typeof g === "number" && g > 0) {
+        throw new HotjunctionRangeError({
+          code: "INVALID_DESIGN",
+          quantity: `${slot}.isothermalGradientC`,
+          value: g,
+          context,
+          problem:
+            "is given together with a terminating connector in wire.connectors: both describe the temperature of the terminals against the cold-junction sensor; state it once (the connector's aboveColdJunctionC, or the gradient without the connector)",
+        });
+      }
+    }
+  }
 }
 
 /** The detector's stages (comparator with its divider, or ADC with its full scale), checked against the chain. */
@@ -256,9 +313,10 @@ function detectorStages(
 }
 
 /** Every `sourceDistributions` key must name a source of the chain (or the thermocouple tolerance). */
-function checkOverrideNames(chain: MeasurementChain, fixedSources: readonly ChainErrorSource[], context: string): void {
+function checkOverrideNames(chain: MeasurementChain, fixedSources: readonly ChainErrorSource[], hasAgeing: boolean, context: string): void {
   const seen = new Set<string>();
   for (const s of fixedSources) seen.add(s.name);
+  if (hasAgeing) seen.add("probe.ageing");
   for (const name of Object.keys(chain.sourceDistributions ?? {})) {
     if (!seen.has(name) && name !== "thermocouple.tolerance") {
       throw new HotjunctionRangeError({
@@ -276,7 +334,11 @@ function checkOverrideNames(chain: MeasurementChain, fixedSources: readonly Chai
 
 /** @internal All sources at a hot-junction temperature, in listing order. */
 export function _sourcesAt(cc: _CompiledChain, hotJunctionC: number): ChainErrorSource[] {
-  return [..._thermocoupleSources(cc.thermocouple, hotJunctionC, cc.ctx), ...cc.fixedSources];
+  return [
+    ..._thermocoupleSources(cc.thermocouple, hotJunctionC, cc.ctx),
+    ...(cc.wire?.ageing?.sourcesAt(hotJunctionC) ?? []),
+    ...cc.fixedSources,
+  ];
 }
 
 /** @internal Record of every source's mean. */
@@ -288,7 +350,10 @@ export function _meansRecord(sources: readonly ChainErrorSource[]): Record<strin
 
 /**
  * @internal Record of every source at 0 deviation, the ambient (when an input) at `coldJunctionC` (default
- * the center of its range): for nominal designs.
+ * the center of its range) and the wire's range sources (a cable junction's or a connector's temperature:
+ * values, not deviations) at their means: for nominal designs. The wire's known effects (a connector at a
+ * stated temperature, the nominal detection-current offset) are thus in the nominal chain; its tolerances,
+ * leakage and ageing are not.
  */
 export function _zeroRecord(
   cc: _CompiledChain,
@@ -296,8 +361,18 @@ export function _zeroRecord(
   coldJunctionC: number = cc.ambientCenterC,
 ): Record<string, number> {
   const out: Record<string, number> = {};
-  for (const s of sources) out[s.name] = s.name === _ambientInputName ? coldJunctionC : 0;
+  for (const s of sources) {
+    out[s.name] = s.name === _ambientInputName ? coldJunctionC : cc.wireRangeNames.has(s.name) ? s.distribution.mean : 0;
+  }
   return out;
+}
+
+/**
+ * @internal The probe's ageing drift (°C at the hot junction) when it is a source; read with `in` like the
+ * tolerance (a nominal record made from the fixed sources has none).
+ */
+function ageingValue(x: Inputs): number {
+  return "probe.ageing" in x ? (x["probe.ageing"] as number) : 0;
 }
 
 /**
@@ -319,11 +394,16 @@ export function _adcFullScale(cc: _CompiledChain, x: Inputs): number {
 }
 
 /**
- * @internal First node of the signal path: the thermocouple's EMF at the terminals, E(t_h + ε) − E(t_c), with
- * ε the thermocouple tolerance in the source values (0 when it is no source), mV.
+ * @internal First node of the signal path: the EMF at the amplifier input. Without a wire it is the
+ * thermocouple's, E(t_h + ε) − E(t_c), with ε the thermocouple tolerance in the source values (0 when it is
+ * no source). With a wire: s·[E(t_h + ε + a) − E(t_c)] + ΔE_cable + ΣΔE_connector + V_loop, with a the
+ * ageing drift and s the leakage factor (see `chain/wire/wireStage.ts`), mV.
  */
 export function _junctionEmfMillivolts(cc: _CompiledChain, hotJunctionC: number, x: Inputs, coldJunctionC: number): number {
-  return _emfFromTemperature(cc.ct, hotJunctionC + _toleranceValue(x)) - _emfFromTemperature(cc.ct, coldJunctionC);
+  const w = cc.wire;
+  if (w === undefined) return _emfFromTemperature(cc.ct, hotJunctionC + _toleranceValue(x)) - _emfFromTemperature(cc.ct, coldJunctionC);
+  const tip = _emfFromTemperature(cc.ct, hotJunctionC + _toleranceValue(x) + ageingValue(x)) - _emfFromTemperature(cc.ct, coldJunctionC);
+  return w.emfScale(x) * tip + w.addedEmfMillivolts(x, coldJunctionC);
 }
 
 /** @internal Second node: the hardware compensation voltage added before the amplifier (0 without one), mV. */
@@ -394,7 +474,10 @@ export function _hotFromVolts(cc: _CompiledChain, volts: number, x: Inputs, cold
     if (cj.method === "hardware") emf -= cj.compensationMillivolts(x, coldJunctionC);
   }
   const eps = _toleranceValue(x);
-  return _temperatureFromEmf(cc.ct, emf + _emfFromTemperature(cc.ct, coldJunctionC)) - eps;
+  const w = cc.wire;
+  if (w === undefined) return _temperatureFromEmf(cc.ct, emf + _emfFromTemperature(cc.ct, coldJunctionC)) - eps;
+  const tip = (emf - w.addedEmfMillivolts(x, coldJunctionC)) / w.emfScale(x);
+  return _temperatureFromEmf(cc.ct, tip + _emfFromTemperature(cc.ct, coldJunctionC)) - eps - ageingValue(x);
 }
 
 /** @internal Actual switching voltage of a comparator tap (threshold + offset + hysteresis part), V. */

@@ -11,6 +11,8 @@
  * These names are a contract shared with the trip, design, faults and firmware areas: add, don't rename.
  * @module
  */
+import type { WireDescription } from "./wire/wireStage.js";
+import type { WireSourceElement } from "./wireTypes.js";
 import type { ThermocoupleType } from "../data/thermocoupleData.js";
 import type { Distribution, DistributionKind, Model, PropagationMethod } from "../uncertainty/types.js";
 
@@ -410,8 +412,11 @@ export type ChainElement =
 /** The `kind` discriminator of the elements. */
 export type ChainElementKind = ChainElement["kind"];
 
-/** Roles under which an error source is listed (the element kind, or `"ambient"`). */
-export type ChainSourceElement = ChainElementKind | "ambient";
+/**
+ * Roles under which an error source is listed (the element kind, `"ambient"`, or a role of the wire:
+ * `"cable"`, `"connector"`, `"loop"`, `"probe"`).
+ */
+export type ChainSourceElement = ChainElementKind | "ambient" | WireSourceElement;
 
 /**
  * Overrides the distribution of one named error source. The stated ± limit L stays; `"rectangular"`,
@@ -442,6 +447,12 @@ export interface MeasurementChain {
   readonly divider?: DividerElement;
   readonly detector: DetectorElement;
   readonly ambient: AmbientRange;
+  /**
+   * The wire between the probe and the amplifier input: extension or compensating cable, connectors and
+   * terminal blocks, loop resistance with bias and open-circuit detection currents, insulation leakage and
+   * ageing of the probe. Default: none (the thermocouple lands on the instrument's terminals).
+   */
+  readonly wire?: WireDescription;
   /** Per-source distribution overrides, keyed by source name (see {@link ChainErrorSource.name}). */
   readonly sourceDistributions?: Readonly<Record<string, SourceDistributionOverride>>;
   /** Optional label for reports. */

@@ -52,11 +52,14 @@ export type CableTolerance = IecCableClass | AstmCableLimits | CustomCableTolera
 
 /**
  * How the cable's deviation behaves between the temperatures its tolerance is stated for.
- * - `"proportional"` (default): the cable's EMF is (1 + k)·[E(t_junction) − E(t_cj)], a relative mismatch of
+ * - `"envelope"` (default): only what the statement guarantees: |ΔE| ≤ T(t_junction) + T(t_cj), where T is the
+ *   tolerance as an EMF. Larger, and does not vanish for an isothermal run; the default because a safety
+ *   band must hold for any cable the statement admits.
+ * - `"proportional"`: the cable's EMF is (1 + k)·[E(t_junction) − E(t_cj)], a relative mismatch of
  *   its alloys; k is bounded so that the deviation from a 0 °C reference stays within the tolerance everywhere
- *   in the rated range. A cable with both ends at one temperature adds nothing.
- * - `"envelope"`: only what the statement guarantees: |ΔE| ≤ T(t_junction) + T(t_cj), where T is the
- *   tolerance as an EMF. Larger, and does not vanish for an isothermal run.
+ *   in the rated range. A cable with both ends at one temperature adds nothing. Narrower; it assumes the
+ *   deviation's shape (a uniform relative mismatch of the alloys): choose it where the cable maker's data
+ *   support that.
  */
 export type CableMismatchModel = "proportional" | "envelope";
 
@@ -70,7 +73,7 @@ export interface ExtensionCableElement {
   readonly runTemperatureC: TemperatureRangeC;
   /** Temperature of the cable's junction with the thermocouple (the probe head), °C; within the run. */
   readonly junctionTemperatureC: TemperatureRangeC;
-  /** Default `"proportional"`. */
+  /** Default `"envelope"` (conservative: holds for any deviation the statement admits). */
   readonly mismatch?: CableMismatchModel;
   /** Optional label for reports. */
   readonly label?: string;

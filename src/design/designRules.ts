@@ -4,6 +4,12 @@
  * @module
  */
 import { failureDataProblems } from "../safety/validateFailureData.js";
+import { _connectorStage } from "../chain/wire/connector.js";
+import { _extensionCableStage } from "../chain/wire/extensionCable.js";
+import { _loopStage } from "../chain/wire/loopResistance.js";
+import { _ageingStage, _leakageStage } from "../chain/wire/probe.js";
+import type { AgeingElement, ConnectorElement, ExtensionCableElement, InsulationLeakageElement, LoopResistanceElement } from "../chain/wireTypes.js";
+import { HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 import type { DesignFile, DesignReference } from "./designSchema.js";
 
 /** One broken rule. */
@@ -107,6 +113,68 @@ function checkFailureData(design: DesignFile, out: DesignRuleProblem[]): void {
 }
 
 /**
+ * Runs an element's checker; a typed error becomes a problem at the element's path (the quantity appended
+ * when it is a key of the element), in one line.
+ */
+function checkElement(path: string, build: () => unknown, out: DesignRuleProblem[]): void {
+  try {
+    build();
+  } catch (e) {
+    if (!(e instanceof HotjunctionRangeError || e instanceof HotjunctionTypeError)) throw e;
+    const key = /^[A-Za-z][A-Za-z0-9]*(\.[A-Za-z][A-Za-z0-9]*)*$/.test(e.quantity) ? e.quantity.replace(/^connector\d*\./, "") : "";
+    const message = e.message.replace(/^[^:]*\([^)]*\)[^:]*: |^[^:]*: /, "");
+    out.push({ path: key === "" ? path : `${path}.${key}`, problem: message });
+  }
+}
+
+/** The wire's elements, each checked by its own checker; and the two physical effects a chain must state once. */
+function checkWire(design: DesignFile, out: DesignRuleProblem[]): void {
+  const w = design.wire;
+  if (w === undefined) return;
+  const type = design.thermocouple.type;
+  const ambient = { minC: design.ambient.minC, maxC: design.ambient.maxC };
+  if (ambient.minC > ambient.maxC) return;
+  const ctx = { overrides: undefined };
+  const c = w.cable;
+  if (c !== undefined) {
+    checkElement("wire.cable", () => _extensionCableStage({ kind: "extensionCable", ...c } as ExtensionCableElement, type, ambient, ctx, "cable"), out);
+  }
+  const connectors = w.connectors ?? [];
+  connectors.forEach((k, i) => {
+    const name = connectors.length === 1 ? "connector" : `connector${i + 1}`;
+    checkElement(`wire.connectors[${i}]`, () => _connectorStage({ kind: "connector", ...k } as ConnectorElement, type, ambient, ctx, "connector", name), out);
+  });
+  const loop = w.loop;
+  if (loop !== undefined) checkElement("wire.loop", () => _loopStage({ kind: "loopResistance", ...loop } as LoopResistanceElement, type, ctx, "loop"), out);
+  const leakage = w.leakage;
+  if (leakage !== undefined) checkElement("wire.leakage", () => _leakageStage({ kind: "insulationLeakage", ...leakage } as InsulationLeakageElement, ctx, "leakage"), out);
+  const ageing = w.ageing;
+  if (ageing !== undefined) checkElement("wire.ageing", () => _ageingStage({ kind: "ageing", ...ageing } as AgeingElement, ctx, "ageing"), out);
+  const amp = design.amplifier;
+  if (loop !== undefined && amp?.kind === "voltage" && (amp.biasCurrentNanoamps ?? 0) > 0 && (amp.sourceResistanceOhms ?? 0) > 0) {
+    out.push({
+      path: "amplifier.sourceResistanceOhms",
+      problem: "is given together with wire.loop: the bias current through the loop is counted once; state it as wire.loop.biasCurrentNanoamps and drop amplifier.sourceResistanceOhms",
+    });
+  }
+  if (connectors.some((k) => k.arrangement === "terminates")) {
+    const gradients: [string, number | undefined][] = [
+      ["coldJunction.isothermalGradientC", design.coldJunction?.isothermalGradientC],
+      ["amplifier.isothermalGradientC", amp?.kind === "fixed-scale" ? amp.isothermalGradientC : undefined],
+    ];
+    for (const [path, g] of gradients) {
+      if (g !== undefined && g > 0) {
+        out.push({
+          path,
+          problem:
+            "is given together with a terminating connector in wire.connectors: both state the terminals' temperature against the cold-junction sensor; state it once (the connector's aboveColdJunctionC, or the gradient without the connector)",
+        });
+      }
+    }
+  }
+}
+
+/**
  * Checks the cross-field rules; returns every broken rule (empty when the design is consistent).
  * @internal
  */
@@ -176,6 +244,7 @@ export function _checkDesignRules(design: DesignFile): DesignRuleProblem[] {
   checkDynamicsRules(design, out);
   checkFailureData(design, out);
   checkReference(design.reference, "reference", out);
+  checkWire(design, out);
   const referenceNames = new Set<string>([design.reference.name]);
   (design.referenceAlternatives ?? []).forEach((reference, i) => {
     const path = `referenceAlternatives[${i}]`;

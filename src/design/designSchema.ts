@@ -316,6 +316,134 @@ const protectionSchema = z
   .describe("protection facts for the single-fault review (`faults`); command-line options override");
 
 
+// The wire between the probe and the amplifier (chain/wire/): cable, connectors, loop, leakage, ageing.
+const rangeC = (description: string) =>
+  z
+    .strictObject({ minC: temperatureC("lowest"), maxC: temperatureC("highest") })
+    .describe(`${description}, °C (a single temperature: minC = maxC)`);
+
+const cableToleranceSchema = z.discriminatedUnion("standard", [
+  z
+    .strictObject({
+      standard: z.literal("IEC 60584-3"),
+      class: z.union([z.literal(1), z.literal(2)]),
+      variant: z.enum(["A", "B"]).optional().describe("compensating cables of types K, R, S: variant A or B"),
+    })
+    .describe("IEC 60584-3 cable tolerance class (compensating cables: class 2)"),
+  z.strictObject({ standard: z.literal("ASTM E230"), limits: z.enum(["standard", "special"]) }).describe("ASTM E230 extension-wire limits"),
+  z
+    .strictObject({
+      standard: z.literal("custom"),
+      toleranceC: nonNegative("± °C at the cable's temperature"),
+      minC: temperatureC("lowest cable temperature where it holds"),
+      maxC: temperatureC("highest cable temperature where it holds"),
+    })
+    .describe("a cable maker's own statement"),
+]);
+
+const cableSchema = z
+  .strictObject({
+    grade: z.enum(["extension", "compensating"]).describe("extension (the thermocouple's alloys) or compensating (other alloys, narrow range)"),
+    tolerance: cableToleranceSchema,
+    runTemperatureC: rangeC("every temperature the cable passes through, both ends included (must lie in the rated range)"),
+    junctionTemperatureC: rangeC("temperature of the cable's junction with the thermocouple (probe head)"),
+    mismatch: z
+      .enum(["envelope", "proportional"])
+      .optional()
+      .describe('"envelope" (default, conservative: what the statement guarantees) or "proportional" (a relative alloy mismatch; vanishes for an isothermal run)'),
+    label: label("label in reports").optional(),
+  })
+  .describe("an extension or compensating cable between the probe head and the instrument's terminals");
+
+const contactMetalSchema = z.union([
+  z.enum(["copper", "platinum", "matching"]).describe('a tabulated contact metal, or "matching" (the thermocouple\'s own alloys)'),
+  z
+    .strictObject({
+      name: label("name of the metal"),
+      seebeckVsPlatinumMicrovoltsPerC: z.number().min(-100).max(100).describe("Seebeck coefficient against platinum, µV/°C"),
+    })
+    .describe("a contact metal stated by the user"),
+]);
+
+const connectorSchema = z
+  .strictObject({
+    arrangement: z
+      .enum(["terminates", "inline"])
+      .describe('"terminates": copper runs on to the instrument (the de facto reference junction); "inline": the same alloy continues'),
+    contactMetal: contactMetalSchema,
+    temperatureC: rangeC("temperature of the connector (absolute)").optional(),
+    aboveColdJunctionC: rangeC('temperature of the connector above the cold-junction sensor ("terminates" only)').optional(),
+    legDifferenceC: nonNegative('"terminates": difference between the two legs\' contact temperatures, ± °C').optional(),
+    positiveLegDifferenceC: nonNegative('"inline": temperature difference across the positive leg\'s contacts, ± °C').optional(),
+    negativeLegDifferenceC: nonNegative('"inline": temperature difference across the negative leg\'s contacts, ± °C').optional(),
+    legSeebeck: z
+      .strictObject({
+        positiveMicrovoltsPerC: z.number().min(-200).max(200).describe("positive leg against the contact metal, µV/°C"),
+        negativeMicrovoltsPerC: z.number().min(-200).max(200).describe("negative leg against the contact metal, µV/°C"),
+      })
+      .optional()
+      .describe("leg coefficients against the contact metal (default: the tables, from memory)"),
+    label: label("label in reports").optional(),
+  })
+  .describe("a connector or terminal block in the thermocouple circuit");
+
+const wireRunSchema = z
+  .strictObject({
+    lengthMetres: nonNegative("length of the pair (each leg), m"),
+    diameterMm: positive("diameter of each leg, mm").optional(),
+    awg: z.number().int().min(-3).max(40).optional().describe("American Wire Gauge of each leg"),
+  })
+  .describe("a length of thermocouple-alloy wire by gauge");
+
+const loopSchema = z
+  .strictObject({
+    thermocoupleWire: wireRunSchema.optional(),
+    thermocoupleOhms: nonNegative("loop resistance of the thermocouple, both legs, Ω").optional(),
+    cableWire: wireRunSchema.optional(),
+    cableOhms: nonNegative("loop resistance of the cable, both conductors, Ω").optional(),
+    otherOhms: nonNegative("other series resistance (filter resistors), Ω").optional(),
+    resistanceToleranceFraction: fraction("tolerance of the loop resistance").optional(),
+    biasCurrentNanoamps: nonNegative("amplifier input bias current, ± nA (sign unknown)").optional(),
+    detectionCurrentNanoamps: nonNegative("open-circuit detection current, nA").optional(),
+    detectionCurrentToleranceFraction: fraction("tolerance of the detection current").optional(),
+    detectionDirection: z
+      .enum(["pullUp", "pullDown"])
+      .optional()
+      .describe('"pullUp": reads high by I·R (an open loop goes upscale); "pullDown": reads low'),
+    label: label("label in reports").optional(),
+  })
+  .describe("the thermocouple loop's resistance and the bias and detection currents through it");
+
+const leakageSchema = z
+  .strictObject({
+    minimumShuntOhms: positive("lowest insulation (shunt) resistance at the operating temperature, Ω"),
+    loopOhms: nonNegative("loop resistance between the shunt and the amplifier, Ω"),
+    statedAtC: temperatureC("temperature at which the insulation resistance is stated").optional(),
+    label: label("label in reports").optional(),
+  })
+  .describe("insulation leakage at temperature across the hot end (design-specific: take it from the probe maker)");
+
+const ageingSchema = z
+  .strictObject({
+    driftCPer1000Hours: nonNegative("drift rate, °C per 1000 h at statedAtC").optional(),
+    totalDriftC: nonNegative("total drift over serviceHours, °C").optional(),
+    statedAtC: temperatureC("temperature the drift is stated at (the hot junction must not exceed it)"),
+    serviceHours: positive("service life between recalibrations, h"),
+    direction: z.enum(["up", "down", "symmetric"]).describe('"up": reads high by 0 … D; "down": low by 0 … D; "symmetric": ±D'),
+    label: label("label in reports").optional(),
+  })
+  .describe("ageing of the probe: a stated drift, accumulating linearly with time in service");
+
+const wireSchema = z
+  .strictObject({
+    cable: cableSchema.optional(),
+    connectors: z.array(connectorSchema).max(16).optional().describe("connectors and terminal blocks, probe side first"),
+    loop: loopSchema.optional(),
+    leakage: leakageSchema.optional(),
+    ageing: ageingSchema.optional(),
+  })
+  .describe("the wire between the probe and the amplifier input");
+
 const inputFilterSchema = z
   .strictObject({
     resistanceOhms: nonNegative("series resistance of the input RC filter, Ω"),
@@ -534,6 +662,7 @@ export const designFileSchema = z
     referenceAlternatives: z.array(referenceSchema).max(32).optional().describe("other reference options for `compare`"),
     resistors: resistorsSchema.optional(),
     ambient: ambientSchema,
+    wire: wireSchema.optional(),
     sourceDistributions: z
       .record(z.string().min(1).max(200), distributionOverrideSchema)
       .optional()

@@ -13,6 +13,7 @@ import type {
   ReferenceElement,
   ThermocoupleElement,
 } from "../chain/types.js";
+import type { WireDescription } from "../chain/wire/wireStage.js";
 import type { ReferenceOption, TripDesign, TripResistors, TripSetpoint } from "../trip/types.js";
 import type { DesignFile, DesignReference } from "./designSchema.js";
 import { HotjunctionRangeError } from "../errors.js";
@@ -28,6 +29,24 @@ function compact<T>(value: Record<string, unknown>): T {
 
 function thermocoupleOf(design: DesignFile): ThermocoupleElement {
   return compact<ThermocoupleElement>({ kind: "thermocouple", ...design.thermocouple, tolerance: compact(design.thermocouple.tolerance) });
+}
+
+/** The wire of a design file as chain elements (each element gets its `kind`). */
+function wireOf(design: DesignFile): WireDescription | undefined {
+  const w = design.wire;
+  if (w === undefined) return undefined;
+  const ranges = (o: Record<string, unknown>): Record<string, unknown> => {
+    const out: Record<string, unknown> = {};
+    for (const [k, v] of Object.entries(o)) out[k] = v !== null && typeof v === "object" && !Array.isArray(v) ? compact(v as Record<string, unknown>) : v;
+    return out;
+  };
+  return compact<WireDescription>({
+    cable: w.cable === undefined ? undefined : compact(ranges({ kind: "extensionCable", ...w.cable })),
+    connectors: w.connectors?.map((c) => compact(ranges({ kind: "connector", ...c }))),
+    loop: w.loop === undefined ? undefined : compact(ranges({ kind: "loopResistance", ...w.loop })),
+    leakage: w.leakage === undefined ? undefined : compact({ kind: "insulationLeakage", ...w.leakage }),
+    ageing: w.ageing === undefined ? undefined : compact({ kind: "ageing", ...w.ageing }),
+  });
 }
 
 function coldJunctionOf(design: DesignFile): ColdJunctionElement | undefined {
@@ -133,6 +152,7 @@ export function tripDesignFromDesign(design: DesignFile): TripDesign {
       matched: design.resistors.matched === undefined ? undefined : compact(design.resistors.matched),
     }),
     ambient: { minC: design.ambient.minC, maxC: design.ambient.maxC },
+    wire: wireOf(design),
     designColdJunctionC: design.designColdJunctionC,
     processLimits: design.processLimits === undefined ? undefined : { ...design.processLimits },
     sourceDistributions: design.sourceDistributions === undefined ? undefined : Object.fromEntries(
@@ -171,6 +191,7 @@ export function measurementChainFromDesign(design: DesignFile, reference: Design
     reference: referenceElement,
     detector,
     ambient: { minC: design.ambient.minC, maxC: design.ambient.maxC },
+    wire: wireOf(design),
     sourceDistributions: design.sourceDistributions === undefined ? undefined : Object.fromEntries(
       Object.entries(design.sourceDistributions).map(([k, v]) => [k, compact(v)]),
     ),

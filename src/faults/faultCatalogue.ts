@@ -3,7 +3,11 @@
  * @module
  */
 import type { MeasurementChain } from "../chain/types.js";
+import { _compile } from "../its90/compiled.js";
+import { _emfFromTemperature, _seebeckCoefficient } from "../its90/engine.js";
+import { thermocoupleData } from "../its90/resolveType.js";
 import { _invalidChoice, _requireFinite, _requireInRange, HotjunctionRangeError } from "../errors.js";
+import { detectionOffsetMicrovolts, loopResistanceOhms } from "../chain/wire/loopResistance.js";
 import type { Fault, FaultContext } from "./types.js";
 
 /** Options of {@link faultCatalogue} (the same meaning and defaults as in {@link FaultContext}). */
@@ -38,6 +42,12 @@ const mitigationText = {
   comparatorStuck: "periodic proof test with an injected signal; a supervisory check of the detector state against the reading",
   adc: "a firmware range check of the code (the end codes are faults); a hardware comparator beside the firmware trip",
   supply: "a de-energise-to-trip output stage (loss of power trips)",
+  cableShort: "route the cable away from heat and abrasion, in conduit; supervise plausibility or a second, independent sensor channel",
+  cableReversed: "polarized, colour-coded cable and connectors checked at commissioning; a range check that flags readings below the cold junction",
+  connector: "connectors with captive, polarized contacts; open-thermocouple detection (a pull-up detection current trips an open loop)",
+  leakage: "a probe whose insulation is rated at the working temperature; a proof test against a reference probe; a second, independent sensor",
+  recalibration: "a recalibration schedule with a hard stop (the service life in the design); a proof test against a reference probe",
+  detection: "supervise the detection current (a periodic open-loop test); keep margin to the hazard limit for its offset",
 } as const;
 
 // Deliberate repetition: faults are data, so each per-element list below is a run of fault literals of one
@@ -94,6 +104,92 @@ function thermocoupleFaults(offsetMv: number, wireShortC: number | undefined): F
     mitigation: mitigationText.ground,
   });
 
+  return faults;
+}
+
+/**
+ * The wire (when the chain has one): an open connector contact, the extension cable shorted or reversed,
+ * the probe's insulation collapsed, the open-circuit detection current lost. Each is data: an effect on a
+ * node, computed from the element (the cable's EMF from ITS-90 at its junction and the cold junction's
+ * centre temperatures).
+ */
+function wireFaults(chain: MeasurementChain): Fault[] {
+  const faults: Fault[] = [];
+  const add = (f: Fault): void => {
+    faults.push(f);
+  };
+  const wire = chain.wire;
+  if (wire === undefined) return faults;
+  const cable = wire.cable;
+  if (cable !== undefined) {
+    const ct = _compile(thermocoupleData(chain.thermocouple.type));
+    const tj = (cable.junctionTemperatureC.minC + cable.junctionTemperatureC.maxC) / 2;
+    const tcj = (chain.ambient.minC + chain.ambient.maxC) / 2;
+    const cableMv = _emfFromTemperature(ct, tj) - _emfFromTemperature(ct, tcj);
+    const hottest = cable.runTemperatureC.maxC;
+    add({
+      id: "cable.shorted",
+      element: "cable",
+      description: `extension cable's conductors shorted together at its hottest point (${hottest} °C): reads that temperature`,
+      effects: [{ kind: "thermocouple-short", atC: hottest }],
+      mitigation: mitigationText.cableShort,
+    });
+    add({
+      id: "cable.reversed",
+      element: "cable",
+      description: `extension cable connected with reversed polarity: its EMF E(${tj} °C) − E(${tcj} °C) subtracts instead of adding (ΔE = −2·${cableMv.toFixed(4)} mV)`,
+      effects: [{ kind: "offset-node", node: "thermocoupleEmf", millivolts: -2 * cableMv }],
+      mitigation: mitigationText.cableReversed,
+    });
+  }
+  (wire.connectors ?? []).forEach((c, i, all) => {
+    const name = all.length === 1 ? "connector" : `connector${i + 1}`;
+    add({
+      id: `${name}.openContact`,
+      element: "connector",
+      description: `${c.label ?? (c.arrangement === "terminates" ? "terminal block" : "connector")}: a contact open; the loop is broken as by an open thermocouple`,
+      effects: [{ kind: "open-thermocouple" }],
+      mitigation: mitigationText.connector,
+    });
+  });
+  if (wire.leakage !== undefined) {
+    add({
+      id: "probe.insulationCollapse",
+      element: "probe",
+      description: "probe insulation collapsed at temperature to the loop's own resistance (R_shunt = R_loop): the EMF at the input halves",
+      effects: [{ kind: "scale-node", node: "thermocoupleEmf", factor: 0.5 }],
+      mitigation: mitigationText.leakage,
+    });
+  }
+  const ageing = wire.ageing;
+  const drift = ageing === undefined ? 0 : (ageing.totalDriftC ?? ((ageing.driftCPer1000Hours ?? 0) * ageing.serviceHours) / 1000);
+  if (ageing !== undefined && drift > 0) {
+    // A missed recalibration: the drift runs on to twice its total, in its direction (the low side, which
+    // delays a trip, for a symmetric drift), as an EMF through S at the temperature the drift is stated at.
+    const ct = _compile(thermocoupleData(chain.thermocouple.type));
+    const sign = ageing.direction === "up" ? 1 : -1;
+    const mv = (sign * 2 * drift * _seebeckCoefficient(ct, ageing.statedAtC)) / 1000;
+    add({
+      id: "probe.recalibrationMissed",
+      element: "probe",
+      description: `probe not recalibrated after ${ageing.serviceHours} h: its drift runs on to ${sign > 0 ? "+" : "−"}${+(2 * drift).toPrecision(6)} °C (${(mv * 1000).toPrecision(4)} µV at ${ageing.statedAtC} °C)`,
+      effects: [{ kind: "offset-node", node: "thermocoupleEmf", millivolts: mv }],
+      mitigation: mitigationText.recalibration,
+    });
+  }
+  const loop = wire.loop;
+  if (loop !== undefined && (loop.detectionCurrentNanoamps ?? 0) > 0 && loop.detectionDirection !== undefined) {
+    // The nominal detection offset I·R is in the nominal chain; losing the current removes it.
+    const ohms = loopResistanceOhms(loop, chain.thermocouple.type).totalOhms;
+    const mv = detectionOffsetMicrovolts(loop.detectionCurrentNanoamps ?? 0, ohms, loop.detectionDirection) / 1000;
+    add({
+      id: "loop.detectionCurrentLost",
+      element: "loop",
+      description: `open-circuit detection current lost: its ${(mv * 1000).toPrecision(4)} µV offset through the ${ohms.toPrecision(4)} Ω loop disappears, and an open loop is no longer driven to a rail`,
+      effects: [{ kind: "offset-node", node: "thermocoupleEmf", millivolts: -mv }],
+      mitigation: mitigationText.detection,
+    });
+  }
   return faults;
 }
 
@@ -322,6 +418,7 @@ export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueO
 
   return [
     ...thermocoupleFaults(offsetMv, wireShortC),
+    ...wireFaults(chain),
     ...coldJunctionFaults(chain),
     ...amplifierFaults(chain),
     ...referenceFaults(chain, drift),

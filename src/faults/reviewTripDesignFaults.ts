@@ -91,6 +91,7 @@ export function reviewTripDesignFaults(
       divider,
       detector: design.comparator,
       ambient: design.ambient,
+      ...(design.wire !== undefined ? { wire: design.wire } : {}),
       ...(design.name !== undefined ? { label: design.name } : {}),
     };
     return reviewFaults(

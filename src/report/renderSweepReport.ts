@@ -8,12 +8,14 @@ import type { ErrorSweep, ReportFormat } from "./reportTypes.js";
 
 function rows(sweep: ErrorSweep): string[][] {
   const methods = sweep.rows[0]?.bands.map((b) => b.method) ?? [];
+  const withSources = sweep.rows.some((r) => r.largestSources !== undefined);
   return [
-    ["true °C", "nominal error °C", ...methods.map((m) => `${_methodShortName(m)} error °C`)],
+    ["true °C", "nominal error °C", ...methods.map((m) => `${_methodShortName(m)} error °C`), ...(withSources ? ["largest sources ±°C"] : [])],
     ...sweep.rows.map((r) => [
       _fixed(r.temperatureC, 1),
       _signed(r.nominalErrorC, 2),
       ...r.bands.map((b) => `${_signed(b.errorLowC, 2)} to ${_signed(b.errorHighC, 2)}`),
+      ...(withSources ? [(r.largestSources ?? []).map((s) => `${s.source} ${_fixed(s.halfSwingC, 2)}`).join(", ")] : []),
     ]),
   ];
 }

@@ -86,6 +86,7 @@ export function tripReportFromResult(result: TripDesignResult, methods: ReportMe
       pass: s.pass,
       reason: s.reason,
       errorSources: s.errorSources,
+      ...(s.bandOverService !== undefined ? { bandOverService: s.bandOverService } : {}),
     })),
     details,
     // The caution is printed once by the renderer; drop a copy the engine may add to its notes.
@@ -240,6 +241,18 @@ function coverageLines(report: TripReport): string[] {
   return out;
 }
 
+/** One line per setpoint with an ageing drift: how the worst-case band widens with time in service. */
+function serviceLines(report: TripReport): string[] {
+  return report.setpoints
+    .filter((s) => s.bandOverService !== undefined)
+    .map(
+      (s) =>
+        `${s.name}: worst-case band over time in service (probe ageing): ` +
+        (s.bandOverService ?? []).map((p) => `${+p.hours.toPrecision(6)} h ${bandText(p.lowC, p.highC)} °C`).join("; ") +
+        ".",
+    );
+}
+
 function renderText(report: TripReport): string {
   const heading = `${report.title}${report.designName !== undefined ? `: ${report.designName}` : ""} — ${report.pass ? "PASS" : "FAIL"}`;
   const out = [heading, "=".repeat([...heading].length), "", ...report.details, "", _textTable(setpointRows(report)), ""];
@@ -250,6 +263,7 @@ function renderText(report: TripReport): string {
     const lines = _buildSheetLines(report.buildSheet);
     if (lines.length > 0) out.push("", ...lines);
   }
+  out.push(...serviceLines(report));
   for (const block of sourceRows(report, 8)) {
     out.push("", `Largest error sources at "${block.name}":`, _textTable(block.rows));
   }
@@ -274,6 +288,7 @@ function renderMarkdown(report: TripReport): string {
     "",
     ...report.setpoints.map((s) => `- **${s.name}**: ${s.reason}`),
     ...coverageLines(report).map((l) => `- ${l}`),
+    ...serviceLines(report).map((l) => `- ${l}`),
   ];
   if (report.buildSheet !== undefined) {
     for (const t of _buildSheetTables(report.buildSheet)) out.push("", `## ${t.title}`, "", _markdownTable(t.rows));

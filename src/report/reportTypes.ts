@@ -3,7 +3,7 @@
  * design, firmware trip from an ADC chain, error sweep).
  * @module
  */
-import type { TripBand, TripErrorSource } from "../trip/types.js";
+import type { TripBand, TripErrorSource, TripServicePoint } from "../trip/types.js";
 import type { TripBuildSheet } from "../trip/buildSheet.js";
 import type { TripDynamicsResult } from "../trip/tripDynamics.js";
 import type { PropagationMethod } from "../uncertainty/types.js";
@@ -42,6 +42,8 @@ export interface TripReportSetpoint {
   readonly reason: string;
   /** Error sources, largest first. */
   readonly errorSources: readonly TripErrorSource[];
+  /** Worst-case trip band against time in service (the probe's ageing drift grows); present with an ageing drift. */
+  readonly bandOverService?: readonly TripServicePoint[];
 }
 
 /** A trip report. */
@@ -73,6 +75,11 @@ export interface ErrorSweepRow {
   readonly nominalErrorC: number;
   /** Error bounds (indicated − true) by method, °C. */
   readonly bands: readonly { readonly method: PropagationMethod; readonly errorLowC: number; readonly errorHighC: number }[];
+  /**
+   * The largest error sources at this temperature by name, largest first, with half the worst-case swing each
+   * causes alone (± °C, the trip table's measure); absent when not computed.
+   */
+  readonly largestSources?: readonly { readonly source: string; readonly halfSwingC: number }[];
 }
 
 /** An error sweep of a chain over temperature. */

@@ -8,6 +8,9 @@ import { midRailDivider } from "./midRailDivider.js";
 import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
 import type { DividerElement, MeasurementChain, ReferenceElement } from "../chain/types.js";
 import { propagate } from "../uncertainty/propagate.js";
+import { rectangular } from "../uncertainty/rectangular.js";
+import type { Distribution } from "../uncertainty/types.js";
+import { ageingBandAt } from "../chain/wire/probe.js";
 import type { PropagationMethod, PropagationResult } from "../uncertainty/types.js";
 import { _realizeReference } from "./realizeReference.js";
 import { selectDividerPair } from "./selectDividerPair.js";
@@ -32,6 +35,7 @@ import type {
   TripDesign,
   TripDesignResult,
   TripErrorSource,
+  TripServicePoint,
 } from "./types.js";
 
 /** Options of {@link designTrip}. */
@@ -119,6 +123,7 @@ function buildTripChain(
     ...(divider !== undefined ? { divider } : {}),
     detector: design.comparator,
     ambient: design.ambient,
+    ...(design.wire !== undefined ? { wire: design.wire } : {}),
     ...(design.sourceDistributions !== undefined ? { sourceDistributions: design.sourceDistributions } : {}),
     ...(design.name !== undefined ? { label: design.name } : {}),
   };
@@ -207,6 +212,34 @@ function reasonFor(name: string, b: TripBand, limits: ProcessLimits, label: stri
   if (!(low > 0)) problems.push(`it can trip ${fmt(-low)} °C at or below the highest normal operating temperature ${limits.maxNormalOperatingC} °C (nuisance trips)`);
   if (!(high > 0)) problems.push(`it can fail to trip until ${fmt(-high)} °C at or beyond the hazard limit ${limits.hazardLimitC} °C`);
   return { pass: false, reason: `${where}: ${problems.join(", and ")}.` };
+}
+
+/**
+ * The worst-case trip band at five times in service (0, ¼, ½, ¾ and the whole service life): the probe's
+ * ageing source is replaced by its band at that time (linear accumulation, `ageingBandAt`); undefined
+ * without an ageing drift.
+ */
+function serviceBands(
+  design: TripDesign,
+  model: (x: Readonly<Record<string, number>>) => number,
+  inputs: Readonly<Record<string, Distribution>>,
+  normalBoundCoverage: number,
+): TripServicePoint[] | undefined {
+  const ageing = design.wire?.ageing;
+  if (ageing === undefined || inputs["probe.ageing"] === undefined) return undefined;
+  const out: TripServicePoint[] = [];
+  for (const f of [0, 0.25, 0.5, 0.75, 1]) {
+    const at = ageingBandAt(ageing, f * ageing.serviceHours);
+    const rest: Record<string, Distribution> = { ...inputs };
+    delete rest["probe.ageing"];
+    if (at.highC > at.lowC) rest["probe.ageing"] = rectangular({ lower: at.lowC, upper: at.highC });
+    const r =
+      Object.keys(rest).length === 0
+        ? { interval: [model({}), model({})] as const }
+        : propagate(model, rest, { method: "worst-case", normalBoundCoverage });
+    out.push({ hours: at.hours, lowC: r.interval[0], highC: r.interval[1] });
+  }
+  return out;
 }
 
 /** Resolves the threshold networks (searched, or given) and where each setpoint sits in them. */
@@ -471,6 +504,7 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
         standardUncertaintyC: rss.contributions[s.name]?.contribution ?? 0,
       }))
       .sort((a, b) => b.worstCaseC - a.worstCaseC);
+    const bandOverService = serviceBands(design, model, inputs, normalBoundCoverage);
     return {
       name: plan.name,
       tripTemperatureC: plan.tripC,
@@ -496,6 +530,7 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
       errorSources,
       releaseWorstCase: { lowC: releaseLow, highC: releaseHigh },
       releaseMarginToNormalC: releaseLow - plan.limits.maxNormalOperatingC,
+      ...(bandOverService !== undefined ? { bandOverService } : {}),
     };
   });
 

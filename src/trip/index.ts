@@ -22,6 +22,7 @@ export type {
   TripDesign,
   TripDesignResult,
   TripErrorSource,
+  TripServicePoint,
   TripResistors,
   TripSetpoint,
 } from "./types.js";

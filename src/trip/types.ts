@@ -12,6 +12,7 @@
  */
 import type { MidRailDivider } from "./midRailDivider.js";
 import type { TripBuildSheet } from "./buildSheet.js";
+import type { WireDescription } from "../chain/wire/wireStage.js";
 import type { PreferredSeriesName } from "../data/preferredSeries.js";
 import type {
   AmbientRange,
@@ -136,6 +137,8 @@ export interface TripDesign {
   readonly resistors: TripResistors;
   /** Ambient range of the electronics and the cold junction, °C. */
   readonly ambient: AmbientRange;
+  /** The wire between the probe and the amplifier (cable, connectors, loop, leakage, ageing). Default: none. */
+  readonly wire?: WireDescription;
   /** Cold-junction temperature at which thresholds are designed, °C. Default the middle of the ambient range. */
   readonly designColdJunctionC?: number;
   /** Default process limits for setpoints that do not give their own. */
@@ -264,6 +267,21 @@ export interface SetpointTripResult {
    * back at its highest normal operating temperature; ≤ 0 means it must cool that much further.
    */
   readonly releaseMarginToNormalC: number;
+  /**
+   * How the worst-case trip band widens with time in service since the last recalibration (the probe's
+   * ageing drift grows linearly to its stated total at the service life); present when the wire has an
+   * ageing element with a drift.
+   */
+  readonly bandOverService?: readonly TripServicePoint[];
+}
+
+/** The worst-case trip band after a time in service. */
+export interface TripServicePoint {
+  /** Time in service since the last recalibration, h. */
+  readonly hours: number;
+  /** Worst-case trip band, °C. */
+  readonly lowC: number;
+  readonly highC: number;
 }
 
 /** Result of `designTrip`. */

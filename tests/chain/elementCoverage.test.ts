@@ -7,7 +7,7 @@
  */
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { _compileChain } from "../../src/chain/_compileChain.js";
+import { _compileChain, _sourcesAt } from "../../src/chain/_compileChain.js";
 import type { MeasurementChain } from "../../src/chain/types.js";
 import { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign } from "../../src/design/designToObjects.js";
 import { parseDesign } from "../../src/design/parseDesign.js";
@@ -38,6 +38,7 @@ const bogus = "no-such-kind";
 const referenceVariants = choices(() => _compileChain({ ...base, reference: { ...base.reference, variant: bogus } } as unknown as MeasurementChain));
 const amplifierKinds = choices(() => _compileChain({ ...base, amplifier: { kind: bogus } } as unknown as MeasurementChain));
 const detectorKinds = choices(() => _compileChain({ ...base, detector: { kind: bogus } } as unknown as MeasurementChain));
+const wireSlots = choices(() => _compileChain({ ...base, wire: { [bogus]: {} } } as unknown as MeasurementChain));
 const coldJunctionMethods = choices(() =>
   _compileChain({ ...base, amplifier: undefined, coldJunction: { kind: "coldJunction", method: bogus } } as unknown as MeasurementChain),
 );
@@ -45,7 +46,7 @@ const coldJunctionMethods = choices(() =>
 /** Every chain the example design files give: each reference and alternative, as a trip builds it. */
 function exampleChains(): MeasurementChain[] {
   const out: MeasurementChain[] = [];
-  for (const file of ["ceramic-kiln-cutout.json", "heated-enclosure-adc.json", "reflow-oven-trip.json"]) {
+  for (const file of ["ceramic-kiln-cutout.json", "heated-enclosure-adc.json", "reflow-oven-trip.json", "heat-treat-furnace-wire.json"]) {
     const design = parseDesign(readFileSync(`examples/${file}`, "utf8"));
     for (const reference of [design.reference, ...(design.referenceAlternatives ?? [])]) {
       const chain = measurementChainFromDesign(design, reference);
@@ -68,6 +69,7 @@ describe("every element kind and reference variant is in the schema, the catalog
     expect(amplifierKinds).toEqual(["amplifier", "fixedScaleAmplifier"]);
     expect(detectorKinds).toEqual(["comparator", "adc"]);
     expect(coldJunctionMethods).toEqual(["software", "hardware"]);
+    expect(wireSlots).toEqual(["cable", "connectors", "loop", "leakage", "ageing"]);
   });
 
   const chains = exampleChains();
@@ -96,6 +98,30 @@ describe("every element kind and reference variant is in the schema, the catalog
         }
       });
     }
+  }
+
+  // The wire's slots: each reached by an example design file, compiled, its sources in the chain's list by
+  // their role, and faults of its role in the catalogue.
+  const wireRole: Record<string, string> = { cable: "cable", connectors: "connector", loop: "loop", leakage: "probe", ageing: "probe" };
+  const wireSource: Record<string, RegExp> = {
+    cable: /^cable\./,
+    connectors: /^connector\d*\./,
+    loop: /^loop\./,
+    leakage: /^probe\.leakage$/,
+    ageing: /^probe\.ageing$/,
+  };
+  for (const slot of wireSlots) {
+    it(`wire slot "${slot}": a design file reaches it, it compiles, its sources are listed and the fault catalogue covers it`, () => {
+      const withIt = chains.filter((c) => (c.wire as Record<string, unknown> | undefined)?.[slot] !== undefined);
+      expect(withIt.length, `no example design file gives a chain with wire.${slot}`).toBeGreaterThan(0);
+      for (const chain of withIt) {
+        const cc = _compileChain(chain);
+        const names = _sourcesAt(cc, 500).map((s) => s.name);
+        expect(names.some((n) => wireSource[slot]?.test(n)), `${names.join(", ")} lacks a ${slot} source`).toBe(true);
+        const elements = new Set(faultCatalogue(chain).map((f) => f.element));
+        expect(elements.has(wireRole[slot] as string), `${[...elements].join(", ")} lacks ${wireRole[slot]}`).toBe(true);
+      }
+    });
   }
 
   it("the fixed slots (thermocouple, divider) are reached and have faults", () => {

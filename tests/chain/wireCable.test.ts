@@ -19,6 +19,7 @@ import { _extensionCableStage } from "../../src/chain/wire/extensionCable.js";
 
 const kx: ExtensionCableElement = {
   kind: "extensionCable",
+  mismatch: "proportional", // the model these checks are about (the default is the conservative envelope)
   grade: "extension",
   tolerance: { standard: "ASTM E230", limits: "standard" },
   runTemperatureC: { minC: 0, maxC: 200 },

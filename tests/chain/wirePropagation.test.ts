@@ -25,6 +25,7 @@ describe("wire sources through the propagation methods", () => {
   const wire: WireDescription = {
     cable: {
       kind: "extensionCable",
+      mismatch: "proportional",
       grade: "extension",
       tolerance: { standard: "ASTM E230", limits: "standard" },
       runTemperatureC: { minC: 0, maxC: 200 },

@@ -35,7 +35,7 @@ describe("wire properties", () => {
       fc.property(fc.constantFrom(...cableTypes), fc.constantFrom(...tolerances), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true }), (type, tol, f, u) => {
         const s = cableToleranceStatement(type, "extension", tol);
         const t = Math.max(0, s.minC) + f * (s.maxC - Math.max(0, s.minC));
-        const cable: ExtensionCableElement = { kind: "extensionCable", grade: "extension", tolerance: tol, runTemperatureC: { minC: t, maxC: t }, junctionTemperatureC: { minC: t, maxC: t } };
+        const cable: ExtensionCableElement = { kind: "extensionCable", grade: "extension", tolerance: tol, runTemperatureC: { minC: t, maxC: t }, junctionTemperatureC: { minC: t, maxC: t }, mismatch: "proportional" };
         const stage = _extensionCableStage(cable, type, { minC: t, maxC: t }, ctx, "p");
         const limit = stage.sources.find((x) => x.name === "cable.tolerance")?.limit ?? 0;
         expect(Math.abs(stage.emfErrorMillivolts({ "cable.tolerance": u * limit }, t))).toBe(0);

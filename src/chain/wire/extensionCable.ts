@@ -8,7 +8,7 @@
  * T(t) = tol·S(t). IEC statements are in µV already. At the tip an EMF error ΔE appears as ΔE/S(t_tip),
  * so a rated ±tol °C maps to about tol·S(t_cable)/S(t_tip).
  *
- * Between the points of the statement two models: `"proportional"` (default): the cable's EMF is
+ * Between the points of the statement two models: `"proportional"`: the cable's EMF is
  * (1 + k)·[E(t_j) − E(t_cj)] with |k| ≤ k_max = min over the rated range of T(t)/|E(t)| (so the deviation from
  * 0 °C stays inside the tolerance everywhere); a cable with both ends at one temperature adds nothing (a
  * homogeneous conductor without a gradient makes no EMF); it rests on that assumption about the deviation's
@@ -17,7 +17,8 @@
  * (proof: |k|·|E(t_j) − E(t_cj)| ≤ k_max·(|E(t_j)| + |E(t_cj)|) ≤ T(t_j) + T(t_cj), as k_max ≤ T(t)/|E(t)| at
  * every t of the rated range); tests/chain/wireProperties.test.ts checks it over many inputs. The designer's
  * rule tol·S(t_cable)/S(t_tip) lies between the two; the proportional model meets it where the cable spans its
- * rating point from 0 °C.
+ * rating point from 0 °C. `"envelope"` is the default: a safety band must hold for every cable the
+ * statement admits, not only for one whose deviation has the assumed shape.
  * @module
  */
 import { astmExtensionWireTolerances, iecCableTolerances, type CableToleranceEntry } from "../../data/cableTolerances.js";
@@ -283,7 +284,7 @@ export function _extensionCableStage(
   _requireWithin(run, statement, "runTemperatureC", where, "is outside the range where the cable's tolerance holds");
   _requireWithin(junction, run, "junctionTemperatureC", where, "is outside the cable's run temperature range");
   _requireWithin(ambient, run, "ambient", where, "(the cable's cold end, at the terminals) is outside the cable's run temperature range");
-  const mismatch = (o["mismatch"] ?? "proportional") as CableMismatchModel;
+  const mismatch = (o["mismatch"] ?? "envelope") as CableMismatchModel;
   const ct = _compile(thermocoupleData(type));
   const sources: WireErrorSource[] = [];
   if (mismatch === "envelope") {
@@ -355,7 +356,7 @@ function peakInside(ct: CompiledType, s: CableToleranceStatement, r: Temperature
  * @param tipC - hot-junction temperature, °C
  * @param junctionC - cable junction temperature, °C (rated range)
  * @param coldJunctionC - cable cold end (terminals), °C (rated range)
- * @param mismatch - default `"proportional"`
+ * @param mismatch - default `"proportional"` (the designer's rule; the cable element defaults to `"envelope"`)
  * @returns ± °C at the tip
  * @throws HotjunctionRangeError when a cable temperature is outside the rated range or a temperature outside the type's range
  * @example

@@ -11,7 +11,7 @@
  * @module
  */
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
-import { HotjunctionTypeError } from "../../errors.js";
+import { _invalidChoice, HotjunctionTypeError } from "../../errors.js";
 import { _compile, type CompiledType } from "../../its90/compiled.js";
 import { _emfFromTemperature } from "../../its90/engine.js";
 import { thermocoupleData } from "../../its90/resolveType.js";
@@ -41,6 +41,9 @@ export interface WireDescription {
   readonly ageing?: AgeingElement;
 }
 
+/** @internal The wire's slots, in signal-path order (the compile switch of the wire: an unknown key is refused). */
+export const _wireSlots = ["cable", "connectors", "loop", "leakage", "ageing"] as const;
+
 /** @internal The wire stage. */
 export interface _WireStage {
   readonly cable: _ExtensionCableStage | undefined;
@@ -69,6 +72,7 @@ export function _wireStage(
   context: string,
 ): _WireStage {
   const w = _requireObject(wire, "wire", context);
+  for (const key of Object.keys(w)) if (!_wireSlots.includes(key as (typeof _wireSlots)[number])) _invalidChoice("wire element", key, _wireSlots, context);
   const amb = _checkAmbient(ambient, context);
   const cable = w["cable"] === undefined ? undefined : _extensionCableStage(wire.cable as ExtensionCableElement, type, amb, ctx, `${context}, cable`);
   const list = w["connectors"] === undefined ? [] : (wire.connectors as readonly ConnectorElement[]);

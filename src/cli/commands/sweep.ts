@@ -117,6 +117,10 @@ export function registerSweepCommand(program: Command, context: CommandContext):
           temperatureC: t,
           nominalErrorC: evaluation.indicatedC - t,
           bands: evaluation.bounds.map((b) => ({ method: b.method, errorLowC: b.errorLowC, errorHighC: b.errorHighC })),
+          largestSources: [...evaluation.contributions]
+            .sort((a, b) => b.worstCaseSwingC - a.worstCaseSwingC)
+            .slice(0, 3)
+            .map((c) => ({ source: c.source, halfSwingC: c.worstCaseSwingC / 2 })),
         });
         progress.update((i + 1) / count);
       });

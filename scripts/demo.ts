@@ -1,6 +1,6 @@
 /**
  * `npm run demo`: runs the example designs through the CLI in-process (from src, no build needed), prints the
- * reports and writes the SVG charts into out/ (replacing earlier demo charts there). `check` and `compare` run
+ * reports and writes the SVG charts into out/ (replacing earlier demo charts there). `check`, `compare` and `runaway` run
  * with --report-only: the demo shows reports, including options that fail their margins, and is not a CI gate.
  */
 import { mkdirSync } from "node:fs";
@@ -16,6 +16,9 @@ const io = { ..._processIo(), cwd: root };
 const runs: string[][] = [
   ["check", "examples/ceramic-kiln-cutout.json", "--svg", "out/ceramic-kiln-trip-bands.svg", "--force", "--report-only"],
   ["compare", "examples/ceramic-kiln-cutout.json", "--report-only"],
+  // The kiln states invented dynamics: its static bands pass, but the slowest unit's runaway peak at stoneware
+  // passes the hazard limit (check folds that into its verdict; runaway shows it alone and draws the chart).
+  ["runaway", "examples/ceramic-kiln-cutout.json", "--svg", "out/ceramic-kiln-runaway.svg", "--force", "--report-only"],
   ["check", "examples/reflow-oven-trip.json", "--svg", "out/reflow-oven-trip-bands.svg", "--force", "--report-only"],
   ["compare", "examples/reflow-oven-trip.json", "--report-only"],
   ["check", "examples/heated-enclosure-adc.json", "--svg", "out/heated-enclosure-trip-bands.svg", "--force", "--report-only"],

@@ -99,6 +99,7 @@ export {
   arcsine,
   type ArcsineOptions,
   type Contribution,
+  createMonteCarloPool,
   type Distribution,
   distributionCoverageInterval,
   type DistributionCoverageIntervalOptions,
@@ -106,13 +107,19 @@ export {
   distributionQuantile,
   type InputDistribution,
   type Model,
+  type ModelReference,
+  type MonteCarloPool,
   normal,
   normalCdf,
   normalDistribution,
   type NormalOptions,
   normalQuantile,
   propagate,
+  propagateCommonDraws,
+  type PropagateCommonDrawsOptions,
   type PropagateOptions,
+  propagateParallel,
+  type PropagateParallelOptions,
   type PropagationMethod,
   type PropagationModel,
   type PropagationResult,
@@ -268,6 +275,21 @@ export {
   type TripErrorSource,
   type TripResistors,
   type TripSetpoint,
+} from "./trip/index.js";
+
+// Response time folded into the trip verdict (issue 14)
+export {
+  chainSignalSlope,
+  type ChainSignalSlope,
+  tripDynamics,
+  type TripDynamicsCase,
+  type TripDynamicsInput,
+  type TripDynamicsModel,
+  type TripDynamicsNoise,
+  type TripDynamicsNoiseFigures,
+  type TripDynamicsResult,
+  type TripDynamicsSetpoint,
+  type TripDynamicsSetpointInput,
 } from "./trip/index.js";
 
 // Failure-mode review of a trip chain (fault catalogue, single-fault review, renderers)

@@ -9,12 +9,12 @@ import { isHotjunctionError } from "../errors.js";
 export const usageExitCode = 2;
 /** Exit code of any other failure (unreadable or special input file, failed write, internal error). */
 export const failureExitCode = 1;
-/** Exit code of `check` and `compare` when the design fails its margins (turned off by `--report-only`). */
+/** Exit code of `check`, `compare` and `runaway` when the design fails its margins (turned off by `--report-only`). */
 export const marginFailExitCode = 3;
 
 /** Every exit code of the CLI and what it means. */
 export const exitCodes: readonly { readonly code: number; readonly meaning: string }[] = [
-  { code: 0, meaning: "success (check/compare: the design keeps its margins, or --report-only)" },
+  { code: 0, meaning: "success (check/compare/runaway: the design keeps its margins, or --report-only)" },
   {
     code: 1,
     meaning: "a file could not be read or written (missing, not a regular file, full disk, permission) or an internal error",
@@ -23,7 +23,7 @@ export const exitCodes: readonly { readonly code: number; readonly meaning: stri
     code: 2,
     meaning: "usage or validation error: bad argument or option, invalid design file, output refused (exists, input, link, device)",
   },
-  { code: 3, meaning: "check/compare: the design fails its margins (the report is still printed or written)" },
+  { code: 3, meaning: "check/compare/runaway: the design fails its margins, with dynamics by its runaway peak (the report is still printed or written)" },
 ];
 
 /** The exit-code table as `--help` prints it. @internal */

@@ -28,6 +28,7 @@ const commandLoaders: readonly (readonly [string, () => Promise<Registration>])[
   ["compare", async () => (await import("./commands/compare.js")).registerCompareCommand],
   ["sweep", async () => (await import("./commands/sweep.js")).registerSweepCommand],
   ["faults", async () => (await import("./commands/faults.js")).registerFaultsCommand],
+  ["runaway", async () => (await import("./commands/runaway.js")).registerRunawayCommand],
   ["schema", async () => (await import("./commands/schema.js")).registerSchemaCommand],
 ];
 

@@ -55,6 +55,23 @@ function checkReference(reference: DesignReference, path: string, out: DesignRul
   }
 }
 
+/** The `dynamics` section's signal path matches the detector: analog for a comparator, firmware for an ADC. */
+function checkDynamicsRules(design: DesignFile, out: DesignRuleProblem[]): void {
+  const path = design.dynamics?.signalPath;
+  if (design.dynamics === undefined) return;
+  if (design.adc !== undefined && design.comparator === undefined && path?.kind !== "firmware") {
+    out.push({
+      path: "dynamics.signalPath",
+      problem: path === undefined
+        ? 'required key is missing (an ADC design trips in firmware: give kind "firmware" with samplePeriodSeconds, digitalFilter, debounceSamples)'
+        : 'must be kind "firmware" in an ADC design (the trip is decided by sampled firmware)',
+    });
+  }
+  if (design.comparator !== undefined && design.adc === undefined && path?.kind === "firmware") {
+    out.push({ path: "dynamics.signalPath.kind", problem: 'must be "analog" in a comparator design (the comparator decides the trip)' });
+  }
+}
+
 /**
  * Checks the cross-field rules; returns every broken rule (empty when the design is consistent).
  * @internal
@@ -122,6 +139,7 @@ export function _checkDesignRules(design: DesignFile): DesignRuleProblem[] {
   ) {
     out.push({ path: "resistors.minDividerCurrentMilliamps", problem: `is above maxDividerCurrentMilliamps (${resistors.maxDividerCurrentMilliamps})` });
   }
+  checkDynamicsRules(design, out);
   checkReference(design.reference, "reference", out);
   const referenceNames = new Set<string>([design.reference.name]);
   (design.referenceAlternatives ?? []).forEach((reference, i) => {

@@ -309,6 +309,129 @@ const protectionSchema = z
   })
   .describe("protection facts for the single-fault review (`faults`); command-line options override");
 
+
+const inputFilterSchema = z
+  .strictObject({
+    resistanceOhms: nonNegative("series resistance of the input RC filter, Ω"),
+    capacitanceFarads: nonNegative("shunt capacitance of the input RC filter, F"),
+  })
+  .describe("first-order input RC filter, τ = R·C");
+const amplifierBandwidthHz = positive("amplifier −3 dB bandwidth, Hz (first-order roll-off, τ = 1/(2πf))").optional();
+const mainsHz = z.literal([50, 60]).describe("mains frequency, Hz: 50 or 60");
+
+const dynamicsSchema = z
+  .strictObject({
+    runaway: z.discriminatedUnion("kind", [
+      z
+        .strictObject({ kind: z.literal("constantRate"), rateCPerSecond: positive("rate of rise with the heater stuck on, °C/s") })
+        .describe("a stated constant rate of rise; the load holds its temperature after heat off"),
+      z
+        .strictObject({
+          kind: z.literal("heaterPower"),
+          heaterWatts: positive("heater power with the heater stuck on, W"),
+          loadCapacityJoulesPerK: positive("thermal capacity of the heated load, J/K"),
+          lossWattsPerK: nonNegative("loss conductance from the load to ambient, W/K (0: adiabatic)"),
+          ambientC: temperatureC("ambient the load loses heat to"),
+          element: z
+            .strictObject({
+              capacityJoulesPerK: positive("thermal capacity of the heater element, J/K"),
+              couplingWattsPerK: positive("conductance from element to load, W/K"),
+            })
+            .optional()
+            .describe("the heater element as a second thermal node (stored heat after the cut)"),
+        })
+        .describe("a first-order load heated by a stated power, approaching ambientC + heaterWatts/lossWattsPerK"),
+    ]),
+    sensor: z
+      .discriminatedUnion("kind", [
+        z.strictObject({ kind: z.literal("firstOrder"), timeConstantSeconds: nonNegative("time constant τ, s") }).describe("first-order probe"),
+        z
+          .strictObject({ kind: z.literal("responseTime"), responseTime632Seconds: nonNegative("63.2 % step response time, s") })
+          .describe("first-order probe given by its 63.2 % response time"),
+        z
+          .strictObject({
+            kind: z.literal("twoLags"),
+            wellTimeConstantSeconds: nonNegative("time constant of the thermowell, s"),
+            probeTimeConstantSeconds: nonNegative("time constant of the probe in the well, s"),
+          })
+          .describe("a sheathed probe in a thermowell: two cascaded first-order lags"),
+      ])
+      .optional(),
+    signalPath: z
+      .discriminatedUnion("kind", [
+        z
+          .strictObject({
+            kind: z.literal("analog"),
+            inputFilter: inputFilterSchema.optional(),
+            amplifierBandwidthHz,
+            comparatorDelaySeconds: nonNegative("comparator propagation delay, s").optional(),
+          })
+          .describe("comparator path (designs with a comparator)"),
+        z
+          .strictObject({
+            kind: z.literal("firmware"),
+            inputFilter: inputFilterSchema.optional(),
+            amplifierBandwidthHz,
+            samplePeriodSeconds: positive("ADC sample (decision) period, s"),
+            digitalFilter: z
+              .discriminatedUnion("kind", [
+                z.strictObject({ kind: z.literal("movingAverage"), samples: z.number().int().min(1).max(100_000).describe("samples averaged") }),
+                z.strictObject({
+                  kind: z.literal("firstOrderIir"),
+                  coefficient: z.number().gt(0).max(1).describe("coefficient a of y[n] = y[n−1] + a·(x[n] − y[n−1]), 0 < a ≤ 1"),
+                }),
+              ])
+              .optional()
+              .describe("digital filter of the firmware"),
+            debounceSamples: z.number().int().min(1).max(100_000).optional().describe("consecutive samples at or above the threshold before the trip (default 1)"),
+          })
+          .describe("firmware path (designs with an ADC): sampling, digital filter, debounce"),
+      ])
+      .optional()
+      .describe("signal path from sensor to trip decision (omitted: no lag)"),
+    outputStages: z
+      .array(
+        z.discriminatedUnion("kind", [
+          z.strictObject({ kind: z.literal("relay"), releaseTimeSeconds: nonNegative("release (drop-out) time, s") }).describe("relay or contactor"),
+          z.strictObject({ kind: z.literal("solidStateRelay"), mainsFrequencyHz: mainsHz }).describe("turns off at the next current zero (up to half a mains period)"),
+          z.strictObject({ kind: z.literal("deEnergiseDelay"), delaySeconds: nonNegative("own delay of a de-energise-to-trip stage, s") }).describe("driver, watchdog or hold-up delay"),
+        ]),
+      )
+      .max(16)
+      .optional()
+      .describe("output stages between the trip decision and heat off, in series"),
+    noise: z
+      .strictObject({
+        sensitivityVoltsPerC: positive("signal slope at the comparator or ADC input, V/°C (default: from the chain at each setpoint)").optional(),
+        white: z
+          .discriminatedUnion("kind", [
+            z.strictObject({
+              kind: z.literal("density"),
+              densityVoltsPerRootHertz: nonNegative("one-sided noise density at the comparator or ADC input, V/√Hz"),
+              bandwidthHz: positive("bandwidth of the ideal low-pass the noise is flat within, Hz"),
+            }),
+            z.strictObject({
+              kind: z.literal("rms"),
+              rmsVolts: nonNegative("rms noise at the comparator or ADC input, V"),
+              bandwidthHz: positive("bandwidth of the ideal low-pass the noise is flat within, Hz"),
+            }),
+          ])
+          .optional()
+          .describe("band-limited white noise"),
+        mainsPickup: z
+          .strictObject({
+            amplitudeVolts: nonNegative("peak pickup at the comparator or ADC input scale, before the filter's attenuation, V"),
+            frequencyHz: mainsHz,
+          })
+          .optional()
+          .describe("mains pickup, a deterministic sinusoid"),
+        chatterTargetPerHour: positive("highest acceptable rate of output re-crossings at the threshold, per hour"),
+      })
+      .optional()
+      .describe("noise at the comparator or ADC input"),
+  })
+  .describe("response time of the trip through a runaway (heater stuck on): process, sensor, signal path, output stages, noise");
+
 /** The whole design file, version 1. */
 export const designFileSchema = z
   .strictObject({
@@ -334,6 +457,7 @@ export const designFileSchema = z
       .describe("distribution overrides by error-source name"),
     analysis: analysisSchema.optional(),
     protection: protectionSchema.optional(),
+    dynamics: dynamicsSchema.optional(),
   })
   .describe("a hotjunction over-temperature protection design");
 
@@ -341,3 +465,5 @@ export const designFileSchema = z
 export type DesignFile = z.infer<typeof designFileSchema>;
 /** One reference option as written in a design file. */
 export type DesignReference = z.infer<typeof referenceSchema>;
+/** The `dynamics` section as written in a design file. */
+export type DesignDynamics = z.infer<typeof dynamicsSchema>;

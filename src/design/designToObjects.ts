@@ -16,6 +16,7 @@ import type {
 import type { ReferenceOption, TripDesign, TripResistors, TripSetpoint } from "../trip/types.js";
 import type { DesignFile, DesignReference } from "./designSchema.js";
 import { HotjunctionRangeError } from "../errors.js";
+import type { TripDynamicsModel } from "../trip/tripDynamics.js";
 
 /** Copies an object without its `undefined` members (exact optional properties). */
 function compact<T>(value: Record<string, unknown>): T {
@@ -174,4 +175,30 @@ export function measurementChainFromDesign(design: DesignFile, reference: Design
     ),
     label: design.name,
   });
+}
+
+/** Copies plain JSON data without `undefined` members, at every depth. */
+function compactDeep(value: unknown): unknown {
+  if (Array.isArray(value)) return value.map(compactDeep);
+  if (typeof value !== "object" || value === null) return value;
+  const out: Record<string, unknown> = {};
+  for (const [key, member] of Object.entries(value)) if (member !== undefined) out[key] = compactDeep(member);
+  return out;
+}
+
+/**
+ * The response-time model of a design file's `dynamics` section (the same keys as the library's `DynamicsModel`;
+ * the noise slope may be left out, to be taken from the chain at each setpoint by {@link signalSlopeFromDesign}).
+ * @param design - a validated design
+ * @returns the model, or `undefined` when the design states no dynamics
+ * @example
+ * ```ts
+ * import { dynamicsModelFromDesign, parseDesign } from "hotjunction/design";
+ * import { readFileSync } from "node:fs";
+ * const design = parseDesign(readFileSync("examples/ceramic-kiln-cutout.json", "utf8"));
+ * console.log(dynamicsModelFromDesign(design)?.sensor?.kind); // "twoLags"
+ * ```
+ */
+export function dynamicsModelFromDesign(design: DesignFile): TripDynamicsModel | undefined {
+  return design.dynamics === undefined ? undefined : (compactDeep(design.dynamics) as TripDynamicsModel);
 }

@@ -4,6 +4,7 @@
  * @module
  */
 export { designFileSchema, referenceSchema, type DesignFile, type DesignReference } from "./designSchema.js";
+export type { DesignDynamics } from "./designSchema.js";
 export { DesignFileError, type DesignFileErrorDetails } from "./designFileError.js";
 export {
   designFileMaxBytes,
@@ -17,4 +18,5 @@ export {
 export { loadDesignFile, type LoadDesignFileOptions } from "./loadDesignFile.js";
 export { designJsonSchema } from "./designJsonSchema.js";
 export { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign } from "./designToObjects.js";
+export { dynamicsModelFromDesign } from "./designToObjects.js";
 export { CAUTION_TEXT } from "../caution.js";

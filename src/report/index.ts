@@ -11,6 +11,7 @@ export type {
   ReportFormat,
   ReportMethodInfo,
   TripReport,
+  TripReportDynamics,
   TripReportSetpoint,
 } from "./reportTypes.js";
 export { formatTripReport, renderTripReport, tripReportFromResult } from "./renderTripReport.js";
@@ -19,3 +20,5 @@ export { formatSweepReport, renderSweepReport } from "./renderSweepReport.js";
 export { tripBandChartSvg } from "./tripBandChart.js";
 export { errorBandChartSvg } from "./errorBandChart.js";
 export { firmwareTripReport, type FirmwareTripSetpoint } from "./firmwareTripReport.js";
+export { formatRunawayReport, type RunawayReport } from "./runawayReport.js";
+export { runawayChartSvg, type RunawayChartOptions } from "../dynamics/runawayChartSvg.js";

@@ -16,6 +16,7 @@ import {
   _textTable,
 } from "./formatting.js";
 import type { ReportFormat, ReportMethodInfo, TripReport } from "./reportTypes.js";
+import { _dynamicsCsv, _dynamicsMarkdownLines, _dynamicsTextLines } from "./runawayReport.js";
 
 function formatOhms(ohms: number): string {
   if (ohms >= 1e6) return `${+(ohms / 1e6).toPrecision(4)} MΩ`;
@@ -142,6 +143,7 @@ function renderText(report: TripReport): string {
   for (const block of sourceRows(report, 8)) {
     out.push("", `Largest error sources at "${block.name}":`, _textTable(block.rows));
   }
+  if (report.dynamics !== undefined) out.push(..._dynamicsTextLines(report.dynamics));
   out.push("", _describeMethods(report.methods));
   for (const note of report.notes) out.push(`Note: ${note}`);
   out.push("", _cautionLine(), "");
@@ -163,6 +165,7 @@ function renderMarkdown(report: TripReport): string {
     ...report.setpoints.map((s) => `- **${s.name}**: ${s.reason}`),
   ];
   for (const block of sourceRows(report, 8)) out.push("", `## Largest error sources at "${block.name}"`, "", _markdownTable(block.rows));
+  if (report.dynamics !== undefined) out.push(..._dynamicsMarkdownLines(report.dynamics));
   out.push("", "## Method", "", _describeMethods(report.methods));
   if (report.notes.length > 0) out.push("", ...report.notes.map((n) => `- ${n}`));
   out.push("");
@@ -180,7 +183,8 @@ function renderCsv(report: TripReport): string {
         b.trials ?? "", b.seed ?? "", s.maxNormalOperatingC, s.hazardLimitC, s.marginToNormalC, s.marginToHazardC, s.pass]);
     }
   }
-  return `# ${_cautionLine()}\n# ${_describeMethods(report.methods)}\n${_csv(rows)}`;
+  const dynamics = report.dynamics === undefined ? "" : `# dynamics: runaway response per setpoint and case (the verdict uses the dynamic peak)\n${_dynamicsCsv(report.dynamics)}`;
+  return `# ${_cautionLine()}\n# ${_describeMethods(report.methods)}\n${_csv(rows)}${dynamics}`;
 }
 
 /**

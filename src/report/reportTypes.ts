@@ -4,6 +4,7 @@
  * @module
  */
 import type { TripBand, TripErrorSource } from "../trip/types.js";
+import type { TripDynamicsResult } from "../trip/tripDynamics.js";
 import type { PropagationMethod } from "../uncertainty/types.js";
 
 /** Report output formats. `text` is the terminal table (readable without colour). */
@@ -54,7 +55,12 @@ export interface TripReport {
   /** Assumptions and how results were found. */
   readonly notes: readonly string[];
   readonly methods: ReportMethodInfo;
+  /** Response-time results when the design states dynamics; the verdict (`pass`) then uses the dynamic peak. */
+  readonly dynamics?: TripReportDynamics;
 }
+
+/** The dynamic results in a report: the figures of `tripDynamics` without the time series. */
+export type TripReportDynamics = Omit<TripDynamicsResult, "responses">;
 
 /** One row of an error sweep: the chain's reading error bounds at one true temperature. */
 export interface ErrorSweepRow {

@@ -44,3 +44,16 @@ export {
   seriesE96,
   type PreferredSeriesName,
 } from "../data/preferredSeries.js";
+export {
+  chainSignalSlope,
+  type ChainSignalSlope,
+  tripDynamics,
+  type TripDynamicsCase,
+  type TripDynamicsInput,
+  type TripDynamicsModel,
+  type TripDynamicsNoise,
+  type TripDynamicsNoiseFigures,
+  type TripDynamicsResult,
+  type TripDynamicsSetpoint,
+  type TripDynamicsSetpointInput,
+} from "./tripDynamics.js";

@@ -32,6 +32,7 @@ import {
 } from "../outputOptions.js";
 import { _startProgress } from "../progress.js";
 import type { CommandContext } from "../runCli.js";
+import { _withDesignDynamics } from "../dynamicsOfDesign.js";
 
 type CheckOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean };
 
@@ -102,7 +103,7 @@ export function registerCheckCommand(program: Command, context: CommandContext):
     const plan = _planCommandOutputs(context.io, options, [path], options.svg !== undefined ? [options.svg] : []);
     const { design, input } = await _loadDesign(context.io, path);
     const report = _tripReportOfDesign(context.io, design, _analysisSettings(design, options));
-    const named = design.name !== undefined ? { ...report, designName: design.name } : report;
+    const named = _withDesignDynamics(design, design.name !== undefined ? { ...report, designName: design.name } : report);
     const text = formatTripReport(named, _chosenFormat(options));
     const extras = plan.extras.length > 0 ? [tripBandChartSvg(named)] : [];
     _emitOutputs(context.io, plan, options, text, extras, [input]);

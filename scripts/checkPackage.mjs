@@ -40,6 +40,7 @@ const requiredFiles = [
   "dist/report.d.ts",
   "dist/report.d.cts",
   "dist/cli.js",
+  "dist/workbench.html",
 ];
 
 /** Paths that must never be published, with the reason given on failure. */

@@ -1,11 +1,13 @@
 /**
- * Options shared by commands that print a result: output format (`--json`, `--markdown`, `--csv`), `--out FILE`,
+ * Options shared by commands that print a result: output format (`--json`, `--markdown`, `--csv`, and `--html`
+ * wherever Markdown is offered: the Markdown report as a self-contained HTML document), `--out FILE`,
  * `--force`, and the routine that prints or writes the result safely.
  * @module
  */
 import { Option, type Command } from "commander";
 import type { CliIo } from "./io.js";
 import type { InputIdentity } from "./readInput.js";
+import { markdownToHtmlDocument } from "../workbench/markdownHtml.js";
 import { _planOutputs, _writeOutputs, type PlannedOutput } from "./writeOutput.js";
 
 /** Output formats of a report. `text` is the terminal table (default). */
@@ -16,6 +18,8 @@ export interface OutputOptionValues {
   readonly json?: boolean;
   readonly markdown?: boolean;
   readonly csv?: boolean;
+  /** The Markdown report as a self-contained HTML document. */
+  readonly html?: boolean;
   readonly out?: string;
   readonly force?: boolean;
 }
@@ -35,9 +39,10 @@ export function _addOutputOptions(
     markdown: "print a Markdown report",
     csv: "print comma-separated values",
   };
-  for (const format of formats) {
-    const others = formats.filter((f) => f !== format);
-    const option = new Option(`--${format}`, descriptions[format]);
+  const flags: string[] = [...formats, ...(formats.includes("markdown") ? ["html"] : [])];
+  for (const format of flags) {
+    const others = flags.filter((f) => f !== format);
+    const option = new Option(`--${format}`, format === "html" ? "print the report as a self-contained HTML document (styles inline, no script)" : descriptions[format as Exclude<OutputFormat, "text">]);
     if (others.length > 0) option.conflicts(others);
     command.addOption(option);
   }
@@ -52,7 +57,8 @@ export function _addOutputOptions(
 /** The chosen format. @internal */
 export function _chosenFormat(values: OutputOptionValues): OutputFormat {
   if (values.json === true) return "json";
-  if (values.markdown === true) return "markdown";
+  // HTML is the Markdown report in a document (see _emitOutputs).
+  if (values.markdown === true || values.html === true) return "markdown";
   if (values.csv === true) return "csv";
   return "text";
 }
@@ -96,7 +102,8 @@ export function _emitOutputs(
   extras: readonly string[] = [],
   inputs: readonly InputIdentity[] = [],
 ): void {
-  const body = mainText.endsWith("\n") ? mainText : `${mainText}\n`;
+  const text = values.html === true ? markdownToHtmlDocument(mainText) : mainText;
+  const body = text.endsWith("\n") ? text : `${text}\n`;
   if (extras.length !== plan.extras.length) throw new Error("internal: one content per extra output expected");
   const files = [
     ...(plan.main !== undefined ? [{ output: plan.main, content: body }] : []),

@@ -30,6 +30,7 @@ const commandLoaders: readonly (readonly [string, () => Promise<Registration>])[
   ["faults", async () => (await import("./commands/faults.js")).registerFaultsCommand],
   ["runaway", async () => (await import("./commands/runaway.js")).registerRunawayCommand],
   ["schema", async () => (await import("./commands/schema.js")).registerSchemaCommand],
+  ["workbench", async () => (await import("./commands/workbench.js")).registerWorkbenchCommand],
 ];
 
 /** Names of every command. @internal */

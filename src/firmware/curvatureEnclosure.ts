@@ -21,8 +21,8 @@ import type { CompiledSubrange, CompiledType } from "../its90/compiled.js";
 /** A closed interval [lo, hi]. @internal */
 export type _Interval = readonly [number, number];
 
-const ULP = 2 ** -52;
-const TINY = 2 ** -1000;
+const ULP = 2.220446049250313e-16; // 2^-52 (a literal: a module-level `**` is kept by every bundle)
+const TINY = 9.332636185032189e-302; // 2^-1000
 
 function down(x: number): number {
   return x - (Math.abs(x) * 2 * ULP + TINY);

@@ -134,7 +134,7 @@ function temperatureSeams(ct: CompiledType): { temperatureC: number; emfJump: nu
   return seams;
 }
 
-const U = 2 ** -53;
+const U = 1.1102230246251565e-16; // 2^-53 (a literal: a module-level `**` is kept by every bundle)
 
 /** Sub-range pieces of a temperature interval: [index, clipped interval] for every sub-range it meets. */
 function pieces(ct: CompiledType, t: _Interval): [number, _Interval][] {

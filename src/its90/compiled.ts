@@ -5,7 +5,7 @@
  * @module
  */
 import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
-import { HotjunctionRangeError } from "../errors.js";
+import { HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 
 /** @internal */
 export interface CompiledSubrange {
@@ -17,20 +17,25 @@ export interface CompiledSubrange {
   readonly hasExp: boolean;
 }
 
-/** One forward sub-range's share of the exact inverse. @internal */
+/**
+ * One forward sub-range's share of the exact inverse: `count` segments of equal EMF width, each built (edges,
+ * interpolant, check) when an EMF first falls in it. @internal
+ */
 export interface InversePiece {
   readonly range: number;
   /** EMF at the piece's lower end (start of the segment grid), mV. */
   readonly emfStart: number;
+  /** EMF width of a segment, mV. */
+  readonly width: number;
   readonly perMillivolt: number;
   readonly count: number;
   readonly lowC: number;
   readonly highC: number;
-  /** count × 8 monomial coefficients in the local variable s ∈ [−1, 1]. */
+  /** count × 8 monomial coefficients in the local variable s ∈ [−1, 1] (zero until the segment is built). */
   readonly coefficients: Float64Array;
-  /** 1 where the segment is solved by Newton instead of the interpolant. */
-  readonly newton: Uint8Array;
-  /** Temperatures of the count + 1 segment boundaries, °C. */
+  /** Per segment: 0 not built yet, 1 solved by Newton instead of the interpolant, 2 interpolant. */
+  readonly state: Uint8Array;
+  /** Temperatures of the count + 1 segment boundaries, °C (NaN until a segment next to it is built). */
   readonly edgesC: Float64Array;
 }
 
@@ -41,7 +46,6 @@ export interface ExactInverse {
 
 /** @internal */
 export interface CompiledType {
-  readonly data: ThermocoupleData;
   readonly type: ThermocoupleType;
   readonly context: string;
   readonly minC: number;
@@ -212,22 +216,31 @@ export function _compile(data: ThermocoupleData): CompiledType {
 }
 
 /**
- * Checks a data object once, when it is compiled: contiguous increasing sub-ranges with finite ends and
- * at least one coefficient each, all finite, a range within the sub-ranges (a widened range would extrapolate a
- * polynomial far outside its sub-range) and a finite exponential term. Kept compact: it is in every bundle.
+ * Checks a data object once, when it is compiled: an object with a list of sub-ranges (else
+ * `UNKNOWN_TYPE`), contiguous increasing sub-ranges with finite ends and at least one coefficient each, all
+ * finite, a range within the sub-ranges (a widened range would extrapolate a polynomial far outside its
+ * sub-range) and a finite exponential term (else `INVALID_OPTION`). Kept compact: it is in every bundle.
  */
 function validate(data: ThermocoupleData): void {
-  const subs = data.forward;
+  const subs = data?.forward;
+  if (!Array.isArray(subs)) {
+    throw new HotjunctionTypeError({
+      code: "UNKNOWN_TYPE",
+      quantity: "thermocouple data",
+      value: data,
+      problem: "is not a type's data (typeB … typeT)",
+    });
+  }
   const e = data.exponential;
   let end: number = subs[0]?.minC as number;
-  let ok = data.minC >= end;
+  let ok = data.minC >= end && data.maxC > data.minC && (!e || [e.a0, e.a1, e.a2].every(Number.isFinite));
   for (const f of subs) {
     const c = f?.coefficients;
     // c[0] makes an empty list fail; every() rejects non-numbers and non-finite values.
     ok &&= f?.minC === end && f.maxC > end && Array.isArray(c) && [f.maxC, c[0], ...c].every(Number.isFinite);
     end = f?.maxC;
   }
-  if (!(ok && data.maxC <= end && data.maxC > data.minC && (!e || [e.a0, e.a1, e.a2].every(Number.isFinite)))) {
+  if (!(ok && data.maxC <= end)) {
     throw new HotjunctionRangeError({
       code: "INVALID_OPTION",
       quantity: "thermocouple data range",
@@ -242,46 +255,43 @@ function validate(data: ThermocoupleData): void {
 
 function build(data: ThermocoupleData): CompiledType {
   validate(data);
-  const exponential = data.exponential ?? { a0: 0, a1: 0, a2: 0 };
-  const subranges: CompiledSubrange[] = data.forward.map((f) => ({
-    minC: f.minC,
-    maxC: f.maxC,
-    c: Float64Array.from(f.coefficients),
-    hasExp: data.exponential !== undefined && f.minC >= 0,
-  }));
-  const partial = {
-    data,
+  const x = data.exponential;
+  const minC = data.minC;
+  const ct = {
     type: data.type,
     context: `type ${data.type}`,
-    minC: data.minC,
+    minC,
     maxC: data.maxC,
-    subranges,
-    a0: exponential.a0,
-    a1: exponential.a1,
-    a2: exponential.a2,
+    subranges: data.forward.map((f) => ({
+      minC: f.minC,
+      maxC: f.maxC,
+      c: Float64Array.from(f.coefficients),
+      hasExp: x !== undefined && f.minC >= 0,
+    })),
+    a0: x?.a0 ?? 0,
+    a1: x?.a1 ?? 0,
+    a2: x?.a2 ?? 0,
     emfAtMinC: 0,
     emfAtMaxC: 0,
     lowestEmf: 0,
-    monotonicFromC: data.minC,
+    monotonicFromC: minC,
   };
-  const ct: CompiledType = partial;
-  partial.emfAtMinC = _emf(ct, partial.minC);
-  partial.emfAtMaxC = _emf(ct, partial.maxC);
-  partial.lowestEmf = partial.emfAtMinC;
+  ct.lowestEmf = ct.emfAtMinC = _emf(ct, minC);
+  ct.emfAtMaxC = _emf(ct, ct.maxC);
   // A type whose E starts by falling (type B) is ambiguous until E climbs back to E(minC).
   // Find where the slope turns positive in the first sub-range, then the upper root of E(t) = E(minC).
-  if (_slopeInSubrange(ct, 0, partial.minC) <= 0) {
-    const first = subranges[0] as CompiledSubrange;
-    let lo = first.minC;
-    let hi = first.maxC;
+  let lo = minC;
+  let hi = ct.subranges[0]?.maxC as number;
+  if (_slopeInSubrange(ct, 0, lo) <= 0) {
+    const top = hi;
     for (let i = 0; i < 200; i++) {
       const mid = 0.5 * (lo + hi);
       if (_slopeInSubrange(ct, 0, mid) <= 0) lo = mid;
       else hi = mid;
     }
     const turnC = 0.5 * (lo + hi);
-    partial.lowestEmf = _emfInSubrange(ct, 0, turnC);
-    partial.monotonicFromC = _solveInSubrange(ct, 0, partial.emfAtMinC, turnC, first.maxC);
+    ct.lowestEmf = _emfInSubrange(ct, 0, turnC);
+    ct.monotonicFromC = _solveInSubrange(ct, 0, ct.emfAtMinC, turnC, top);
   }
   return ct;
 }

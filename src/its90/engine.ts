@@ -186,14 +186,7 @@ export interface Thermocouple {
  * ```
  */
 export function createThermocouple(data: ThermocoupleData): Thermocouple {
-  if (typeof data !== "object" || data === null || !Array.isArray(data.forward)) {
-    throw new HotjunctionTypeError({
-      code: "UNKNOWN_TYPE",
-      quantity: "thermocouple data",
-      value: data,
-      problem: "is not a type's data (typeB … typeT)",
-    });
-  }
+  // _compile checks the data object (UNKNOWN_TYPE when it is not one, INVALID_OPTION when it is malformed).
   const ct = _compile(data);
   return {
     type: ct.type,

@@ -1,15 +1,17 @@
 /**
  * The exact inverse of the ITS-90 reference functions.
  *
- * How it works: on first use for a type, each forward sub-range (restricted to where E is strictly
- * increasing) is cut into segments of equal EMF width. On each segment the inverse t(E) is interpolated
- * at 8 Chebyshev nodes (degree 7), the node temperatures being roots of the forward polynomial found by
- * safeguarded Newton on the forward polynomial.
- * The interpolant's monomial coefficients come from the Björck–Pereyra algorithm; it is then checked at the 9 Chebyshev extrema of the segment, ends included, against the
- * same accurate roots. A segment that misses the tolerance (only where the Seebeck coefficient nearly
- * vanishes, at the cold end of K, N, E, T and the bottom of B's unambiguous range) is marked, and EMFs
+ * How it works: each forward sub-range (restricted to where E is strictly increasing) is cut into segments
+ * of equal EMF width. A segment is built when an EMF first falls in it (one at a time: the first conversion
+ * of a type costs one segment, not the type's whole table; each segment is fitted on its own, so the bits do
+ * not depend on the order segments are built in). On each segment the inverse t(E) is interpolated at 8
+ * Chebyshev nodes (degree 7), the node temperatures being roots of the forward polynomial found by
+ * safeguarded Newton on the forward polynomial. The interpolant's monomial coefficients come from the
+ * Björck–Pereyra algorithm; it is then checked at the 9 Chebyshev extrema of the segment, ends included,
+ * against the same accurate roots. A segment that misses the tolerance (only where the Seebeck coefficient
+ * nearly vanishes, at the cold end of K, N, E, T and the bottom of B's unambiguous range) is marked, and EMFs
  * falling in it are solved by safeguarded Newton on the forward function directly. A call is then one
- * segment index, one 8-term Horner evaluation and a clamp to the sub-range.
+ * segment index, one 8-term Horner evaluation and a clamp to the segment.
  *
  * Where two sub-ranges meet, the forward function steps by up to 7.5e-8 mV (type J at 760 °C). The
  * inverse selects the sub-range by comparing the EMF with E of the upper sub-range at the seam (the
@@ -20,84 +22,110 @@
  * @internal
  * @module
  */
-import {
-  _emfInSubrange,
-  _horner,
-  _solveInSubrange,
-  type CompiledSubrange,
-  type CompiledType,
-  type ExactInverse,
-  type InversePiece,
-} from "./compiled.js";
+import { _emfInSubrange, _solveInSubrange, type CompiledType, type ExactInverse, type InversePiece } from "./compiled.js";
 
 export type { ExactInverse, InversePiece } from "./compiled.js";
 
-const NODE_COUNT = 8;
+/** Σ c[o + i]·sⁱ, i = 0…7, by Horner (the same operations as the nested form c₀ + s(c₁ + s(…))). */
+function segmentValue(c: Float64Array, o: number, s: number): number {
+  let t = c[o + 7] as number;
+  for (let i = o + 6; i >= o; i--) t = t * s + (c[i] as number);
+  return t;
+}
 
-/** Fit tolerance: 2e-11 °C, or 2e-12 mV / S(t) where S is small (both well inside the promised bound). */
-const FIT_TOLERANCE_C = 2e-11;
-const FIT_TOLERANCE_MV = 2e-12;
-
-function buildPiece(ct: CompiledType, range: number, lowC: number, highC: number, count: number): InversePiece {
-  const emfStart = _emfInSubrange(ct, range, lowC);
-  const width = (_emfInSubrange(ct, range, highC) - emfStart) / count;
-  const half = 0.5 * width;
-  const edgesC = new Float64Array(count + 1);
-  edgesC[0] = lowC;
-  edgesC[count] = highC;
-  for (let k = 1; k < count; k++) {
-    edgesC[k] = _solveInSubrange(ct, range, emfStart + k * width, lowC, highC);
+/**
+ * Builds segment k of a piece: its edge temperatures (if not yet solved), the interpolant through the roots
+ * at the 8 Chebyshev nodes and the check at the 9 extrema; returns its state (1 Newton, 2 interpolant).
+ */
+function buildSegment(ct: CompiledType, p: InversePiece, k: number): number {
+  const range = p.range;
+  const width = p.width;
+  const edges = p.edgesC;
+  for (let j = k; j <= k + 1; j++) {
+    if (edges[j] !== edges[j]) edges[j] = _solveInSubrange(ct, range, p.emfStart + j * width, p.lowC, p.highC);
   }
-  const nodes = new Float64Array(NODE_COUNT);
-  for (let j = 0; j < NODE_COUNT; j++) nodes[j] = Math.cos((Math.PI * (j + 0.5)) / NODE_COUNT);
-  const coefficients = new Float64Array(count * NODE_COUNT);
-  const newton = new Uint8Array(count);
-  const d = NODE_COUNT - 1;
-  for (let k = 0; k < count; k++) {
-    const segLo = edgesC[k] as number;
-    const segHi = edgesC[k + 1] as number;
-    const mid = emfStart + (k + 0.5) * width;
-    const a = coefficients.subarray(k * NODE_COUNT, (k + 1) * NODE_COUNT);
-    for (let j = 0; j <= d; j++) a[j] = _solveInSubrange(ct, range, mid + half * (nodes[j] as number), segLo, segHi);
-    // Monomial coefficients of the interpolant by the Björck–Pereyra algorithm (Golub & Van Loan, Matrix
-    // Computations, Algorithm 4.6.1): Newton divided differences, then expansion into powers of s.
-    for (let m = 0; m < d; m++) {
-      for (let i = d; i > m; i--) a[i] = ((a[i] as number) - (a[i - 1] as number)) / ((nodes[i] as number) - (nodes[i - m - 1] as number));
-    }
-    for (let m = d - 1; m >= 0; m--) {
-      for (let i = m; i < d; i++) a[i] = (a[i] as number) - (a[i + 1] as number) * (nodes[m] as number);
-    }
-    // Check the interpolant at the Chebyshev extrema (ends included) against the roots there; a segment
-    // that misses (S nearly vanishing) is solved by Newton at run time instead.
-    // 2e-12 mV over the segment's mean slope width / (segHi − segLo).
-    const allowed = Math.max(FIT_TOLERANCE_C, (FIT_TOLERANCE_MV * (segHi - segLo)) / width);
-    for (let j = 0; j <= NODE_COUNT; j++) {
-      const s = Math.cos((Math.PI * j) / NODE_COUNT);
-      const root = _solveInSubrange(ct, range, mid + half * s, segLo, segHi);
-      if (!(Math.abs(_horner(a, s) - root) <= allowed)) {
-        newton[k] = 1;
-        break;
-      }
-    }
+  const segLo = edges[k] as number;
+  const segHi = edges[k + 1] as number;
+  const mid = p.emfStart + (k + 0.5) * width;
+  // cos(πj/16): odd j are the 8 Chebyshev nodes cos(π(i + ½)/8), even j the 9 extrema cos(πi/8) (the same
+  // floats: scaling by 2 is exact), r[j] the root at each.
+  const s = new Float64Array(17);
+  const r = new Float64Array(17);
+  for (let j = 0; j < 17; j++) {
+    s[j] = Math.cos((Math.PI * j) / 16);
+    r[j] = _solveInSubrange(ct, range, mid + 0.5 * width * (s[j] as number), segLo, segHi);
   }
-  return { range, emfStart, perMillivolt: 1 / width, count, lowC, highC, coefficients, newton, edgesC };
+  const o = k * 8;
+  const a = p.coefficients;
+  for (let i = 0; i < 8; i++) a[o + i] = r[2 * i + 1] as number;
+  // Monomial coefficients of the interpolant by the Björck–Pereyra algorithm (Golub & Van Loan, Matrix
+  // Computations, Algorithm 4.6.1): Newton divided differences, then expansion into powers of s.
+  for (let m = 0; m < 7; m++) {
+    for (let i = 7; i > m; i--) a[o + i] = ((a[o + i] as number) - (a[o + i - 1] as number)) / ((s[2 * i + 1] as number) - (s[2 * (i - m) - 1] as number));
+  }
+  for (let m = 6; m >= 0; m--) {
+    for (let i = m; i < 7; i++) a[o + i] = (a[o + i] as number) - (a[o + i + 1] as number) * (s[2 * m + 1] as number);
+  }
+  // Check at the extrema (ends included) against the roots there, within 2e-11 °C or 2e-12 mV over the
+  // segment's mean slope width / (segHi − segLo); a segment that misses (S nearly vanishing) is solved by
+  // Newton at run time instead.
+  const allowed = Math.max(2e-11, (2e-12 * (segHi - segLo)) / width);
+  let state = 2;
+  for (let j = 0; j < 17; j += 2) {
+    if (!(Math.abs(segmentValue(a, o, s[j] as number) - (r[j] as number)) <= allowed)) state = 1;
+  }
+  return (p.state[k] = state);
 }
 
 function build(ct: CompiledType): ExactInverse {
   const pieces: InversePiece[] = [];
-  ct.subranges.forEach((sub: CompiledSubrange, index: number) => {
+  ct.subranges.forEach((sub, range) => {
     const lowC = Math.max(sub.minC, ct.monotonicFromC);
+    const highC = sub.maxC;
     // Segments about 4 °C wide: the interpolant then meets the tolerance everywhere but in the few segments
     // at a cold end where S(t) nearly vanishes, which fall back to Newton.
-    if (sub.maxC > lowC) pieces.push(buildPiece(ct, index, lowC, sub.maxC, Math.max(4, Math.ceil((sub.maxC - lowC) / 4))));
+    const count = Math.max(4, Math.ceil((highC - lowC) / 4));
+    const emfStart = _emfInSubrange(ct, range, lowC);
+    const width = (_emfInSubrange(ct, range, highC) - emfStart) / count;
+    const edgesC = new Float64Array(count + 1).fill(NaN);
+    edgesC[0] = lowC;
+    edgesC[count] = highC;
+    if (highC > lowC) {
+      pieces.push({
+        range,
+        emfStart,
+        width,
+        perMillivolt: 1 / width,
+        count,
+        lowC,
+        highC,
+        coefficients: new Float64Array(count * 8),
+        state: new Uint8Array(count),
+        edgesC,
+      });
+    }
   });
   return { pieces };
 }
 
-/** Returns the exact-inverse tables of a type, building them on first use (a few milliseconds). @internal */
+/** Returns the exact-inverse tables of a type (segments are built as EMFs reach them). @internal */
 export function _exactInverseTables(ct: CompiledType): ExactInverse {
   // Kept on the compiled type itself: one property read per call, no map lookup.
   return (ct.inverse ??= build(ct));
+}
+
+/**
+ * Builds every segment not built yet, in order (what the tables used to do on first use; for tests and
+ * for code that scans the segments). @internal
+ */
+export function _completeExactInverse(ct: CompiledType, inv: ExactInverse = _exactInverseTables(ct)): ExactInverse {
+  for (const p of inv.pieces) for (let k = 0; k < p.count; k++) if (p.state[k] === 0) buildSegment(ct, p, k);
+  return inv;
+}
+
+/** Fresh tables of a type, not cached, every segment built in order (tests compare them with the lazy ones). @internal */
+export function _eagerExactInverse(ct: CompiledType): ExactInverse {
+  return _completeExactInverse(ct, build(ct));
 }
 
 /**
@@ -115,33 +143,13 @@ export function _exactInverse(ct: CompiledType, inv: ExactInverse, emfMillivolts
   let k = Math.floor(x);
   if (k >= piece.count) k = piece.count - 1;
   else if (k < 0) k = 0;
-  let t: number;
-  if (piece.newton[k] === 1) {
-    t = _solveInSubrange(
-      ct,
-      piece.range,
-      emfMillivolts,
-      piece.edgesC[k] as number,
-      piece.edgesC[k + 1] as number,
-    );
-  } else {
-    const s = 2 * (x - k) - 1;
-    const c = piece.coefficients;
-    const o = k * NODE_COUNT;
-    t =
-      (c[o] as number) +
-      s *
-        ((c[o + 1] as number) +
-          s *
-            ((c[o + 2] as number) +
-              s *
-                ((c[o + 3] as number) +
-                  s * ((c[o + 4] as number) + s * ((c[o + 5] as number) + s * ((c[o + 6] as number) + s * (c[o + 7] as number)))))));
-  }
+  let state = piece.state[k];
+  if (state === 0) state = buildSegment(ct, piece, k);
+  const lo = piece.edgesC[k] as number;
+  const hi = piece.edgesC[k + 1] as number;
+  const t = state === 1 ? _solveInSubrange(ct, piece.range, emfMillivolts, lo, hi) : segmentValue(piece.coefficients, k * 8, 2 * (x - k) - 1);
   // Clamped to the segment's edge temperatures (increasing roots of the forward polynomial), so that the
   // inverse never steps backwards across a segment edge, where two interpolants meet; within the piece's
   // sub-range by the same token.
-  const lo = piece.edgesC[k] as number;
-  const hi = piece.edgesC[k + 1] as number;
   return t < lo ? lo : t > hi ? hi : t;
 }

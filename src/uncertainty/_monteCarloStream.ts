@@ -4,26 +4,23 @@
  * @module
  * @internal
  */
-import { uniformFloat64 } from "pure-rand/distribution/uniformFloat64";
-import { xoroshiro128plus, xoroshiro128plusFromState } from "pure-rand/generator/xoroshiro128plus";
+import { _Xoroshiro128Plus } from "./_xoroshiro128plus.js";
 import { _standardBoundedQuantile, type _CheckedDistribution } from "./_distribution.js";
 import { _erfc } from "./normalCdf.js";
 import { _choleskyFactor, type _ModelEvaluator } from "./_prepare.js";
 
 const twoPi = 6.283185307179586; // 2π as a literal: no global read at module level (tree-shaking)
 
-type Generator = ReturnType<typeof xoroshiro128plus>;
+type Generator = _Xoroshiro128Plus;
 
-/** @internal State of block 0's stream for a seed (xoroshiro128+ as seeded by pure-rand). */
+/** @internal State of block 0's stream for a seed (xoroshiro128+ seeded as pure-rand seeds it). */
 export function _firstBlockState(seed: number): number[] {
-  return [...xoroshiro128plus(seed | 0).getState()];
+  return new _Xoroshiro128Plus().seed(seed | 0).getState();
 }
 
 /** @internal State of the next block's stream: this block's start state advanced by one jump (2⁶⁴ draws). */
 export function _nextBlockState(state: readonly number[]): number[] {
-  const g = xoroshiro128plusFromState(state);
-  g.jump();
-  return [...g.getState()];
+  return new _Xoroshiro128Plus().setState(state).jump().getState();
 }
 
 /** @internal State of block `block`'s stream (block jumps from block 0). */
@@ -61,7 +58,7 @@ export class _Sampler {
     names: readonly string[],
     rng: Generator | undefined,
   ) {
-    this.rng = rng ?? xoroshiro128plus(0);
+    this.rng = rng ?? new _Xoroshiro128Plus().seed(0);
     const n = distributions.length;
     this.columns = new Float64Array(n * batchSize);
     this.correlated = [];
@@ -89,7 +86,8 @@ export class _Sampler {
 
   /** Draws the next fills from the stream with this state (see {@link _blockState}). */
   useStream(state: readonly number[]): void {
-    this.rng = xoroshiro128plusFromState(state);
+    // One generator per sampler, reset for each block (no new object per block).
+    this.rng.setState(state);
   }
 
   /** Whether input `i` (canonical order) is drawn through the copula. */
@@ -102,8 +100,8 @@ export class _Sampler {
     const rng = this.rng;
     // Box–Muller (JCGM 101:2008 6.4.7.2); 1 − r keeps the logarithm's argument in (0, 1].
     for (let t = 0; t < count; t += 2) {
-      const radius = Math.sqrt(-2 * Math.log(1 - uniformFloat64(rng)));
-      const angle = twoPi * uniformFloat64(rng);
+      const radius = Math.sqrt(-2 * Math.log(1 - rng.uniform()));
+      const angle = twoPi * rng.uniform();
       col[offset + t] = radius * Math.cos(angle);
       if (t + 1 < count) col[offset + t + 1] = radius * Math.sin(angle);
     }
@@ -131,18 +129,18 @@ export class _Sampler {
           break;
         }
         case 1: // rectangular, 6.4.2
-          for (let t = 0; t < count; t++) col[offset + t] = mean + a * (2 * uniformFloat64(rng) - 1);
+          for (let t = 0; t < count; t++) col[offset + t] = mean + a * (2 * rng.uniform() - 1);
           break;
         case 4: // arcsine, 6.4.6
-          for (let t = 0; t < count; t++) col[offset + t] = mean + a * Math.sin(twoPi * uniformFloat64(rng));
+          for (let t = 0; t < count; t++) col[offset + t] = mean + a * Math.sin(twoPi * rng.uniform());
           break;
         default: {
           // trapezoidal 6.4.3 (triangular 6.4.4 is β = 0): a' + (b' − a')[(1+β)r₁ + (1−β)r₂]/2
           const beta = d.kindCode === 2 ? 0 : d.beta;
           const low = mean - a;
           for (let t = 0; t < count; t++) {
-            const r1 = uniformFloat64(rng);
-            const r2 = uniformFloat64(rng);
+            const r1 = rng.uniform();
+            const r2 = rng.uniform();
             col[offset + t] = low + a * ((1 + beta) * r1 + (1 - beta) * r2);
           }
         }

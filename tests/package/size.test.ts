@@ -24,9 +24,10 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { typeB, typeE, typeJ, typeK, typeN, typeR, typeS, typeT } from "../../src/index.js";
 import { distDir, ensureDist, projectDir } from "./distBuild.js";
 
-// Raised from 3,000 B on purpose (numerics branch): validating a data object when it is compiled (about 180 B),
-// deep-freezing the data module (about 50 B) and the monotone root solver on compensated residuals (about
-// 200 B) are correctness, not features; measured 3,443 B. Owner's decision pending (see the branch report).
+// The target is 3,000 B; raised on the numerics branch (not approved): validating a data object when it is
+// compiled (about 180 B), deep-freezing the data module (about 50 B) and the monotone root solver on compensated
+// residuals (about 200 B); measured 3,443 B there, 3,404 B after the compact data check and compile and the
+// segment-at-a-time exact inverse (speed branch). Lower this back to 3,000 B once the bundle is under it.
 const oneTypeBudgetBytes = 3500;
 const letterEntryBudgetBytes = 6_000;
 // Raised from 64,000 B when the root entry gained the response-time (dynamics), safety-figure and wire modules;

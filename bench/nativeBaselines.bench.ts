@@ -1,0 +1,83 @@
+/**
+ * The physical limit of bulk conversion: our `Float64Array` paths against small C loops of the same work,
+ * compiled here with gcc -O3 -march=native -ffp-contract=off (no fused multiply-add, so the forward loop is
+ * the same arithmetic and the same bits as ours) into a temporary directory. Skipped with a note when gcc is
+ * missing. Rounds interleave JavaScript and C (C runs as a child process between the JavaScript rounds);
+ * each side keeps its best round. Targets (issue 16): bulk forward ≤ 1.5× the C forward loop, bulk exact
+ * inverse ≤ 3× the C loop of the published approximate inverse. Not a test: nothing passes or fails on a timing.
+ * Run: `npx tsx bench/nativeBaselines.bench.ts`.
+ * @module
+ */
+import { execFileSync, spawnSync } from "node:child_process";
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath, pathToFileURL } from "node:url";
+import { emfFromTemperatureArray, temperatureFromEmfArray } from "../src/index.js";
+
+const here = fileURLToPath(new URL(".", import.meta.url));
+
+function bestNsPerElement(n: number, rounds: number, f: () => void): number {
+  let best = Infinity;
+  for (let r = 0; r < rounds; r++) {
+    const start = process.hrtime.bigint();
+    f();
+    best = Math.min(best, Number(process.hrtime.bigint() - start));
+  }
+  return best / n;
+}
+
+/** The C forward loop written in JavaScript (same coefficients, same order): what plain JavaScript reaches. */
+function bareForward(t: Float64Array, e: Float64Array): void {
+  const c = [-0.017600413686, 0.038921204975, 1.8558770032e-5, -9.9457592874e-8, 3.1840945719e-10, -5.6072844889e-13, 5.6075059059e-16, -3.2020720003e-19, 9.7151147152e-23, -1.2104721275e-26];
+  for (let i = 0; i < t.length; i++) {
+    const x = t[i] as number;
+    let acc = c[9] as number;
+    for (let k = 8; k >= 0; k--) acc = acc * x + (c[k] as number);
+    const d = x - 126.9686;
+    e[i] = acc + 0.1185976 * Math.exp(-0.0001183432 * d * d);
+  }
+}
+
+/** Runs the comparison; returns the report lines. */
+export function runNativeBaselinesBench(n = 1_000_000, rounds = 5): string[] {
+  const gcc = spawnSync("gcc", ["--version"], { encoding: "utf8" });
+  if (gcc.status !== 0) return ["native baselines: skipped (gcc not found; install gcc to compare with compiled C)"];
+  const dir = mkdtempSync(join(tmpdir(), "hotjunction-native-"));
+  try {
+    const flags = ["-O3", "-march=native", "-ffp-contract=off", "-std=c99"];
+    const forwardBin = join(dir, "forward");
+    const inverseBin = join(dir, "approxInverse");
+    execFileSync("gcc", [...flags, "-o", forwardBin, join(here, "c", "forward.c"), "-lm"]);
+    execFileSync("gcc", [...flags, "-o", inverseBin, join(here, "c", "approxInverse.c"), "-lm"]);
+    const temps = new Float64Array(n).map((_, i) => (1372 * i) / n);
+    const emfs = new Float64Array(n).map((_, i) => (54.886 * i) / n + 1e-9);
+    const out = new Float64Array(n);
+    const c = (bin: string): number => Number(execFileSync(bin, [String(n), "3"], { encoding: "utf8" }).split(" ")[0]);
+    let jsForward = Infinity;
+    let cForward = Infinity;
+    let bare = Infinity;
+    let jsInverse = Infinity;
+    let cInverse = Infinity;
+    emfFromTemperatureArray("K", temps, out);
+    temperatureFromEmfArray("K", emfs, out);
+    for (let r = 0; r < rounds; r++) {
+      jsForward = Math.min(jsForward, bestNsPerElement(n, 3, () => emfFromTemperatureArray("K", temps, out)));
+      cForward = Math.min(cForward, c(forwardBin));
+      bare = Math.min(bare, bestNsPerElement(n, 3, () => bareForward(temps, out)));
+      jsInverse = Math.min(jsInverse, bestNsPerElement(n, 3, () => temperatureFromEmfArray("K", emfs, out)));
+      cInverse = Math.min(cInverse, c(inverseBin));
+    }
+    return [
+      `native baselines (gcc ${gcc.stdout.split("\n")[0]?.split(" ").pop()}, ${flags.join(" ")}; ${n.toLocaleString("en")} elements, best of ${rounds} interleaved rounds)`,
+      `  bulk forward, type K 0-1372 °C: ours ${jsForward.toFixed(2)} ns, C ${cForward.toFixed(2)} ns per element -> ${(jsForward / cForward).toFixed(2)}x (target ≤ 1.5x); the same loop in plain JavaScript ${bare.toFixed(2)} ns -> ${(bare / cForward).toFixed(2)}x`,
+      `  bulk exact inverse vs C published approximate inverse: ours ${jsInverse.toFixed(2)} ns, C ${cInverse.toFixed(2)} ns -> ${(jsInverse / cInverse).toFixed(2)}x (target ≤ 3x)`,
+    ];
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+if (import.meta.url === pathToFileURL(process.argv[1] ?? "").href) {
+  for (const line of runNativeBaselinesBench()) console.log(line);
+}

@@ -15,7 +15,7 @@ import type {
 } from "../chain/types.js";
 import type { ReferenceOption, TripDesign, TripResistors, TripSetpoint } from "../trip/types.js";
 import type { DesignFile, DesignReference } from "./designSchema.js";
-import { HotjunctionRangeError } from "../errors.js";
+import { HotjunctionRangeError, _requireObject } from "../errors.js";
 
 /** Copies an object without its `undefined` members (exact optional properties). */
 function compact<T>(value: Record<string, unknown>): T {
@@ -80,6 +80,7 @@ export function _referenceElementOf(reference: DesignReference): ReferenceElemen
  * ```
  */
 export function referenceOptionFromDesign(reference: DesignReference): ReferenceOption {
+  _requireObject(reference, "reference", "referenceOptionFromDesign");
   const cost = reference.cost;
   if (reference.kind === "ideal") {
     return compact<ReferenceOption>({ kind: "ideal", name: reference.name, nominalVolts: reference.nominalVolts, cost });
@@ -114,6 +115,7 @@ export function referenceOptionFromDesign(reference: DesignReference): Reference
  * ```
  */
 export function tripDesignFromDesign(design: DesignFile): TripDesign {
+  _requireObject(design, "design", "tripDesignFromDesign");
   if (design.comparator === undefined || design.resistors === undefined) {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "comparator", value: undefined, context: "tripDesignFromDesign", problem: "is missing: an ADC design has no comparator thresholds to design; use the chain instead" });
   }
@@ -153,7 +155,9 @@ export function tripDesignFromDesign(design: DesignFile): TripDesign {
  * console.log(measurementChainFromDesign(design).detector.kind); // "adc"
  * ```
  */
-export function measurementChainFromDesign(design: DesignFile, reference: DesignReference = design.reference): MeasurementChain {
+export function measurementChainFromDesign(design: DesignFile, reference: DesignReference = _requireObject(design, "design", "measurementChainFromDesign")["reference"] as DesignReference): MeasurementChain {
+  _requireObject(design, "design", "measurementChainFromDesign");
+  _requireObject(reference, "reference", "measurementChainFromDesign");
   const referenceElement = _referenceElementOf(reference);
   let detector: ComparatorElement | AdcElement;
   if (design.adc !== undefined) {

@@ -2,7 +2,7 @@
  * Classifies a fault's trip shift with the healthy worst-case band: dangerous, safe, degraded or no effect.
  * @module
  */
-import { _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireOptionsObject, HotjunctionRangeError } from "../errors.js";
 import { _checkNumber } from "./_safetyChecks.js";
 import type { SafetyFaultSafety } from "./types.js";
 
@@ -67,6 +67,7 @@ export interface FaultShiftClass {
  */
 export function classifyFaultShift(input: ClassifyFaultShiftInput): FaultShiftClass {
   const context = "classifyFaultShift";
+  _requireOptionsObject(input, context, false);
   const threshold =
     input.noEffectThresholdC === undefined ? defaultNoEffectThresholdC : _checkNumber(input.noEffectThresholdC, "noEffectThresholdC", 0, 100, "°C", context);
   const lowC = _requireFinite(input.healthyBandC?.lowC, "healthyBandC.lowC", "°C", context);

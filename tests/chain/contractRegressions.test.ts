@@ -42,7 +42,7 @@ describe("element functions refuse forged arguments", () => {
 
   it("a cable statement that is missing, and a type without a string form", () => {
     expectTyped(() => cableToleranceMicrovolts("K", undefined as never, 20), /cable tolerance statement/);
-    expectTyped(() => cableTipErrorC("K", undefined as never, 100, 20), /cable tolerance statement/);
+    expectTyped(() => cableTipErrorC("K", undefined as never, 600, 200, 0), /cable tolerance statement/);
     expectTyped(() => thermocoupleLoopOhmsPerMetre(noStringForm, 0.5), /thermocouple type/);
   });
 

@@ -411,3 +411,31 @@ export function _requireOrderedPair(
   }
   return [lo, hi];
 }
+
+/**
+ * Throws an `OVERFLOW` range error unless a computed `result` is finite (inputs that are finite but so large or
+ * so small that the result leaves the float64 range, e.g. 1e308 V in mV); `input` is the value given.
+ * @internal
+ */
+export function _requireFiniteResult(result: number, quantity: string, input: number, unit?: string, context?: string): number {
+  if (!Number.isFinite(result)) {
+    throw new HotjunctionRangeError({
+      code: "OVERFLOW",
+      quantity,
+      value: input,
+      unit,
+      context,
+      problem: `gives a result outside the float64 range (${result > 0 ? "above" : "below"} ±1.8e308)`,
+    });
+  }
+  return result;
+}
+
+/**
+ * The text of a value inside a context (`type ${…} cable`): a string as it is, anything else as the error
+ * messages show it (never throws, even for an object without a string form).
+ * @internal
+ */
+export function _label(value: unknown): string {
+  return typeof value === "string" ? value : formatValue(value);
+}

@@ -3,7 +3,7 @@
  * Inside hotjunction every temperature is °C and every thermocouple EMF is mV; convert at the edge.
  * @module
  */
-import { _requireFinite, HotjunctionRangeError } from "./errors.js";
+import { _requireFinite, _requireFiniteResult, HotjunctionRangeError } from "./errors.js";
 
 /** 0 °C in kelvin (ITS-90: T90/K = t90/°C + 273.15). */
 export const kelvinAtZeroCelsius = 273.15;
@@ -70,7 +70,7 @@ export function kelvinToCelsius(temperatureK: number): number {
 export function celsiusToFahrenheit(temperatureC: number): number {
   _requireFinite(temperatureC, "temperature", "°C");
   requireAboveAbsoluteZero(temperatureC + kelvinAtZeroCelsius, temperatureC, "°C");
-  return temperatureC * 1.8 + 32;
+  return _requireFiniteResult(temperatureC * 1.8 + 32, "temperature", temperatureC, "°C");
 }
 
 /**
@@ -103,7 +103,7 @@ export function fahrenheitToCelsius(temperatureF: number): number {
  * ```
  */
 export function voltsToMillivolts(volts: number): number {
-  return _requireFinite(volts, "voltage", "V") * 1000;
+  return _requireFiniteResult(_requireFinite(volts, "voltage", "V") * 1000, "voltage", volts, "V");
 }
 
 /**
@@ -148,5 +148,5 @@ export function microvoltsToMillivolts(microvolts: number): number {
  * ```
  */
 export function millivoltsToMicrovolts(millivolts: number): number {
-  return _requireFinite(millivolts, "voltage", "mV") * 1000;
+  return _requireFiniteResult(_requireFinite(millivolts, "voltage", "mV") * 1000, "voltage", millivolts, "mV");
 }

@@ -5,7 +5,7 @@
  */
 import type { ThermocoupleType } from "../data/thermocoupleData.js";
 import { astmE230Tolerances, iecToleranceClasses, type ToleranceBand } from "../data/toleranceClasses.js";
-import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _invalidChoice, _label, _requireFinite, HotjunctionRangeError } from "../errors.js";
 import { _compile } from "../its90/compiled.js";
 import { _emfFromTemperature } from "../its90/engine.js";
 import { thermocoupleData, thermocoupleTypes } from "../its90/resolveType.js";
@@ -19,6 +19,7 @@ export interface ToleranceRange {
 }
 
 function describe(tolerance: ThermocoupleTolerance): string {
+  if (typeof tolerance !== "object" || tolerance === null) return "tolerance";
   if (tolerance.standard === "IEC 60584-1") return `IEC 60584-1 class ${tolerance.class}`;
   if (tolerance.standard === "ASTM E230") return `ASTM E230 ${tolerance.grade} limits`;
   return "custom tolerance";
@@ -116,7 +117,7 @@ function bandTolerance(band: ToleranceBand, temperatureC: number): number {
  * ```
  */
 export function toleranceRange(type: ThermocoupleType, tolerance: ThermocoupleTolerance): ToleranceRange {
-  const context = `type ${String(type)} ${describe(tolerance)}`;
+  const context = `type ${_label(type)} ${describe(tolerance)}`;
   const bands = bandsOf(checkType(type, context), tolerance, context);
   return { minC: (bands[0] as ToleranceBand).minC, maxC: (bands[bands.length - 1] as ToleranceBand).maxC };
 }
@@ -145,7 +146,7 @@ export function thermocoupleToleranceC(
   tolerance: ThermocoupleTolerance,
   temperatureC: number,
 ): number {
-  const context = `type ${String(type)} ${describe(tolerance)}`;
+  const context = `type ${_label(type)} ${describe(tolerance)}`;
   const bands = bandsOf(checkType(type, context), tolerance, context);
   const t = _requireFinite(temperatureC, "temperature", "°C", context);
   const first = bands[0] as ToleranceBand;

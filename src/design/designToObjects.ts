@@ -16,7 +16,7 @@ import type {
 import type { WireDescription } from "../chain/wire/wireStage.js";
 import type { ReferenceOption, TripDesign, TripResistors, TripSetpoint } from "../trip/types.js";
 import type { DesignFile, DesignReference } from "./designSchema.js";
-import { HotjunctionRangeError } from "../errors.js";
+import { HotjunctionRangeError, _requireObject } from "../errors.js";
 import type { TripDynamicsModel } from "../trip/tripDynamics.js";
 import type { ElementFailureData, FailureData, FailureModeShare } from "../safety/types.js";
 
@@ -101,6 +101,7 @@ export function _referenceElementOf(reference: DesignReference): ReferenceElemen
  * ```
  */
 export function referenceOptionFromDesign(reference: DesignReference): ReferenceOption {
+  _requireObject(reference, "reference", "referenceOptionFromDesign");
   const cost = reference.cost;
   if (reference.kind === "ideal") {
     return compact<ReferenceOption>({ kind: "ideal", name: reference.name, nominalVolts: reference.nominalVolts, cost });
@@ -135,6 +136,7 @@ export function referenceOptionFromDesign(reference: DesignReference): Reference
  * ```
  */
 export function tripDesignFromDesign(design: DesignFile): TripDesign {
+  _requireObject(design, "design", "tripDesignFromDesign");
   if (design.comparator === undefined || design.resistors === undefined) {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "comparator", value: undefined, context: "tripDesignFromDesign", problem: "is missing: an ADC design has no comparator thresholds to design; use the chain instead" });
   }
@@ -175,7 +177,9 @@ export function tripDesignFromDesign(design: DesignFile): TripDesign {
  * console.log(measurementChainFromDesign(design).detector.kind); // "adc"
  * ```
  */
-export function measurementChainFromDesign(design: DesignFile, reference: DesignReference = design.reference): MeasurementChain {
+export function measurementChainFromDesign(design: DesignFile, reference: DesignReference = _requireObject(design, "design", "measurementChainFromDesign")["reference"] as DesignReference): MeasurementChain {
+  _requireObject(design, "design", "measurementChainFromDesign");
+  _requireObject(reference, "reference", "measurementChainFromDesign");
   const referenceElement = _referenceElementOf(reference);
   let detector: ComparatorElement | AdcElement;
   if (design.adc !== undefined) {

@@ -5,6 +5,7 @@
  */
 import { closeSync, fstatSync, openSync, readSync } from "node:fs";
 import { basename } from "node:path";
+import { HotjunctionTypeError, _requireOptionsObject } from "../errors.js";
 import { DesignFileError } from "./designFileError.js";
 import type { DesignFile } from "./designSchema.js";
 import { designFileMaxBytes, parseDesign } from "./parseDesign.js";
@@ -28,6 +29,10 @@ export interface LoadDesignFileOptions {
  * ```
  */
 export function loadDesignFile(path: string, options: LoadDesignFileOptions = {}): DesignFile {
+  if (typeof path !== "string" || path.length === 0) {
+    throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "design file path", value: path, context: "loadDesignFile", problem: "is not a non-empty string" });
+  }
+  _requireOptionsObject(options, "loadDesignFile", false);
   const fileName = options.fileName ?? (path.length > 0 ? path : basename(path));
   let fd: number;
   try {

@@ -4,7 +4,7 @@
  * @internal
  * @module
  */
-import { HotjunctionRangeError, HotjunctionTypeError, _invalidChoice, _requireFinite, _requireInRange } from "../errors.js";
+import { HotjunctionRangeError, HotjunctionTypeError, _invalidChoice, _requireFinite, _requireFiniteResult, _requireInRange } from "../errors.js";
 import type { DigitalFilter, DynamicsModel, OutputStage, RunawayScenario, SignalPath } from "./types.js";
 
 const CONTEXT = "dynamics";
@@ -104,7 +104,8 @@ export function _isLag(tau: number): boolean {
 
 /** Time constant of an amplifier's first-order roll-off, τ = 1/(2πf), s. @internal */
 export function _amplifierTimeConstantSeconds(bandwidthHz: unknown): number {
-  return 1 / (2 * Math.PI * positive(bandwidthHz, "amplifier bandwidth (amplifierBandwidthHz)", "Hz"));
+  const hz = positive(bandwidthHz, "amplifier bandwidth (amplifierBandwidthHz)", "Hz");
+  return _requireFiniteResult(1 / (2 * Math.PI * hz), "amplifier bandwidth (amplifierBandwidthHz)", hz, "Hz");
 }
 
 function electronicLags(path: SignalPath | undefined): number[] {

@@ -11,6 +11,7 @@
  * @internal
  * @module
  */
+import { HotjunctionRangeError } from "../errors.js";
 import type { _CompiledDynamics } from "./_compileDynamics.js";
 
 /** The system matrices and where the signals sit in the state. @internal */
@@ -85,6 +86,10 @@ export function _expm(matrix: Float64Array, m: number): Float64Array {
     let row = 0;
     for (let j = 0; j < m; j++) row += Math.abs(matrix[i * m + j] as number);
     norm = Math.max(norm, row);
+  }
+  if (!Number.isFinite(norm)) {
+    // a time step so long (or rates so large) that rate × step overflows: squaring would never end
+    throw new HotjunctionRangeError({ code: "OVERFLOW", quantity: "time step × system rate (matrix norm)", value: norm, context: "dynamics", problem: "is beyond the float64 range; give a shorter time" });
   }
   const squarings = norm > 0.5 ? Math.ceil(Math.log2(norm / 0.5)) : 0;
   const scale = 2 ** -squarings;

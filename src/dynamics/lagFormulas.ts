@@ -3,7 +3,7 @@
  * ramp, the first-order heated process. Usable alone; the simulation uses the same models.
  * @module
  */
-import { _invalidChoice, _requireFinite, _requireInRange } from "../errors.js";
+import { _invalidChoice, _requireFinite, _requireFiniteResult, _requireInRange, _requireOptionsObject } from "../errors.js";
 import { _amplifierTimeConstantSeconds, _compileDynamics, _isLag } from "./_compileDynamics.js";
 import { _buildLinearSystem, _propagator, _step } from "./_linearSystem.js";
 import type { HeaterPowerRunaway } from "./types.js";
@@ -25,6 +25,7 @@ const CONTEXT = "dynamics";
  * ```
  */
 export function firstOrderRampLagC(options: { readonly rateCPerSecond: number; readonly timeConstantSeconds: number; readonly timeSeconds: number }): number {
+  _requireOptionsObject(options, CONTEXT, false);
   const rate = _requireFinite(options.rateCPerSecond, "ramp rate (rateCPerSecond)", "°C/s", CONTEXT);
   const tau = _requireInRange(options.timeConstantSeconds, "time constant (timeConstantSeconds)", 0, Number.MAX_VALUE, "s", CONTEXT);
   const t = _requireInRange(options.timeSeconds, "time (timeSeconds)", 0, Number.MAX_VALUE, "s", CONTEXT);
@@ -48,6 +49,7 @@ export function firstOrderRampLagC(options: { readonly rateCPerSecond: number; r
  * ```
  */
 export function rampLagThroughLagsC(options: { readonly rateCPerSecond: number; readonly timeConstantsSeconds: readonly number[]; readonly timeSeconds: number }): number {
+  _requireOptionsObject(options, CONTEXT, false);
   const t = _requireInRange(options.timeSeconds, "time (timeSeconds)", 0, Number.MAX_VALUE, "s", CONTEXT);
   const taus = Array.isArray(options.timeConstantsSeconds) ? options.timeConstantsSeconds : _requireFinite(options.timeConstantsSeconds, "time constants (timeConstantsSeconds)", "s", CONTEXT);
   const compiled = _compileDynamics({
@@ -58,7 +60,7 @@ export function rampLagThroughLagsC(options: { readonly rateCPerSecond: number; 
   const system = _buildLinearSystem({ ...compiled, sensorTimeConstantsSeconds: (taus as readonly number[]).filter(_isLag) }, 0);
   const out = new Float64Array(system.n);
   _step(_propagator(system, t), system.n, system.x0, 1, out);
-  return (out[system.trueIndex] as number) - (out[system.indicatedIndex] as number);
+  return _requireFiniteResult((out[system.trueIndex] as number) - (out[system.indicatedIndex] as number), "time (timeSeconds)", t, "s", CONTEXT);
 }
 
 /**
@@ -75,6 +77,7 @@ export function rampLagThroughLagsC(options: { readonly rateCPerSecond: number; 
  * ```
  */
 export function movingAverageRampDelaySeconds(options: { readonly samples: number; readonly samplePeriodSeconds: number }): number {
+  _requireOptionsObject(options, CONTEXT, false);
   const compiled = _compileDynamics({
     runaway: { kind: "constantRate", rateCPerSecond: 1 },
     signalPath: { kind: "firmware", samplePeriodSeconds: options.samplePeriodSeconds, digitalFilter: { kind: "movingAverage", samples: options.samples } },
@@ -97,6 +100,7 @@ export function movingAverageRampDelaySeconds(options: { readonly samples: numbe
  * ```
  */
 export function iirRampDelaySeconds(options: { readonly coefficient: number; readonly samplePeriodSeconds: number }): number {
+  _requireOptionsObject(options, CONTEXT, false);
   const compiled = _compileDynamics({
     runaway: { kind: "constantRate", rateCPerSecond: 1 },
     signalPath: { kind: "firmware", samplePeriodSeconds: options.samplePeriodSeconds, digitalFilter: { kind: "firstOrderIir", coefficient: options.coefficient } },

@@ -12,7 +12,7 @@
  * the stage that limits the noise at the decision point.
  * @module
  */
-import { HotjunctionRangeError, _requireInRange } from "../errors.js";
+import { HotjunctionRangeError, _requireInRange, _requireOptionsObject } from "../errors.js";
 import { _compileDynamics, _requireObject } from "./_compileDynamics.js";
 import type { DynamicsModel, NoiseSpec, WhiteNoiseDensity, WhiteNoiseRms } from "./types.js";
 
@@ -45,6 +45,7 @@ function positive(value: unknown, quantity: string, unit: string): number {
  * ```
  */
 export function riceUpCrossingRatePerSecond(options: { readonly levelVolts: number; readonly rmsVolts: number; readonly bandwidthHz: number }): number {
+  _requireOptionsObject(options, CONTEXT, false);
   const u = _requireInRange(options.levelVolts, "level (levelVolts)", -NONNEG, NONNEG, "V", CONTEXT);
   const sigma = _requireInRange(options.rmsVolts, "noise rms (rmsVolts)", 0, NONNEG, "V", CONTEXT);
   const b = positive(options.bandwidthHz, "noise bandwidth (bandwidthHz)", "Hz");
@@ -89,6 +90,7 @@ export function whiteNoiseRmsVolts(white: WhiteNoiseDensity | WhiteNoiseRms): nu
  * ```
  */
 export function mainsPickupPeakVolts(options: { readonly amplitudeVolts: number; readonly frequencyHz: number; readonly timeConstantsSeconds: readonly number[] }): number {
+  _requireOptionsObject(options, CONTEXT, false);
   const a = _requireInRange(options.amplitudeVolts, "mains pickup amplitude (amplitudeVolts)", 0, NONNEG, "V", CONTEXT);
   const f = positive(options.frequencyHz, "mains frequency (frequencyHz)", "Hz");
   let gain = 1;
@@ -129,6 +131,7 @@ export interface ChatterRateOptions {
  * ```
  */
 export function chatterRatePerHour(options: ChatterRateOptions): number {
+  _requireOptionsObject(options, CONTEXT, false);
   const h = _requireInRange(options.hysteresisVolts, "hysteresis (hysteresisVolts)", 0, NONNEG, "V", CONTEXT);
   const sigma = _requireInRange(options.rmsVolts, "noise rms (rmsVolts)", 0, NONNEG, "V", CONTEXT);
   const b = positive(options.bandwidthHz, "noise bandwidth (bandwidthHz)", "Hz");
@@ -154,6 +157,7 @@ export function chatterRatePerHour(options: ChatterRateOptions): number {
  * ```
  */
 export function hysteresisForChatterVolts(options: { readonly rmsVolts: number; readonly bandwidthHz: number; readonly targetPerHour: number; readonly mainsPeakVolts?: number }): number {
+  _requireOptionsObject(options, CONTEXT, false);
   const sigma = _requireInRange(options.rmsVolts, "noise rms (rmsVolts)", 0, NONNEG, "V", CONTEXT);
   const b = positive(options.bandwidthHz, "noise bandwidth (bandwidthHz)", "Hz");
   const target = positive(options.targetPerHour, "chatter target (targetPerHour)", "1/h") / 3600;

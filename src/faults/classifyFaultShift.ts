@@ -4,7 +4,7 @@
  * safety figures read those classes.
  * @module
  */
-import { _requireFinite, _requireInRange, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireInRange, _requireOptionsObject, HotjunctionRangeError } from "../errors.js";
 import type { FaultSafety } from "./types.js";
 
 /**
@@ -69,6 +69,7 @@ export interface FaultShiftClass {
  */
 export function classifyFaultShift(input: ClassifyFaultShiftInput): FaultShiftClass {
   const context = "classifyFaultShift";
+  _requireOptionsObject(input, context, false);
   const threshold =
     input.noEffectThresholdC === undefined ? defaultNoEffectThresholdC : _requireInRange(input.noEffectThresholdC, "noEffectThresholdC", 0, 100, "°C", context);
   const lowC = _requireFinite(input.healthyBandC?.lowC, "healthyBandC.lowC", "°C", context);

@@ -2,7 +2,7 @@
  * Exhaustive search for the two-resistor divider closest to a target ratio.
  * @module
  */
-import { _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireOptionsObject, HotjunctionRangeError } from "../errors.js";
 import type { PreferredSeriesName } from "../data/preferredSeries.js";
 import { _indexAtOrBelow, _requireSeries, standardResistorValues } from "./standardResistorValues.js";
 
@@ -91,6 +91,7 @@ export function selectDividerPair(targetRatio: number, options: SelectDividerPai
   if (!(k > 0 && k < 1)) {
     throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "target ratio", value: k, min: 0, max: 1, context, problem: "is not strictly between 0 and 1" });
   }
+  _requireOptionsObject(options, context, false);
   const series = _requireSeries(options.series, context);
   const { minTotal, maxTotal } = _totalBounds(options.minTotalOhms, options.maxTotalOhms, context);
   const minResistor = _requireFinite(options.minResistorOhms ?? 1, "minResistorOhms", "Ω", context);

@@ -28,7 +28,7 @@ import {
   thermocoupleLegs,
   wireAlloySource,
 } from "../../data/wireAlloys.js";
-import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../../errors.js";
+import { _invalidChoice, _label, _requireFinite, HotjunctionRangeError } from "../../errors.js";
 import { _compile } from "../../its90/compiled.js";
 import { _emfFromTemperature, _seebeckCoefficient } from "../../its90/engine.js";
 import { thermocoupleData } from "../../its90/resolveType.js";
@@ -75,7 +75,7 @@ function metalVsPlatinum(metal: ContactMetal, context: string): number | "matchi
  * ```
  */
 export function legSeebeckVsContact(type: ThermocoupleType, metal: ContactMetal, temperatureC: number): LegSeebeck {
-  const context = `type ${String(type)} connector`;
+  const context = `type ${_label(type)} connector`;
   const legs = thermocoupleLegs[type];
   if (legs === undefined) return _invalidChoice("thermocouple type", type, Object.keys(thermocoupleLegs), context);
   const m = metalVsPlatinum(metal, context);

@@ -23,7 +23,7 @@
  */
 import { astmExtensionWireTolerances, iecCableTolerances, type CableToleranceEntry } from "../../data/cableTolerances.js";
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
-import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../../errors.js";
+import { _invalidChoice, _label, _requireFinite, _requireOrderedPair, HotjunctionRangeError } from "../../errors.js";
 import { _compile, type CompiledType } from "../../its90/compiled.js";
 import { _emfFromTemperature, _seebeckCoefficient } from "../../its90/engine.js";
 import { thermocoupleData } from "../../its90/resolveType.js";
@@ -112,7 +112,7 @@ export function cableToleranceStatement(
   grade: "extension" | "compensating",
   tolerance: CableTolerance,
 ): CableToleranceStatement {
-  const context = `type ${String(type)} cable`;
+  const context = `type ${_label(type)} cable`;
   if (grade !== "extension" && grade !== "compensating") {
     return _invalidChoice("cable grade", grade, ["extension", "compensating"], context);
   }
@@ -175,6 +175,11 @@ function requireRated(s: CableToleranceStatement, t: number, quantity: string, c
   }
 }
 
+/** The statement's code for a context, after checking the statement is an object. */
+function _statementCode(statement: CableToleranceStatement): string {
+  return _label(_requireObject(statement, "cable tolerance statement", "cable")["code"]);
+}
+
 /**
  * The tolerance of a cable as an EMF at a cable temperature, T(t): the µV statement (IEC) or tol·S(t)
  * (ASTM, custom: °C at the cable's temperature through the Seebeck coefficient there, not at the tip).
@@ -195,7 +200,7 @@ export function cableToleranceMicrovolts(
   statement: CableToleranceStatement,
   cableTemperatureC: number,
 ): number {
-  const context = `type ${String(type)} ${statement.code} cable`;
+  const context = `type ${_label(type)} ${_statementCode(statement)} cable`;
   const t = _requireFinite(cableTemperatureC, "cable temperature", "°C", context);
   requireRated(statement, t, "cable temperature", context);
   return toleranceMicrovoltsAt(_compile(thermocoupleData(type)), statement, t);
@@ -230,7 +235,13 @@ export interface CableMismatchBound {
  */
 export function cableMismatchBound(type: ThermocoupleType, statement: CableToleranceStatement): CableMismatchBound {
   const ct = _compile(thermocoupleData(type));
-  const steps = Math.max(1, Math.ceil(statement.maxC - statement.minC));
+  const context = `type ${_label(type)} ${_statementCode(statement)} cable`;
+  // the search walks the rated range in 1 °C steps: a forged range wider than any type's is refused, not walked
+  const [minC, maxC] = _requireOrderedPair(statement.minC, statement.maxC, "rated minC", "rated maxC", "°C", context);
+  if (maxC - minC > 2100) {
+    throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "rated range width", value: maxC - minC, max: 2100, unit: "°C", context, problem: "is wider than any thermocouple range" });
+  }
+  const steps = Math.max(1, Math.ceil(maxC - minC));
   let best: CableMismatchBound | undefined;
   for (let i = 0; i <= steps; i++) {
     const t = i === steps ? statement.maxC : statement.minC + i;
@@ -248,7 +259,7 @@ export function cableMismatchBound(type: ThermocoupleType, statement: CableToler
       quantity: "cable rated range",
       value: `${statement.minC} to ${statement.maxC}`,
       unit: "°C",
-      context: `type ${type} ${statement.code} cable`,
+      context: `type ${type} ${_statementCode(statement)} cable`,
       problem: "has no temperature where E ≠ 0; use the envelope model",
     });
   }
@@ -374,7 +385,7 @@ export function cableTipErrorC(
   coldJunctionC: number,
   mismatch: CableMismatchModel = "proportional",
 ): number {
-  const context = `type ${String(type)} ${statement.code} cable`;
+  const context = `type ${_label(type)} ${_statementCode(statement)} cable`;
   const ct = _compile(thermocoupleData(type));
   const tj = _requireFinite(junctionC, "cable junction temperature", "°C", context);
   const tc = _requireFinite(coldJunctionC, "cable cold-end temperature", "°C", context);

@@ -11,7 +11,7 @@
  */
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
 import { thermocoupleLegs } from "../../data/wireAlloys.js";
-import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../../errors.js";
+import { _invalidChoice, _label, _requireFinite, HotjunctionRangeError } from "../../errors.js";
 import { _optionalLimit, _requireFraction, _requireObject, _requirePositive, type _SourceContext } from "../_common.js";
 import type { DetectionDirection, LoopResistanceElement, ThermocoupleWireRun, WireErrorSource } from "../wireTypes.js";
 import { _wireSource, type _Inputs } from "./_wireCommon.js";
@@ -53,7 +53,7 @@ function requireType(type: ThermocoupleType, context: string): void {
  * ```
  */
 export function thermocoupleLoopOhmsPerMetre(type: ThermocoupleType, diameterMm: number): number {
-  const context = `type ${String(type)} wire`;
+  const context = `type ${_label(type)} wire`;
   requireType(type, context);
   const d = _requirePositive(diameterMm, "diameterMm", "mm", context);
   const legs = thermocoupleLegs[type];

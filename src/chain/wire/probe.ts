@@ -9,7 +9,7 @@
  * the temperature history; this library does not supply drift rates.
  * @module
  */
-import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../../errors.js";
+import { _invalidChoice, _requireFinite, _requireInteger, HotjunctionRangeError } from "../../errors.js";
 import { _optionalLimit, _requireNonNegative, _requireObject, _requirePositive, type _SourceContext } from "../_common.js";
 import type { AgeingElement, DriftDirection, InsulationLeakageElement, WireErrorSource } from "../wireTypes.js";
 import { _wireSource, type _Inputs } from "./_wireCommon.js";
@@ -147,10 +147,13 @@ export function ageingBandAt(element: AgeingElement, hours: number): AgeingBandP
   return { hours: h, lowC: a.direction === "up" || d === 0 ? 0 : -d, highC: a.direction === "down" ? 0 : d };
 }
 
+/** Most intervals {@link ageingBandOverService} computes (a chart or a table needs far fewer; bounds the work). */
+const ageingBandMaxSteps = 10_000;
+
 /**
  * The ageing band at evenly spaced times over the service life (for a chart or a table).
  * @param element - ageing element
- * @param steps - number of intervals (integer ≥ 1), default 10
+ * @param steps - number of intervals (integer 1 … 10,000), default 10
  * @returns steps + 1 points from 0 h to serviceHours
  * @example
  * ```ts
@@ -161,9 +164,7 @@ export function ageingBandAt(element: AgeingElement, hours: number): AgeingBandP
  */
 export function ageingBandOverService(element: AgeingElement, steps = 10): AgeingBandPoint[] {
   const a = checkAgeing(element, "ageing");
-  if (!Number.isInteger(steps) || steps < 1) {
-    throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "steps", value: steps, min: 1, context: "ageing", problem: "is not an integer ≥ 1" });
-  }
+  _requireInteger(steps, "steps", 1, ageingBandMaxSteps, "ageing");
   const out: AgeingBandPoint[] = [];
   for (let i = 0; i <= steps; i++) out.push(ageingBandAt(element, i === steps ? a.serviceHours : (a.serviceHours * i) / steps));
   return out;

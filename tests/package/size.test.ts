@@ -34,7 +34,9 @@ const letterEntryBudgetBytes = 6_000;
 // the one-type and letter-API budgets below are what a consumer that converts only pays.
 const fullEntryBudgetBytes = 96_000;
 /** `hotjunction/design` as a whole (`import * as design`), zod included; measured 102 259 B at the entry split (0.1.0). */
-const designEntryBudgetBytes = 120_000;
+// Raised from 120,000 B when the design file gained the dynamics, failureData and wire sections (the wire
+// checkers pull in the conversion engine); measured figure in DEVELOPERS.md.
+const designEntryBudgetBytes = 140_000;
 /** Packages only `hotjunction/report` (and the CLI) may pull in. */
 const chartDependencies = ["d3-scale", "d3-shape", "d3-"];
 

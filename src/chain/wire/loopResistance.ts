@@ -37,7 +37,8 @@ export function awgDiameterMm(awg: number): number {
 }
 
 function requireType(type: ThermocoupleType, context: string): void {
-  if (thermocoupleLegs[type] === undefined) _invalidChoice("thermocouple type", type, Object.keys(thermocoupleLegs), context);
+  // A non-string (e.g. an object with no string form) cannot be used as a key: refuse it before the lookup.
+  if (typeof type !== "string" || !Object.hasOwn(thermocoupleLegs, type)) _invalidChoice("thermocouple type", type, Object.keys(thermocoupleLegs), context);
 }
 
 /**

@@ -214,7 +214,7 @@ function compactDeep(value: unknown): unknown {
 
 /**
  * The response-time model of a design file's `dynamics` section (the same keys as the library's `DynamicsModel`;
- * the noise slope may be left out, to be taken from the chain at each setpoint by {@link signalSlopeFromDesign}).
+ * the noise slope may be left out, to be taken from the chain at each setpoint by `chainSignalSlope`).
  * @param design - a validated design
  * @returns the model, or `undefined` when the design states no dynamics
  * @example

@@ -414,6 +414,14 @@ export function _realizedTripReference(design: TripDesign): ReferenceElement {
   return planTrip(design, undefined).realized.element;
 }
 
+/**
+ * Designs the thresholds of an over-temperature trip: standard resistor values per setpoint (or one ladder),
+ * nominal trip and release, trip bands by worst case, RSS and Monte Carlo, margins, the build sheet and the caution.
+ * @param design - the trip design (setpoints, chain elements, reference, resistors, ambient)
+ * @param options - propagation options (trials, seed, acceptance method, progress)
+ * @returns the per-setpoint results, networks, reference realization, build sheet and notes
+ * @throws HotjunctionRangeError / HotjunctionTypeError for an invalid design
+ */
 export function designTrip(design: TripDesign, options: DesignTripOptions = {}): TripDesignResult {
   if (typeof design !== "object" || design === null) designError("design", design, "is not an object");
   const acceptanceMethod = options.acceptanceMethod ?? "worst-case";

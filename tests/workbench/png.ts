@@ -1,5 +1,5 @@
 // PNG ink counter for the workbench screenshots (decodes with zlib, no image library); the same decoder as
-// tests/report/svgChromium.test.ts.
+// tests/report/svgChromium.test.ts, which imports it from here.
 import { inflateSync } from "node:zlib";
 import { expect } from "vitest";
 

@@ -51,8 +51,11 @@ export async function buildWorkbenchPage(): Promise<string> {
     legalComments: "none",
     charset: "utf8",
     logLevel: "warning",
-    // The design entry also reads files (loadDesignFile); the page never calls it, and tree-shaking drops it.
-    external: ["node:*"],
+    // The design entry also reads files (loadDesignFile); the page never calls it, and tree-shaking drops it. The
+    // page takes two of the CLI's design-file steps (the dynamics fold-in, the ADC build sheet) from modules that
+    // also import commander and cli-progress for their commands; those parts are never reached from the page and
+    // tree-shaking drops them (the workbench tests check the page's script calls no `require`).
+    external: ["node:*", "commander", "cli-progress"],
   });
   const script = result.outputFiles[0]?.text;
   if (script === undefined) throw new Error("buildWorkbench: esbuild produced no output");

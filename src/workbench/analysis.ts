@@ -17,7 +17,12 @@ import {
   type TripDesignResult,
 } from "../index.js";
 import { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign, type DesignFile } from "../design/index.js";
-import { firmwareTripReport, tripBandChartSvg, tripReportFromResult, type ReportMethodInfo, type TripReport } from "../report/index.js";
+import { firmwareTripReport, runawayChartSvg, tripBandChartSvg, tripReportFromResult, type ReportMethodInfo, type TripReport } from "../report/index.js";
+// The CLI's own design-file steps, so the page shows what `check` and `runaway` print (one source): the dynamics
+// fold-in (runaway against each setpoint's static band, verdict from the dynamic peak) and the ADC build sheet.
+import { _foldDynamics, _tripDynamicsOfDesign } from "../cli/dynamicsOfDesign.js";
+import { _adcBuildSheet } from "../cli/commands/check.js";
+import { _designFailureDataProblems, _designFaultIds } from "../cli/faultSafety.js";
 
 /** How hard to work. */
 export interface AnalysisSettings {
@@ -31,7 +36,7 @@ export interface AnalysisSettings {
 
 /** One part of the analysis that could not be done, with the library's message. */
 export interface AnalysisProblem {
-  readonly part: "trip" | "comparison" | "faults";
+  readonly part: "trip" | "comparison" | "faults" | "dynamics";
   readonly message: string;
 }
 
@@ -49,6 +54,13 @@ export interface WorkbenchAnalysis {
   readonly faults?: FaultReviewReport;
   /** The trip bands chart, as the CLI's `check --svg` writes it. */
   readonly bandsSvg?: string;
+  /**
+   * Designs with a `dynamics` section: true once the runaway has been run and folded into `report` (its verdict
+   * then comes from the dynamic peak, `report.dynamics` holds the figures).
+   */
+  readonly dynamicsDone?: boolean;
+  /** The runaway chart, as the CLI's `runaway --svg` writes it by default (the case with the smallest dynamic margin). */
+  readonly runawaySvg?: string;
   readonly problems: readonly AnalysisProblem[];
 }
 
@@ -109,6 +121,22 @@ export function faultOptionsOfDesign(design: DesignFile): ReviewFaultsOptions {
   };
 }
 
+/**
+ * The problems `validate` finds in a design that parses (failure-data fault ids against the fault catalogue of
+ * each channel, proof-test fault ids), each with its path and message, as `validate` prints them.
+ */
+export function validationProblems(design: DesignFile): { path: string; message: string }[] {
+  if (design.failureData === undefined) return [];
+  try {
+    return _designFailureDataProblems(design, _designFaultIds(design)).map((e) => {
+      const prefix = `failure data: ${e.quantity} `;
+      return { path: e.quantity, message: e.message.startsWith(prefix) ? e.message.slice(prefix.length) : e.message };
+    });
+  } catch (error) {
+    return [{ path: "failureData", message: messageOf(error) }];
+  }
+}
+
 /** Setpoints of an ADC design with their limits (presence was checked by validation). */
 function adcSetpoints(design: DesignFile) {
   return design.setpoints.map((s) => ({
@@ -126,6 +154,43 @@ export interface AnalyseOptions {
   /** Skip the reference comparison and the fault review (they follow from the worker). */
   readonly bandsOnly?: boolean;
   readonly onProgress?: (fractionDone: number) => void;
+  /** Skip the runaway of a design's `dynamics` section (it follows with {@link withDynamics}). */
+  readonly skipDynamics?: boolean;
+}
+
+/** The chart `runaway --svg` writes with no `--setpoint`/`--unit`: the case with the smallest dynamic margin. */
+function runawayChartOf(design: DesignFile, result: NonNullable<ReturnType<typeof _tripDynamicsOfDesign>>): string {
+  let chosen = { setpoint: 0, unit: 0 };
+  let smallest = Infinity;
+  result.setpoints.forEach((s, i) => {
+    s.cases.forEach((c, k) => {
+      if (c.dynamicMarginC < smallest) {
+        smallest = c.dynamicMarginC;
+        chosen = { setpoint: i, unit: k };
+      }
+    });
+  });
+  const response = result.responses[chosen.setpoint]?.[chosen.unit];
+  const s = result.setpoints[chosen.setpoint];
+  if (response === undefined || s === undefined) throw new Error("workbench: no runaway to chart");
+  return runawayChartSvg(response, { title: `Runaway at "${s.name}": ${s.cases[chosen.unit]?.name ?? ""}${design.name !== undefined ? ` (${design.name})` : ""}` });
+}
+
+/**
+ * The analysis with the design's runaway folded in, as `check` folds it (verdict from the dynamic peak) and with
+ * the chart `runaway --svg` draws. Unchanged when the design has no `dynamics` section or no trip report.
+ */
+export function withDynamics(design: DesignFile, analysis: WorkbenchAnalysis): WorkbenchAnalysis {
+  if (design.dynamics === undefined || analysis.report === undefined || analysis.dynamicsDone === true) return analysis;
+  try {
+    const result = _tripDynamicsOfDesign(design, analysis.report);
+    if (result === undefined) return analysis;
+    const report = _foldDynamics(analysis.report, result);
+    // The bands chart titles each setpoint with its verdict: drawn again from the folded report, as `check --svg`.
+    return { ...analysis, report, bandsSvg: tripBandChartSvg(report), dynamicsDone: true, runawaySvg: runawayChartOf(design, result) };
+  } catch (error) {
+    return { ...analysis, dynamicsDone: true, problems: [...analysis.problems, { part: "dynamics", message: messageOf(error) }] };
+  }
 }
 
 /**
@@ -181,7 +246,7 @@ export function analyseDesign(design: DesignFile, options: AnalyseOptions = {}):
       }
     }
     progress?.(1);
-    return {
+    const result: WorkbenchAnalysis = {
       settings,
       monteCarloFinal,
       kind: "comparator",
@@ -192,6 +257,7 @@ export function analyseDesign(design: DesignFile, options: AnalyseOptions = {}):
       ...(faults !== undefined ? { faults } : {}),
       problems,
     };
+    return options.skipDynamics === true ? result : withDynamics(design, result);
   }
   let report: TripReport | undefined;
   let faults: FaultReviewReport | undefined;
@@ -210,7 +276,8 @@ export function analyseDesign(design: DesignFile, options: AnalyseOptions = {}):
     });
     const reference = design.reference;
     const details = [`Reference: ${reference.name} (${reference.kind}), ${reference.nominalVolts} V.`, `ADC: ${design.adc?.bits ?? "?"} bits.`];
-    report = named(firmwareTripReport(setpoints, evaluations, methods, details));
+    const plain = firmwareTripReport(setpoints, evaluations, methods, details);
+    report = named({ ...plain, buildSheet: _adcBuildSheet(design, chain, plain, evaluations) });
     if (options.bandsOnly !== true) {
       try {
         faults = reviewChainFaults(chain, setpoints, faultOptionsOfDesign(design));
@@ -222,7 +289,7 @@ export function analyseDesign(design: DesignFile, options: AnalyseOptions = {}):
     problems.push({ part: "trip", message: messageOf(error) });
   }
   progress?.(1);
-  return {
+  const result: WorkbenchAnalysis = {
     settings,
     monteCarloFinal,
     kind: "adc",
@@ -231,4 +298,5 @@ export function analyseDesign(design: DesignFile, options: AnalyseOptions = {}):
     ...(faults !== undefined ? { faults } : {}),
     problems,
   };
+  return options.skipDynamics === true ? result : withDynamics(design, result);
 }

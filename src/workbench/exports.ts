@@ -1,10 +1,12 @@
 /**
  * What the workbench hands back: the report as a self-contained HTML document, Markdown, CSV and the parts list.
- * Each carries the caution, the methods and the seed. Text formats come from the library's renderers.
+ * Each carries the caution, the methods and the seed. Text formats come from the library's renderers; the trip
+ * report carries the build sheet and, with a `dynamics` section, the runaway (as `check` prints them).
  * @module
  */
 import { CAUTION_TEXT } from "../design/index.js";
 import { formatComparisonReport, formatTripReport } from "../report/index.js";
+import { formatPartsCsv } from "../report/renderTripReport.js";
 import { formatFaultReviewMarkdown } from "../index.js";
 import type { WorkbenchAnalysis } from "./analysis.js";
 import { cautionBlock, methodsSentence, resultSections } from "./results.js";
@@ -25,42 +27,16 @@ export function csvExport(a: WorkbenchAnalysis): string {
   return `# CAUTION: ${CAUTION_TEXT}\n# ${methodsSentence(a)}\n`;
 }
 
-function csvField(value: string | number): string {
-  const text = String(value);
-  return /[",\n\r]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
-
 /**
- * The parts list the design chose, as CSV: threshold resistors by network and position, the reference and its
- * sized series resistor, and the thermocouple. Counts add up identical parts.
+ * The parts list the design chose, as CSV: the report's build-sheet bill of materials exactly as
+ * `check --parts-csv` writes it, with the methods and seed as a second `#` line.
  */
-export function partsListCsv(a: WorkbenchAnalysis, design: Record<string, unknown>): string {
-  const rows: (string | number)[][] = [["part", "value", "unit", "tolerance", "tempco_ppm_per_C", "count", "where"]];
-  const resistors = design["resistors"] as { series?: string; toleranceFraction?: number; tempcoPpmPerC?: number } | undefined;
-  const tolerance = resistors?.toleranceFraction !== undefined ? `±${+(resistors.toleranceFraction * 100).toPrecision(4)} %` : "";
-  const tempco = resistors?.tempcoPpmPerC ?? "";
-  const trip = a.trip;
-  if (trip !== undefined) {
-    const tally = new Map<number, string[]>();
-    trip.networks.forEach((n, ni) => n.resistorsOhms.forEach((r, ri) => tally.set(r, [...(tally.get(r) ?? []), `network ${ni + 1} R${ri + 1}`])));
-    for (const [ohms, where] of [...tally.entries()].sort((x, y) => x[0] - y[0])) {
-      rows.push([`resistor ${resistors?.series ?? ""}`.trim(), ohms, "ohm", tolerance, tempco, where.length, where.join("; ")]);
-    }
-    const ref = trip.reference;
-    rows.push([`reference (${ref.kind})`, ref.nominalVolts, "V", `±${+(ref.toleranceFraction * 100).toPrecision(4)} % total`, "", 1, ref.name]);
-    const series = (ref.element as { seriesOhms?: number } | undefined)?.seriesOhms;
-    if (series !== undefined) {
-      const watts = ref.seriesResistorPowerWatts;
-      rows.push(["shunt series resistor", series, "ohm", tolerance, tempco, 1, watts !== undefined ? `dissipates up to ${+(watts * 1000).toPrecision(3)} mW` : "reference supply"]);
-    }
-  } else {
-    const ref = design["reference"] as { name?: string; kind?: string; nominalVolts?: number } | undefined;
-    if (ref !== undefined) rows.push([`reference (${ref.kind ?? ""})`, ref.nominalVolts ?? "", "V", "", "", 1, ref.name ?? ""]);
-  }
-  const tc = design["thermocouple"] as { type?: string } | undefined;
-  if (tc?.type !== undefined) rows.push([`thermocouple type ${tc.type}`, "", "", "", "", 1, "sensor"]);
-  const body = rows.map((r) => r.map(csvField).join(",")).join("\n");
-  return `# CAUTION: ${CAUTION_TEXT}\n# ${methodsSentence(a)}\n${body}\n`;
+export function partsListCsv(a: WorkbenchAnalysis): string | undefined {
+  const sheet = a.report?.buildSheet;
+  if (sheet === undefined) return undefined;
+  const csv = formatPartsCsv(sheet);
+  const firstLineEnd = csv.indexOf("\n") + 1;
+  return `${csv.slice(0, firstLineEnd)}# ${methodsSentence(a)}\n${csv.slice(firstLineEnd)}`;
 }
 
 /** The stylesheet of the exported report (print-friendly, readable without colour). */

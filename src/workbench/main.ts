@@ -7,7 +7,7 @@
 import { designJsonSchema, safeParseDesign, tripDesignFromDesign, CAUTION_TEXT, type DesignFile } from "../design/index.js";
 import { designTrip, evaluateChain } from "../index.js";
 import { measurementChainFromDesign } from "../design/index.js";
-import { analyseDesign, settingsOfDesign, type WorkbenchAnalysis } from "./analysis.js";
+import { analyseDesign, settingsOfDesign, validationProblems, withDynamics, type WorkbenchAnalysis } from "./analysis.js";
 import { csvExport, htmlExport, markdownExport, partsListCsv } from "./exports.js";
 import { decodeFragment, encodeFragment } from "./fragment.js";
 import { cautionBlock, resultSections } from "./results.js";
@@ -223,27 +223,43 @@ class Workbench {
     const results = byId("hj-results-body");
     if (!parsed.success) {
       const error = parsed.error;
-      const message = error.message.replace(/^design: (at [^:]+: )?/, "");
-      this.form.showProblems([{ path: error.path, message }]);
+      // Every problem `validate` lists (path, expected, found), each beside its own field.
+      const all = error.problems.map((p) => ({ path: p.path, message: p.problem }));
+      this.form.showProblems(all);
       this.current = undefined;
       const note = document.createElement("p");
       note.className = "hj-pending";
       note.id = "hj-invalid-note";
-      note.textContent = `The design is not valid yet (${error.path === "" ? "the file" : error.path}): results return when it is.`;
+      const where = (p: { path: string }): string => (p.path === "" ? "the file" : p.path);
+      note.textContent = `The design is not valid yet (${all.length === 1 ? where(all[0] ?? error) : `${all.length} problems: ${all.map(where).join(", ")}`}): results return when it is.`;
       results.replaceChildren(note);
       this.setProgress(undefined);
-      this.announce(`Problem at ${error.path === "" ? "the file" : error.path}: ${message}`);
+      this.announce(all.length === 1 ? `Problem at ${where(error)}: ${all[0]?.message ?? error.problem}` : `${all.length} problems: ${all.map((p) => `at ${where(p)}: ${p.message}`).join("; ")}`);
       this.settle();
       return;
     }
-    this.form.showProblems([]);
     const design = parsed.design;
+    // What `validate` checks beyond the format (failure-data fault ids against the catalogue), also beside the fields.
+    this.form.showProblems(validationProblems(design));
     const trials = settingsOfDesign(design).trials;
-    const quick = analyseDesign(design, { trials: Math.min(quickTrials, trials), bandsOnly: true });
-    this.current = { analysis: quick, design, text };
-    this.show(quick, ["comparison", "faults"]);
-    this.announceResult(quick, false);
+    // The full run starts first, in the worker, so it runs beside the first answer on a second core.
     this.startWorker(id, text);
+    // The first answer: every band by worst case and RSS, Monte Carlo on a few trials (it refines in the worker).
+    const quick = analyseDesign(design, { trials: Math.min(quickTrials, trials), bandsOnly: true, skipDynamics: true });
+    this.current = { analysis: quick, design, text };
+    const hasDynamics = design.dynamics !== undefined;
+    this.show(quick, ["comparison", "faults", ...(hasDynamics ? (["dynamics"] as const) : [])]);
+    this.announceResult(quick, false);
+    // The runaway next, on the page (it needs only the worst-case band and the nominal trip, final already).
+    if (hasDynamics) {
+      setTimeout(() => {
+        if (id !== this.generation || this.current?.analysis !== quick) return;
+        const folded = withDynamics(design, quick);
+        this.current = { ...this.current, analysis: folded };
+        this.show(folded, ["comparison", "faults"]);
+        this.announceResult(folded, false);
+      }, 0);
+    }
   }
 
   private startWorker(id: number, text: string): void {
@@ -254,8 +270,11 @@ class Workbench {
       worker = new Worker(this.workerUrl);
     } catch (error) {
       this.announce(`Monte Carlo could not start in the background (${String(error)}); running it here.`);
-      const parsed = safeParseDesign(text, { fileName: "design" });
-      if (parsed.success) this.finish(id, analyseDesign(parsed.design));
+      // After the first answer is on the page (this runs before it).
+      setTimeout(() => {
+        const parsed = safeParseDesign(text, { fileName: "design" });
+        if (parsed.success && id === this.generation) this.finish(id, analyseDesign(parsed.design));
+      }, 0);
       return;
     }
     this.worker = worker;
@@ -304,7 +323,7 @@ class Workbench {
     return new Promise((resolve) => this.idleWaiters.push(resolve));
   }
 
-  private show(analysis: WorkbenchAnalysis, pending: readonly ("comparison" | "faults")[]): void {
+  private show(analysis: WorkbenchAnalysis, pending: readonly ("comparison" | "faults" | "dynamics")[]): void {
     byId("hj-results-body").replaceChildren(...resultSections(analysis, pending));
     for (const b of document.querySelectorAll<HTMLButtonElement>(".hj-export")) b.disabled = false;
   }
@@ -336,7 +355,8 @@ class Workbench {
       const band = s.bands.find((b) => b.method === accepted) ?? s.bands[0];
       return `${s.name} ${band !== undefined ? `${band.lowC.toFixed(1)} to ${band.highC.toFixed(1)} °C` : ""} ${s.pass ? "pass" : "fail"}`;
     });
-    this.announce(`${final ? "Full results" : "Results updated"}: ${r.pass ? "PASS" : "FAIL"}. ${parts.join("; ")}.${final ? " Monte Carlo done." : " Monte Carlo running."}`);
+    const dynamic = r.dynamics !== undefined ? ` Runaway: ${r.dynamics.setpoints.map((s) => `${s.name} peak ${s.highestPeakTrueC.toFixed(1)} °C, ${s.pass ? "pass" : "fail"}`).join("; ")}.` : "";
+    this.announce(`${final ? "Full results" : "Results updated"}: ${r.pass ? "PASS" : "FAIL"}. ${parts.join("; ")}.${dynamic}${final ? " Monte Carlo done." : " Monte Carlo running."}`);
   }
 
   // ---- exports --------------------------------------------------------------------------------------------
@@ -354,7 +374,7 @@ class Workbench {
       case "csv":
         return csvExport(c.analysis);
       default:
-        return partsListCsv(c.analysis, design);
+        return partsListCsv(c.analysis);
     }
   }
 

@@ -5,7 +5,8 @@
  * @module
  */
 import { CAUTION_TEXT } from "../design/index.js";
-import type { TripBand } from "../index.js";
+import type { TripBand, TripBuildSheet } from "../index.js";
+import type { TripReportDynamics } from "../report/index.js";
 import type { WorkbenchAnalysis } from "./analysis.js";
 
 type Cell = string | number | Node;
@@ -60,6 +61,11 @@ function methodName(method: TripBand["method"]): string {
   return method === "worst-case" ? "worst case" : method === "rss" ? "RSS" : "Monte Carlo";
 }
 
+/** A resistance in engineering notation, carrying its value in ohms. */
+function ohmsNum(value: number): HTMLElement {
+  return el("span", { class: "hj-num", "data-value": String(value) }, ohms(value));
+}
+
 function ohms(value: number): string {
   if (value >= 1e6) return `${+(value / 1e6).toPrecision(4)} MΩ`;
   if (value >= 1e3) return `${+(value / 1e3).toPrecision(4)} kΩ`;
@@ -82,7 +88,7 @@ export function cautionBlock(): HTMLElement {
 }
 
 /** What a part of the analysis shows while the worker computes it. */
-export type Pending = "comparison" | "faults";
+export type Pending = "comparison" | "faults" | "dynamics";
 
 /** Builds the result sections of an analysis. `pending` parts show a placeholder. */
 export function resultSections(a: WorkbenchAnalysis, pending: readonly Pending[] = []): HTMLElement[] {
@@ -144,45 +150,13 @@ export function resultSections(a: WorkbenchAnalysis, pending: readonly Pending[]
     out.push(section("hj-sources", "Error sources", ...sourceTables));
   }
 
-  const trip = a.trip;
-  if (trip !== undefined) {
-    const rows = trip.setpoints.map((s) => {
-      const net = trip.networks[s.networkIndex];
-      const position = net?.topology === "ladder" ? `ladder tap ${s.tapIndex + 1}` : `divider ${s.networkIndex + 1}`;
-      return [
-        s.name,
-        num(s.idealThresholdVolts, 4, "V"),
-        num(s.realizedThresholdVolts, 4, "V"),
-        `${position}: ${ohms(s.resistorsOhms[0])} above, ${ohms(s.resistorsOhms[1])} below`,
-        num(net?.currentMilliamps, 3, "mA"),
-        num(s.nominalTripC, 2),
-        num(s.nominalReleaseC, 2),
-        num(s.nominalReleaseC - s.maxNormalOperatingC, 2),
-      ] as Cell[];
-    });
-    const sheet = table(
-      "Thresholds and release per setpoint",
-      ["setpoint", "ideal threshold", "realized threshold", "resistors", "divider current", "nominal trip °C", "nominal release °C", "release − normal °C"],
-      rows,
-      "hj-build-table",
-    );
-    const networks = table(
-      "Threshold networks (from the reference to ground)",
-      ["network", "topology", "resistors", "total", "current"],
-      trip.networks.map((n, i) => [`network ${i + 1}`, n.topology, n.resistorsOhms.map((r, j) => `R${j + 1} ${ohms(r)}`).join(", "), ohms(n.totalOhms), num(n.currentMilliamps, 3, "mA")]),
-      "hj-networks-table",
-    );
-    const ref = trip.reference;
-    const element = ref.element as { seriesOhms?: number } | undefined;
-    const refLines = el("ul", { class: "hj-list" });
-    refLines.append(el("li", {}, `Reference: ${ref.name} (${ref.kind}), `, num(ref.nominalVolts, 3, "V"), ", ±", num(ref.toleranceFraction * 100, 3, "%"), " total."));
-    if (element?.seriesOhms !== undefined) refLines.append(el("li", {}, "Shunt series resistor: ", el("span", { class: "hj-num", "data-value": String(element.seriesOhms) }, ohms(element.seriesOhms)), ...(ref.seriesResistorPowerWatts !== undefined ? [", dissipating up to ", num(ref.seriesResistorPowerWatts * 1000, 1, "mW")] : [])));
-    if (ref.shuntCurrentMinMilliamps !== undefined) refLines.append(el("li", {}, "Shunt current in service: ", num(ref.shuntCurrentMinMilliamps, 3, "mA"), " to ", num(ref.shuntCurrentMaxMilliamps, 3, "mA")));
-    for (const p of ref.problems) refLines.append(el("li", { class: "hj-problem" }, `✗ Reference problem: ${p}`));
-    refLines.append(el("li", {}, "Mid-rail divider: ", num(trip.midRail.nominalVolts, 4, "V"), ", worst case ", num(trip.midRail.worstCaseLowVolts, 4, "V"), " to ", num(trip.midRail.worstCaseHighVolts, 4, "V")));
-    out.push(section("hj-build", "Build sheet", sheet, networks, refLines));
-  } else if (report !== undefined && a.kind === "adc") {
-    out.push(section("hj-build", "Build sheet", el("ul", { class: "hj-list" }, ...report.details.map((d) => el("li", {}, d)))));
+  const sheet = report?.buildSheet;
+  if (sheet !== undefined) out.push(buildSheetSection(sheet, a));
+  else if (report !== undefined) out.push(section("hj-build", "Build sheet", el("ul", { class: "hj-list" }, ...report.details.map((d) => el("li", {}, d)))));
+
+  if (report?.dynamics !== undefined) out.push(dynamicsSection(report.dynamics, a.runawaySvg));
+  else if (pending.includes("dynamics")) {
+    out.push(section("hj-dynamics", "Response time (runaway)", el("p", { class: "hj-pending" }, "Running the runaway (heater stuck on)…; the verdict above is the static band's until it is done.")));
   }
 
   if (a.comparison !== undefined) {
@@ -240,4 +214,191 @@ export function resultSections(a: WorkbenchAnalysis, pending: readonly Pending[]
     out.push(section("hj-faults", "Fault review", el("p", { class: "hj-pending" }, "Computing in the background…")));
   }
   return out;
+}
+
+/** A list of resistors by designator (`top 8.2 kΩ + ladder 1 1 kΩ`), each value carried. */
+function resistorCell(list: readonly { readonly designator: string; readonly ohms: number }[]): HTMLElement {
+  const span = el("span", { class: "hj-resistors" });
+  list.forEach((r, i) => span.append(...(i > 0 ? [" + "] : []), `${r.designator} `, ohmsNum(r.ohms)));
+  return span;
+}
+
+/** `data-sheet` names the build-sheet field a cell shows (`setpoints.0.realizedThresholdVolts`), for tests and tools. */
+function field<T extends HTMLElement>(node: T, name: string): T {
+  node.dataset["sheet"] = name;
+  return node;
+}
+
+/**
+ * The build sheet, every figure taken from the report's `buildSheet` (the same object `check` prints and writes
+ * as JSON): thresholds with their band, resistors by position, divider current, release and its band and margin;
+ * ADC codes; the shunt series resistor with its power and rating; the mid-rail divider; the parts list.
+ */
+function buildSheetSection(sheet: TripBuildSheet, a: WorkbenchAnalysis): HTMLElement {
+  const parts: HTMLElement[] = [];
+  if (sheet.setpoints.length > 0) {
+    parts.push(
+      table(
+        "Thresholds, resistors and release per setpoint",
+        ["setpoint", "ideal threshold V", "realized V", "threshold band V (worst case)", "above the tap", "below the tap", "divider mA", "nominal release °C", "release band °C (worst case)", "release margin to normal °C"],
+        sheet.setpoints.map((s, i) => {
+          const f = (name: string, node: HTMLElement): HTMLElement => field(node, `setpoints.${i}.${name}`);
+          return [
+            s.name,
+            f("idealThresholdVolts", num(s.idealThresholdVolts, 5)),
+            f("realizedThresholdVolts", num(s.realizedThresholdVolts, 5)),
+            el("span", {}, f("thresholdLowVolts", num(s.thresholdLowVolts, 4)), " to ", f("thresholdHighVolts", num(s.thresholdHighVolts, 4))),
+            resistorCell(s.resistorsAbove),
+            resistorCell(s.resistorsBelow),
+            f("dividerCurrentMilliamps", num(s.dividerCurrentMilliamps, 4)),
+            f("nominalReleaseC", num(s.nominalReleaseC, 2)),
+            el("span", {}, f("releaseLowC", num(s.releaseLowC, 2)), " to ", f("releaseHighC", num(s.releaseHighC, 2))),
+            f("releaseMarginToNormalC", num(s.releaseMarginToNormalC, 2)),
+          ] as Cell[];
+        }),
+        "hj-build-table",
+      ),
+    );
+  }
+  if (sheet.adcSetpoints.length > 0) {
+    parts.push(
+      table(
+        "Firmware codes per setpoint",
+        ["setpoint", "signal V", "nominal code", "trip at code ≥", "LSB/°C", "code band (accepted method)"],
+        sheet.adcSetpoints.map((s, i) => {
+          const f = (name: string, node: HTMLElement): HTMLElement => field(node, `adcSetpoints.${i}.${name}`);
+          return [
+            s.name,
+            f("signalVolts", num(s.signalVolts, 5)),
+            f("nominalCode", num(s.nominalCode, 2)),
+            f("thresholdCode", num(s.thresholdCode, 0)),
+            f("codesPerC", num(s.codesPerC, 3)),
+            el("span", {}, f("codeLow", num(s.codeLow, 1)), " to ", f("codeHigh", num(s.codeHigh, 1))),
+          ] as Cell[];
+        }),
+        "hj-adc-codes-table",
+      ),
+    );
+  }
+  if (sheet.networks.length > 0) {
+    parts.push(
+      table(
+        "Threshold networks (from the reference to ground)",
+        ["network", "topology", "resistors", "total", "current mA"],
+        sheet.networks.map((n, i) => [`network ${i + 1}`, n.topology, resistorCell(n.resistors), ohmsNum(n.totalOhms), field(num(n.currentMilliamps, 4), `networks.${i}.currentMilliamps`)]),
+        "hj-networks-table",
+      ),
+    );
+  }
+  const lines = el("ul", { class: "hj-list" });
+  const r = sheet.shuntSeriesResistor;
+  if (r !== undefined) {
+    lines.append(
+      el(
+        "li",
+        { id: "hj-shunt-resistor" },
+        "Shunt series resistor: ",
+        field(ohmsNum(r.ohms), "shuntSeriesResistor.ohms"),
+        ` (${r.series}, ±${+(r.toleranceFraction * 100).toPrecision(4)} %), dissipates up to `,
+        field(num(r.powerWatts * 1000, 1, "mW"), "shuntSeriesResistor.powerWatts×1000"),
+        "; choose a rating of ",
+        field(num(r.ratingWatts, 3, "W"), "shuntSeriesResistor.ratingWatts"),
+        " or more.",
+      ),
+    );
+  }
+  const m = sheet.midRail;
+  if (m !== undefined) {
+    lines.append(
+      el(
+        "li",
+        { id: "hj-mid-rail" },
+        "Mid-rail divider: top ",
+        field(ohmsNum(m.topOhms), "midRail.topOhms"),
+        ", bottom ",
+        field(ohmsNum(m.bottomOhms), "midRail.bottomOhms"),
+        ": ",
+        field(num(m.nominalVolts, 4, "V"), "midRail.nominalVolts"),
+        " (worst case ",
+        field(num(m.worstCaseLowVolts, 4), "midRail.worstCaseLowVolts"),
+        " to ",
+        field(num(m.worstCaseHighVolts, 4, "V"), "midRail.worstCaseHighVolts"),
+        ").",
+      ),
+    );
+  }
+  const ref = a.trip?.reference;
+  if (ref !== undefined) {
+    if (ref.shuntCurrentMinMilliamps !== undefined) lines.append(el("li", {}, "Shunt current in service: ", num(ref.shuntCurrentMinMilliamps, 3, "mA"), " to ", num(ref.shuntCurrentMaxMilliamps, 3, "mA")));
+    for (const p of ref.problems) lines.append(el("li", { class: "hj-problem" }, `✗ Reference problem: ${p}`));
+  }
+  if (lines.childNodes.length > 0) parts.push(lines);
+  if (sheet.parts.length > 0) {
+    parts.push(
+      table(
+        "Parts list (bill of materials)",
+        ["designators", "part", "value", "tolerance", "tempco ppm/°C", "count"],
+        sheet.parts.map((p, i) => [
+          p.designators,
+          p.part,
+          typeof p.value === "number" ? (p.unit === "Ω" ? field(ohmsNum(p.value), `parts.${i}.value`) : field(num(p.value, 4, p.unit), `parts.${i}.value`)) : p.value,
+          p.toleranceUnit === "°C" ? el("span", {}, "±", field(num(p.tolerance, 2, "°C"), `parts.${i}.tolerance`)) : el("span", {}, "±", field(num(p.tolerance * 100, 3, "%"), `parts.${i}.tolerance×100`)),
+          field(num(p.tempcoPpmPerC, 0), `parts.${i}.tempcoPpmPerC`),
+          field(num(p.count, 0), `parts.${i}.count`),
+        ]),
+        "hj-parts-table",
+      ),
+    );
+  }
+  return section("hj-build", "Build sheet", ...parts);
+}
+
+function seconds(value: number | null): HTMLElement {
+  return value === null ? el("span", { class: "hj-num" }, "never") : num(value, 1, "s");
+}
+
+/**
+ * The response time through a runaway (the `runaway` command's figures, from `report.dynamics`) and its chart,
+ * drawn by the code that writes `runaway --svg`.
+ */
+function dynamicsSection(d: TripReportDynamics, svg: string | undefined): HTMLElement {
+  const rows: Cell[][] = [];
+  d.setpoints.forEach((s, si) => {
+    s.cases.forEach((c, ci) => {
+      const peak = num(c.peakTrueC, 1);
+      peak.dataset["dyn"] = `${si}:${ci}:peakTrueC`;
+      const margin = num(c.dynamicMarginC, 1);
+      margin.dataset["dyn"] = `${si}:${ci}:dynamicMarginC`;
+      rows.push([`${s.name} — ${c.name}`, num(c.tripTemperatureC, 1), c.tripped ? seconds(c.responseTimeSeconds) : el("span", {}, "never trips"), seconds(c.heatOffSeconds), peak, num(c.overshootC, 1), margin, verdict(!c.exceedsHazard && c.tripped)]);
+    });
+  });
+  const cases = table(
+    "Runaway (heater stuck on) per setpoint and unit",
+    ["setpoint — unit", "trips at °C", "response time", "heat off at", "peak °C", "overshoot °C", "margin to hazard °C", "peak below hazard"],
+    rows,
+    "hj-dynamics-table",
+  );
+  const summary = el("ul", { class: "hj-list" });
+  d.setpoints.forEach((s) => {
+    summary.append(el("li", {}, `${s.name}: `, verdict(s.pass), ` — ${s.reason}`, ...(s.timeFromNormalToHazardSeconds !== null ? [" Uncontrolled from normal to hazard: ", seconds(s.timeFromNormalToHazardSeconds), "."] : [])));
+    if (s.noise !== null) {
+      const n = s.noise;
+      summary.append(el("li", {}, `${s.name} noise: hysteresis `, n.designHysteresisC === null ? "—" : num(n.designHysteresisC, 2, "°C"), n.hysteresisSufficient === null ? "" : n.hysteresisSufficient ? " (sufficient)" : " (✗ not sufficient)"));
+    }
+  });
+  const chart = el("figure", { class: "hj-chart" });
+  if (svg !== undefined) {
+    const holder = el("div", { class: "hj-svg", role: "img", "aria-label": "Runaway chart: true and indicated temperature against time for the case with the smallest margin to the hazard limit (the same figures as the table)" });
+    holder.innerHTML = svg;
+    chart.append(holder, el("figcaption", {}, "True and indicated temperature through the runaway with the smallest margin (the chart of runaway --svg)."));
+  }
+  return section(
+    "hj-dynamics",
+    "Response time (runaway)",
+    el("p", {}, "Dynamic verdict: ", verdict(d.pass), " — judged on the runaway peak against the hazard limit; the static band decides the side of normal operation."),
+    chart,
+    cases,
+    summary,
+    el("ul", { class: "hj-list hj-methods" }, ...d.assumptions.map((x) => el("li", {}, x))),
+  );
 }

@@ -155,7 +155,11 @@ describe.skipIf(!available)("workbench page in headless Chromium", () => {
       for (const [key, value] of Object.entries(expected)) expect(shown[key], key).toBeCloseTo(value, 9);
       expect(await page.locator("#hj-status").textContent()).toMatch(/Full results: (PASS|FAIL)/);
       expect(await page.locator("#hj-fault-counts").count()).toBe(1);
-      expect(await page.locator(".hj-svg svg").count()).toBe(1);
+      // The bands chart, and the runaway chart for a design with dynamics.
+      expect(await page.locator(".hj-svg svg").count()).toBe(design.dynamics !== undefined ? 2 : 1);
+      expect(await page.locator("#hj-dynamics").count()).toBe(design.dynamics !== undefined ? 1 : 0);
+      expect(await page.locator("#hj-parts-table").count()).toBe(1);
+      if (design.comparator === undefined) expect(await page.locator("#hj-adc-codes-table").count()).toBe(1);
       if (design.comparator !== undefined) {
         expect(await page.locator("#hj-build-table").count()).toBe(1);
         expect(await page.locator("#hj-comparison-table").count()).toBe(1);
@@ -173,7 +177,7 @@ describe.skipIf(!available)("workbench page in headless Chromium", () => {
     }
     console.log(`workbench speed (trials as in each example):\n  ${ratios.join("\n  ")}`);
     await page.close();
-  });
+  }, 600_000);
 
   it("narrows the worst-case band by the library's amount when the reference tolerance goes from 4 % to 1 %", async () => {
     const example = JSON.parse(exampleText("reflow-oven-trip")) as Record<string, unknown> & { referenceAlternatives: Record<string, unknown>[] };
@@ -316,7 +320,184 @@ describe.skipIf(!available)("workbench page in headless Chromium", () => {
       expect(text, kind).toMatch(/seed 260/);
     }
     const parts = (await page.evaluate(() => window.hotjunctionWorkbench.exportText("parts"))) ?? "";
-    expect(parts).toMatch(/shunt series resistor,\d+/);
+    // The parts list is the build sheet's (as check --parts-csv): the sized shunt's series resistor among them.
+    expect(parts).toMatch(/\nshunt series,resistor,\d+,Ω,/);
+    await page.close();
+  });
+
+  it("shows the build sheet from the report's buildSheet (every figure as check --json gives it) and exports the parts list check --parts-csv writes", async () => {
+    const page = await openPage();
+    for (const id of exampleIds) {
+      await page.evaluate((v) => window.hotjunctionWorkbench.loadChoice(v), `example:${id}`);
+      await page.evaluate(() => window.hotjunctionWorkbench.idle());
+      const dir = mkdtempSync(join(scratch, `sheet-${id}-`));
+      const checked = await run(["check", join(projectDir, "examples", `${id}.json`), "--json", "--report-only", "--parts-csv", join(dir, "parts.csv")]);
+      expect(checked.code, checked.stderr).toBe(0);
+      const sheet = (JSON.parse(checked.stdout) as { buildSheet: Record<string, unknown> }).buildSheet;
+      expect(sheet, id).toBeDefined();
+      // Every cell that names a build-sheet field shows that field's value (scaled where the name says ×1000, ×100).
+      const cells = await page.evaluate(() => [...document.querySelectorAll<HTMLElement>("#hj-build [data-sheet]")].map((c) => [c.dataset["sheet"] ?? "", Number(c.dataset["value"])] as const));
+      const fieldOf = (name: string): number => {
+        const [path, scale] = name.split("×");
+        const value = (path ?? "").split(".").reduce<unknown>((v, k) => (v as Record<string, unknown>)[k], sheet);
+        return Number(value) * Number(scale ?? 1);
+      };
+      for (const [name, value] of cells) expect(value, `${id} ${name}`).toBe(fieldOf(name));
+      const shownNames = new Set(cells.map(([n]) => n.replace(/\.\d+\./, ".#.")));
+      const s = sheet as { setpoints: unknown[]; adcSetpoints: unknown[]; shuntSeriesResistor?: unknown; midRail?: unknown; parts: unknown[] };
+      if (s.setpoints.length > 0) {
+        for (const f of ["idealThresholdVolts", "realizedThresholdVolts", "thresholdLowVolts", "thresholdHighVolts", "dividerCurrentMilliamps", "nominalReleaseC", "releaseLowC", "releaseHighC", "releaseMarginToNormalC"]) {
+          expect(shownNames.has(`setpoints.#.${f}`), `${id} ${f}`).toBe(true);
+        }
+        // Resistors by position, each with its standard value, as the build sheet names them.
+        const firstAbove = (s.setpoints[0] as { resistorsAbove: { designator: string; ohms: number }[] }).resistorsAbove[0];
+        expect(await page.locator("#hj-build-table tbody tr").first().textContent()).toContain(firstAbove?.designator);
+      }
+      if (s.adcSetpoints.length > 0) for (const f of ["signalVolts", "nominalCode", "thresholdCode", "codesPerC", "codeLow", "codeHigh"]) expect(shownNames.has(`adcSetpoints.#.${f}`), `${id} ${f}`).toBe(true);
+      if (s.shuntSeriesResistor !== undefined) for (const f of ["shuntSeriesResistor.ohms", "shuntSeriesResistor.powerWatts×1000", "shuntSeriesResistor.ratingWatts"]) expect(shownNames.has(f), `${id} ${f}`).toBe(true);
+      if (s.midRail !== undefined) expect(shownNames.has("midRail.nominalVolts"), id).toBe(true);
+      expect(await page.locator("#hj-parts-table tbody tr").count(), id).toBe(s.parts.length);
+      // The parts list export is check --parts-csv, with the methods and seed as a second comment line.
+      const parts = (await page.evaluate(() => window.hotjunctionWorkbench.exportText("parts"))) ?? "";
+      const lines = parts.split("\n");
+      expect(lines[1], id).toMatch(/^# Methods: .* seed \d+/);
+      expect([lines[0], ...lines.slice(2)].join("\n"), id).toBe(readFileSync(join(dir, "parts.csv"), "utf8"));
+    }
+    // The page's build sheet code reads the report: no page code recomputes a threshold or a resistor.
+    const source = readFileSync(join(projectDir, "src", "workbench", "results.ts"), "utf8");
+    expect(source).not.toMatch(/resistorsOhms|idealRatio|nearestStandardResistor/);
+    await page.close();
+  }, 300_000);
+
+  it("shows the runaway response and the dynamic verdict as check and runaway give them, follows an edit, and exports them", async () => {
+    const id = "ceramic-kiln-cutout";
+    const path = join(projectDir, "examples", `${id}.json`);
+    const design = JSON.parse(exampleText(id)) as { dynamics?: unknown };
+    expect(design.dynamics).toBeDefined();
+    const page = await openPage();
+    await page.evaluate((v) => window.hotjunctionWorkbench.loadChoice(v), `example:${id}`);
+    await page.evaluate(() => window.hotjunctionWorkbench.idle());
+    const dir = mkdtempSync(join(scratch, "runaway-"));
+    const runaway = await run(["runaway", path, "--json", "--report-only", "--svg", join(dir, "runaway.svg")]);
+    expect(runaway.code, runaway.stderr).toBe(0);
+    // runaway --json spreads the dynamic figures at the top level.
+    const figures = { dynamics: JSON.parse(runaway.stdout) as { pass: boolean; setpoints: { cases: { peakTrueC: number; dynamicMarginC: number }[] }[] } };
+    expect(figures.dynamics.setpoints.length).toBeGreaterThan(0);
+    // The chart is the one runaway --svg writes, byte for byte (same code, same case).
+    const svg = await page.evaluate(() => document.querySelector("#hj-dynamics .hj-svg")?.innerHTML ?? "");
+    const cliSvg = readFileSync(join(dir, "runaway.svg"), "utf8");
+    const normalise = (t: string): string => t.replace(/^<\?xml[^>]*>\s*/, "").trim();
+    expect(await page.evaluate((t) => new DOMParser().parseFromString(t, "image/svg+xml").documentElement.outerHTML, normalise(cliSvg))).toBe(
+      await page.evaluate((t) => new DOMParser().parseFromString(t, "image/svg+xml").documentElement.outerHTML, normalise(svg)),
+    );
+    const dyn = async (): Promise<Record<string, number>> =>
+      page.evaluate(() => Object.fromEntries([...document.querySelectorAll<HTMLElement>("[data-dyn]")].map((c) => [c.dataset["dyn"] ?? "", Number(c.dataset["value"])])));
+    const shown = await dyn();
+    figures.dynamics.setpoints.forEach((s, i) =>
+      s.cases.forEach((c, k) => {
+        expect(shown[`${i}:${k}:peakTrueC`]).toBe(c.peakTrueC);
+        expect(shown[`${i}:${k}:dynamicMarginC`]).toBe(c.dynamicMarginC);
+      }),
+    );
+    // The verdict is check's, with the dynamics folded in.
+    const checked = await run(["check", path, "--json", "--report-only"]);
+    const report = JSON.parse(checked.stdout) as { pass: boolean; setpoints: { pass: boolean; reason: string }[] };
+    expect(await page.locator("#hj-verdict").textContent()).toContain(report.pass ? "PASS" : "FAIL");
+    for (const s of report.setpoints) expect(await page.locator("#hj-verdict").textContent()).toContain(s.reason);
+    // The Markdown export is check --markdown (trip report with build sheet and runaway), then compare and faults.
+    const markdown = (await page.evaluate(() => window.hotjunctionWorkbench.exportText("markdown"))) ?? "";
+    const cliMarkdown = await run(["check", path, "--markdown", "--report-only"]);
+    expect(markdown.startsWith(cliMarkdown.stdout), "markdown export starts with check --markdown").toBe(true);
+    const csv = (await page.evaluate(() => window.hotjunctionWorkbench.exportText("csv"))) ?? "";
+    // The CSV export is check --csv. Cell by cell: text exactly, numbers to 1e-12 relative, since Chromium's V8 and
+    // Node's may round a Math function differently in the last bits (seen: a 1e-195 false-trip rate, 2 ulp apart).
+    const cliCsv = (await run(["check", path, "--csv", "--report-only"])).stdout;
+    const cellsOf = (t: string): string[][] => t.split("\n").map((l) => l.split(","));
+    const [pageCells, cliCells] = [cellsOf(csv), cellsOf(cliCsv)];
+    expect(pageCells.map((r) => r.length)).toEqual(cliCells.map((r) => r.length));
+    pageCells.forEach((row, i) =>
+      row.forEach((cell, j) => {
+        const other = cliCells[i]?.[j] ?? "";
+        const [x, y] = [Number(cell), Number(other)];
+        if (cell !== "" && Number.isFinite(x) && Number.isFinite(y) && cell !== other) expect(Math.abs(x - y), `${i}:${j}`).toBeLessThanOrEqual(1e-12 * Math.abs(y));
+        else expect(cell, `${i}:${j}`).toBe(other);
+      }),
+    );
+    const html = (await page.evaluate(() => window.hotjunctionWorkbench.exportText("html"))) ?? "";
+    const reportPath = join(dir, "report.html");
+    writeFileSync(reportPath, html);
+    const opened = await openReport(pathToFileURL(reportPath).href);
+    expect(opened.svgs).toBe(2);
+    expect(opened.text).toContain("Response time (runaway)");
+    expect(opened.text).toContain(CAUTION_TEXT);
+    // A slower probe: the peak follows, to the library's figure for the edited design.
+    const field = page.locator("#hj-f-dynamics_sensor_probeTimeConstantSeconds");
+    expect(await field.inputValue()).toBe("5");
+    await field.fill("40");
+    await page.evaluate(() => window.hotjunctionWorkbench.idle());
+    const edited = validateDesign(JSON.parse(await page.evaluate(() => window.hotjunctionWorkbench.designText())) as unknown);
+    const expected = analyseDesign(edited, { bandsOnly: true }).report?.dynamics;
+    const after = await dyn();
+    expect(after["0:0:peakTrueC"]).toBe(expected?.setpoints[0]?.cases[0]?.peakTrueC);
+    expect(after["0:0:peakTrueC"]).toBeGreaterThan(shown["0:0:peakTrueC"]!);
+    await page.close();
+  }, 300_000);
+
+  it("shows every validation problem at once, each beside its field, as validate lists them", async () => {
+    const page = await openPage();
+    await page.evaluate(() => window.hotjunctionWorkbench.loadChoice("example:reflow-oven-trip"));
+    await page.evaluate(() => window.hotjunctionWorkbench.idle());
+    await page.locator("#hj-f-setpoints_0__tripTemperatureC").fill("abc");
+    await page.locator("#hj-f-comparator_hysteresisMillivolts").fill("x1");
+    await page.locator("#hj-f-resistors_toleranceFraction").fill("-0.01");
+    await page.evaluate(() => window.hotjunctionWorkbench.idle());
+    const draft = await page.evaluate(() => window.hotjunctionWorkbench.designText());
+    const parsed = safeParseDesign(draft, { fileName: "design" });
+    expect(parsed.success).toBe(false);
+    if (parsed.success) return;
+    expect(parsed.error.problems.length).toBeGreaterThanOrEqual(3);
+    // validate prints the same list (path, expected, found), one line each.
+    const file = join(scratch, "three-problems.json");
+    writeFileSync(file, draft);
+    const validated = await run(["validate", file]);
+    expect(validated.code).toBe(2);
+    for (const p of parsed.error.problems) {
+      expect(validated.stderr).toContain(`at ${p.path}: ${p.problem}`);
+      const slot = page.locator(`#hj-f-${p.path.replace(/[^A-Za-z0-9_-]/g, "_")}-msg`);
+      expect(await slot.isVisible(), p.path).toBe(true);
+      expect(await slot.textContent(), p.path).toContain(p.problem);
+      expect(await page.locator(`#hj-f-${p.path.replace(/[^A-Za-z0-9_-]/g, "_")}`).getAttribute("aria-invalid"), p.path).toBe("true");
+    }
+    expect(await page.locator(".hj-form .hj-problem:visible").count()).toBe(parsed.error.problems.length);
+    expect(await page.locator("#hj-status").textContent()).toContain(`${parsed.error.problems.length} problems`);
+    await page.close();
+  });
+
+  it("is used with the keyboard alone: natural focus order, shortcuts, results announced, verdicts readable without colour", async () => {
+    const page = await openPage();
+    // No positive tabindex: the focus order is the document order.
+    expect(await page.locator("[tabindex]:not([tabindex='-1']):not([tabindex='0'])").count()).toBe(0);
+    const order: string[] = [];
+    await page.locator("body").focus();
+    for (let i = 0; i < 14; i++) {
+      await page.keyboard.press("Tab");
+      order.push(await page.evaluate(() => document.activeElement?.id || document.activeElement?.className || document.activeElement?.tagName || ""));
+    }
+    expect(order.slice(0, 3)).toEqual(["hj-skip", "hj-start", "hj-start-load"]);
+    // Undo and redo are disabled (so skipped) before the first edit; then the save and link buttons.
+    expect(order.indexOf("hj-save"), order.join(" ")).toBeGreaterThan(order.indexOf("hj-start-load"));
+    expect(order.indexOf("hj-copy-link"), order.join(" ")).toBe(order.indexOf("hj-save") + 1);
+    // After the toolbar, focus goes on into the form's fields.
+    expect(order.some((x) => x.startsWith("hj-f-"))).toBe(true);
+    // Load an example with the keyboard: choose it, press Enter on Load; the result is announced in the live region.
+    await page.locator("#hj-start").focus();
+    await page.locator("#hj-start").selectOption("example:heated-enclosure-adc");
+    await page.locator("#hj-start-load").focus();
+    await page.keyboard.press("Enter");
+    await page.evaluate(() => window.hotjunctionWorkbench.idle());
+    expect(await page.locator("#hj-status[role=status][aria-live=polite]").textContent()).toMatch(/^Full results: (PASS|FAIL)\./);
+    // Verdicts carry a mark and a word, not only a colour.
+    for (const text of await page.locator(".hj-pass, .hj-fail").allTextContents()) expect(text).toMatch(/^(✓ PASS|✗ FAIL)$/);
     await page.close();
   });
 

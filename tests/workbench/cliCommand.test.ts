@@ -36,6 +36,17 @@ describe("workbench command", () => {
     expect(page.match(/<\/script>/g)?.length).toBe(readFileSync(builtPage, "utf8").match(/<\/script>/g)?.length);
   });
 
+  it("builds a page whose script needs nothing outside it: no require, no command-line libraries", async () => {
+    // The page takes the CLI's dynamics fold-in and ADC build sheet from modules that also import commander and
+    // cli-progress for their commands; the build marks both external, so any part of them that reached the page
+    // would show up as a require() call here.
+    const page = await buildWorkbenchPage();
+    const script = /<script id="hj-script">([\s\S]*)<\/script>/.exec(page)?.[1] ?? "";
+    expect(script.length).toBeGreaterThan(100_000);
+    expect(script).not.toMatch(/\brequire\(/);
+    expect(script).not.toMatch(/cli-progress|commander/);
+  });
+
   it("refuses an invalid design, an existing file without --force, and a page without the design slot", async () => {
     const dir = tempDir();
     writeFileSync(join(dir, "bad.json"), '{ "hotjunctionDesign": 2 }');

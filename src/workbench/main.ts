@@ -242,14 +242,14 @@ class Workbench {
     // What `validate` checks beyond the format (failure-data fault ids against the catalogue), also beside the fields.
     this.form.showProblems(validationProblems(design));
     const trials = settingsOfDesign(design).trials;
-    // The full run starts first, in the worker, so it runs beside the first answer on a second core.
-    this.startWorker(id, text);
     // The first answer: every band by worst case and RSS, Monte Carlo on a few trials (it refines in the worker).
     const quick = analyseDesign(design, { trials: Math.min(quickTrials, trials), bandsOnly: true, skipDynamics: true });
     this.current = { analysis: quick, design, text };
     const hasDynamics = design.dynamics !== undefined;
     this.show(quick, ["comparison", "faults", ...(hasDynamics ? (["dynamics"] as const) : [])]);
     this.announceResult(quick, false);
+    // The full run after the first answer (started before it, the worker took the CPU the first answer needs).
+    this.startWorker(id, text);
     // The runaway next, on the page (it needs only the worst-case band and the nominal trip, final already).
     if (hasDynamics) {
       setTimeout(() => {
@@ -270,7 +270,6 @@ class Workbench {
       worker = new Worker(this.workerUrl);
     } catch (error) {
       this.announce(`Monte Carlo could not start in the background (${String(error)}); running it here.`);
-      // After the first answer is on the page (this runs before it).
       setTimeout(() => {
         const parsed = safeParseDesign(text, { fileName: "design" });
         if (parsed.success && id === this.generation) this.finish(id, analyseDesign(parsed.design));

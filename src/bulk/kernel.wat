@@ -1,0 +1,393 @@
+;; hotjunction bulk kernels: the ITS-90 reference function E(t) and the exact inverse's interpolants over arrays,
+;; two float64 lanes at a time (WebAssembly SIMD, f64x2). Hand-written; assembled by scripts/buildWasm.ts (wabt)
+;; into src/bulk/_kernelWasm.ts. WebAssembly has no fused multiply-add outside the relaxed-SIMD proposal (not
+;; used here), and every operation below is the IEEE 754 operation the JavaScript path performs, in the same order,
+;; so each result is the same float64 as the scalar JavaScript path's (tests/bulk hold it so).
+;;
+;; Memory is laid out by src/bulk/wasmKernel.ts: a forward table of sub-ranges, a chunk of elements converted in
+;; place, and the exact-inverse mirrors of the types used. Nothing here allocates.
+(module
+  (memory (export "memory") 2)
+
+  ;; Set when an element needs the JavaScript path (an exponential-term argument outside |x| < 704, where the
+  ;; exponential's scaling would need its subnormal or overflow branches).
+  (global $bail (mut i32) (i32.const 0))
+
+  ;; e^x per lane: the fdlibm algorithm (Sun Microsystems' freely distributable libm, e_exp.c) as V8 carries it
+  ;; for Math.exp, including its exp(1) = Math.E special case: argument reduction x = k*ln2 + r with ln2 split in a
+  ;; high and a low part, a degree-5 rational approximation of r, then scaling by 2^k. The branches of the scalar
+  ;; code become lane selects; for |x| < 704 they give the scalar code's result bit for bit (k = 0 and k = +-1 are
+  ;; the general formula with exact products, see DEVELOPERS.md). Lanes with |x| >= 704 set $bail.
+  (func $exp (param $x v128) (result v128)
+    (local $abs v128) (local $neg v128) (local $k v128) (local $hi v128) (local $lo v128) (local $r v128)
+    (local $t v128) (local $c v128) (local $y v128)
+    ;; For |x| (not NaN) the order of the floats is the order of their bits: each high-word test of the scalar
+    ;; code is a float comparison with the float whose high word is the bound (and low word 0).
+    (local.set $abs (f64x2.abs (local.get $x)))
+    (if (i32.eqz (i64x2.all_true (f64x2.lt (local.get $abs) (v128.const f64x2 704 704))))
+      (then (global.set $bail (i32.const 1))))
+    (local.set $neg (f64x2.lt (local.get $x) (v128.const f64x2 0 0)))
+    ;; k: 0 when |x| <= 0.5 ln2 (high word <= 0x3fd62e42, i.e. |x| < 0x3fd62e4300000000); +-1 when |x| < 1.5 ln2
+    ;; (high word < 0x3ff0a2b2); else trunc(x/ln2 +- 0.5).
+    (local.set $k
+      (v128.and
+        (f64x2.ge (local.get $abs) (v128.const i64x2 0x3fd62e4300000000 0x3fd62e4300000000))
+        (v128.bitselect
+          (v128.or (v128.and (local.get $neg) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
+            (v128.const f64x2 1 1))
+          (f64x2.trunc
+            (f64x2.add
+              (f64x2.mul (v128.const f64x2 1.44269504088896338700e+00 1.44269504088896338700e+00) (local.get $x))
+              (v128.or (v128.and (local.get $neg) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
+                (v128.const f64x2 0.5 0.5))))
+          (f64x2.lt (local.get $abs) (v128.const i64x2 0x3ff0a2b200000000 0x3ff0a2b200000000)))))
+    (local.set $hi
+      (f64x2.sub (local.get $x)
+        (f64x2.mul (local.get $k) (v128.const f64x2 6.93147180369123816490e-01 6.93147180369123816490e-01))))
+    (local.set $lo (f64x2.mul (local.get $k) (v128.const f64x2 1.90821492927058770002e-10 1.90821492927058770002e-10)))
+    (local.set $r (f64x2.sub (local.get $hi) (local.get $lo)))
+    (local.set $t (f64x2.mul (local.get $r) (local.get $r)))
+    ;; c = r - t*(P1 + t*(P2 + t*(P3 + t*(P4 + t*P5))))
+    (local.set $c
+      (f64x2.sub (local.get $r)
+        (f64x2.mul (local.get $t)
+          (f64x2.add (v128.const f64x2 1.66666666666666019037e-01 1.66666666666666019037e-01)
+            (f64x2.mul (local.get $t)
+              (f64x2.add (v128.const f64x2 -2.77777777770155933842e-03 -2.77777777770155933842e-03)
+                (f64x2.mul (local.get $t)
+                  (f64x2.add (v128.const f64x2 6.61375632143793436117e-05 6.61375632143793436117e-05)
+                    (f64x2.mul (local.get $t)
+                      (f64x2.add (v128.const f64x2 -1.65339022054652515390e-06 -1.65339022054652515390e-06)
+                        (f64x2.mul (local.get $t)
+                          (v128.const f64x2 4.13813679705723846039e-08 4.13813679705723846039e-08))))))))))))
+    ;; y = 1 - ((lo - r*c/(2 - c)) - hi); for k = 0 (hi = r, lo = 0) the same float as 1 - (r*c/(c - 2) - r).
+    (local.set $y
+      (f64x2.sub (v128.const f64x2 1 1)
+        (f64x2.sub
+          (f64x2.sub (local.get $lo)
+            (f64x2.div (f64x2.mul (local.get $r) (local.get $c))
+              (f64x2.sub (v128.const f64x2 2 2) (local.get $c))))
+          (local.get $hi))))
+    ;; times 2^k, built from its bits: k + 1.5*2^52 holds k in its low bits, so ((bits + 1023) << 52) is 2^k
+    ;; (k is within +-1016 here), the scaling V8 does.
+    (local.set $y
+      (f64x2.mul (local.get $y)
+        (i64x2.shl
+          (i64x2.add (f64x2.add (local.get $k) (v128.const f64x2 6755399441055744 6755399441055744))
+            (v128.const i64x2 1023 1023))
+          (i32.const 52))))
+    ;; |x| < 2^-28 (high word < 0x3e300000): 1 + x.
+    (local.set $y
+      (v128.bitselect (f64x2.add (v128.const f64x2 1 1) (local.get $x)) (local.get $y)
+        (f64x2.lt (local.get $abs) (v128.const i64x2 0x3e30000000000000 0x3e30000000000000))))
+    ;; exp(1) is Math.E.
+    (v128.bitselect (v128.const f64x2 2.718281828459045 2.718281828459045) (local.get $y)
+      (f64x2.eq (local.get $x) (v128.const f64x2 1 1))))
+
+    ;; $exp on two vectors at once (four lanes): the same operations, interleaved so that the two dependency chains
+  ;; overlap; used by the forward kernel's blocks of four.
+  (func $exp2 (param $x0 v128) (param $x1 v128) (result v128 v128)
+    (local $abs0 v128) (local $neg0 v128) (local $k0 v128) (local $hi0 v128) (local $lo0 v128) (local $r0 v128)
+    (local $t0 v128) (local $c0 v128) (local $y0 v128)
+    (local $abs1 v128) (local $neg1 v128) (local $k1 v128) (local $hi1 v128) (local $lo1 v128) (local $r1 v128)
+    (local $t1 v128) (local $c1 v128) (local $y1 v128)
+    (local.set $abs0 (f64x2.abs (local.get $x0)))
+    (local.set $abs1 (f64x2.abs (local.get $x1)))
+    (if (i32.eqz (i64x2.all_true (f64x2.lt (local.get $abs0) (v128.const f64x2 704 704))))
+      (then (global.set $bail (i32.const 1))))
+    (if (i32.eqz (i64x2.all_true (f64x2.lt (local.get $abs1) (v128.const f64x2 704 704))))
+      (then (global.set $bail (i32.const 1))))
+    (local.set $neg0 (f64x2.lt (local.get $x0) (v128.const f64x2 0 0)))
+    (local.set $neg1 (f64x2.lt (local.get $x1) (v128.const f64x2 0 0)))
+    ;; k: 0 when |x| <= 0.5 ln2 (high word <= 0x3fd62e42, i.e. |x| < 0x3fd62e4300000000); +-1 when |x| < 1.5 ln2
+    ;; (high word < 0x3ff0a2b2); else trunc(x/ln2 +- 0.5).
+    (local.set $k0
+      (v128.and
+        (f64x2.ge (local.get $abs0) (v128.const i64x2 0x3fd62e4300000000 0x3fd62e4300000000))
+        (v128.bitselect
+          (v128.or (v128.and (local.get $neg0) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
+            (v128.const f64x2 1 1))
+          (f64x2.trunc
+            (f64x2.add
+              (f64x2.mul (v128.const f64x2 1.44269504088896338700e+00 1.44269504088896338700e+00) (local.get $x0))
+              (v128.or (v128.and (local.get $neg0) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
+                (v128.const f64x2 0.5 0.5))))
+          (f64x2.lt (local.get $abs0) (v128.const i64x2 0x3ff0a2b200000000 0x3ff0a2b200000000)))))
+    (local.set $k1
+      (v128.and
+        (f64x2.ge (local.get $abs1) (v128.const i64x2 0x3fd62e4300000000 0x3fd62e4300000000))
+        (v128.bitselect
+          (v128.or (v128.and (local.get $neg1) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
+            (v128.const f64x2 1 1))
+          (f64x2.trunc
+            (f64x2.add
+              (f64x2.mul (v128.const f64x2 1.44269504088896338700e+00 1.44269504088896338700e+00) (local.get $x1))
+              (v128.or (v128.and (local.get $neg1) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
+                (v128.const f64x2 0.5 0.5))))
+          (f64x2.lt (local.get $abs1) (v128.const i64x2 0x3ff0a2b200000000 0x3ff0a2b200000000)))))
+    (local.set $hi0
+      (f64x2.sub (local.get $x0)
+        (f64x2.mul (local.get $k0) (v128.const f64x2 6.93147180369123816490e-01 6.93147180369123816490e-01))))
+    (local.set $hi1
+      (f64x2.sub (local.get $x1)
+        (f64x2.mul (local.get $k1) (v128.const f64x2 6.93147180369123816490e-01 6.93147180369123816490e-01))))
+    (local.set $lo0 (f64x2.mul (local.get $k0) (v128.const f64x2 1.90821492927058770002e-10 1.90821492927058770002e-10)))
+    (local.set $lo1 (f64x2.mul (local.get $k1) (v128.const f64x2 1.90821492927058770002e-10 1.90821492927058770002e-10)))
+    (local.set $r0 (f64x2.sub (local.get $hi0) (local.get $lo0)))
+    (local.set $r1 (f64x2.sub (local.get $hi1) (local.get $lo1)))
+    (local.set $t0 (f64x2.mul (local.get $r0) (local.get $r0)))
+    (local.set $t1 (f64x2.mul (local.get $r1) (local.get $r1)))
+    ;; c = r - t*(P1 + t*(P2 + t*(P3 + t*(P4 + t*P5))))
+    (local.set $c0
+      (f64x2.sub (local.get $r0)
+        (f64x2.mul (local.get $t0)
+          (f64x2.add (v128.const f64x2 1.66666666666666019037e-01 1.66666666666666019037e-01)
+            (f64x2.mul (local.get $t0)
+              (f64x2.add (v128.const f64x2 -2.77777777770155933842e-03 -2.77777777770155933842e-03)
+                (f64x2.mul (local.get $t0)
+                  (f64x2.add (v128.const f64x2 6.61375632143793436117e-05 6.61375632143793436117e-05)
+                    (f64x2.mul (local.get $t0)
+                      (f64x2.add (v128.const f64x2 -1.65339022054652515390e-06 -1.65339022054652515390e-06)
+                        (f64x2.mul (local.get $t0)
+                          (v128.const f64x2 4.13813679705723846039e-08 4.13813679705723846039e-08))))))))))))
+    (local.set $c1
+      (f64x2.sub (local.get $r1)
+        (f64x2.mul (local.get $t1)
+          (f64x2.add (v128.const f64x2 1.66666666666666019037e-01 1.66666666666666019037e-01)
+            (f64x2.mul (local.get $t1)
+              (f64x2.add (v128.const f64x2 -2.77777777770155933842e-03 -2.77777777770155933842e-03)
+                (f64x2.mul (local.get $t1)
+                  (f64x2.add (v128.const f64x2 6.61375632143793436117e-05 6.61375632143793436117e-05)
+                    (f64x2.mul (local.get $t1)
+                      (f64x2.add (v128.const f64x2 -1.65339022054652515390e-06 -1.65339022054652515390e-06)
+                        (f64x2.mul (local.get $t1)
+                          (v128.const f64x2 4.13813679705723846039e-08 4.13813679705723846039e-08))))))))))))
+    ;; y = 1 - ((lo - r*c/(2 - c)) - hi); for k = 0 (hi = r, lo = 0) the same float as 1 - (r*c/(c - 2) - r).
+    (local.set $y0
+      (f64x2.sub (v128.const f64x2 1 1)
+        (f64x2.sub
+          (f64x2.sub (local.get $lo0)
+            (f64x2.div (f64x2.mul (local.get $r0) (local.get $c0))
+              (f64x2.sub (v128.const f64x2 2 2) (local.get $c0))))
+          (local.get $hi0))))
+    (local.set $y1
+      (f64x2.sub (v128.const f64x2 1 1)
+        (f64x2.sub
+          (f64x2.sub (local.get $lo1)
+            (f64x2.div (f64x2.mul (local.get $r1) (local.get $c1))
+              (f64x2.sub (v128.const f64x2 2 2) (local.get $c1))))
+          (local.get $hi1))))
+    ;; times 2^k, built from its bits: k + 1.5*2^52 holds k in its low bits, so ((bits + 1023) << 52) is 2^k
+    ;; (k is within +-1016 here), the scaling V8 does.
+    (local.set $y0
+      (f64x2.mul (local.get $y0)
+        (i64x2.shl
+          (i64x2.add (f64x2.add (local.get $k0) (v128.const f64x2 6755399441055744 6755399441055744))
+            (v128.const i64x2 1023 1023))
+          (i32.const 52))))
+    (local.set $y1
+      (f64x2.mul (local.get $y1)
+        (i64x2.shl
+          (i64x2.add (f64x2.add (local.get $k1) (v128.const f64x2 6755399441055744 6755399441055744))
+            (v128.const i64x2 1023 1023))
+          (i32.const 52))))
+    ;; |x| < 2^-28 (high word < 0x3e300000): 1 + x.
+    (local.set $y0
+      (v128.bitselect (f64x2.add (v128.const f64x2 1 1) (local.get $x0)) (local.get $y0)
+        (f64x2.lt (local.get $abs0) (v128.const i64x2 0x3e30000000000000 0x3e30000000000000))))
+    (local.set $y1
+      (v128.bitselect (f64x2.add (v128.const f64x2 1 1) (local.get $x1)) (local.get $y1)
+        (f64x2.lt (local.get $abs1) (v128.const i64x2 0x3e30000000000000 0x3e30000000000000))))
+    ;; exp(1) is Math.E.
+    (local.set $y0 (v128.bitselect (v128.const f64x2 2.718281828459045 2.718281828459045) (local.get $y0)
+      (f64x2.eq (local.get $x0) (v128.const f64x2 1 1))))
+    (local.set $y1 (v128.bitselect (v128.const f64x2 2.718281828459045 2.718281828459045) (local.get $y1)
+      (f64x2.eq (local.get $x1) (v128.const f64x2 1 1))))
+    (local.get $y0) (local.get $y1))
+
+  ;; One lane of $exp, for the check at instantiation against the engine's Math.exp (src/bulk/wasmKernel.ts).
+  (func (export "exp") (param $x f64) (result f64)
+    (f64x2.extract_lane 0 (call $exp (f64x2.splat (local.get $x)))))
+
+  ;; sum c_i*t^i per lane by Horner from the highest coefficient: $p points to c[n-1], c[n-2], ..., c[0] (descending).
+  (func $horner (param $t v128) (param $p i32) (param $n i32) (result v128)
+    (local $acc v128)
+    (local.set $acc (v128.load64_splat (local.get $p)))
+    (block $done
+      (loop $next
+        (local.set $n (i32.sub (local.get $n) (i32.const 1)))
+        (br_if $done (i32.le_s (local.get $n) (i32.const 0)))
+        (local.set $p (i32.add (local.get $p) (i32.const 8)))
+        (local.set $acc (f64x2.add (f64x2.mul (local.get $acc) (local.get $t)) (v128.load64_splat (local.get $p))))
+        (br $next)))
+    (local.get $acc))
+
+  ;; acc + a0*exp(a1*d*d), d = t - a2 (type K's exponential term; the sum in this order, as the JavaScript path).
+  (func $withExp (param $acc v128) (param $t v128) (param $a0 v128) (param $a1 v128) (param $a2 v128) (result v128)
+    (local $d v128)
+    (local.set $d (f64x2.sub (local.get $t) (local.get $a2)))
+    (f64x2.add (local.get $acc)
+      (f64x2.mul (local.get $a0) (call $exp (f64x2.mul (f64x2.mul (local.get $a1) (local.get $d)) (local.get $d))))))
+
+  ;; $withExp on two vectors at once.
+  (func $withExp2 (param $acc0 v128) (param $acc1 v128) (param $t0 v128) (param $t1 v128) (param $a0 v128)
+      (param $a1 v128) (param $a2 v128) (result v128 v128)
+    (local $d0 v128) (local $d1 v128) (local $e0 v128) (local $e1 v128)
+    (local.set $d0 (f64x2.sub (local.get $t0) (local.get $a2)))
+    (local.set $d1 (f64x2.sub (local.get $t1) (local.get $a2)))
+    (call $exp2 (f64x2.mul (f64x2.mul (local.get $a1) (local.get $d0)) (local.get $d0))
+      (f64x2.mul (f64x2.mul (local.get $a1) (local.get $d1)) (local.get $d1)))
+    (local.set $e1)
+    (local.set $e0)
+    (f64x2.add (local.get $acc0) (f64x2.mul (local.get $a0) (local.get $e0)))
+    (f64x2.add (local.get $acc1) (f64x2.mul (local.get $a0) (local.get $e1))))
+
+  ;; Lanes of $v inside [lo, hi) and <= maxC: all true.
+  (func $inSub (param $v v128) (param $lo v128) (param $hi v128) (param $max v128) (result i32)
+    (i64x2.all_true
+      (v128.and (v128.and (f64x2.ge (local.get $v) (local.get $lo)) (f64x2.lt (local.get $v) (local.get $hi)))
+        (f64x2.le (local.get $v) (local.get $max)))))
+
+  ;; E(t) in place over n float64 at $ptr. The forward table at $tab holds $nsub sub-ranges of 160 bytes each:
+  ;; lo (f64; the type's minC for the first), hi (f64; +Infinity for the last), coefficient count (i32), exponential
+  ;; flag (i32), then the coefficients from the highest down. Returns n when every element is converted, else the
+  ;; index of the first element it left for the JavaScript path (outside [minC, maxC] or NaN, or an exponential
+  ;; argument outside its range); elements before it are converted.
+  (func (export "forward") (param $ptr i32) (param $n i32) (param $tab i32) (param $nsub i32)
+      (param $minC f64) (param $maxC f64) (param $a0s f64) (param $a1s f64) (param $a2s f64) (result i32)
+    (local $i i32) (local $s i32) (local $sp i32) (local $nc i32) (local $cp i32) (local $exp i32) (local $at i32)
+    (local $t f64) (local $lo v128) (local $hi v128) (local $max v128) (local $a0 v128) (local $a1 v128)
+    (local $a2 v128) (local $v0 v128) (local $v1 v128) (local $r0 v128) (local $r1 v128) (local $c v128) (local $k i32)
+    (local.set $max (f64x2.splat (local.get $maxC)))
+    (local.set $a0 (f64x2.splat (local.get $a0s)))
+    (local.set $a1 (f64x2.splat (local.get $a1s)))
+    (local.set $a2 (f64x2.splat (local.get $a2s)))
+    (global.set $bail (i32.const 0))
+    (block $finished
+      (loop $select
+        (br_if $finished (i32.ge_u (local.get $i) (local.get $n)))
+        (local.set $t (f64.load (i32.add (local.get $ptr) (i32.shl (local.get $i) (i32.const 3)))))
+        (if (i32.eqz (i32.and (f64.ge (local.get $t) (local.get $minC)) (f64.le (local.get $t) (local.get $maxC))))
+          (then (return (local.get $i))))
+        ;; The highest sub-range whose lower end is <= t (a shared end point belongs to the upper sub-range).
+        (local.set $s (i32.sub (local.get $nsub) (i32.const 1)))
+        (block $found
+          (loop $down
+            (br_if $found (i32.le_s (local.get $s) (i32.const 0)))
+            (br_if $found (f64.ge (local.get $t) (f64.load (i32.add (local.get $tab) (i32.mul (local.get $s) (i32.const 160))))))
+            (local.set $s (i32.sub (local.get $s) (i32.const 1)))
+            (br $down)))
+        (local.set $sp (i32.add (local.get $tab) (i32.mul (local.get $s) (i32.const 160))))
+        (local.set $lo (v128.load64_splat (local.get $sp)))
+        (local.set $hi (v128.load64_splat (i32.add (local.get $sp) (i32.const 8))))
+        (local.set $nc (i32.load (i32.add (local.get $sp) (i32.const 16))))
+        (local.set $exp (i32.load (i32.add (local.get $sp) (i32.const 20))))
+        (local.set $cp (i32.add (local.get $sp) (i32.const 24)))
+        ;; A run of elements in this sub-range: four at a time while all four belong to it, else one.
+        (loop $run
+          (local.set $at (i32.add (local.get $ptr) (i32.shl (local.get $i) (i32.const 3))))
+          (block $single
+            (br_if $single (i32.gt_u (i32.add (local.get $i) (i32.const 4)) (local.get $n)))
+            (local.set $v0 (v128.load (local.get $at)))
+            (local.set $v1 (v128.load offset=16 (local.get $at)))
+            (br_if $single (i32.eqz (i32.and
+              (call $inSub (local.get $v0) (local.get $lo) (local.get $hi) (local.get $max))
+              (call $inSub (local.get $v1) (local.get $lo) (local.get $hi) (local.get $max)))))
+            ;; Two Horner chains side by side (independent, so their latencies overlap).
+            (local.set $r0 (v128.load64_splat (local.get $cp)))
+            (local.set $r1 (local.get $r0))
+            (local.set $k (i32.const 1))
+            (block $hornerDone
+              (loop $hornerNext
+                (br_if $hornerDone (i32.ge_s (local.get $k) (local.get $nc)))
+                (local.set $c (v128.load64_splat (i32.add (local.get $cp) (i32.shl (local.get $k) (i32.const 3)))))
+                (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+                (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+                (local.set $k (i32.add (local.get $k) (i32.const 1)))
+                (br $hornerNext)))
+            (if (local.get $exp)
+              (then
+                (call $withExp2 (local.get $r0) (local.get $r1) (local.get $v0) (local.get $v1) (local.get $a0)
+                  (local.get $a1) (local.get $a2))
+                (local.set $r1)
+                (local.set $r0)
+                (if (global.get $bail) (then (global.set $bail (i32.const 0)) (br $single)))))
+            (v128.store (local.get $at) (local.get $r0))
+            (v128.store offset=16 (local.get $at) (local.get $r1))
+            (local.set $i (i32.add (local.get $i) (i32.const 4)))
+            (br $run))
+          ;; One element (a run's ragged end, or a block of four that leaves the sub-range).
+          (br_if $finished (i32.ge_u (local.get $i) (local.get $n)))
+          (local.set $v0 (v128.load64_splat (local.get $at)))
+          (br_if $select (i32.eqz (call $inSub (local.get $v0) (local.get $lo) (local.get $hi) (local.get $max))))
+          (local.set $r0 (call $horner (local.get $v0) (local.get $cp) (local.get $nc)))
+          (if (local.get $exp)
+            (then
+              (local.set $r0 (call $withExp (local.get $r0) (local.get $v0) (local.get $a0) (local.get $a1) (local.get $a2)))
+              (if (global.get $bail) (then (return (local.get $i))))))
+          (v128.store64_lane 0 (local.get $at) (local.get $r0))
+          (local.set $i (i32.add (local.get $i) (i32.const 1)))
+          (br $run))))
+    (local.get $n))
+
+  ;; The exact inverse's interpolated segments, in place over n float64 (EMFs in, temperatures out) at $ptr. The
+  ;; table at $tab holds $np pieces of 40 bytes: EMF start (f64), segments per millivolt (f64), segment count
+  ;; (f64), then the addresses (i32) of the piece's coefficients (8 per segment, c0 first), segment edges (f64, count + 1)
+  ;; and segment states (u8: 2 = interpolant mirrored here). Returns n when every element is converted, else the
+  ;; index of the first element it left for the JavaScript path (outside (lowOk, highOk], or a segment that is not
+  ;; mirrored: not built yet, or solved by Newton); elements before it are converted. Each step is the JavaScript
+  ;; exact inverse's, in its order: piece, x = (e - start)*perMillivolt, k = floor(x) clamped to the piece,
+  ;; s = 2(x - k) - 1, Horner over the 8 coefficients, clamp to the segment's edge temperatures.
+  (func (export "inverse") (param $ptr i32) (param $n i32) (param $tab i32) (param $np i32)
+      (param $lowOk f64) (param $highOk f64) (result i32)
+    (local $i i32) (local $j i32) (local $pp i32) (local $at i32) (local $ki i32) (local $cp i32) (local $ep i32)
+    (local $e f64) (local $x f64) (local $k f64) (local $count f64) (local $s f64) (local $t f64) (local $lo f64)
+    (local $hi f64)
+    (block $finished
+      (loop $element
+        (br_if $finished (i32.ge_u (local.get $i) (local.get $n)))
+        (local.set $at (i32.add (local.get $ptr) (i32.shl (local.get $i) (i32.const 3))))
+        (local.set $e (f64.load (local.get $at)))
+        (if (i32.eqz (i32.and (f64.gt (local.get $e) (local.get $lowOk)) (f64.le (local.get $e) (local.get $highOk))))
+          (then (return (local.get $i))))
+        ;; The last piece whose start is <= e, scanning up from the first.
+        (local.set $j (i32.const 1))
+        (local.set $pp (local.get $tab))
+        (block $found
+          (loop $up
+            (br_if $found (i32.ge_s (local.get $j) (local.get $np)))
+            (br_if $found (i32.eqz (f64.ge (local.get $e) (f64.load offset=40 (local.get $pp)))))
+            (local.set $pp (i32.add (local.get $pp) (i32.const 40)))
+            (local.set $j (i32.add (local.get $j) (i32.const 1)))
+            (br $up)))
+        (local.set $x (f64.mul (f64.sub (local.get $e) (f64.load (local.get $pp))) (f64.load offset=8 (local.get $pp))))
+        (local.set $k (f64.floor (local.get $x)))
+        (local.set $count (f64.load offset=16 (local.get $pp)))
+        (if (f64.ge (local.get $k) (local.get $count))
+          (then (local.set $k (f64.sub (local.get $count) (f64.const 1))))
+          (else (if (f64.lt (local.get $k) (f64.const 0)) (then (local.set $k (f64.const 0))))))
+        (local.set $ki (i32.trunc_f64_s (local.get $k)))
+        (if (i32.ne (i32.load8_u (i32.add (i32.load offset=32 (local.get $pp)) (local.get $ki))) (i32.const 2))
+          (then (return (local.get $i))))
+        (local.set $ep (i32.add (i32.load offset=28 (local.get $pp)) (i32.shl (local.get $ki) (i32.const 3))))
+        (local.set $lo (f64.load (local.get $ep)))
+        (local.set $hi (f64.load offset=8 (local.get $ep)))
+        (local.set $cp (i32.add (i32.load offset=24 (local.get $pp)) (i32.shl (local.get $ki) (i32.const 6))))
+        (local.set $s (f64.sub (f64.mul (f64.const 2) (f64.sub (local.get $x) (local.get $k))) (f64.const 1)))
+        (local.set $t (f64.load offset=56 (local.get $cp)))
+        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=48 (local.get $cp))))
+        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=40 (local.get $cp))))
+        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=32 (local.get $cp))))
+        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=24 (local.get $cp))))
+        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=16 (local.get $cp))))
+        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=8 (local.get $cp))))
+        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load (local.get $cp))))
+        ;; t < lo ? lo : t > hi ? hi : t (compares, not f64.min/max, which differ on signed zeros).
+        (if (f64.lt (local.get $t) (local.get $lo))
+          (then (local.set $t (local.get $lo)))
+          (else (if (f64.gt (local.get $t) (local.get $hi)) (then (local.set $t (local.get $hi))))))
+        (f64.store (local.get $at) (local.get $t))
+        (local.set $i (i32.add (local.get $i) (i32.const 1)))
+        (br $element)))
+    (local.get $n))
+)

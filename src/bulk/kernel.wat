@@ -13,6 +13,31 @@
   ;; exponential's scaling would need its subnormal or overflow branches).
   (global $bail (mut i32) (i32.const 0))
 
+  ;; The constants of $exp2 at 3072 (one v128 each), stored once at instantiation: a load is cheaper than
+  ;; building a constant in a register at every call.
+  (func $init
+    (v128.store offset=3072 (i32.const 0) (v128.const f64x2 704 704))
+    (v128.store offset=3088 (i32.const 0) (v128.const f64x2 0 0))
+    (v128.store offset=3104 (i32.const 0) (v128.const i64x2 0x3fd62e4300000000 0x3fd62e4300000000))
+    (v128.store offset=3120 (i32.const 0) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
+    (v128.store offset=3136 (i32.const 0) (v128.const f64x2 1 1))
+    (v128.store offset=3152 (i32.const 0) (v128.const f64x2 1.44269504088896338700e+00 1.44269504088896338700e+00))
+    (v128.store offset=3168 (i32.const 0) (v128.const f64x2 0.5 0.5))
+    (v128.store offset=3184 (i32.const 0) (v128.const i64x2 0x3ff0a2b200000000 0x3ff0a2b200000000))
+    (v128.store offset=3200 (i32.const 0) (v128.const f64x2 6.93147180369123816490e-01 6.93147180369123816490e-01))
+    (v128.store offset=3216 (i32.const 0) (v128.const f64x2 1.90821492927058770002e-10 1.90821492927058770002e-10))
+    (v128.store offset=3232 (i32.const 0) (v128.const f64x2 1.66666666666666019037e-01 1.66666666666666019037e-01))
+    (v128.store offset=3248 (i32.const 0) (v128.const f64x2 -2.77777777770155933842e-03 -2.77777777770155933842e-03))
+    (v128.store offset=3264 (i32.const 0) (v128.const f64x2 6.61375632143793436117e-05 6.61375632143793436117e-05))
+    (v128.store offset=3280 (i32.const 0) (v128.const f64x2 -1.65339022054652515390e-06 -1.65339022054652515390e-06))
+    (v128.store offset=3296 (i32.const 0) (v128.const f64x2 4.13813679705723846039e-08 4.13813679705723846039e-08))
+    (v128.store offset=3312 (i32.const 0) (v128.const f64x2 2 2))
+    (v128.store offset=3328 (i32.const 0) (v128.const f64x2 6755399441055744 6755399441055744))
+    (v128.store offset=3344 (i32.const 0) (v128.const i64x2 1023 1023))
+    (v128.store offset=3360 (i32.const 0) (v128.const i64x2 0x3e30000000000000 0x3e30000000000000))
+    (v128.store offset=3376 (i32.const 0) (v128.const f64x2 2.718281828459045 2.718281828459045)))
+  (start $init)
+
   ;; e^x per lane: the fdlibm algorithm (Sun Microsystems' freely distributable libm, e_exp.c) as V8 carries it
   ;; for Math.exp, including its exp(1) = Math.E special case: argument reduction x = k*ln2 + r with ln2 split in a
   ;; high and a low part, a degree-5 rational approximation of r, then scaling by 2^k. The branches of the scalar
@@ -93,46 +118,46 @@
     (local $t1 v128) (local $c1 v128) (local $y1 v128)
     (local.set $abs0 (f64x2.abs (local.get $x0)))
     (local.set $abs1 (f64x2.abs (local.get $x1)))
-    (if (i32.eqz (i64x2.all_true (f64x2.lt (local.get $abs0) (v128.const f64x2 704 704))))
+    (if (i32.eqz (i64x2.all_true (f64x2.lt (local.get $abs0) (v128.load offset=3072 (i32.const 0)))))
       (then (global.set $bail (i32.const 1))))
-    (if (i32.eqz (i64x2.all_true (f64x2.lt (local.get $abs1) (v128.const f64x2 704 704))))
+    (if (i32.eqz (i64x2.all_true (f64x2.lt (local.get $abs1) (v128.load offset=3072 (i32.const 0)))))
       (then (global.set $bail (i32.const 1))))
-    (local.set $neg0 (f64x2.lt (local.get $x0) (v128.const f64x2 0 0)))
-    (local.set $neg1 (f64x2.lt (local.get $x1) (v128.const f64x2 0 0)))
+    (local.set $neg0 (f64x2.lt (local.get $x0) (v128.load offset=3088 (i32.const 0))))
+    (local.set $neg1 (f64x2.lt (local.get $x1) (v128.load offset=3088 (i32.const 0))))
     ;; k: 0 when |x| <= 0.5 ln2 (high word <= 0x3fd62e42, i.e. |x| < 0x3fd62e4300000000); +-1 when |x| < 1.5 ln2
     ;; (high word < 0x3ff0a2b2); else trunc(x/ln2 +- 0.5).
     (local.set $k0
       (v128.and
-        (f64x2.ge (local.get $abs0) (v128.const i64x2 0x3fd62e4300000000 0x3fd62e4300000000))
+        (f64x2.ge (local.get $abs0) (v128.load offset=3104 (i32.const 0)))
         (v128.bitselect
-          (v128.or (v128.and (local.get $neg0) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
-            (v128.const f64x2 1 1))
+          (v128.or (v128.and (local.get $neg0) (v128.load offset=3120 (i32.const 0)))
+            (v128.load offset=3136 (i32.const 0)))
           (f64x2.trunc
             (f64x2.add
-              (f64x2.mul (v128.const f64x2 1.44269504088896338700e+00 1.44269504088896338700e+00) (local.get $x0))
-              (v128.or (v128.and (local.get $neg0) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
-                (v128.const f64x2 0.5 0.5))))
-          (f64x2.lt (local.get $abs0) (v128.const i64x2 0x3ff0a2b200000000 0x3ff0a2b200000000)))))
+              (f64x2.mul (v128.load offset=3152 (i32.const 0)) (local.get $x0))
+              (v128.or (v128.and (local.get $neg0) (v128.load offset=3120 (i32.const 0)))
+                (v128.load offset=3168 (i32.const 0)))))
+          (f64x2.lt (local.get $abs0) (v128.load offset=3184 (i32.const 0))))))
     (local.set $k1
       (v128.and
-        (f64x2.ge (local.get $abs1) (v128.const i64x2 0x3fd62e4300000000 0x3fd62e4300000000))
+        (f64x2.ge (local.get $abs1) (v128.load offset=3104 (i32.const 0)))
         (v128.bitselect
-          (v128.or (v128.and (local.get $neg1) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
-            (v128.const f64x2 1 1))
+          (v128.or (v128.and (local.get $neg1) (v128.load offset=3120 (i32.const 0)))
+            (v128.load offset=3136 (i32.const 0)))
           (f64x2.trunc
             (f64x2.add
-              (f64x2.mul (v128.const f64x2 1.44269504088896338700e+00 1.44269504088896338700e+00) (local.get $x1))
-              (v128.or (v128.and (local.get $neg1) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
-                (v128.const f64x2 0.5 0.5))))
-          (f64x2.lt (local.get $abs1) (v128.const i64x2 0x3ff0a2b200000000 0x3ff0a2b200000000)))))
+              (f64x2.mul (v128.load offset=3152 (i32.const 0)) (local.get $x1))
+              (v128.or (v128.and (local.get $neg1) (v128.load offset=3120 (i32.const 0)))
+                (v128.load offset=3168 (i32.const 0)))))
+          (f64x2.lt (local.get $abs1) (v128.load offset=3184 (i32.const 0))))))
     (local.set $hi0
       (f64x2.sub (local.get $x0)
-        (f64x2.mul (local.get $k0) (v128.const f64x2 6.93147180369123816490e-01 6.93147180369123816490e-01))))
+        (f64x2.mul (local.get $k0) (v128.load offset=3200 (i32.const 0)))))
     (local.set $hi1
       (f64x2.sub (local.get $x1)
-        (f64x2.mul (local.get $k1) (v128.const f64x2 6.93147180369123816490e-01 6.93147180369123816490e-01))))
-    (local.set $lo0 (f64x2.mul (local.get $k0) (v128.const f64x2 1.90821492927058770002e-10 1.90821492927058770002e-10)))
-    (local.set $lo1 (f64x2.mul (local.get $k1) (v128.const f64x2 1.90821492927058770002e-10 1.90821492927058770002e-10)))
+        (f64x2.mul (local.get $k1) (v128.load offset=3200 (i32.const 0)))))
+    (local.set $lo0 (f64x2.mul (local.get $k0) (v128.load offset=3216 (i32.const 0))))
+    (local.set $lo1 (f64x2.mul (local.get $k1) (v128.load offset=3216 (i32.const 0))))
     (local.set $r0 (f64x2.sub (local.get $hi0) (local.get $lo0)))
     (local.set $r1 (f64x2.sub (local.get $hi1) (local.get $lo1)))
     (local.set $t0 (f64x2.mul (local.get $r0) (local.get $r0)))
@@ -141,68 +166,68 @@
     (local.set $c0
       (f64x2.sub (local.get $r0)
         (f64x2.mul (local.get $t0)
-          (f64x2.add (v128.const f64x2 1.66666666666666019037e-01 1.66666666666666019037e-01)
+          (f64x2.add (v128.load offset=3232 (i32.const 0))
             (f64x2.mul (local.get $t0)
-              (f64x2.add (v128.const f64x2 -2.77777777770155933842e-03 -2.77777777770155933842e-03)
+              (f64x2.add (v128.load offset=3248 (i32.const 0))
                 (f64x2.mul (local.get $t0)
-                  (f64x2.add (v128.const f64x2 6.61375632143793436117e-05 6.61375632143793436117e-05)
+                  (f64x2.add (v128.load offset=3264 (i32.const 0))
                     (f64x2.mul (local.get $t0)
-                      (f64x2.add (v128.const f64x2 -1.65339022054652515390e-06 -1.65339022054652515390e-06)
+                      (f64x2.add (v128.load offset=3280 (i32.const 0))
                         (f64x2.mul (local.get $t0)
-                          (v128.const f64x2 4.13813679705723846039e-08 4.13813679705723846039e-08))))))))))))
+                          (v128.load offset=3296 (i32.const 0)))))))))))))
     (local.set $c1
       (f64x2.sub (local.get $r1)
         (f64x2.mul (local.get $t1)
-          (f64x2.add (v128.const f64x2 1.66666666666666019037e-01 1.66666666666666019037e-01)
+          (f64x2.add (v128.load offset=3232 (i32.const 0))
             (f64x2.mul (local.get $t1)
-              (f64x2.add (v128.const f64x2 -2.77777777770155933842e-03 -2.77777777770155933842e-03)
+              (f64x2.add (v128.load offset=3248 (i32.const 0))
                 (f64x2.mul (local.get $t1)
-                  (f64x2.add (v128.const f64x2 6.61375632143793436117e-05 6.61375632143793436117e-05)
+                  (f64x2.add (v128.load offset=3264 (i32.const 0))
                     (f64x2.mul (local.get $t1)
-                      (f64x2.add (v128.const f64x2 -1.65339022054652515390e-06 -1.65339022054652515390e-06)
+                      (f64x2.add (v128.load offset=3280 (i32.const 0))
                         (f64x2.mul (local.get $t1)
-                          (v128.const f64x2 4.13813679705723846039e-08 4.13813679705723846039e-08))))))))))))
+                          (v128.load offset=3296 (i32.const 0)))))))))))))
     ;; y = 1 - ((lo - r*c/(2 - c)) - hi); for k = 0 (hi = r, lo = 0) the same float as 1 - (r*c/(c - 2) - r).
     (local.set $y0
-      (f64x2.sub (v128.const f64x2 1 1)
+      (f64x2.sub (v128.load offset=3136 (i32.const 0))
         (f64x2.sub
           (f64x2.sub (local.get $lo0)
             (f64x2.div (f64x2.mul (local.get $r0) (local.get $c0))
-              (f64x2.sub (v128.const f64x2 2 2) (local.get $c0))))
+              (f64x2.sub (v128.load offset=3312 (i32.const 0)) (local.get $c0))))
           (local.get $hi0))))
     (local.set $y1
-      (f64x2.sub (v128.const f64x2 1 1)
+      (f64x2.sub (v128.load offset=3136 (i32.const 0))
         (f64x2.sub
           (f64x2.sub (local.get $lo1)
             (f64x2.div (f64x2.mul (local.get $r1) (local.get $c1))
-              (f64x2.sub (v128.const f64x2 2 2) (local.get $c1))))
+              (f64x2.sub (v128.load offset=3312 (i32.const 0)) (local.get $c1))))
           (local.get $hi1))))
     ;; times 2^k, built from its bits: k + 1.5*2^52 holds k in its low bits, so ((bits + 1023) << 52) is 2^k
     ;; (k is within +-1016 here), the scaling V8 does.
     (local.set $y0
       (f64x2.mul (local.get $y0)
         (i64x2.shl
-          (i64x2.add (f64x2.add (local.get $k0) (v128.const f64x2 6755399441055744 6755399441055744))
-            (v128.const i64x2 1023 1023))
+          (i64x2.add (f64x2.add (local.get $k0) (v128.load offset=3328 (i32.const 0)))
+            (v128.load offset=3344 (i32.const 0)))
           (i32.const 52))))
     (local.set $y1
       (f64x2.mul (local.get $y1)
         (i64x2.shl
-          (i64x2.add (f64x2.add (local.get $k1) (v128.const f64x2 6755399441055744 6755399441055744))
-            (v128.const i64x2 1023 1023))
+          (i64x2.add (f64x2.add (local.get $k1) (v128.load offset=3328 (i32.const 0)))
+            (v128.load offset=3344 (i32.const 0)))
           (i32.const 52))))
     ;; |x| < 2^-28 (high word < 0x3e300000): 1 + x.
     (local.set $y0
-      (v128.bitselect (f64x2.add (v128.const f64x2 1 1) (local.get $x0)) (local.get $y0)
-        (f64x2.lt (local.get $abs0) (v128.const i64x2 0x3e30000000000000 0x3e30000000000000))))
+      (v128.bitselect (f64x2.add (v128.load offset=3136 (i32.const 0)) (local.get $x0)) (local.get $y0)
+        (f64x2.lt (local.get $abs0) (v128.load offset=3360 (i32.const 0)))))
     (local.set $y1
-      (v128.bitselect (f64x2.add (v128.const f64x2 1 1) (local.get $x1)) (local.get $y1)
-        (f64x2.lt (local.get $abs1) (v128.const i64x2 0x3e30000000000000 0x3e30000000000000))))
+      (v128.bitselect (f64x2.add (v128.load offset=3136 (i32.const 0)) (local.get $x1)) (local.get $y1)
+        (f64x2.lt (local.get $abs1) (v128.load offset=3360 (i32.const 0)))))
     ;; exp(1) is Math.E.
-    (local.set $y0 (v128.bitselect (v128.const f64x2 2.718281828459045 2.718281828459045) (local.get $y0)
-      (f64x2.eq (local.get $x0) (v128.const f64x2 1 1))))
-    (local.set $y1 (v128.bitselect (v128.const f64x2 2.718281828459045 2.718281828459045) (local.get $y1)
-      (f64x2.eq (local.get $x1) (v128.const f64x2 1 1))))
+    (local.set $y0 (v128.bitselect (v128.load offset=3376 (i32.const 0)) (local.get $y0)
+      (f64x2.eq (local.get $x0) (v128.load offset=3136 (i32.const 0)))))
+    (local.set $y1 (v128.bitselect (v128.load offset=3376 (i32.const 0)) (local.get $y1)
+      (f64x2.eq (local.get $x1) (v128.load offset=3136 (i32.const 0)))))
     (local.get $y0) (local.get $y1))
 
   ;; One lane of $exp, for the check at instantiation against the engine's Math.exp (src/bulk/wasmKernel.ts).
@@ -330,64 +355,104 @@
           (br $run))))
     (local.get $n))
 
+  ;; Where the exact inverse takes an EMF: the address of its segment's 8 coefficients (0 when the element is left
+  ;; for the JavaScript path: outside (lowOk, highOk], or a segment not mirrored here), the local variable
+  ;; s = 2(x - k) - 1 and the address of the segment's two edge temperatures. Each step is the JavaScript exact
+  ;; inverse's, in its order: the last piece whose start is <= e, x = (e - start)*perMillivolt, k = floor(x)
+  ;; clamped to the piece's segments.
+  (func $locate (param $e f64) (param $tab i32) (param $np i32) (param $lowOk f64) (param $highOk f64)
+      (result i32 f64 i32)
+    (local $j i32) (local $pp i32) (local $ki i32) (local $x f64) (local $k f64) (local $count f64)
+    (if (i32.eqz (i32.and (f64.gt (local.get $e) (local.get $lowOk)) (f64.le (local.get $e) (local.get $highOk))))
+      (then (return (i32.const 0) (f64.const 0) (i32.const 0))))
+    (local.set $j (i32.const 1))
+    (local.set $pp (local.get $tab))
+    (block $found
+      (loop $up
+        (br_if $found (i32.ge_s (local.get $j) (local.get $np)))
+        (br_if $found (i32.eqz (f64.ge (local.get $e) (f64.load offset=40 (local.get $pp)))))
+        (local.set $pp (i32.add (local.get $pp) (i32.const 40)))
+        (local.set $j (i32.add (local.get $j) (i32.const 1)))
+        (br $up)))
+    (local.set $x (f64.mul (f64.sub (local.get $e) (f64.load (local.get $pp))) (f64.load offset=8 (local.get $pp))))
+    (local.set $k (f64.floor (local.get $x)))
+    (local.set $count (f64.load offset=16 (local.get $pp)))
+    (if (f64.ge (local.get $k) (local.get $count))
+      (then (local.set $k (f64.sub (local.get $count) (f64.const 1))))
+      (else (if (f64.lt (local.get $k) (f64.const 0)) (then (local.set $k (f64.const 0))))))
+    (local.set $ki (i32.trunc_f64_s (local.get $k)))
+    (if (i32.ne (i32.load8_u (i32.add (i32.load offset=32 (local.get $pp)) (local.get $ki))) (i32.const 2))
+      (then (return (i32.const 0) (f64.const 0) (i32.const 0))))
+    (i32.add (i32.load offset=24 (local.get $pp)) (i32.shl (local.get $ki) (i32.const 6)))
+    (f64.sub (f64.mul (f64.const 2) (f64.sub (local.get $x) (local.get $k))) (f64.const 1))
+    (i32.add (i32.load offset=28 (local.get $pp)) (i32.shl (local.get $ki) (i32.const 3))))
+
   ;; The exact inverse's interpolated segments, in place over n float64 (EMFs in, temperatures out) at $ptr. The
   ;; table at $tab holds $np pieces of 40 bytes: EMF start (f64), segments per millivolt (f64), segment count
-  ;; (f64), then the addresses (i32) of the piece's coefficients (8 per segment, c0 first), segment edges (f64, count + 1)
-  ;; and segment states (u8: 2 = interpolant mirrored here). Returns n when every element is converted, else the
-  ;; index of the first element it left for the JavaScript path (outside (lowOk, highOk], or a segment that is not
-  ;; mirrored: not built yet, or solved by Newton); elements before it are converted. Each step is the JavaScript
-  ;; exact inverse's, in its order: piece, x = (e - start)*perMillivolt, k = floor(x) clamped to the piece,
-  ;; s = 2(x - k) - 1, Horner over the 8 coefficients, clamp to the segment's edge temperatures.
+  ;; (f64), then the addresses (i32) of the piece's coefficients (8 per segment, c0 first), segment edges (f64,
+  ;; count + 1) and segment states (u8: 2 = interpolant mirrored here). Returns n when every element is converted,
+  ;; else the index of the first element it left for the JavaScript path (see $locate); elements before it are
+  ;; converted. Per element, after $locate: Horner over the segment's 8 coefficients in s, then the clamp to the
+  ;; segment's edge temperatures, t < lo ? lo : t > hi ? hi : t (compares and selects, not f64x2.min/max, which
+  ;; differ on signed zeros). Two elements per step, each lane with its own segment; a pair with an element left
+  ;; for JavaScript goes one element at a time.
   (func (export "inverse") (param $ptr i32) (param $n i32) (param $tab i32) (param $np i32)
       (param $lowOk f64) (param $highOk f64) (result i32)
-    (local $i i32) (local $j i32) (local $pp i32) (local $at i32) (local $ki i32) (local $cp i32) (local $ep i32)
-    (local $e f64) (local $x f64) (local $k f64) (local $count f64) (local $s f64) (local $t f64) (local $lo f64)
-    (local $hi f64)
+    (local $i i32) (local $at i32) (local $cp0 i32) (local $cp1 i32) (local $ep0 i32) (local $ep1 i32)
+    (local $pair i32) (local $s0 f64) (local $s1 f64) (local $s v128) (local $t v128) (local $lo v128) (local $hi v128)
     (block $finished
-      (loop $element
+      (loop $step
         (br_if $finished (i32.ge_u (local.get $i) (local.get $n)))
         (local.set $at (i32.add (local.get $ptr) (i32.shl (local.get $i) (i32.const 3))))
-        (local.set $e (f64.load (local.get $at)))
-        (if (i32.eqz (i32.and (f64.gt (local.get $e) (local.get $lowOk)) (f64.le (local.get $e) (local.get $highOk))))
-          (then (return (local.get $i))))
-        ;; The last piece whose start is <= e, scanning up from the first.
-        (local.set $j (i32.const 1))
-        (local.set $pp (local.get $tab))
-        (block $found
-          (loop $up
-            (br_if $found (i32.ge_s (local.get $j) (local.get $np)))
-            (br_if $found (i32.eqz (f64.ge (local.get $e) (f64.load offset=40 (local.get $pp)))))
-            (local.set $pp (i32.add (local.get $pp) (i32.const 40)))
-            (local.set $j (i32.add (local.get $j) (i32.const 1)))
-            (br $up)))
-        (local.set $x (f64.mul (f64.sub (local.get $e) (f64.load (local.get $pp))) (f64.load offset=8 (local.get $pp))))
-        (local.set $k (f64.floor (local.get $x)))
-        (local.set $count (f64.load offset=16 (local.get $pp)))
-        (if (f64.ge (local.get $k) (local.get $count))
-          (then (local.set $k (f64.sub (local.get $count) (f64.const 1))))
-          (else (if (f64.lt (local.get $k) (f64.const 0)) (then (local.set $k (f64.const 0))))))
-        (local.set $ki (i32.trunc_f64_s (local.get $k)))
-        (if (i32.ne (i32.load8_u (i32.add (i32.load offset=32 (local.get $pp)) (local.get $ki))) (i32.const 2))
-          (then (return (local.get $i))))
-        (local.set $ep (i32.add (i32.load offset=28 (local.get $pp)) (i32.shl (local.get $ki) (i32.const 3))))
-        (local.set $lo (f64.load (local.get $ep)))
-        (local.set $hi (f64.load offset=8 (local.get $ep)))
-        (local.set $cp (i32.add (i32.load offset=24 (local.get $pp)) (i32.shl (local.get $ki) (i32.const 6))))
-        (local.set $s (f64.sub (f64.mul (f64.const 2) (f64.sub (local.get $x) (local.get $k))) (f64.const 1)))
-        (local.set $t (f64.load offset=56 (local.get $cp)))
-        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=48 (local.get $cp))))
-        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=40 (local.get $cp))))
-        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=32 (local.get $cp))))
-        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=24 (local.get $cp))))
-        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=16 (local.get $cp))))
-        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load offset=8 (local.get $cp))))
-        (local.set $t (f64.add (f64.mul (local.get $t) (local.get $s)) (f64.load (local.get $cp))))
-        ;; t < lo ? lo : t > hi ? hi : t (compares, not f64.min/max, which differ on signed zeros).
-        (if (f64.lt (local.get $t) (local.get $lo))
-          (then (local.set $t (local.get $lo)))
-          (else (if (f64.gt (local.get $t) (local.get $hi)) (then (local.set $t (local.get $hi))))))
-        (f64.store (local.get $at) (local.get $t))
-        (local.set $i (i32.add (local.get $i) (i32.const 1)))
-        (br $element)))
+        (call $locate (f64.load (local.get $at)) (local.get $tab) (local.get $np) (local.get $lowOk) (local.get $highOk))
+        (local.set $ep0)
+        (local.set $s0)
+        (local.set $cp0)
+        (if (i32.eqz (local.get $cp0)) (then (return (local.get $i))))
+        (local.set $cp1 (i32.const 0))
+        (if (i32.lt_u (i32.add (local.get $i) (i32.const 1)) (local.get $n))
+          (then
+            (call $locate (f64.load offset=8 (local.get $at)) (local.get $tab) (local.get $np) (local.get $lowOk)
+              (local.get $highOk))
+            (local.set $ep1)
+            (local.set $s1)
+            (local.set $cp1)))
+        (local.set $pair (i32.ne (local.get $cp1) (i32.const 0)))
+        (if (i32.eqz (local.get $pair))
+          (then
+            ;; One element: lane 1 repeats lane 0.
+            (local.set $cp1 (local.get $cp0))
+            (local.set $s1 (local.get $s0))
+            (local.set $ep1 (local.get $ep0))))
+        (local.set $s (f64x2.replace_lane 1 (f64x2.splat (local.get $s0)) (local.get $s1)))
+        (local.set $t (v128.load64_lane offset=56 1 (local.get $cp1) (v128.load64_zero offset=56 (local.get $cp0))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+          (v128.load64_lane offset=48 1 (local.get $cp1) (v128.load64_zero offset=48 (local.get $cp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+          (v128.load64_lane offset=40 1 (local.get $cp1) (v128.load64_zero offset=40 (local.get $cp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+          (v128.load64_lane offset=32 1 (local.get $cp1) (v128.load64_zero offset=32 (local.get $cp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+          (v128.load64_lane offset=24 1 (local.get $cp1) (v128.load64_zero offset=24 (local.get $cp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+          (v128.load64_lane offset=16 1 (local.get $cp1) (v128.load64_zero offset=16 (local.get $cp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+          (v128.load64_lane offset=8 1 (local.get $cp1) (v128.load64_zero offset=8 (local.get $cp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+          (v128.load64_lane 1 (local.get $cp1) (v128.load64_zero (local.get $cp0)))))
+        (local.set $lo (v128.load64_lane 1 (local.get $ep1) (v128.load64_zero (local.get $ep0))))
+        (local.set $hi (v128.load64_lane offset=8 1 (local.get $ep1) (v128.load64_zero offset=8 (local.get $ep0))))
+        (local.set $t
+          (v128.bitselect (local.get $lo)
+            (v128.bitselect (local.get $hi) (local.get $t) (f64x2.gt (local.get $t) (local.get $hi)))
+            (f64x2.lt (local.get $t) (local.get $lo))))
+        (if (i32.eqz (local.get $pair))
+          (then
+            (v128.store64_lane 0 (local.get $at) (local.get $t))
+            (local.set $i (i32.add (local.get $i) (i32.const 1)))
+            (br $step)))
+        (v128.store (local.get $at) (local.get $t))
+        (local.set $i (i32.add (local.get $i) (i32.const 2)))
+        (br $step)))
     (local.get $n))
 )

@@ -49,7 +49,7 @@ export interface BulkKernel {
 /** Elements per kernel call (32 KiB of float64, converted in place). @internal */
 export const _CHUNK_ELEMENTS = 4096;
 /** Sub-ranges the forward table holds (a data object with more uses the JavaScript path). @internal */
-export const _FORWARD_MAX_SUBRANGES = 24;
+export const _FORWARD_MAX_SUBRANGES = 16;
 /** Coefficients per sub-range the forward table holds (the data check allows 1 to 16). @internal */
 export const _FORWARD_MAX_COEFFICIENTS = 16;
 

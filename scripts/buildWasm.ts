@@ -13,7 +13,7 @@ const watPath = fileURLToPath(new URL("../src/bulk/kernel.wat", import.meta.url)
 const outPath = fileURLToPath(new URL("../src/bulk/_kernelWasm.ts", import.meta.url));
 
 /** Assembles the kernel source into wasm bytes (SIMD enabled; no other proposal). */
-export async function assembleKernel(source = readFileSync(watPath, "utf8")): Promise<Uint8Array> {
+export async function assembleKernel(source = readFileSync(watPath, "utf8")): Promise<Uint8Array<ArrayBuffer>> {
   const wabt = await wabtModule();
   const parsed = wabt.parseWat("kernel.wat", source, { simd: true });
   try {

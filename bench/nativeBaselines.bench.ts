@@ -6,7 +6,7 @@
  * harness `bench/c/harness.c`. Skipped with a note when gcc is missing. Rounds interleave JavaScript and C (C runs as a child process between the JavaScript rounds);
  * each side keeps its best round. Targets (issue 16): bulk forward ≤ 1.5× the C forward loop, bulk exact
  * inverse ≤ 3× the C loop of the published approximate inverse. Not a test: nothing passes or fails on a timing.
- * Run: `npx tsx bench/nativeBaselines.bench.ts`.
+ * Run: `npx tsx bench/nativeBaselines.bench.ts [rounds]` (default 9; part of `npm run bench`).
  * @module
  */
 import { execFileSync, spawnSync } from "node:child_process";
@@ -42,7 +42,7 @@ function bareForward(t: Float64Array, e: Float64Array): void {
 }
 
 /** Runs the comparison; returns the report lines. */
-export function runNativeBaselinesBench(n = 1_000_000, rounds = 5): string[] {
+export function runNativeBaselinesBench(n = 1_000_000, rounds = 9): string[] {
   const gcc = spawnSync("gcc", ["--version"], { encoding: "utf8" });
   if (gcc.status !== 0) return ["native baselines: skipped (gcc not found; install gcc to compare with compiled C)"];
   const dir = mkdtempSync(join(tmpdir(), "hotjunction-native-"));
@@ -90,5 +90,6 @@ export function runNativeBaselinesBench(n = 1_000_000, rounds = 5): string[] {
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? "").href) {
-  for (const line of runNativeBaselinesBench()) console.log(line);
+  const rounds = Number(process.argv[2] ?? 9);
+  for (const line of runNativeBaselinesBench(1_000_000, rounds)) console.log(line);
 }

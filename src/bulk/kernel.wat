@@ -355,93 +355,97 @@
           (br $run))))
     (local.get $n))
 
-  ;; Where the exact inverse takes an EMF: the address of its segment's 8 coefficients (0 when the element is left
-  ;; for the JavaScript path: outside (lowOk, highOk], or a segment not mirrored here), the local variable
-  ;; s = 2(x - k) - 1 and the address of the segment's two edge temperatures. Each step is the JavaScript exact
-  ;; inverse's, in its order: the last piece whose start is <= e, x = (e - start)*perMillivolt, k = floor(x)
-  ;; clamped to the piece's segments.
-  (func $locate (param $e f64) (param $tab i32) (param $np i32) (param $lowOk f64) (param $highOk f64)
-      (result i32 f64 i32)
-    (local $j i32) (local $pp i32) (local $ki i32) (local $x f64) (local $k f64) (local $count f64)
-    (if (i32.eqz (i32.and (f64.gt (local.get $e) (local.get $lowOk)) (f64.le (local.get $e) (local.get $highOk))))
-      (then (return (i32.const 0) (f64.const 0) (i32.const 0))))
-    (local.set $j (i32.const 1))
-    (local.set $pp (local.get $tab))
-    (block $found
-      (loop $up
-        (br_if $found (i32.ge_s (local.get $j) (local.get $np)))
-        (br_if $found (i32.eqz (f64.ge (local.get $e) (f64.load offset=40 (local.get $pp)))))
-        (local.set $pp (i32.add (local.get $pp) (i32.const 40)))
-        (local.set $j (i32.add (local.get $j) (i32.const 1)))
-        (br $up)))
-    (local.set $x (f64.mul (f64.sub (local.get $e) (f64.load (local.get $pp))) (f64.load offset=8 (local.get $pp))))
-    (local.set $k (f64.floor (local.get $x)))
-    (local.set $count (f64.load offset=16 (local.get $pp)))
-    (if (f64.ge (local.get $k) (local.get $count))
-      (then (local.set $k (f64.sub (local.get $count) (f64.const 1))))
-      (else (if (f64.lt (local.get $k) (f64.const 0)) (then (local.set $k (f64.const 0))))))
-    (local.set $ki (i32.trunc_f64_s (local.get $k)))
-    (if (i32.ne (i32.load8_u (i32.add (i32.load offset=32 (local.get $pp)) (local.get $ki))) (i32.const 2))
-      (then (return (i32.const 0) (f64.const 0) (i32.const 0))))
-    (i32.add (i32.load offset=24 (local.get $pp)) (i32.shl (local.get $ki) (i32.const 6)))
-    (f64.sub (f64.mul (f64.const 2) (f64.sub (local.get $x) (local.get $k))) (f64.const 1))
-    (i32.add (i32.load offset=28 (local.get $pp)) (i32.shl (local.get $ki) (i32.const 3))))
-
   ;; The exact inverse's interpolated segments, in place over n float64 (EMFs in, temperatures out) at $ptr. The
-  ;; table at $tab holds $np pieces of 40 bytes: EMF start (f64), segments per millivolt (f64), segment count
-  ;; (f64), then the addresses (i32) of the piece's coefficients (8 per segment, c0 first), segment edges (f64,
-  ;; count + 1) and segment states (u8: 2 = interpolant mirrored here). Returns n when every element is converted,
-  ;; else the index of the first element it left for the JavaScript path (see $locate); elements before it are
-  ;; converted. Per element, after $locate: Horner over the segment's 8 coefficients in s, then the clamp to the
-  ;; segment's edge temperatures, t < lo ? lo : t > hi ? hi : t (compares and selects, not f64x2.min/max, which
-  ;; differ on signed zeros). Two elements per step, each lane with its own segment; a pair with an element left
-  ;; for JavaScript goes one element at a time.
+  ;; table at $tab holds $np pieces of 32 bytes: EMF start (f64), segments per millivolt (f64), segment count
+  ;; (f64), the address (i32) of the piece's segment records (80 bytes each: the 8 coefficients, c0 first, then
+  ;; the segment's two edge temperatures; a lower edge NaN marks a segment not mirrored here). Returns n when
+  ;; every element is converted, else the index of the first element it left for the JavaScript path: outside
+  ;; (lowOk, highOk], or a segment not mirrored (not built yet, or solved by Newton); elements before it are
+  ;; converted. Each step is the JavaScript exact inverse's, in its order. Per lane ("locate", written out for
+  ;; each lane): the last piece whose start is <= e, x = (e - start)*perMillivolt, k = floor(x) clamped to the
+  ;; piece's segments, s = 2(x - k) - 1; then for both lanes at once Horner over the segment's 8 coefficients in
+  ;; s and the clamp to the segment's edge temperatures, t < lo ? lo : t > hi ? hi : t (compares and selects,
+  ;; not f64x2.min/max, which differ on signed zeros). A pair whose second element is left for JavaScript goes
+  ;; one element at a time.
   (func (export "inverse") (param $ptr i32) (param $n i32) (param $tab i32) (param $np i32)
       (param $lowOk f64) (param $highOk f64) (result i32)
-    (local $i i32) (local $at i32) (local $cp0 i32) (local $cp1 i32) (local $ep0 i32) (local $ep1 i32)
-    (local $pair i32) (local $s0 f64) (local $s1 f64) (local $s v128) (local $t v128) (local $lo v128) (local $hi v128)
+    (local $i i32) (local $at i32) (local $rp0 i32) (local $rp1 i32) (local $pair i32) (local $j i32) (local $pp i32)
+    (local $e f64) (local $x f64) (local $k f64) (local $s0 f64) (local $s1 f64) (local $s v128) (local $t v128)
+    (local $lo v128) (local $hi v128)
     (block $finished
       (loop $step
         (br_if $finished (i32.ge_u (local.get $i) (local.get $n)))
         (local.set $at (i32.add (local.get $ptr) (i32.shl (local.get $i) (i32.const 3))))
-        (call $locate (f64.load (local.get $at)) (local.get $tab) (local.get $np) (local.get $lowOk) (local.get $highOk))
-        (local.set $ep0)
-        (local.set $s0)
-        (local.set $cp0)
-        (if (i32.eqz (local.get $cp0)) (then (return (local.get $i))))
-        (local.set $cp1 (i32.const 0))
+        ;; Lane 0: locate.
+        (block $lane0
+          (local.set $rp0 (i32.const 0))
+          (local.set $e (f64.load (local.get $at)))
+          (br_if $lane0 (i32.eqz (i32.and (f64.gt (local.get $e) (local.get $lowOk)) (f64.le (local.get $e) (local.get $highOk)))))
+          (local.set $j (i32.const 1))
+          (local.set $pp (local.get $tab))
+          (block $found0
+            (loop $up0
+              (br_if $found0 (i32.ge_s (local.get $j) (local.get $np)))
+              (br_if $found0 (i32.eqz (f64.ge (local.get $e) (f64.load offset=32 (local.get $pp)))))
+              (local.set $pp (i32.add (local.get $pp) (i32.const 32)))
+              (local.set $j (i32.add (local.get $j) (i32.const 1)))
+              (br $up0)))
+          (local.set $x (f64.mul (f64.sub (local.get $e) (f64.load (local.get $pp))) (f64.load offset=8 (local.get $pp))))
+          ;; k >= count ? count - 1 : k < 0 ? 0 : k, for the integer k = floor(x) (the same float, -0 included:
+          ;; f64.max(-0, 0) is +0, and x - (+0) and x - (-0) give the same s).
+          (local.set $k (f64.max (f64.min (f64.floor (local.get $x)) (f64.sub (f64.load offset=16 (local.get $pp)) (f64.const 1)))
+            (f64.const 0)))
+          (local.set $rp0 (i32.add (i32.load offset=24 (local.get $pp)) (i32.mul (i32.trunc_sat_f64_s (local.get $k)) (i32.const 80))))
+          ;; A segment not mirrored has NaN for its lower edge.
+          (if (f64.ne (f64.load offset=64 (local.get $rp0)) (f64.load offset=64 (local.get $rp0)))
+            (then (local.set $rp0 (i32.const 0)) (br $lane0)))
+          (local.set $s0 (f64.sub (f64.mul (f64.const 2) (f64.sub (local.get $x) (local.get $k))) (f64.const 1))))
+        (if (i32.eqz (local.get $rp0)) (then (return (local.get $i))))
+        (local.set $rp1 (i32.const 0))
         (if (i32.lt_u (i32.add (local.get $i) (i32.const 1)) (local.get $n))
           (then
-            (call $locate (f64.load offset=8 (local.get $at)) (local.get $tab) (local.get $np) (local.get $lowOk)
-              (local.get $highOk))
-            (local.set $ep1)
-            (local.set $s1)
-            (local.set $cp1)))
-        (local.set $pair (i32.ne (local.get $cp1) (i32.const 0)))
+        ;; Lane 1: locate.
+        (block $lane1
+          (local.set $rp1 (i32.const 0))
+          (local.set $e (f64.load offset=8 (local.get $at)))
+          (br_if $lane1 (i32.eqz (i32.and (f64.gt (local.get $e) (local.get $lowOk)) (f64.le (local.get $e) (local.get $highOk)))))
+          (local.set $j (i32.const 1))
+          (local.set $pp (local.get $tab))
+          (block $found1
+            (loop $up1
+              (br_if $found1 (i32.ge_s (local.get $j) (local.get $np)))
+              (br_if $found1 (i32.eqz (f64.ge (local.get $e) (f64.load offset=32 (local.get $pp)))))
+              (local.set $pp (i32.add (local.get $pp) (i32.const 32)))
+              (local.set $j (i32.add (local.get $j) (i32.const 1)))
+              (br $up1)))
+          (local.set $x (f64.mul (f64.sub (local.get $e) (f64.load (local.get $pp))) (f64.load offset=8 (local.get $pp))))
+          ;; k >= count ? count - 1 : k < 0 ? 0 : k, for the integer k = floor(x) (the same float, -0 included:
+          ;; f64.max(-0, 0) is +0, and x - (+0) and x - (-0) give the same s).
+          (local.set $k (f64.max (f64.min (f64.floor (local.get $x)) (f64.sub (f64.load offset=16 (local.get $pp)) (f64.const 1)))
+            (f64.const 0)))
+          (local.set $rp1 (i32.add (i32.load offset=24 (local.get $pp)) (i32.mul (i32.trunc_sat_f64_s (local.get $k)) (i32.const 80))))
+          ;; A segment not mirrored has NaN for its lower edge.
+          (if (f64.ne (f64.load offset=64 (local.get $rp1)) (f64.load offset=64 (local.get $rp1)))
+            (then (local.set $rp1 (i32.const 0)) (br $lane1)))
+          (local.set $s1 (f64.sub (f64.mul (f64.const 2) (f64.sub (local.get $x) (local.get $k))) (f64.const 1))))
+          ))
+        (local.set $pair (i32.ne (local.get $rp1) (i32.const 0)))
         (if (i32.eqz (local.get $pair))
           (then
             ;; One element: lane 1 repeats lane 0.
-            (local.set $cp1 (local.get $cp0))
-            (local.set $s1 (local.get $s0))
-            (local.set $ep1 (local.get $ep0))))
+            (local.set $rp1 (local.get $rp0))
+            (local.set $s1 (local.get $s0))))
         (local.set $s (f64x2.replace_lane 1 (f64x2.splat (local.get $s0)) (local.get $s1)))
-        (local.set $t (v128.load64_lane offset=56 1 (local.get $cp1) (v128.load64_zero offset=56 (local.get $cp0))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
-          (v128.load64_lane offset=48 1 (local.get $cp1) (v128.load64_zero offset=48 (local.get $cp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
-          (v128.load64_lane offset=40 1 (local.get $cp1) (v128.load64_zero offset=40 (local.get $cp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
-          (v128.load64_lane offset=32 1 (local.get $cp1) (v128.load64_zero offset=32 (local.get $cp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
-          (v128.load64_lane offset=24 1 (local.get $cp1) (v128.load64_zero offset=24 (local.get $cp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
-          (v128.load64_lane offset=16 1 (local.get $cp1) (v128.load64_zero offset=16 (local.get $cp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
-          (v128.load64_lane offset=8 1 (local.get $cp1) (v128.load64_zero offset=8 (local.get $cp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
-          (v128.load64_lane 1 (local.get $cp1) (v128.load64_zero (local.get $cp0)))))
-        (local.set $lo (v128.load64_lane 1 (local.get $ep1) (v128.load64_zero (local.get $ep0))))
-        (local.set $hi (v128.load64_lane offset=8 1 (local.get $ep1) (v128.load64_zero offset=8 (local.get $ep0))))
+        (local.set $t (v128.load64_lane offset=56 1 (local.get $rp1) (v128.load64_zero offset=56 (local.get $rp0))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=48 1 (local.get $rp1) (v128.load64_zero offset=48 (local.get $rp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=40 1 (local.get $rp1) (v128.load64_zero offset=40 (local.get $rp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=32 1 (local.get $rp1) (v128.load64_zero offset=32 (local.get $rp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=24 1 (local.get $rp1) (v128.load64_zero offset=24 (local.get $rp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=16 1 (local.get $rp1) (v128.load64_zero offset=16 (local.get $rp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=8 1 (local.get $rp1) (v128.load64_zero offset=8 (local.get $rp0)))))
+        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane 1 (local.get $rp1) (v128.load64_zero (local.get $rp0)))))
+        (local.set $lo (v128.load64_lane offset=64 1 (local.get $rp1) (v128.load64_zero offset=64 (local.get $rp0))))
+        (local.set $hi (v128.load64_lane offset=72 1 (local.get $rp1) (v128.load64_zero offset=72 (local.get $rp0))))
         (local.set $t
           (v128.bitselect (local.get $lo)
             (v128.bitselect (local.get $hi) (local.get $t) (f64x2.gt (local.get $t) (local.get $hi)))

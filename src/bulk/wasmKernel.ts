@@ -20,11 +20,10 @@ interface KernelExports {
 /** Where the exact-inverse mirror of one type lives in the kernel's memory. @internal */
 export interface InverseMirror {
   readonly inv: ExactInverse;
-  /** Address of the piece table (40 bytes per piece). */
+  /** Address of the piece table (32 bytes per piece). */
   readonly table: number;
-  readonly coefficientsAt: readonly number[];
-  readonly edgesAt: readonly number[];
-  readonly statesAt: readonly number[];
+  /** Per piece, the address of its segment records (80 bytes each: 8 coefficients, lower and upper edge). */
+  readonly recordsAt: readonly number[];
 }
 
 /** The instantiated kernel and its memory plan. @internal */
@@ -159,40 +158,35 @@ export function _loadForwardType(k: BulkKernel, ct: CompiledType): boolean {
 
 type CompiledSubrange = CompiledType["subranges"][number];
 
-/** The mirror of a type's exact-inverse tables, allocated (empty: no segment yet) on first use. @internal */
+/**
+ * The mirror of a type's exact-inverse tables, allocated on first use with no segment in it (every record's lower
+ * edge NaN). @internal
+ */
 export function _inverseMirror(k: BulkKernel, ct: CompiledType, inv: ExactInverse): InverseMirror {
   let mirror = k.mirrors.get(ct);
   if (mirror !== undefined && mirror.inv === inv) return mirror;
   const pieces = inv.pieces;
   let top = k.top;
   const table = top;
-  top += pieces.length * 40;
-  const coefficientsAt: number[] = [];
-  const edgesAt: number[] = [];
-  const statesAt: number[] = [];
+  top += pieces.length * 32;
+  const recordsAt: number[] = [];
   for (const p of pieces) {
-    coefficientsAt.push(top);
-    top += p.count * 64;
-    edgesAt.push(top);
-    top += (p.count + 1) * 8;
-    statesAt.push(top);
-    top += (p.count + 7) & ~7;
+    recordsAt.push(top);
+    top += p.count * 80;
   }
   const memory = k.exports.memory;
   if (top > memory.buffer.byteLength) memory.grow(Math.ceil((top - memory.buffer.byteLength) / 65536));
   _views(k);
   pieces.forEach((p, j) => {
-    const at = (table + j * 40) / 8;
+    const at = (table + j * 32) / 8;
     k.f64[at] = p.emfStart;
     k.f64[at + 1] = p.perMillivolt;
     k.f64[at + 2] = p.count;
-    k.i32[(at + 3) * 2] = coefficientsAt[j] as number;
-    k.i32[(at + 3) * 2 + 1] = edgesAt[j] as number;
-    k.i32[(at + 4) * 2] = statesAt[j] as number;
-    k.u8.fill(0, statesAt[j] as number, (statesAt[j] as number) + p.count);
+    k.i32[(at + 3) * 2] = recordsAt[j] as number;
+    for (let s = 0; s < p.count; s++) k.f64[(recordsAt[j] as number) / 8 + s * 10 + 8] = NaN;
   });
   k.top = top;
-  mirror = { inv, table, coefficientsAt, edgesAt, statesAt };
+  mirror = { inv, table, recordsAt };
   k.mirrors.set(ct, mirror);
   return mirror;
 }
@@ -211,7 +205,9 @@ export function _mirrorSegmentOf(k: BulkKernel, mirror: InverseMirror, emfMilliv
   else if (s < 0) s = 0;
   if (p.state[s] !== 2) return;
   _views(k);
-  k.f64.set(p.coefficients.subarray(s * 8, s * 8 + 8), (mirror.coefficientsAt[j] as number) / 8 + s * 8);
-  k.f64.set(p.edgesC.subarray(s, s + 2), (mirror.edgesAt[j] as number) / 8 + s);
-  k.u8[(mirror.statesAt[j] as number) + s] = 2;
+  const at = (mirror.recordsAt[j] as number) / 8 + s * 10;
+  k.f64.set(p.coefficients.subarray(s * 8, s * 8 + 8), at);
+  k.f64[at + 9] = p.edgesC[s + 1] as number;
+  // The lower edge last: it marks the record as complete.
+  k.f64[at + 8] = p.edgesC[s] as number;
 }

@@ -275,7 +275,8 @@
 
   ;; E(t) in place over n float64 at $ptr. The forward table at $tab holds $nsub sub-ranges of 160 bytes each:
   ;; lo (f64; the type's minC for the first), hi (f64; +Infinity for the last), coefficient count (i32), exponential
-  ;; flag (i32), then the coefficients from the highest down. Returns n when every element is converted, else the
+  ;; flag (i32), then 16 coefficient slots holding the coefficients from the highest down, right-aligned (the last
+  ;; slot is c0). Returns n when every element is converted, else the
   ;; index of the first element it left for the JavaScript path (outside [minC, maxC] or NaN, or an exponential
   ;; argument outside its range); elements before it are converted.
   (func (export "forward") (param $ptr i32) (param $n i32) (param $tab i32) (param $nsub i32)
@@ -315,21 +316,81 @@
             (br_if $single (i32.gt_u (i32.add (local.get $i) (i32.const 4)) (local.get $n)))
             (local.set $v0 (v128.load (local.get $at)))
             (local.set $v1 (v128.load offset=16 (local.get $at)))
-            (br_if $single (i32.eqz (i32.and
-              (call $inSub (local.get $v0) (local.get $lo) (local.get $hi) (local.get $max))
-              (call $inSub (local.get $v1) (local.get $lo) (local.get $hi) (local.get $max)))))
+            ;; All four in [lo, hi) and <= maxC.
+            (br_if $single (i32.eqz (i64x2.all_true
+              (v128.and
+                (v128.and
+                  (v128.and (f64x2.ge (local.get $v0) (local.get $lo)) (f64x2.lt (local.get $v0) (local.get $hi)))
+                  (v128.and (f64x2.ge (local.get $v1) (local.get $lo)) (f64x2.lt (local.get $v1) (local.get $hi))))
+                (v128.and (f64x2.le (local.get $v0) (local.get $max)) (f64x2.le (local.get $v1) (local.get $max)))))))
             ;; Two Horner chains side by side (independent, so their latencies overlap).
-            (local.set $r0 (v128.load64_splat (local.get $cp)))
+            ;; Two Horner chains side by side (independent, so their latencies overlap), unrolled: the coefficients
+            ;; sit right-aligned in 16 slots (c[n-1] in slot 16 - n), and the jump enters the run of steps at the
+            ;; first one that has a coefficient.
+            (local.set $r0 (v128.load64_splat (i32.add (local.get $cp) (i32.shl (i32.sub (i32.const 16) (local.get $nc)) (i32.const 3)))))
             (local.set $r1 (local.get $r0))
-            (local.set $k (i32.const 1))
-            (block $hornerDone
-              (loop $hornerNext
-                (br_if $hornerDone (i32.ge_s (local.get $k) (local.get $nc)))
-                (local.set $c (v128.load64_splat (i32.add (local.get $cp) (i32.shl (local.get $k) (i32.const 3)))))
-                (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
-                (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
-                (local.set $k (i32.add (local.get $k) (i32.const 1)))
-                (br $hornerNext)))
+            (block $h15 (block $h14 (block $h13 (block $h12 (block $h11 (block $h10 (block $h9 (block $h8 (block $h7 (block $h6 (block $h5 (block $h4 (block $h3 (block $h2 (block $h1 (block $h0 
+              (br_table $h0 $h1 $h2 $h3 $h4 $h5 $h6 $h7 $h8 $h9 $h10 $h11 $h12 $h13 $h14 $h15 (i32.sub (i32.const 16) (local.get $nc))))
+            (local.set $c (v128.load64_splat offset=8 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=16 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=24 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=32 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=40 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=48 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=56 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=64 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=72 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=80 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=88 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=96 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=104 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=112 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
+            (local.set $c (v128.load64_splat offset=120 (local.get $cp)))
+            (local.set $r0 (f64x2.add (f64x2.mul (local.get $r0) (local.get $v0)) (local.get $c)))
+            (local.set $r1 (f64x2.add (f64x2.mul (local.get $r1) (local.get $v1)) (local.get $c)))
+            )
             (if (local.get $exp)
               (then
                 (call $withExp2 (local.get $r0) (local.get $r1) (local.get $v0) (local.get $v1) (local.get $a0)
@@ -345,7 +406,8 @@
           (br_if $finished (i32.ge_u (local.get $i) (local.get $n)))
           (local.set $v0 (v128.load64_splat (local.get $at)))
           (br_if $select (i32.eqz (call $inSub (local.get $v0) (local.get $lo) (local.get $hi) (local.get $max))))
-          (local.set $r0 (call $horner (local.get $v0) (local.get $cp) (local.get $nc)))
+          (local.set $r0 (call $horner (local.get $v0)
+            (i32.add (local.get $cp) (i32.shl (i32.sub (i32.const 16) (local.get $nc)) (i32.const 3))) (local.get $nc)))
           (if (local.get $exp)
             (then
               (local.set $r0 (call $withExp (local.get $r0) (local.get $v0) (local.get $a0) (local.get $a1) (local.get $a2)))

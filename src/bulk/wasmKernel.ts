@@ -132,8 +132,8 @@ export function _bulkKernel(): BulkKernel | null {
 }
 
 /**
- * Writes a type's sub-ranges into the forward table (lo, hi, coefficient count, exponential flag, coefficients
- * from the highest down); false when the type does not fit (then the JavaScript path runs). @internal
+ * Writes a type's sub-ranges into the forward table (lo, hi, coefficient count, exponential flag, 16 slots with
+ * the coefficients from the highest down, right-aligned); false when the type does not fit (then the JavaScript path runs). @internal
  */
 export function _loadForwardType(k: BulkKernel, ct: CompiledType): boolean {
   if (k.forwardType === ct) return true;
@@ -150,7 +150,8 @@ export function _loadForwardType(k: BulkKernel, ct: CompiledType): boolean {
     k.f64[at + 1] = s === subs.length - 1 ? Infinity : (subs[s + 1] as CompiledSubrange).minC;
     k.i32[(at + 2) * 2] = c.length;
     k.i32[(at + 2) * 2 + 1] = sub.hasExp ? 1 : 0;
-    for (let i = 0; i < c.length; i++) k.f64[at + 3 + i] = c[c.length - 1 - i] as number;
+    // Right-aligned in 16 slots: c[n − 1] in slot 16 − n, c₀ in the last.
+    for (let i = 0; i < c.length; i++) k.f64[at + 3 + _FORWARD_MAX_COEFFICIENTS - c.length + i] = c[c.length - 1 - i] as number;
   }
   k.forwardType = ct;
   return true;

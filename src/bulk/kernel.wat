@@ -419,20 +419,20 @@
 
   ;; The exact inverse's interpolated segments, in place over n float64 (EMFs in, temperatures out) at $ptr. The
   ;; table at $tab holds $np pieces of 32 bytes: EMF start (f64), segments per millivolt (f64), segment count
-  ;; (f64), the address (i32) of the piece's segment records (80 bytes each: the 8 coefficients, c0 first, then
-  ;; the segment's two edge temperatures; a lower edge NaN marks a segment not mirrored here). Returns n when
-  ;; every element is converted, else the index of the first element it left for the JavaScript path: outside
-  ;; (lowOk, highOk], or a segment not mirrored (not built yet, or solved by Newton); elements before it are
-  ;; converted. Each step is the JavaScript exact inverse's, in its order. Per lane ("locate", written out for
-  ;; each lane): the last piece whose start is <= e, x = (e - start)*perMillivolt, k = floor(x) clamped to the
-  ;; piece's segments, s = 2(x - k) - 1; then for both lanes at once Horner over the segment's 8 coefficients in
-  ;; s and the clamp to the segment's edge temperatures, t < lo ? lo : t > hi ? hi : t (compares and selects,
-  ;; not f64x2.min/max, which differ on signed zeros). A pair whose second element is left for JavaScript goes
-  ;; one element at a time.
+  ;; (f64, for JavaScript), the address (i32) of the piece's segment records and the segment count (i32). A record
+  ;; is 80 bytes: the 8 coefficients, c0 first, then the segment's two edge temperatures; a lower edge NaN marks a
+  ;; segment not mirrored here. Returns n when every element is converted, else the index of the first element it
+  ;; left for the JavaScript path: outside (lowOk, highOk], or a segment not mirrored (not built yet, or solved by
+  ;; Newton); elements before it are converted. Each step is the JavaScript exact inverse's, in its order. Per lane
+  ;; ("locate", written out for each lane): the last piece whose start is <= e, x = (e - start)*perMillivolt,
+  ;; k = floor(x) clamped to the piece's segments, s = 2(x - k) - 1; then for both lanes at once Horner over the
+  ;; segment's 8 coefficients in s and the clamp to the segment's edge temperatures, t < lo ? lo : t > hi ? hi : t
+  ;; (compares and selects, not f64x2.min/max, which differ on signed zeros). A pair whose second element is left
+  ;; for JavaScript goes one element at a time.
   (func (export "inverse") (param $ptr i32) (param $n i32) (param $tab i32) (param $np i32)
       (param $lowOk f64) (param $highOk f64) (result i32)
     (local $i i32) (local $at i32) (local $rp0 i32) (local $rp1 i32) (local $pair i32) (local $j i32) (local $pp i32)
-    (local $e f64) (local $x f64) (local $k f64) (local $s0 f64) (local $s1 f64) (local $s v128) (local $t v128)
+    (local $ki i32) (local $last i32) (local $e f64) (local $x f64) (local $k f64) (local $s0 f64) (local $s1 f64) (local $s v128) (local $t v128)
     (local $lo v128) (local $hi v128)
     (block $finished
       (loop $step
@@ -453,11 +453,15 @@
               (local.set $j (i32.add (local.get $j) (i32.const 1)))
               (br $up0)))
           (local.set $x (f64.mul (f64.sub (local.get $e) (f64.load (local.get $pp))) (f64.load offset=8 (local.get $pp))))
-          ;; k >= count ? count - 1 : k < 0 ? 0 : k, for the integer k = floor(x) (the same float, -0 included:
-          ;; f64.max(-0, 0) is +0, and x - (+0) and x - (-0) give the same s).
-          (local.set $k (f64.max (f64.min (f64.floor (local.get $x)) (f64.sub (f64.load offset=16 (local.get $pp)) (f64.const 1)))
-            (f64.const 0)))
-          (local.set $rp0 (i32.add (i32.load offset=24 (local.get $pp)) (i32.mul (i32.trunc_sat_f64_s (local.get $k)) (i32.const 80))))
+          ;; k = floor(x), then k >= count ? count - 1 : k < 0 ? 0 : k, in integers: for x >= 0 the truncation is
+          ;; the floor, and a negative x gives 0 either way (the same float k for s: +0 as in JavaScript; with
+          ;; x = -0, x - k is -0 or +0, and s is -1 both ways).
+          (local.set $ki (i32.trunc_sat_f64_s (local.get $x)))
+          (local.set $last (i32.sub (i32.load offset=28 (local.get $pp)) (i32.const 1)))
+          (local.set $ki (select (local.get $last) (local.get $ki) (i32.gt_s (local.get $ki) (local.get $last))))
+          (local.set $ki (select (i32.const 0) (local.get $ki) (i32.lt_s (local.get $ki) (i32.const 0))))
+          (local.set $k (f64.convert_i32_s (local.get $ki)))
+          (local.set $rp0 (i32.add (i32.load offset=24 (local.get $pp)) (i32.mul (local.get $ki) (i32.const 80))))
           ;; A segment not mirrored has NaN for its lower edge.
           (if (f64.ne (f64.load offset=64 (local.get $rp0)) (f64.load offset=64 (local.get $rp0)))
             (then (local.set $rp0 (i32.const 0)) (br $lane0)))
@@ -481,11 +485,15 @@
               (local.set $j (i32.add (local.get $j) (i32.const 1)))
               (br $up1)))
           (local.set $x (f64.mul (f64.sub (local.get $e) (f64.load (local.get $pp))) (f64.load offset=8 (local.get $pp))))
-          ;; k >= count ? count - 1 : k < 0 ? 0 : k, for the integer k = floor(x) (the same float, -0 included:
-          ;; f64.max(-0, 0) is +0, and x - (+0) and x - (-0) give the same s).
-          (local.set $k (f64.max (f64.min (f64.floor (local.get $x)) (f64.sub (f64.load offset=16 (local.get $pp)) (f64.const 1)))
-            (f64.const 0)))
-          (local.set $rp1 (i32.add (i32.load offset=24 (local.get $pp)) (i32.mul (i32.trunc_sat_f64_s (local.get $k)) (i32.const 80))))
+          ;; k = floor(x), then k >= count ? count - 1 : k < 0 ? 0 : k, in integers: for x >= 0 the truncation is
+          ;; the floor, and a negative x gives 0 either way (the same float k for s: +0 as in JavaScript; with
+          ;; x = -0, x - k is -0 or +0, and s is -1 both ways).
+          (local.set $ki (i32.trunc_sat_f64_s (local.get $x)))
+          (local.set $last (i32.sub (i32.load offset=28 (local.get $pp)) (i32.const 1)))
+          (local.set $ki (select (local.get $last) (local.get $ki) (i32.gt_s (local.get $ki) (local.get $last))))
+          (local.set $ki (select (i32.const 0) (local.get $ki) (i32.lt_s (local.get $ki) (i32.const 0))))
+          (local.set $k (f64.convert_i32_s (local.get $ki)))
+          (local.set $rp1 (i32.add (i32.load offset=24 (local.get $pp)) (i32.mul (local.get $ki) (i32.const 80))))
           ;; A segment not mirrored has NaN for its lower edge.
           (if (f64.ne (f64.load offset=64 (local.get $rp1)) (f64.load offset=64 (local.get $rp1)))
             (then (local.set $rp1 (i32.const 0)) (br $lane1)))

@@ -184,6 +184,7 @@ export function _inverseMirror(k: BulkKernel, ct: CompiledType, inv: ExactInvers
     k.f64[at + 1] = p.perMillivolt;
     k.f64[at + 2] = p.count;
     k.i32[(at + 3) * 2] = recordsAt[j] as number;
+    k.i32[(at + 3) * 2 + 1] = p.count;
     for (let s = 0; s < p.count; s++) k.f64[(recordsAt[j] as number) / 8 + s * 10 + 8] = NaN;
   });
   k.top = top;

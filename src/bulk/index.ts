@@ -30,7 +30,7 @@ export type BulkBackend = "webassembly-simd" | "javascript";
  * Tells which code the bulk conversions of this entry run on: `"webassembly-simd"` when the engine runs
  * WebAssembly with SIMD (the kernel is instantiated on the first call), else `"javascript"`. Either way the
  * results are the same floats. On an engine whose `Math.exp` is not V8's fdlibm algorithm (checked at
- * instantiation on 12,000 arguments), types with an exponential term (K) convert forward on the JavaScript path.
+ * instantiation on about 12,000 arguments), types with an exponential term (K) convert forward on the JavaScript path.
  * @returns the backend in use
  * @example
  * ```ts

@@ -7,6 +7,8 @@ export default defineConfig([
       exact: "src/exact.ts",
       design: "src/design/index.ts",
       report: "src/report/index.ts",
+      // The WebAssembly bulk kernel (bytes embedded as base64): its own entry, so no other bundle carries it.
+      bulk: "src/bulk/index.ts",
       // Worker entry of propagateParallel: must sit beside the chunk that starts it (dist/monteCarloWorker.js).
       monteCarloWorker: "src/uncertainty/_monteCarloWorker.ts",
     },

@@ -1,11 +1,12 @@
 /**
- * The physical limit of bulk conversion: our `Float64Array` paths against small C loops of the same work,
- * compiled here with gcc -O3 -march=native -ffp-contract=off (no fused multiply-add, so the forward loop is
- * the same arithmetic and the same bits as ours) into a temporary directory. Skipped with a note when gcc is
- * missing. Rounds interleave JavaScript and C (C runs as a child process between the JavaScript rounds);
+ * The physical limit of bulk conversion: our `Float64Array` paths (the WebAssembly SIMD kernel of
+ * `hotjunction/bulk` and the root entry's JavaScript loops) against small C loops of the same work, compiled
+ * here with gcc -O3 -march=native -ffp-contract=off (no fused multiply-add, so the forward loop is the same
+ * arithmetic and the same bits as ours) into a temporary directory, each kernel file linked with the one timing
+ * harness `bench/c/harness.c`. Skipped with a note when gcc is missing. Rounds interleave JavaScript and C (C runs as a child process between the JavaScript rounds);
  * each side keeps its best round. Targets (issue 16): bulk forward ≤ 1.5× the C forward loop, bulk exact
  * inverse ≤ 3× the C loop of the published approximate inverse. Not a test: nothing passes or fails on a timing.
- * Run: `npx tsx bench/nativeBaselines.bench.ts`.
+ * Run: `npx tsx bench/nativeBaselines.bench.ts [rounds]` (default 9; part of `npm run bench`).
  * @module
  */
 import { execFileSync, spawnSync } from "node:child_process";
@@ -13,6 +14,7 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
+import { bulkBackend, emfFromTemperatureArray as wasmForward, temperatureFromEmfArray as wasmInverse } from "../src/bulk/index.js";
 import { emfFromTemperatureArray, temperatureFromEmfArray } from "../src/index.js";
 
 const here = fileURLToPath(new URL(".", import.meta.url));
@@ -40,7 +42,7 @@ function bareForward(t: Float64Array, e: Float64Array): void {
 }
 
 /** Runs the comparison; returns the report lines. */
-export function runNativeBaselinesBench(n = 1_000_000, rounds = 5): string[] {
+export function runNativeBaselinesBench(n = 1_000_000, rounds = 9): string[] {
   const gcc = spawnSync("gcc", ["--version"], { encoding: "utf8" });
   if (gcc.status !== 0) return ["native baselines: skipped (gcc not found; install gcc to compare with compiled C)"];
   const dir = mkdtempSync(join(tmpdir(), "hotjunction-native-"));
@@ -48,8 +50,9 @@ export function runNativeBaselinesBench(n = 1_000_000, rounds = 5): string[] {
     const flags = ["-O3", "-march=native", "-ffp-contract=off", "-std=c99"];
     const forwardBin = join(dir, "forward");
     const inverseBin = join(dir, "approxInverse");
-    execFileSync("gcc", [...flags, "-o", forwardBin, join(here, "c", "forward.c"), "-lm"]);
-    execFileSync("gcc", [...flags, "-o", inverseBin, join(here, "c", "approxInverse.c"), "-lm"]);
+    const harness = join(here, "c", "harness.c");
+    execFileSync("gcc", [...flags, "-o", forwardBin, harness, join(here, "c", "forward.c"), "-lm"]);
+    execFileSync("gcc", [...flags, "-o", inverseBin, harness, join(here, "c", "approxInverse.c"), "-lm"]);
     const temps = new Float64Array(n).map((_, i) => (1372 * i) / n);
     const emfs = new Float64Array(n).map((_, i) => (54.886 * i) / n + 1e-9);
     const out = new Float64Array(n);
@@ -59,19 +62,27 @@ export function runNativeBaselinesBench(n = 1_000_000, rounds = 5): string[] {
     let bare = Infinity;
     let jsInverse = Infinity;
     let cInverse = Infinity;
+    let wasmF = Infinity;
+    let wasmI = Infinity;
     emfFromTemperatureArray("K", temps, out);
     temperatureFromEmfArray("K", emfs, out);
+    wasmForward("K", temps, out);
+    wasmInverse("K", emfs, out);
     for (let r = 0; r < rounds; r++) {
+      wasmF = Math.min(wasmF, bestNsPerElement(n, 3, () => wasmForward("K", temps, out)));
       jsForward = Math.min(jsForward, bestNsPerElement(n, 3, () => emfFromTemperatureArray("K", temps, out)));
       cForward = Math.min(cForward, c(forwardBin));
       bare = Math.min(bare, bestNsPerElement(n, 3, () => bareForward(temps, out)));
+      wasmI = Math.min(wasmI, bestNsPerElement(n, 3, () => wasmInverse("K", emfs, out)));
       jsInverse = Math.min(jsInverse, bestNsPerElement(n, 3, () => temperatureFromEmfArray("K", emfs, out)));
       cInverse = Math.min(cInverse, c(inverseBin));
     }
+    const ns = (x: number): string => `${x.toFixed(2)} ns`;
+    const ratio = (x: number, base: number): string => `${(x / base).toFixed(2)}x`;
     return [
-      `native baselines (gcc ${gcc.stdout.split("\n")[0]?.split(" ").pop()}, ${flags.join(" ")}; ${n.toLocaleString("en")} elements, best of ${rounds} interleaved rounds)`,
-      `  bulk forward, type K 0-1372 °C: ours ${jsForward.toFixed(2)} ns, C ${cForward.toFixed(2)} ns per element -> ${(jsForward / cForward).toFixed(2)}x (target ≤ 1.5x); the same loop in plain JavaScript ${bare.toFixed(2)} ns -> ${(bare / cForward).toFixed(2)}x`,
-      `  bulk exact inverse vs C published approximate inverse: ours ${jsInverse.toFixed(2)} ns, C ${cInverse.toFixed(2)} ns -> ${(jsInverse / cInverse).toFixed(2)}x (target ≤ 3x)`,
+      `native baselines (gcc ${gcc.stdout.split("\n")[0]?.split(" ").pop()}, ${flags.join(" ")}; ${n.toLocaleString("en")} elements, best of ${rounds} interleaved rounds; hotjunction/bulk backend: ${bulkBackend()})`,
+      `  bulk forward, type K 0-1372 °C, C ${ns(cForward)} per element: hotjunction/bulk ${ns(wasmF)} -> ${ratio(wasmF, cForward)} (target ≤ 1.5x); root entry (JavaScript) ${ns(jsForward)} -> ${ratio(jsForward, cForward)}; the C loop written in plain JavaScript ${ns(bare)} -> ${ratio(bare, cForward)}`,
+      `  bulk exact inverse vs C published approximate inverse ${ns(cInverse)}: hotjunction/bulk ${ns(wasmI)} -> ${ratio(wasmI, cInverse)} (target ≤ 3x); root entry (JavaScript) ${ns(jsInverse)} -> ${ratio(jsInverse, cInverse)}`,
     ];
   } finally {
     rmSync(dir, { recursive: true, force: true });
@@ -79,5 +90,6 @@ export function runNativeBaselinesBench(n = 1_000_000, rounds = 5): string[] {
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? "").href) {
-  for (const line of runNativeBaselinesBench()) console.log(line);
+  const rounds = Number(process.argv[2] ?? 9);
+  for (const line of runNativeBaselinesBench(1_000_000, rounds)) console.log(line);
 }

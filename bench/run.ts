@@ -5,9 +5,13 @@ import { runMonteCarloBench } from "./monteCarlo.bench.js";
 import { runFirmwareBench } from "./firmwareTables.bench.js";
 import { runCliStartBench } from "./cliStart.bench.js";
 import { runDynamicsBench } from "./dynamics.bench.js";
+import { runNativeBaselinesBench } from "./nativeBaselines.bench.js";
 
 console.log(`hotjunction benchmarks, Node ${process.version}, ${new Date().toISOString()}\n`);
 for (const line of await runIts90Bench()) console.log(line);
+console.log("");
+// The bulk paths against compiled C (gcc; skipped with a note without it).
+for (const line of runNativeBaselinesBench()) console.log(line);
 console.log("");
 await runMonteCarloBench();
 console.log("");

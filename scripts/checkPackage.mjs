@@ -39,6 +39,10 @@ const requiredFiles = [
   "dist/report.cjs",
   "dist/report.d.ts",
   "dist/report.d.cts",
+  "dist/bulk.js",
+  "dist/bulk.cjs",
+  "dist/bulk.d.ts",
+  "dist/bulk.d.cts",
   "dist/cli.js",
   "dist/workbench.html",
 ];

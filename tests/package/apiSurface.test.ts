@@ -16,6 +16,7 @@ const entries = {
   "hotjunction/exact": "src/exact.ts",
   "hotjunction/design": "src/design/index.ts",
   "hotjunction/report": "src/report/index.ts",
+  "hotjunction/bulk": "src/bulk/index.ts",
 } as const;
 
 type Surface = Record<string, { values: string[]; types: string[] }>;
@@ -69,6 +70,7 @@ describe("API surface", () => {
       "hotjunction/exact": await import("../../src/exact.js"),
       "hotjunction/design": await import("../../src/design/index.js"),
       "hotjunction/report": await import("../../src/report/index.js"),
+      "hotjunction/bulk": await import("../../src/bulk/index.js"),
     };
     for (const [entry, module] of Object.entries(loaded)) expect(Object.keys(module).sort(), entry).toEqual(pinned[entry]?.values);
   });
@@ -77,7 +79,7 @@ describe("API surface", () => {
     for (const [entry, names] of Object.entries(pinned)) {
       expect([...names.values, ...names.types].filter((n) => n.startsWith("_")), entry).toEqual([]);
     }
-    for (const file of ["src/index.ts", "src/exact.ts", "src/chain/index.ts", "src/design/index.ts", "src/faults/index.ts", "src/firmware/index.ts", "src/report/index.ts", "src/trip/index.ts", "src/uncertainty/index.ts"]) {
+    for (const file of ["src/index.ts", "src/exact.ts", "src/chain/index.ts", "src/design/index.ts", "src/faults/index.ts", "src/firmware/index.ts", "src/report/index.ts", "src/bulk/index.ts", "src/trip/index.ts", "src/uncertainty/index.ts"]) {
       expect(/export\s+(type\s+)?\*/.test(readFileSync(join(projectDir, file), "utf8")), file).toBe(false);
     }
   });

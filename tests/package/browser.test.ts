@@ -201,7 +201,9 @@ beforeAll(async () => {
 <script type="importmap">${JSON.stringify({ imports: importMap })}</script>
 <script type="module">
 import * as hj from "/dist/index.js";
+import * as bulk from "/dist/bulk.js";
 window.hotjunction = hj;
+window.hotjunctionBulk = bulk;
 window.hotjunctionReady = true;
 </script></head><body></body></html>`;
   server = createServer((request, response) => {
@@ -244,7 +246,30 @@ async function probeInNode(): Promise<ProbeResult> {
   return probe(hj);
 }
 
-async function probeInChromium(): Promise<{ result: ProbeResult; mathFingerprint: number; errors: string[] }> {
+/**
+ * hotjunction/bulk in the page: its backend, and how many of its results differ (by Object.is) from the root
+ * entry's bulk functions over 20,001 points per type and direction (the kernel's bytes come embedded in the built
+ * JavaScript; no file is read).
+ */
+const bulkProbeSource = `
+  const out = { backend: bulk.bulkBackend(), differ: 0, compared: 0 };
+  for (const type of hj.thermocoupleTypes) {
+    const r = hj.temperatureRange(type);
+    const t = Float64Array.from({ length: 20001 }, (_, i) => r.minC + ((r.maxC - r.minC) * i) / 20000);
+    const lo = r.unambiguousFromC > r.minC ? 1e-6 : r.minEmfMillivolts;
+    const e = Float64Array.from({ length: 20001 }, (_, i) => lo + ((r.maxEmfMillivolts - lo) * i) / 20000);
+    const pairs = [[bulk.emfFromTemperatureArray(type, t), hj.emfFromTemperatureArray(type, t)],
+      [bulk.temperatureFromEmfArray(type, e), hj.temperatureFromEmfArray(type, e)]];
+    for (const [a, b] of pairs) for (let i = 0; i < a.length; i++) { out.compared++; if (!Object.is(a[i], b[i])) out.differ++; }
+  }
+  return out;`;
+
+async function probeInChromium(): Promise<{
+  result: ProbeResult;
+  mathFingerprint: number;
+  errors: string[];
+  bulk: { backend: string; differ: number; compared: number };
+}> {
   const { chromium } = await import("playwright-core");
   const context = await chromium.launchPersistentContext(join(scratchDir, "profile"), {
     executablePath: chromiumPath,
@@ -271,7 +296,12 @@ async function probeInChromium(): Promise<{ result: ProbeResult; mathFingerprint
     await page.waitForFunction("window.hotjunctionReady === true", undefined, { timeout: 30_000 });
     const result = (await page.evaluate(`((hj) => {${probeSource}})(window.hotjunction)`)) as ProbeResult;
     const mathFingerprint = (await page.evaluate(`(() => {${mathFingerprintSource}})()`)) as number;
-    return { result, mathFingerprint, errors };
+    const bulk = (await page.evaluate(`((hj, bulk) => {${bulkProbeSource}})(window.hotjunction, window.hotjunctionBulk)`)) as {
+      backend: string;
+      differ: number;
+      compared: number;
+    };
+    return { result, mathFingerprint, errors, bulk };
   } finally {
     await context.close();
   }
@@ -285,8 +315,10 @@ describe.skipIf(!chromiumPresent && !inCi)("ESM build in headless Chromium", () 
   it("converts and budgets as Node does: bit for bit, or to 1e-12 where the engines' Math differs", async () => {
     const inNode = await probeInNode();
     const nodeMathFingerprint = (new Function(mathFingerprintSource) as () => number)();
-    const { result: inBrowser, mathFingerprint, errors } = await probeInChromium();
+    const { result: inBrowser, mathFingerprint, errors, bulk } = await probeInChromium();
     expect(errors).toEqual([]);
+    // hotjunction/bulk runs its WebAssembly SIMD kernel in Chromium (V8) with the root entry's results, bit for bit.
+    expect(bulk).toEqual({ backend: "webassembly-simd", differ: 0, compared: 8 * 2 * 20001 });
     // NIST SRD 60 / Monograph 175: type K 500 °C = 20.644 mV; type T 100 °C = 4.279 mV; type S 600 °C = 5.239 mV.
     expect(Number(inBrowser["emf K 500"]).toFixed(3)).toBe("20.644");
     expect(Number(inBrowser["emf T 100"]).toFixed(3)).toBe("4.279");

@@ -173,6 +173,71 @@ export class _Sampler {
 }
 
 
+/** @internal Copies trial t of the columns into the record (input i from column i). */
+export type _RecordFill = (record: Record<string, number>, col: Float64Array, t: number) => void;
+
+/**
+ * @internal The record fill for these names (canonical order). A loop `record[names[i]] = …` is one store site
+ * that sees every name, so V8 treats it as megamorphic and looks each name up (most of the time of a cheap model
+ * was spent there); here the first 16 names each have their own store site with a name fixed per fill, which
+ * stays monomorphic while a process evaluates one set of names. Same values, same order.
+ */
+export function _recordFill(names: readonly string[]): _RecordFill {
+  const n = names.length;
+  const s = _blockSize;
+  const k0 = names[0] as string;
+  const k1 = names[1] as string;
+  const k2 = names[2] as string;
+  const k3 = names[3] as string;
+  const k4 = names[4] as string;
+  const k5 = names[5] as string;
+  const k6 = names[6] as string;
+  const k7 = names[7] as string;
+  const k8 = names[8] as string;
+  const k9 = names[9] as string;
+  const k10 = names[10] as string;
+  const k11 = names[11] as string;
+  const k12 = names[12] as string;
+  const k13 = names[13] as string;
+  const k14 = names[14] as string;
+  const k15 = names[15] as string;
+  return (record, col, t) => {
+    record[k0] = col[t] as number;
+    if (n === 1) return;
+    record[k1] = col[1 * s + t] as number;
+    if (n === 2) return;
+    record[k2] = col[2 * s + t] as number;
+    if (n === 3) return;
+    record[k3] = col[3 * s + t] as number;
+    if (n === 4) return;
+    record[k4] = col[4 * s + t] as number;
+    if (n === 5) return;
+    record[k5] = col[5 * s + t] as number;
+    if (n === 6) return;
+    record[k6] = col[6 * s + t] as number;
+    if (n === 7) return;
+    record[k7] = col[7 * s + t] as number;
+    if (n === 8) return;
+    record[k8] = col[8 * s + t] as number;
+    if (n === 9) return;
+    record[k9] = col[9 * s + t] as number;
+    if (n === 10) return;
+    record[k10] = col[10 * s + t] as number;
+    if (n === 11) return;
+    record[k11] = col[11 * s + t] as number;
+    if (n === 12) return;
+    record[k12] = col[12 * s + t] as number;
+    if (n === 13) return;
+    record[k13] = col[13 * s + t] as number;
+    if (n === 14) return;
+    record[k14] = col[14 * s + t] as number;
+    if (n === 15) return;
+    record[k15] = col[15 * s + t] as number;
+    if (n === 16) return;
+    for (let i = 16; i < n; i++) record[names[i] as string] = col[i * s + t] as number;
+  };
+}
+
 /**
  * @internal The fixed sequence of model outputs of a run, handed out in order: blocks are sampled whole when
  * entered; the model is evaluated only for the trials taken. Several evaluators share the same draws (common
@@ -182,6 +247,7 @@ export class _TrialStream {
   private state: number[];
   /** Trials already taken from the current block (= _blockSize before the first block). */
   private position = _blockSize;
+  private readonly fill: _RecordFill;
 
   constructor(
     private readonly sampler: _Sampler,
@@ -190,6 +256,7 @@ export class _TrialStream {
     firstState: readonly number[],
   ) {
     this.state = [...firstState];
+    this.fill = _recordFill((evaluators[0] as _ModelEvaluator).names);
   }
 
   /** Evaluates the next `count` trials into `outs[k]` from `offset` on. */
@@ -198,8 +265,6 @@ export class _TrialStream {
     const col = sampler.columns;
     const evaluators = this.evaluators;
     const e0 = evaluators[0] as _ModelEvaluator;
-    const names = e0.names;
-    const n = names.length;
     let done = 0;
     while (done < count) {
       if (this.position === _blockSize) {
@@ -211,12 +276,13 @@ export class _TrialStream {
       const start = this.position;
       const size = Math.min(_blockSize - start, count - done);
       const at = offset + done - start;
+      const fill = this.fill;
       if (evaluators.length === 1) {
         const record = e0.record;
         const model = e0.model;
         const out = outs[0] as Float64Array;
         for (let t = start; t < start + size; t++) {
-          for (let i = 0; i < n; i++) record[names[i] as string] = col[i * _blockSize + t] as number;
+          fill(record, col, t);
           const y = model(record);
           if (typeof y !== "number" || y - y !== 0) e0.fail(y);
           out[at + t] = y;
@@ -226,7 +292,7 @@ export class _TrialStream {
         const record = e0.record;
         const m = evaluators.length;
         for (let t = start; t < start + size; t++) {
-          for (let i = 0; i < n; i++) record[names[i] as string] = col[i * _blockSize + t] as number;
+          fill(record, col, t);
           for (let k = 0; k < m; k++) {
             const evaluator = evaluators[k] as _ModelEvaluator;
             const y = evaluator.model(record);

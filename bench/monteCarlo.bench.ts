@@ -7,6 +7,7 @@
  * loop's time per core; 2,001 × 20,000 common draws ≤ 10 s.
  * @module
  */
+import { availableParallelism } from "node:os";
 import { pathToFileURL } from "node:url";
 import { uniformFloat64 } from "pure-rand/distribution/uniformFloat64";
 import { xoroshiro128plus } from "pure-rand/generator/xoroshiro128plus";
@@ -135,6 +136,10 @@ export interface MonteCarloBenchResult {
   readonly parallelSecondsForMillionTrials: number;
   /** Same, pool started inside the call (cold). */
   readonly parallelColdSecondsForMillionTrials: number;
+  /** Seconds for 1e6 trials through propagateParallel with workers: 1 (the calling thread), same run. */
+  readonly oneWorkerSecondsForMillionTrials: number;
+  /** Cores the machine reports (os.availableParallelism). */
+  readonly cores: number;
   /** parallel (warm) time × workers / bare-loop time: time per core against the bare loop (target ≤ 1.2). */
   readonly parallelPerCoreRatio: number;
   /** Seconds for 2,001 points × 20,000 trials through propagateCommonDraws (target ≤ 10 s). */
@@ -231,6 +236,8 @@ export async function runMonteCarloBench(): Promise<MonteCarloBenchResult> {
   await propagateParallel(reference, inputs, { ...million, trials: 300_000, pool }); // warm-up: workers load the model
   const parallelSecondsForMillionTrials = await bestOfAsync(3, () => propagateParallel(reference, inputs, { ...million, pool }));
   const workers = pool.size;
+  // Speed-up over one worker in the same run (workers: 1 runs in the calling thread, same bits).
+  const oneWorkerSecondsForMillionTrials = await bestOfAsync(2, () => propagateParallel(reference, inputs, { ...million, workers: 1 }));
   await pool.close();
   const parallelColdSecondsForMillionTrials = await bestOfAsync(1, () => propagateParallel(reference, inputs, { ...million, workers }));
   // Common random numbers: a sweep-like family, one model per point (the chain scaled by the point's gain).
@@ -249,6 +256,8 @@ export async function runMonteCarloBench(): Promise<MonteCarloBenchResult> {
     workers,
     parallelSecondsForMillionTrials,
     parallelColdSecondsForMillionTrials,
+    oneWorkerSecondsForMillionTrials,
+    cores: availableParallelism(),
     parallelPerCoreRatio: (parallelSecondsForMillionTrials * workers) / bareSecondsForMillionTrials,
     commonDrawsSeconds,
     perPointSeconds,
@@ -264,6 +273,10 @@ export async function runMonteCarloBench(): Promise<MonteCarloBenchResult> {
       `${parallelColdSecondsForMillionTrials.toFixed(3)} s with start-up; ${(bareSecondsForMillionTrials / parallelSecondsForMillionTrials).toFixed(2)}x faster than the bare loop on one core`,
   );
   console.log(`  per core: parallel time × workers / bare time = ${result.parallelPerCoreRatio.toFixed(2)} (target ≤ 1.2)`);
+  console.log(
+    `  speed-up over 1 worker (${oneWorkerSecondsForMillionTrials.toFixed(3)} s): ${(oneWorkerSecondsForMillionTrials / parallelSecondsForMillionTrials).toFixed(2)}x ` +
+      `on ${workers} workers, ${result.cores} cores reported (ideal ${Math.min(workers, result.cores)}x)`,
+  );
   console.log(
     `  common draws, 2,001 points × 20,000 trials: ${commonDrawsSeconds.toFixed(2)} s (target ≤ 10 s) vs ` +
       `${perPointSeconds.toFixed(1)} s for propagate per point -> ${result.commonDrawsSpeedup.toFixed(1)}x`,

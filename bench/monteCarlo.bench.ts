@@ -7,18 +7,23 @@
  * loop's time per core; 2,001 × 20,000 common draws ≤ 10 s.
  * @module
  */
+import { availableParallelism } from "node:os";
 import { pathToFileURL } from "node:url";
 import { uniformFloat64 } from "pure-rand/distribution/uniformFloat64";
 import { xoroshiro128plus } from "pure-rand/generator/xoroshiro128plus";
 import { Bench } from "tinybench";
 import { createMonteCarloPool, propagate, propagateCommonDraws, propagateParallel, type Model } from "../src/uncertainty/index.js";
+import { _Xoroshiro128Plus } from "../src/uncertainty/_xoroshiro128plus.js";
 import { chainInputs, chainModel, type ChainName } from "../tests/uncertainty/fixtures/twelveSourceChain.js";
 
 // The made-up 12-source chain (demo numbers) lives in a module so that worker threads can import it by URL.
 const inputs = chainInputs;
 const chainModelUrl = new URL("../tests/uncertainty/fixtures/twelveSourceChain.ts", import.meta.url).href;
 
-/** The same sampling and model written out by hand, with the same generator; returns the 95 % interval. */
+/**
+ * The same sampling and model written out by hand (trial by trial: no record, no blocks), with pure-rand's
+ * xoroshiro128+ (the same bits as the package's generator); returns the 95 % interval.
+ */
 function bareLoop(trials: number, seed: number): [number, number] {
   const rng = xoroshiro128plus(seed);
   const out = new Float64Array(trials);
@@ -64,6 +69,55 @@ function bareLoop(trials: number, seed: number): [number, number] {
   return [(out[r - 1] as number) + 0 * squares, out[r - 1 + q] as number];
 }
 
+/**
+ * The bare loop with the package's own xoroshiro128+ (the generator `propagate` draws from, inlined here): the
+ * stricter baseline, since pure-rand's `uniformFloat64` costs more per draw than the own generator.
+ */
+function bareLoopOwnGenerator(trials: number, seed: number): [number, number] {
+  const rng = new _Xoroshiro128Plus().seed(seed);
+  const out = new Float64Array(trials);
+  const twoPi = 2 * Math.PI;
+  let spare = Number.NaN;
+  const gauss = (): number => {
+    if (spare === spare) {
+      const z = spare;
+      spare = Number.NaN;
+      return z;
+    }
+    const radius = Math.sqrt(-2 * Math.log(1 - rng.uniform()));
+    const angle = twoPi * rng.uniform();
+    spare = radius * Math.sin(angle);
+    return radius * Math.cos(angle);
+  };
+  const rect = (c: number, a: number): number => c + a * (2 * rng.uniform() - 1);
+  const trap = (c: number, a: number, beta: number): number =>
+    c - a + a * ((1 + beta) * rng.uniform() + (1 - beta) * rng.uniform());
+  for (let t = 0; t < trials; t++) {
+    const x0 = 20 + 0.02 * gauss();
+    const x1 = 0.01 * gauss();
+    const x2 = rect(0, 0.05);
+    const x3 = trap(0, 0.03, 0);
+    const x4 = rect(1, 0.001);
+    const x5 = 1 + 0.001 * gauss();
+    const x6 = trap(1, 0.0015, 0.5);
+    const x7 = 0.02 * Math.sin(twoPi * rng.uniform());
+    const x8 = rect(0, 0.01);
+    const x9 = 0.005 * gauss();
+    const x10 = trap(0, 0.01, 0);
+    const x11 = rect(2.5, 0.0025);
+    out[t] = ((x0 + x1 + x2 + x3) * x4 * x5 * x6 + x7 + x8 + x9 + x10) / x11;
+  }
+  let sum = 0;
+  for (let t = 0; t < trials; t++) sum += out[t] as number;
+  const mean = sum / trials;
+  let squares = 0;
+  for (let t = 0; t < trials; t++) squares += ((out[t] as number) - mean) ** 2;
+  out.sort();
+  const q = Math.round(0.95 * trials);
+  const r = Math.floor((trials - q + 1) / 2);
+  return [(out[r - 1] as number) + 0 * squares, out[r - 1 + q] as number];
+}
+
 /** Figures of one bench run. */
 export interface MonteCarloBenchResult {
   /** Trials per second through `propagate`. */
@@ -82,6 +136,10 @@ export interface MonteCarloBenchResult {
   readonly parallelSecondsForMillionTrials: number;
   /** Same, pool started inside the call (cold). */
   readonly parallelColdSecondsForMillionTrials: number;
+  /** Seconds for 1e6 trials through propagateParallel with workers: 1 (the calling thread), same run. */
+  readonly oneWorkerSecondsForMillionTrials: number;
+  /** Cores the machine reports (os.availableParallelism). */
+  readonly cores: number;
   /** parallel (warm) time × workers / bare-loop time: time per core against the bare loop (target ≤ 1.2). */
   readonly parallelPerCoreRatio: number;
   /** Seconds for 2,001 points × 20,000 trials through propagateCommonDraws (target ≤ 10 s). */
@@ -116,11 +174,16 @@ async function bestOfAsync(runs: number, f: () => Promise<unknown>): Promise<num
  * One core only: `propagate` against the bare loop in interleaved rounds (propagate, bare, propagate, …), each
  * keeping its best round, so a busy machine disturbs both alike. Returns the ratio of the best times.
  */
-export function runOneCoreInterleaved(trials = 200_000, rounds = 7): { propagateSeconds: number; bareSeconds: number; ratio: number } {
+export function runOneCoreInterleaved(
+  trials = 200_000,
+  rounds = 7,
+): { propagateSeconds: number; bareSeconds: number; ratio: number; bareOwnSeconds: number; ratioOwn: number } {
   let bestPropagate = Infinity;
   let bestBare = Infinity;
+  let bestOwn = Infinity;
   propagate(chainModel, inputs, { method: "monte-carlo", trials, seed: 3 });
   bareLoop(trials, 3);
+  bareLoopOwnGenerator(trials, 3);
   for (let r = 0; r < rounds; r++) {
     let start = performance.now();
     propagate(chainModel, inputs, { method: "monte-carlo", trials, seed: 3 });
@@ -128,8 +191,17 @@ export function runOneCoreInterleaved(trials = 200_000, rounds = 7): { propagate
     start = performance.now();
     bareLoop(trials, 3);
     bestBare = Math.min(bestBare, performance.now() - start);
+    start = performance.now();
+    bareLoopOwnGenerator(trials, 3);
+    bestOwn = Math.min(bestOwn, performance.now() - start);
   }
-  return { propagateSeconds: bestPropagate / 1000, bareSeconds: bestBare / 1000, ratio: bestPropagate / bestBare };
+  return {
+    propagateSeconds: bestPropagate / 1000,
+    bareSeconds: bestBare / 1000,
+    ratio: bestPropagate / bestBare,
+    bareOwnSeconds: bestOwn / 1000,
+    ratioOwn: bestPropagate / bestOwn,
+  };
 }
 
 /**
@@ -164,6 +236,8 @@ export async function runMonteCarloBench(): Promise<MonteCarloBenchResult> {
   await propagateParallel(reference, inputs, { ...million, trials: 300_000, pool }); // warm-up: workers load the model
   const parallelSecondsForMillionTrials = await bestOfAsync(3, () => propagateParallel(reference, inputs, { ...million, pool }));
   const workers = pool.size;
+  // Speed-up over one worker in the same run (workers: 1 runs in the calling thread, same bits).
+  const oneWorkerSecondsForMillionTrials = await bestOfAsync(2, () => propagateParallel(reference, inputs, { ...million, workers: 1 }));
   await pool.close();
   const parallelColdSecondsForMillionTrials = await bestOfAsync(1, () => propagateParallel(reference, inputs, { ...million, workers }));
   // Common random numbers: a sweep-like family, one model per point (the chain scaled by the point's gain).
@@ -182,6 +256,8 @@ export async function runMonteCarloBench(): Promise<MonteCarloBenchResult> {
     workers,
     parallelSecondsForMillionTrials,
     parallelColdSecondsForMillionTrials,
+    oneWorkerSecondsForMillionTrials,
+    cores: availableParallelism(),
     parallelPerCoreRatio: (parallelSecondsForMillionTrials * workers) / bareSecondsForMillionTrials,
     commonDrawsSeconds,
     perPointSeconds,
@@ -198,6 +274,10 @@ export async function runMonteCarloBench(): Promise<MonteCarloBenchResult> {
   );
   console.log(`  per core: parallel time × workers / bare time = ${result.parallelPerCoreRatio.toFixed(2)} (target ≤ 1.2)`);
   console.log(
+    `  speed-up over 1 worker (${oneWorkerSecondsForMillionTrials.toFixed(3)} s): ${(oneWorkerSecondsForMillionTrials / parallelSecondsForMillionTrials).toFixed(2)}x ` +
+      `on ${workers} workers, ${result.cores} cores reported (ideal ${Math.min(workers, result.cores)}x)`,
+  );
+  console.log(
     `  common draws, 2,001 points × 20,000 trials: ${commonDrawsSeconds.toFixed(2)} s (target ≤ 10 s) vs ` +
       `${perPointSeconds.toFixed(1)} s for propagate per point -> ${result.commonDrawsSpeedup.toFixed(1)}x`,
   );
@@ -210,7 +290,8 @@ if (import.meta.url === pathToFileURL(process.argv[1] ?? "").href) {
     const r = runOneCoreInterleaved();
     console.log(
       `Monte Carlo one core, 200,000 trials, best of 7 interleaved rounds: propagate ${(r.propagateSeconds * 1000).toFixed(1)} ms, ` +
-        `bare loop ${(r.bareSeconds * 1000).toFixed(1)} ms -> ${r.ratio.toFixed(2)}x (target ≤ 1.2)`,
+        `bare loop ${(r.bareSeconds * 1000).toFixed(1)} ms (pure-rand) -> ${r.ratio.toFixed(2)}x, ` +
+        `${(r.bareOwnSeconds * 1000).toFixed(1)} ms (own generator) -> ${r.ratioOwn.toFixed(2)}x (target ≤ 1.2)`,
     );
   } else {
     await runMonteCarloBench();

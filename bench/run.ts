@@ -4,6 +4,7 @@ import { runIts90Bench } from "./its90.bench.js";
 import { runMonteCarloBench } from "./monteCarlo.bench.js";
 import { runFirmwareBench } from "./firmwareTables.bench.js";
 import { runCliStartBench } from "./cliStart.bench.js";
+import { runCliCommandsBench } from "./cliCommands.bench.js";
 import { runDynamicsBench } from "./dynamics.bench.js";
 import { runNativeBaselinesBench } from "./nativeBaselines.bench.js";
 
@@ -18,5 +19,7 @@ console.log("");
 for (const line of await runFirmwareBench()) console.log(line);
 console.log("");
 for (const line of runCliStartBench()) console.log(line);
+console.log("");
+for (const line of runCliCommandsBench()) console.log(line);
 console.log("");
 for (const line of await runDynamicsBench()) console.log(line);

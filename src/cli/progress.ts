@@ -3,8 +3,19 @@
  * (so pipes, logs and tests stay clean).
  * @module
  */
-import { SingleBar } from "cli-progress";
+import type { SingleBar } from "cli-progress";
 import type { CliIo } from "./io.js";
+
+/** cli-progress's bar, loaded by {@link _loadProgress} only when standard error is a terminal. */
+let barClass: typeof SingleBar | undefined;
+
+/**
+ * Loads the progress-bar library when standard error is a terminal (a command calls it before its work, so
+ * pipes, logs and tests never load it). @internal
+ */
+export async function _loadProgress(io: CliIo): Promise<void> {
+  if (io.stderrIsTty && barClass === undefined) barClass = (await import("cli-progress")).SingleBar;
+}
 
 /** A progress sink: `update(fraction)` as work proceeds, `stop()` when done (safe to call twice). */
 export interface ProgressSink {
@@ -15,12 +26,13 @@ export interface ProgressSink {
 const silent: ProgressSink = { update: () => undefined, stop: () => undefined };
 
 /**
- * Starts a progress bar labelled `label` when standard error is a terminal; otherwise returns a silent sink.
+ * Starts a progress bar labelled `label` when standard error is a terminal (after {@link _loadProgress});
+ * otherwise returns a silent sink.
  * @internal
  */
 export function _startProgress(io: CliIo, label: string): ProgressSink {
-  if (!io.stderrIsTty) return silent;
-  const bar = new SingleBar({
+  if (!io.stderrIsTty || barClass === undefined) return silent;
+  const bar = new barClass({
     format: `${label} [{bar}] {percentage}% | {eta_formatted} left`,
     stream: process.stderr,
     hideCursor: true,

@@ -84,13 +84,24 @@ export function compareReferences(
     onProgress === undefined ? {} : { onProgress: (f: number) => onProgress((run + f) / runs) };
   let acceptanceMethod: ReferenceComparison["acceptanceMethod"] = options.acceptanceMethod ?? "worst-case";
 
+  // The yardstick depends only on the voltage and the resistors: options of one voltage that choose the same
+  // networks (e.g. a series and a shunt reference of 2.5 V) share one ideal-reference design.
+  const yardsticks = new Map<string, TripDesignResult>();
   const entries: ReferenceComparisonEntry[] = referenceOptions.map((option, k) => {
     const withOption = designTrip({ ...design, reference: option }, { ...designOptions, ...progressOf(2 * k) });
     acceptanceMethod = withOption.acceptanceMethod;
-    const ideal = designTrip(
-      { ...design, reference: { kind: "ideal", name: "ideal reference", nominalVolts: nominalVoltsOf(option) } },
-      { ...designOptions, ...progressOf(2 * k + 1), networks: withOption.networks },
-    );
+    const volts = nominalVoltsOf(option);
+    const yardstickKey = JSON.stringify([Object.is(volts, -0) ? "-0" : String(volts), withOption.networks]);
+    let ideal = yardsticks.get(yardstickKey);
+    if (ideal === undefined) {
+      ideal = designTrip(
+        { ...design, reference: { kind: "ideal", name: "ideal reference", nominalVolts: volts } },
+        { ...designOptions, ...progressOf(2 * k + 1), networks: withOption.networks },
+      );
+      yardsticks.set(yardstickKey, ideal);
+    } else {
+      onProgress?.((2 * k + 2) / runs);
+    }
     const setpoints = withOption.setpoints.map((sp, i) => {
       const b = acceptedBand(withOption, i);
       const yardstick = acceptedBand(ideal, i);

@@ -175,6 +175,47 @@ function pointResult(model: (x: Readonly<Record<string, number>>) => number, see
   });
 }
 
+/**
+ * A key that is equal exactly when two input records hold the same names (in the same order) and the same
+ * distributions to the last bit (`String` of a double round-trips; −0 kept apart from 0).
+ */
+function inputsKey(inputs: Readonly<Record<string, Distribution>>): string {
+  const parts: string[] = [];
+  const num = (v: number | undefined): string => (v === undefined ? "u" : Object.is(v, -0) ? "-0" : String(v));
+  for (const [name, d] of Object.entries(inputs)) {
+    parts.push(name, d.kind, num(d.mean), num(d.standardUncertainty), num(d.halfWidth), num(d.beta), num(d.degreesOfFreedom));
+  }
+  return JSON.stringify(parts);
+}
+
+/**
+ * The worst case of a comparator edge with the thermocouple tolerance taken at a temperature, remembered by
+ * the inputs it gives: the self-consistent edges call it again and again (both edges start at the setpoint, and
+ * where the tolerance does not change with temperature every step gives the same inputs), and the model depends
+ * on the temperature only through the inputs, so an equal record gives the same result bit for bit.
+ */
+function worstCaseAtTolerance(
+  tc: TripChain,
+  tap: number,
+  edge: "trip" | "release",
+  seed: number,
+  coverage: number,
+  normalBoundCoverage: number,
+): (toleranceAtC: number) => PropagationResult {
+  const known = new Map<string, PropagationResult>();
+  return (toleranceAtC) => {
+    const m = _comparatorTripModel(tc.compiled, tap, edge, toleranceAtC);
+    if (Object.keys(m.inputs).length === 0) return pointResult(m.model, seed, coverage)("worst-case");
+    const key = inputsKey(m.inputs);
+    let result = known.get(key);
+    if (result === undefined) {
+      result = propagate(m.model, m.inputs, { method: "worst-case", normalBoundCoverage });
+      known.set(key, result);
+    }
+    return result;
+  };
+}
+
 function band(method: PropagationMethod, r: PropagationResult): TripBand {
   for (const value of [r.interval[0], r.interval[1], r.standardUncertainty]) {
     if (!Number.isFinite(value)) {
@@ -448,10 +489,7 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     // A chain with every error source at zero (an ideal design) has nothing to propagate: its band is the
     // nominal trip itself, by every method.
     const exact = Object.keys(inputs).length === 0 ? pointResult(model, seed, coverage) : undefined;
-    const worstAt = (toleranceAtC: number): PropagationResult => {
-      const m = _comparatorTripModel(tc.compiled, tap, "trip", toleranceAtC);
-      return Object.keys(m.inputs).length === 0 ? pointResult(m.model, seed, coverage)("worst-case") : propagate(m.model, m.inputs, { method: "worst-case", normalBoundCoverage });
-    };
+    const worstAt = worstCaseAtTolerance(tc, tap, "trip", seed, coverage, normalBoundCoverage);
     const worstAtSetpoint = exact?.("worst-case") ?? worstAt(plan.tripC);
     const highEdge = _selfConsistentEdge((t) => worstAt(t).interval[1], plan.tripC);
     const lowEdge = _selfConsistentEdge((t) => worstAt(t).interval[0], plan.tripC);
@@ -494,10 +532,7 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     };
     const bands = { "worst-case": worstBand, rss: rssBand, "monte-carlo": band("monte-carlo", mc) };
     // Release: the worst case of the falling edge, also self-consistent.
-    const releaseAt = (toleranceAtC: number): PropagationResult => {
-      const m = _comparatorTripModel(tc.compiled, tap, "release", toleranceAtC);
-      return Object.keys(m.inputs).length === 0 ? pointResult(m.model, seed, coverage)("worst-case") : propagate(m.model, m.inputs, { method: "worst-case", normalBoundCoverage });
-    };
+    const releaseAt = worstCaseAtTolerance(tc, tap, "release", seed, coverage, normalBoundCoverage);
     const releaseLow = _selfConsistentEdge((t) => releaseAt(t).interval[0], nominalReleaseC).edgeC;
     const releaseHigh = _selfConsistentEdge((t) => releaseAt(t).interval[1], nominalReleaseC).edgeC;
     const accepted = bands[acceptanceMethod];

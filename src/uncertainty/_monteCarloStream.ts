@@ -7,7 +7,7 @@
 import { _Xoroshiro128Plus } from "./_xoroshiro128plus.js";
 import { _standardBoundedQuantile, type _CheckedDistribution } from "./_distribution.js";
 import { _erfc } from "./normalCdf.js";
-import { _choleskyFactor, type _ModelEvaluator } from "./_prepare.js";
+import { _choleskyFactor, _recordFill, type _ModelEvaluator, type _RecordFill } from "./_prepare.js";
 
 const twoPi = 6.283185307179586; // 2π as a literal: no global read at module level (tree-shaking)
 
@@ -182,6 +182,7 @@ export class _TrialStream {
   private state: number[];
   /** Trials already taken from the current block (= _blockSize before the first block). */
   private position = _blockSize;
+  private readonly fill: _RecordFill;
 
   constructor(
     private readonly sampler: _Sampler,
@@ -190,6 +191,7 @@ export class _TrialStream {
     firstState: readonly number[],
   ) {
     this.state = [...firstState];
+    this.fill = _recordFill((evaluators[0] as _ModelEvaluator).names, _blockSize);
   }
 
   /** Evaluates the next `count` trials into `outs[k]` from `offset` on. */
@@ -198,8 +200,6 @@ export class _TrialStream {
     const col = sampler.columns;
     const evaluators = this.evaluators;
     const e0 = evaluators[0] as _ModelEvaluator;
-    const names = e0.names;
-    const n = names.length;
     let done = 0;
     while (done < count) {
       if (this.position === _blockSize) {
@@ -211,12 +211,13 @@ export class _TrialStream {
       const start = this.position;
       const size = Math.min(_blockSize - start, count - done);
       const at = offset + done - start;
+      const fill = this.fill;
       if (evaluators.length === 1) {
         const record = e0.record;
         const model = e0.model;
         const out = outs[0] as Float64Array;
         for (let t = start; t < start + size; t++) {
-          for (let i = 0; i < n; i++) record[names[i] as string] = col[i * _blockSize + t] as number;
+          fill(record, col, t);
           const y = model(record);
           if (typeof y !== "number" || y - y !== 0) e0.fail(y);
           out[at + t] = y;
@@ -226,7 +227,7 @@ export class _TrialStream {
         const record = e0.record;
         const m = evaluators.length;
         for (let t = start; t < start + size; t++) {
-          for (let i = 0; i < n; i++) record[names[i] as string] = col[i * _blockSize + t] as number;
+          fill(record, col, t);
           for (let k = 0; k < m; k++) {
             const evaluator = evaluators[k] as _ModelEvaluator;
             const y = evaluator.model(record);

@@ -166,22 +166,91 @@ export function _choleskyFactor(matrix: Float64Array, names: readonly string[]):
   return lower;
 }
 
+/**
+ * @internal Copies one point into the record: input i from `values[i · stride + at]` (stride 1: a point's
+ * values in canonical order; Monte Carlo: trial `at` of the sampled columns).
+ */
+export type _RecordFill = (record: Record<string, number>, values: ArrayLike<number>, at: number) => void;
+
+/**
+ * @internal The record fill for these names (canonical order). A loop `record[names[i]] = …` is one store site
+ * that sees every name, so V8 treats it as megamorphic and looks each name up (most of the time of a cheap model
+ * was spent there); here the first 16 names each have their own store site with a name fixed per fill, which
+ * stays monomorphic while a process evaluates one set of names. Same values, same order.
+ */
+export function _recordFill(names: readonly string[], stride: number): _RecordFill {
+  const n = names.length;
+  const s = stride;
+  const k0 = names[0] as string;
+  const k1 = names[1] as string;
+  const k2 = names[2] as string;
+  const k3 = names[3] as string;
+  const k4 = names[4] as string;
+  const k5 = names[5] as string;
+  const k6 = names[6] as string;
+  const k7 = names[7] as string;
+  const k8 = names[8] as string;
+  const k9 = names[9] as string;
+  const k10 = names[10] as string;
+  const k11 = names[11] as string;
+  const k12 = names[12] as string;
+  const k13 = names[13] as string;
+  const k14 = names[14] as string;
+  const k15 = names[15] as string;
+  return (record, col, t) => {
+    record[k0] = col[t] as number;
+    if (n === 1) return;
+    record[k1] = col[1 * s + t] as number;
+    if (n === 2) return;
+    record[k2] = col[2 * s + t] as number;
+    if (n === 3) return;
+    record[k3] = col[3 * s + t] as number;
+    if (n === 4) return;
+    record[k4] = col[4 * s + t] as number;
+    if (n === 5) return;
+    record[k5] = col[5 * s + t] as number;
+    if (n === 6) return;
+    record[k6] = col[6 * s + t] as number;
+    if (n === 7) return;
+    record[k7] = col[7 * s + t] as number;
+    if (n === 8) return;
+    record[k8] = col[8 * s + t] as number;
+    if (n === 9) return;
+    record[k9] = col[9 * s + t] as number;
+    if (n === 10) return;
+    record[k10] = col[10 * s + t] as number;
+    if (n === 11) return;
+    record[k11] = col[11 * s + t] as number;
+    if (n === 12) return;
+    record[k12] = col[12 * s + t] as number;
+    if (n === 13) return;
+    record[k13] = col[13 * s + t] as number;
+    if (n === 14) return;
+    record[k14] = col[14 * s + t] as number;
+    if (n === 15) return;
+    record[k15] = col[15 * s + t] as number;
+    if (n === 16) return;
+    for (let i = 16; i < n; i++) record[names[i] as string] = col[i * s + t] as number;
+  };
+}
+
 /** @internal Calls the model with one reused record and checks every output. */
 export class _ModelEvaluator {
   readonly record: Record<string, number>;
+  private readonly fill: _RecordFill;
   constructor(
     readonly model: Model,
     readonly names: readonly string[],
   ) {
     this.record = {};
     for (const name of names) this.record[name] = 0;
+    this.fill = _recordFill(names, 1);
   }
 
   /** Evaluates at `values` (canonical order). */
   evaluate(values: ArrayLike<number>): number {
     const record = this.record;
-    const names = this.names;
-    for (let i = 0; i < names.length; i++) record[names[i] as string] = values[i] as number;
+    this.fill(record, values, 0);
     const y = this.model(record);
     if (typeof y !== "number" || y - y !== 0) this.fail(y);
     return y;

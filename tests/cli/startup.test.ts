@@ -114,6 +114,35 @@ describe("start-up path of the built CLI", () => {
   });
 });
 
+describe("commands load only what the run uses", () => {
+  // A chart library or the progress bar loaded without --svg or without a terminal is start-up work for nothing:
+  // with the chart imported statically, `check` loaded d3-scale and cli-progress on every run (this test failed
+  // on that build).
+  const unusedPackages = ["d3-scale", "d3-shape", "cli-progress"];
+  it("check, compare and sweep without --svg, on a pipe, load no chart library, no chart code and no progress bar", () => {
+    const runs = [
+      ["check", "examples/reflow-oven-trip.json", "--trials", "200"],
+      ["check", "examples/heated-enclosure-adc.json", "--trials", "200"],
+      ["compare", "examples/reflow-oven-trip.json", "--trials", "200"],
+      ["sweep", "examples/heated-enclosure-adc.json", "--from", "20", "--to", "40", "--step", "10", "--trials", "200"],
+    ];
+    for (const args of runs) {
+      const run = loadedModules(args);
+      expect(run.status, args.join(" ")).toBe(0);
+      expect(run.urls.filter((u) => unusedPackages.some((p) => u.includes(`/node_modules/${p}/`))), args.join(" ")).toEqual([]);
+      expect(run.sources.filter((s) => /^src\/report\/\w*Chart\.ts$/.test(s)), args.join(" ")).toEqual([]);
+    }
+  });
+
+  it("--svg loads the chart code and d3 (the detector sees what it is looking for)", () => {
+    const dir = tempDir();
+    const run = loadedModules(["check", "examples/reflow-oven-trip.json", "--trials", "200", "--svg", join(dir, "bands.svg")]);
+    expect(run.status).toBe(0);
+    expect(run.urls.some((u) => u.includes("/node_modules/d3-scale/"))).toBe(true);
+    expect(run.sources).toContain("src/report/tripBandChart.ts");
+  });
+});
+
 describe("the emf/temp fast path", () => {
   it("knows the same thermocouple letters as the library", () => {
     expect([..._fastPathTypes].sort()).toEqual([...thermocoupleTypes].sort());

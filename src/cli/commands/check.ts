@@ -13,7 +13,6 @@ import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/d
 import { firmwareTripReport } from "../../report/firmwareTripReport.js";
 import { formatPartsCsv, formatTripReport, tripReportFromResult } from "../../report/renderTripReport.js";
 import type { TripReport } from "../../report/reportTypes.js";
-import { tripBandChartSvg } from "../../report/tripBandChart.js";
 import { designTrip } from "../../trip/designTrip.js";
 import type { CliIo } from "../io.js";
 import {
@@ -33,7 +32,7 @@ import {
   _planCommandOutputs,
   type OutputOptionValues,
 } from "../outputOptions.js";
-import { _startProgress } from "../progress.js";
+import { _loadProgress, _startProgress } from "../progress.js";
 import type { CommandContext } from "../runCli.js";
 import { _withDesignDynamics } from "../dynamicsOfDesign.js";
 
@@ -45,9 +44,10 @@ function checkExtraPaths(options: CheckOptions): string[] {
 }
 
 /** The contents of `check`'s extra files, same order as {@link checkExtraPaths}. @internal */
-function checkExtraContents(options: CheckOptions, report: TripReport): string[] {
+async function checkExtraContents(options: CheckOptions, report: TripReport): Promise<string[]> {
   const out: string[] = [];
-  if (options.svg !== undefined) out.push(tripBandChartSvg(report));
+  // The chart code (and its d3 scales) loads only when a chart is asked for.
+  if (options.svg !== undefined) out.push((await import("../../report/tripBandChart.js")).tripBandChartSvg(report));
   if (options.partsCsv !== undefined) {
     if (report.buildSheet === undefined) throw new CliError("this design has no build sheet to write a bill of materials from");
     out.push(formatPartsCsv(report.buildSheet));
@@ -165,10 +165,11 @@ export function registerCheckCommand(program: Command, context: CommandContext):
   command.action(async (path: string, options: CheckOptions) => {
     const plan = _planCommandOutputs(context.io, options, [path], checkExtraPaths(options));
     const { design, input } = await _loadDesign(context.io, path);
+    await _loadProgress(context.io);
     const report = _tripReportOfDesign(context.io, design, _analysisSettings(design, options));
     const named = _withDesignDynamics(design, design.name !== undefined ? { ...report, designName: design.name } : report);
     const text = formatTripReport(named, _chosenFormat(options));
-    const extras = checkExtraContents(options, named);
+    const extras = await checkExtraContents(options, named);
     _emitOutputs(context.io, plan, options, text, extras, [input]);
     if (!named.pass && options.reportOnly !== true) {
       context.io.writeErr(`hotjunction: ${path}: the design fails its margins (exit ${marginFailExitCode}; --report-only exits 0)\n`);

@@ -7,7 +7,7 @@ import type { Command } from "commander";
 import { referenceOptionFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { formatComparisonReport } from "../../report/renderComparisonReport.js";
 import { compareReferences } from "../../trip/compareReferences.js";
-import { _startProgress } from "../progress.js";
+import { _loadProgress, _startProgress } from "../progress.js";
 import { CliError, marginFailExitCode } from "../cliError.js";
 import {
   _addAnalysisOptions,
@@ -115,6 +115,7 @@ export function registerCompareCommand(program: Command, context: CommandContext
     const { design, input } = await _loadDesign(context.io, path);
     const settings = _analysisSettings(design, options);
     const references = [design.reference, ...(design.referenceAlternatives ?? [])].map(referenceOptionFromDesign);
+    await _loadProgress(context.io);
     const progress = _startProgress(context.io, "Monte Carlo");
     let comparison: ReturnType<typeof compareReferences>;
     try {

@@ -9,7 +9,6 @@ import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/d
 import type { DesignFile } from "../../design/designSchema.js";
 import type { MeasurementChain } from "../../chain/types.js";
 import { _realizedTripReference } from "../../trip/designTrip.js";
-import { errorBandChartSvg } from "../../report/errorBandChart.js";
 import { formatSweepReport } from "../../report/renderSweepReport.js";
 import type { ErrorSweep } from "../../report/reportTypes.js";
 import { CliError } from "../cliError.js";
@@ -28,7 +27,7 @@ import {
   type OutputOptionValues,
 } from "../outputOptions.js";
 import { _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
-import { _startProgress } from "../progress.js";
+import { _loadProgress, _startProgress } from "../progress.js";
 import type { CommandContext } from "../runCli.js";
 
 type SweepOptions = OutputOptionValues & AnalysisOptionValues & { from: number; to: number; step: number };
@@ -103,6 +102,7 @@ export function registerSweepCommand(program: Command, context: CommandContext):
         throw new CliError(`--step ${options.step} °C repeats the temperature ${temperatures[i]} °C; the smallest step is ${Number(smallest.toPrecision(1))} °C`);
       }
     }
+    await _loadProgress(context.io);
     const progress = _startProgress(context.io, "sweep");
     const rows: ErrorSweep["rows"][number][] = [];
     try {
@@ -139,7 +139,8 @@ export function registerSweepCommand(program: Command, context: CommandContext):
       ],
       methods: methodsWithoutAcceptance,
     };
-    const extras = plan.extras.length > 0 ? [errorBandChartSvg(sweep)] : [];
+    // The chart code (and its d3 scales and shapes) loads only when a chart is asked for.
+    const extras = plan.extras.length > 0 ? [(await import("../../report/errorBandChart.js")).errorBandChartSvg(sweep)] : [];
     _emitOutputs(context.io, plan, options, formatSweepReport(sweep, format), extras, [input]);
   });
   return command;

@@ -1,0 +1,70 @@
+// `check` and `compare` of every example design (their own 20,000 Monte Carlo trials) against a bare `node -e 0`
+// and the CLI's own start (`emf K 500`), in the same run, interleaved, each process timed from spawn to exit.
+// Reports the medians, the work beyond start-up (median minus the baseline's median) and the ratio; target
+// (issue 16): at most 150 ms of work beyond start-up for `check`. Needs `npm run build` first.
+// `npx tsx bench/cliCommands.bench.ts [runs]`. Not a test: nothing here passes or fails on a timing.
+import { spawnSync } from "node:child_process";
+import { existsSync, readdirSync } from "node:fs";
+import { fileURLToPath } from "node:url";
+
+const root = fileURLToPath(new URL("..", import.meta.url));
+const cli = `${root}dist/cli.js`;
+
+interface Case {
+  readonly name: string;
+  readonly args: readonly string[];
+}
+
+function timeOnce(args: readonly string[]): number {
+  const start = process.hrtime.bigint();
+  const result = spawnSync(process.execPath, [...args], { cwd: root, stdio: ["ignore", "ignore", "pipe"] });
+  const ms = Number(process.hrtime.bigint() - start) / 1e6;
+  // check/compare exit 3 when a design fails its margins (the kiln example's dynamics): still a full run.
+  if (result.status !== 0 && result.status !== 3) throw new Error(`${args.join(" ")} exited ${result.status}: ${String(result.stderr)}`);
+  return ms;
+}
+
+function median(values: readonly number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  const mid = sorted.length >> 1;
+  return sorted.length % 2 === 1 ? (sorted[mid] as number) : ((sorted[mid - 1] as number) + (sorted[mid] as number)) / 2;
+}
+
+/** Runs the cases interleaved `runs` times; returns one line per case. */
+export function runCliCommandsBench(runs = 7, budgetMs = 150): string[] {
+  if (!existsSync(cli)) return ["CLI commands: dist/cli.js is missing (run `npm run build`); skipped"];
+  const examples = readdirSync(`${root}examples`).filter((f) => f.endsWith(".json")).sort();
+  const baseline: Case = { name: "node -e 0", args: ["-e", "0"] };
+  const start: Case = { name: "hotjunction emf K 500", args: [cli, "emf", "K", "500"] };
+  const cases: Case[] = [];
+  for (const e of examples) {
+    cases.push({ name: `check ${e}`, args: [cli, "check", `examples/${e}`] });
+    cases.push({ name: `compare ${e}`, args: [cli, "compare", `examples/${e}`] });
+  }
+  const all = [baseline, start, ...cases];
+  const times = all.map(() => [] as number[]);
+  for (const c of all) timeOnce(c.args); // warm the file cache
+  for (let r = 0; r < runs; r++) all.forEach((c, i) => times[i]?.push(timeOnce(c.args)));
+  const base = median(times[0] as number[]);
+  const cliStart = median(times[1] as number[]);
+  const lines = [
+    `CLI commands (${runs} interleaved runs each, spawn to exit, medians; ${process.version})`,
+    `${baseline.name.padEnd(46)} ${base.toFixed(1)} ms`,
+    `${start.name.padEnd(46)} ${cliStart.toFixed(1)} ms (${(cliStart / base).toFixed(2)}x)`,
+  ];
+  cases.forEach((c, i) => {
+    const m = median(times[i + 2] as number[]);
+    const beyond = m - base;
+    lines.push(
+      `${c.name.padEnd(46)} ${m.toFixed(1)} ms: ${(m / base).toFixed(2)}x node -e 0, ${beyond.toFixed(0)} ms beyond it, ` +
+        `${(m - cliStart).toFixed(0)} ms beyond the CLI's own start` +
+        (c.name.startsWith("check") ? ` (budget ${budgetMs} ms beyond start-up: ${beyond <= budgetMs ? "meets" : "MISSES"})` : ""),
+    );
+  });
+  return lines;
+}
+
+if (process.argv[1] !== undefined && fileURLToPath(import.meta.url) === process.argv[1]) {
+  const runs = process.argv[2] !== undefined ? Number(process.argv[2]) : 7;
+  for (const line of runCliCommandsBench(runs)) console.log(line);
+}

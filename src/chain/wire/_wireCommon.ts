@@ -8,7 +8,8 @@ import { HotjunctionRangeError } from "../../errors.js";
 import { rectangular } from "../../uncertainty/rectangular.js";
 import { _limitDistribution, _requireObject, _requireOrderedPair, type _SourceContext } from "../_common.js";
 import type { ErrorSourceUnit } from "../types.js";
-import type { TemperatureRangeC, WireErrorSource, WireSourceElement } from "../wireTypes.js";
+import type { WireErrorSource } from "../types.js";
+import type { TemperatureRangeC, WireSourceElement } from "../wireTypes.js";
 
 /** @internal Source values by name (as in the chain models). */
 export type _Inputs = Readonly<Record<string, number>>;

@@ -34,7 +34,7 @@ import {
   type OutputOptionValues,
 } from "../outputOptions.js";
 import { _startProgress } from "../progress.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 import { _withDesignDynamics } from "../dynamicsOfDesign.js";
 
 type CheckOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean; readonly partsCsv?: string };

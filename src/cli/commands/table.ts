@@ -12,7 +12,7 @@ import { isHotjunctionError } from "../../errors.js";
 import { CliError, usageExitCode } from "../cliError.js";
 import { _emitOutputs, _planCommandOutputs } from "../outputOptions.js";
 import { _integerParser, _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 
 interface TableOptions {
   readonly kind: FirmwareTableKind;

@@ -202,15 +202,20 @@ export function _scanJson(text: string, options: ScanJsonOptions): JsonScanProbl
     return undefined;
   } catch (error) {
     if (!(error instanceof ScanFailure)) throw error;
-    let line = 1;
-    let lineStart = 0;
-    const limit = Math.min(error.index, text.length);
-    for (let i = 0; i < limit; i++) {
-      if (text.charCodeAt(i) === 0x0a) {
-        line++;
-        lineStart = i + 1;
-      }
-    }
-    return { line, column: limit - lineStart + 1, path: error.pathText, problem: error.problem };
+    return problemAt(text, error);
   }
+}
+
+/** The problem of a failed scan with the line and column (1-based) of its offset in `text`. */
+function problemAt(text: string, failure: ScanFailure): JsonScanProblem {
+  let line = 1;
+  let lineStart = 0;
+  const limit = Math.min(failure.index, text.length);
+  for (let i = 0; i < limit; i++) {
+    if (text.charCodeAt(i) === 0x0a) {
+      line++;
+      lineStart = i + 1;
+    }
+  }
+  return { line, column: limit - lineStart + 1, path: failure.pathText, problem: failure.problem };
 }

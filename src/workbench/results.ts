@@ -91,59 +91,70 @@ export function resultSections(a: WorkbenchAnalysis, pending: readonly Pending[]
   for (const p of a.problems) {
     out.push(el("p", { class: "hj-problem hj-analysis-problem", role: "alert" }, `✗ ${p.part === "trip" ? "Trip design" : p.part === "comparison" ? "Reference comparison" : "Fault review"}: ${p.message}`));
   }
-  if (report !== undefined) {
-    const summary = el("div", { class: "hj-summary", id: "hj-summary" });
-    summary.append(el("p", {}, "Design verdict: ", verdict(report.pass), ` (${report.setpoints.length} setpoint${report.setpoints.length === 1 ? "" : "s"}, judged on the ${methodName(a.methods.acceptanceMethod ?? "worst-case")} band)`));
-    for (const s of report.setpoints) summary.append(el("p", { class: "hj-reason" }, `${s.name}: `, verdict(s.pass), ` — ${s.reason}`));
-    out.push(section("hj-verdict", "Verdict", summary, el("p", { class: "hj-methods" }, methodsSentence(a))));
+  if (report !== undefined) reportSections(a, report, out);
+  buildSheetSection(a, out);
+  comparisonSection(a, pending, out);
+  faultSection(a, pending, out);
+  return out;
+}
 
-    const rows: Cell[][] = [];
-    for (const [si, s] of report.setpoints.entries()) {
-      for (const b of s.bands) {
-        const low = num(b.lowC, 2);
-        const high = num(b.highC, 2);
-        low.dataset["band"] = `${si}:${b.method}:low`;
-        high.dataset["band"] = `${si}:${b.method}:high`;
-        const mcPending = b.method === "monte-carlo" && !a.monteCarloFinal;
-        rows.push([
-          `${s.name} — ${methodName(b.method)}${mcPending ? " (first pass)" : ""}`,
-          low,
-          high,
-          num(b.highC - b.lowC, 2),
-          num(b.standardUncertaintyC, 3),
-          num(s.maxNormalOperatingC, 1),
-          num(s.hazardLimitC, 1),
-        ]);
-      }
-    }
-    const bands = table("Trip bands by method, °C", ["setpoint — method", "low °C", "high °C", "width °C", "u °C", "normal limit °C", "hazard limit °C"], rows, "hj-bands-table");
-    const margins = table(
-      "Margins of the accepted band, °C",
-      ["setpoint", "target °C", "nominal trip °C", "margin to normal °C", "margin to hazard °C", "verdict"],
-      report.setpoints.map((s) => [s.name, num(s.tripTemperatureC, 1), num(s.nominalTripC, 2), num(s.marginToNormalC, 2), num(s.marginToHazardC, 2), verdict(s.pass)]),
-      "hj-margins-table",
-    );
-    const chart = el("figure", { class: "hj-chart" });
-    if (a.bandsSvg !== undefined) {
-      const holder = el("div", { class: "hj-svg", role: "img", "aria-label": "Trip bands chart: each setpoint's bands by method against the normal and hazard limits (the same figures as the tables)" });
-      holder.innerHTML = a.bandsSvg;
-      chart.append(holder, el("figcaption", {}, "Trip bands against the normal and hazard limits (the chart of check --svg)."));
-    }
-    out.push(section("hj-bands", "Trip bands", chart, bands, margins));
+/** The verdict, trip-band and error-source sections of a trip report. */
+function reportSections(a: WorkbenchAnalysis, report: NonNullable<WorkbenchAnalysis["report"]>, out: HTMLElement[]): void {
+  const summary = el("div", { class: "hj-summary", id: "hj-summary" });
+  summary.append(el("p", {}, "Design verdict: ", verdict(report.pass), ` (${report.setpoints.length} setpoint${report.setpoints.length === 1 ? "" : "s"}, judged on the ${methodName(a.methods.acceptanceMethod ?? "worst-case")} band)`));
+  for (const s of report.setpoints) summary.append(el("p", { class: "hj-reason" }, `${s.name}: `, verdict(s.pass), ` — ${s.reason}`));
+  out.push(section("hj-verdict", "Verdict", summary, el("p", { class: "hj-methods" }, methodsSentence(a))));
 
-    const sourceTables = report.setpoints.map((s, si) => {
-      const total = s.errorSources.reduce((sum, e) => sum + e.worstCaseC, 0);
-      const sorted = [...s.errorSources].sort((x, y) => y.worstCaseC - x.worstCaseC);
-      return table(
-        `Error sources of ${s.name}, by share of the worst-case band`,
-        ["source", "what it is", "worst case ±°C", "share %", "u °C"],
-        sorted.map((e) => [e.name, e.description, num(e.worstCaseC, 3), num(total > 0 ? (100 * e.worstCaseC) / total : 0, 1), num(e.standardUncertaintyC, 3)]),
-        `hj-sources-${si}`,
-      );
-    });
-    out.push(section("hj-sources", "Error sources", ...sourceTables));
+  const rows: Cell[][] = [];
+  for (const [si, s] of report.setpoints.entries()) {
+    for (const b of s.bands) {
+      const low = num(b.lowC, 2);
+      const high = num(b.highC, 2);
+      low.dataset["band"] = `${si}:${b.method}:low`;
+      high.dataset["band"] = `${si}:${b.method}:high`;
+      const mcPending = b.method === "monte-carlo" && !a.monteCarloFinal;
+      rows.push([
+        `${s.name} — ${methodName(b.method)}${mcPending ? " (first pass)" : ""}`,
+        low,
+        high,
+        num(b.highC - b.lowC, 2),
+        num(b.standardUncertaintyC, 3),
+        num(s.maxNormalOperatingC, 1),
+        num(s.hazardLimitC, 1),
+      ]);
+    }
   }
+  const bands = table("Trip bands by method, °C", ["setpoint — method", "low °C", "high °C", "width °C", "u °C", "normal limit °C", "hazard limit °C"], rows, "hj-bands-table");
+  const margins = table(
+    "Margins of the accepted band, °C",
+    ["setpoint", "target °C", "nominal trip °C", "margin to normal °C", "margin to hazard °C", "verdict"],
+    report.setpoints.map((s) => [s.name, num(s.tripTemperatureC, 1), num(s.nominalTripC, 2), num(s.marginToNormalC, 2), num(s.marginToHazardC, 2), verdict(s.pass)]),
+    "hj-margins-table",
+  );
+  const chart = el("figure", { class: "hj-chart" });
+  if (a.bandsSvg !== undefined) {
+    const holder = el("div", { class: "hj-svg", role: "img", "aria-label": "Trip bands chart: each setpoint's bands by method against the normal and hazard limits (the same figures as the tables)" });
+    holder.innerHTML = a.bandsSvg;
+    chart.append(holder, el("figcaption", {}, "Trip bands against the normal and hazard limits (the chart of check --svg)."));
+  }
+  out.push(section("hj-bands", "Trip bands", chart, bands, margins));
 
+  const sourceTables = report.setpoints.map((s, si) => {
+    const total = s.errorSources.reduce((sum, e) => sum + e.worstCaseC, 0);
+    const sorted = [...s.errorSources].sort((x, y) => y.worstCaseC - x.worstCaseC);
+    return table(
+      `Error sources of ${s.name}, by share of the worst-case band`,
+      ["source", "what it is", "worst case ±°C", "share %", "u °C"],
+      sorted.map((e) => [e.name, e.description, num(e.worstCaseC, 3), num(total > 0 ? (100 * e.worstCaseC) / total : 0, 1), num(e.standardUncertaintyC, 3)]),
+      `hj-sources-${si}`,
+    );
+  });
+  out.push(section("hj-sources", "Error sources", ...sourceTables));
+}
+
+/** The build-sheet section (comparator designs: thresholds, networks, reference; ADC designs: the report's details). */
+function buildSheetSection(a: WorkbenchAnalysis, out: HTMLElement[]): void {
+  const report = a.report;
   const trip = a.trip;
   if (trip !== undefined) {
     const rows = trip.setpoints.map((s) => {
@@ -184,7 +195,10 @@ export function resultSections(a: WorkbenchAnalysis, pending: readonly Pending[]
   } else if (report !== undefined && a.kind === "adc") {
     out.push(section("hj-build", "Build sheet", el("ul", { class: "hj-list" }, ...report.details.map((d) => el("li", {}, d)))));
   }
+}
 
+/** The reference-comparison section, or its placeholder while the worker computes it. */
+function comparisonSection(a: WorkbenchAnalysis, pending: readonly Pending[], out: HTMLElement[]): void {
   if (a.comparison !== undefined) {
     const c = a.comparison;
     const rows: Cell[][] = [];
@@ -204,7 +218,10 @@ export function resultSections(a: WorkbenchAnalysis, pending: readonly Pending[]
   } else if (pending.includes("comparison") && a.kind === "comparator") {
     out.push(section("hj-comparison", "Reference comparison", el("p", { class: "hj-pending" }, "Computing in the background…")));
   }
+}
 
+/** The fault-review section, or its placeholder while the worker computes it. */
+function faultSection(a: WorkbenchAnalysis, pending: readonly Pending[], out: HTMLElement[]): void {
   if (a.faults !== undefined) {
     const f = a.faults;
     const counts = table(
@@ -239,5 +256,4 @@ export function resultSections(a: WorkbenchAnalysis, pending: readonly Pending[]
   } else if (pending.includes("faults")) {
     out.push(section("hj-faults", "Fault review", el("p", { class: "hj-pending" }, "Computing in the background…")));
   }
-  return out;
 }

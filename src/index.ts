@@ -83,6 +83,7 @@ export {
   type FirmwareColumnFormat,
   type FirmwareNumberType,
   type FirmwareTable,
+  type FirmwareTableChain,
   type FirmwareTableColumn,
   type FirmwareTableErrorBound,
   type FirmwareTableErrorFound,

@@ -8,6 +8,7 @@ import { area, line } from "d3-shape";
 import { _describeMethods, _methodShortName } from "./formatting.js";
 import type { ErrorSweep } from "./reportTypes.js";
 import { _bottomAxis, _element, _leftAxis, _methodFill, _splitCaution, _svgDocument, _text, _wrapText } from "./svg.js";
+import { _propagationMethods } from "../uncertainty/types.js";
 
 /**
  * Draws an error sweep as an SVG document (text).
@@ -37,7 +38,7 @@ export function errorBandChartSvg(sweep: ErrorSweep): string {
   const methods = sweep.rows[0]?.bands.map((b) => b.method) ?? [];
   const parts: string[] = [_text(width / 2, 26, title, { "text-anchor": "middle", "font-size": 16, "font-weight": "bold", class: "chart-title" })];
   // Widest band first so narrower ones stay visible on top.
-  const order = [...methods].sort((a, b) => ["worst-case", "rss", "monte-carlo"].indexOf(a) - ["worst-case", "rss", "monte-carlo"].indexOf(b));
+  const order = [...methods].sort((a, b) => _propagationMethods.indexOf(a) - _propagationMethods.indexOf(b));
   const labels: { y: number; text: string }[] = [];
   for (const method of order) {
     const index = methods.indexOf(method);

@@ -516,6 +516,7 @@ export {
   type RunawayChartOptions,
   runawayChartSvg,
   type RunawayProcess,
+  type RunawayFigures,
   type RunawayResponse,
   type RunawayScenario,
   type RunawaySeries,

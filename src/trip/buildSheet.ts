@@ -54,16 +54,6 @@ export function resistorDesignator(index: number, count: number, networkIndex = 
   return networkCount > 1 ? `divider ${networkIndex + 1} ${position}` : position;
 }
 
-export type {
-  BuildSheetAdcSetpoint,
-  BuildSheetMidRail,
-  BuildSheetNetwork,
-  BuildSheetPart,
-  BuildSheetResistor,
-  BuildSheetSetpoint,
-  BuildSheetShuntResistor,
-  TripBuildSheet,
-} from "./types.js";
 
 /** Standard power ratings of resistors, W (common practice, no source). */
 const ratingsWatts = [0.0625, 0.1, 0.125, 0.25, 0.5, 1, 2, 3, 5, 10];

@@ -6,7 +6,7 @@
  */
 import { HotjunctionRangeError } from "../../errors.js";
 import { rectangular } from "../../uncertainty/rectangular.js";
-import { _limitDistribution, _requireObject, _requireOrderedPair, type _SourceContext } from "../_common.js";
+import { _checkTemperatureRange, _limitDistribution, type _SourceContext } from "../_common.js";
 import type { ErrorSourceUnit } from "../types.js";
 import type { WireErrorSource } from "../types.js";
 import type { TemperatureRangeC, WireSourceElement } from "../wireTypes.js";
@@ -16,20 +16,7 @@ export type _Inputs = Readonly<Record<string, number>>;
 
 /** @internal Checks a temperature range object `{ minC, maxC }` (finite, min ≤ max, not below absolute zero). */
 export function _checkRange(value: unknown, quantity: string, context: string): TemperatureRangeC {
-  const o = _requireObject(value, quantity, context);
-  const [minC, maxC] = _requireOrderedPair(o["minC"], o["maxC"], `${quantity}.minC`, `${quantity}.maxC`, "°C", context);
-  if (minC < -273.15) {
-    throw new HotjunctionRangeError({
-      code: "OUT_OF_RANGE",
-      quantity: `${quantity}.minC`,
-      value: minC,
-      min: -273.15,
-      unit: "°C",
-      context,
-      problem: "is below absolute zero",
-    });
-  }
-  return { minC, maxC };
+  return _checkTemperatureRange(value, quantity, `${quantity}.minC`, `${quantity}.maxC`, context);
 }
 
 /** @internal Throws unless `inner` lies within `outer` (both °C ranges). */

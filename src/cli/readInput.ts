@@ -38,6 +38,9 @@ function reasonOf(error: unknown): string {
   return code ?? String(error);
 }
 
+// Deliberately alike: src/design/loadDesignFile.ts reads a file with the same steps (one open descriptor, a
+// regular-file check on it, a size cap, strict UTF-8); each throws its own family (CliError with exit codes here,
+// DesignFileError there) and the design entry may not import the CLI.
 /**
  * Reads an input file given on the command line.
  * @param cwd - directory relative paths are resolved from

@@ -43,6 +43,8 @@ function describeChar(ch: string | undefined): string {
   return `"${ch}"`;
 }
 
+// Deliberately alike: the workbench's form (src/workbench/schemaForm.ts `formatPath`) formats paths the same way
+// for its message slots; it reaches the library through public entries only.
 /** Formats a path of keys and indices the way the messages show it: `a.b[2].c`. @internal */
 export function _formatPath(path: readonly (string | number)[]): string {
   let text = "";

@@ -361,6 +361,7 @@ export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenar
   }
 
   const peak = peakC as number;
+  // Deliberately alike: settlesBelowTrip below returns the same fields for the other outcome (no trip).
   return {
     scenario: sc,
     tripped: true,
@@ -406,6 +407,7 @@ function settlesBelowTrip(
     rec.add(i * h, start + (x[system.trueIndex] as number), start + (x[system.indicatedIndex] as number), 0, i === STEPS_TARGET);
   }
   const peak = start + eqDev;
+  // Deliberately alike: _simulateCompiled returns the same fields for a trip.
   return {
     scenario: sc,
     tripped: false,

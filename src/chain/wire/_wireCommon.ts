@@ -6,7 +6,7 @@
  */
 import { HotjunctionRangeError } from "../../errors.js";
 import { rectangular } from "../../uncertainty/rectangular.js";
-import { _checkTemperatureRange, _limitDistribution, type _SourceContext } from "../_common.js";
+import { _checkTemperatureRange, _source, type _SourceContext } from "../_common.js";
 import type { ErrorSourceUnit } from "../types.js";
 import type { WireErrorSource } from "../types.js";
 import type { TemperatureRangeC, WireSourceElement } from "../wireTypes.js";
@@ -53,14 +53,8 @@ export function _wireSource(
   limit: number,
   center = 0,
 ): WireErrorSource {
-  return {
-    name,
-    element,
-    description,
-    unit,
-    limit,
-    distribution: _limitDistribution(name, limit, center, ctx.overrides?.[name]),
-  };
+  // The chain's one source builder; only the element's type is narrower here.
+  return _source(ctx, name, element, description, unit, limit, center) as WireErrorSource;
 }
 
 /**

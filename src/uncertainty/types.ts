@@ -22,11 +22,11 @@ export interface InputDistribution {
   readonly degreesOfFreedom?: number;
 }
 
-/** The propagation methods, in their reporting order: the one list every module reads. @internal */
-export const _propagationMethods = ["worst-case", "rss", "monte-carlo"] as const;
-
 /** Propagation methods. */
-export type PropagationMethod = (typeof _propagationMethods)[number];
+export type PropagationMethod = "worst-case" | "rss" | "monte-carlo";
+
+/** The propagation methods, in their reporting order: the one list every module reads. @internal */
+export const _propagationMethods = ["worst-case", "rss", "monte-carlo"] as const satisfies readonly PropagationMethod[];
 
 /** A propagation model: maps a record of input values (by input name) to one output value. */
 export type PropagationModel<Name extends string = string> = (inputs: Readonly<Record<Name, number>>) => number;

@@ -6,13 +6,13 @@ double (what `repr` writes here and `String(x)` gives in JavaScript) is exactly 
 float path and the decimal.js check path (which reads `String(x)`) share one source with no digit lost. The
 script asserts that for every number before writing.
 
-Usage: python3 scripts/generateTypeData.py ../shared/its90/coefficients.json
+Usage: python3 scripts/generateTypeData.py [coefficients.json]   (default: scripts/its90/coefficients.json, in the repo)
 The generated modules are committed; the project never reads the input file at build or test time.
 """
 import json, sys, pathlib
 from decimal import Decimal
 
-src = sys.argv[1] if len(sys.argv) > 1 else "../shared/its90/coefficients.json"
+src = sys.argv[1] if len(sys.argv) > 1 else str(pathlib.Path(__file__).resolve().parent / "its90" / "coefficients.json")
 data = json.load(open(src), parse_float=str, parse_int=str)
 out = pathlib.Path(__file__).resolve().parent.parent / "src" / "data"
 

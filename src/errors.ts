@@ -241,6 +241,7 @@ export function _requireNonNegative(value: unknown, quantity: string, unit?: str
  * Throws unless `value` is a fraction limit in [0, 1) (0.01 for 1 %).
  * @internal
  */
+// Deliberately alike: _requireProbability below has the same error object with its own bound and problem text.
 export function _requireFraction(value: unknown, quantity: string, context?: string): number {
   const x = _requireNonNegative(value, quantity, "fraction", context);
   if (x >= 1) {
@@ -262,6 +263,7 @@ export function _requireFraction(value: unknown, quantity: string, context?: str
  * Throws unless `value` is a number in the open interval (0, 1).
  * @internal
  */
+// Deliberately alike: _requireFraction above has the same error object with its own bound and problem text.
 export function _requireProbability(value: unknown, quantity: string, context?: string): number {
   const x = _requireFinite(value, quantity, undefined, context);
   if (!(x > 0 && x < 1)) {

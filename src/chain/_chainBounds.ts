@@ -6,7 +6,7 @@
 import { _invalidChoice, _requireFinite } from "../errors.js";
 import { normalQuantile } from "../uncertainty/normalQuantile.js";
 import { propagate } from "../uncertainty/propagate.js";
-import type { PropagationMethod } from "../uncertainty/types.js";
+import { _propagationMethods, type PropagationMethod } from "../uncertainty/types.js";
 import { _requireObject } from "./_common.js";
 import type { ChainBound, ChainContribution, ChainModel } from "./types.js";
 
@@ -35,7 +35,7 @@ function checkTrials(o: Record<string, unknown>, context: string): number {
   return given === undefined ? 100_000 : _requireFinite(given, key, undefined, context);
 }
 
-const allMethods: readonly PropagationMethod[] = ["worst-case", "rss", "monte-carlo"];
+const allMethods: readonly PropagationMethod[] = _propagationMethods;
 
 /** @internal Checked options with defaults filled in. */
 export interface _CheckedBoundsOptions {

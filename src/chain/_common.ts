@@ -38,14 +38,22 @@ export function _optionalLimit(value: unknown, quantity: string, unit: string, c
   return value === undefined ? 0 : _requireNonNegative(value, quantity, unit, context);
 }
 
-/** @internal Checks an ambient range (within −273.15 … 1000 °C, min ≤ max). */
+/** @internal Checks an ambient range (finite, min ≤ max, not below absolute zero). */
 export function _checkAmbient(ambient: unknown, context: string): AmbientRange {
-  const o = _requireObject(ambient, "ambient", context);
-  const [minC, maxC] = _requireOrderedPair(o["minC"], o["maxC"], "ambient minC", "ambient maxC", "°C", context);
+  return _checkTemperatureRange(ambient, "ambient", "ambient minC", "ambient maxC", context);
+}
+
+/**
+ * @internal Checks a temperature range object `{ minC, maxC }` (finite, min ≤ max, not below absolute zero); the
+ * ambient range and the wire's ranges name their ends their own way (`ambient minC`, `cable.ambient.minC`).
+ */
+export function _checkTemperatureRange(value: unknown, quantity: string, minName: string, maxName: string, context: string): AmbientRange {
+  const o = _requireObject(value, quantity, context);
+  const [minC, maxC] = _requireOrderedPair(o["minC"], o["maxC"], minName, maxName, "°C", context);
   if (minC < -273.15) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",
-      quantity: "ambient minC",
+      quantity: minName,
       value: minC,
       min: -273.15,
       unit: "°C",

@@ -11,8 +11,7 @@
  * These names are a contract shared with the trip, design, faults and firmware areas: add, don't rename.
  * @module
  */
-import type { WireDescription } from "./wire/wireStage.js";
-import type { WireSourceElement } from "./wireTypes.js";
+import type { WireDescription, WireSourceElement } from "./wireTypes.js";
 import type { ThermocoupleType } from "../data/thermocoupleData.js";
 import type { Distribution, DistributionKind, Model, PropagationMethod } from "../uncertainty/types.js";
 
@@ -579,3 +578,6 @@ export interface NominalTrip {
   /** Hot-junction temperature at which it releases (signal falling), °C. */
   readonly releaseC: number;
 }
+
+/** An error source of the wire: a {@link ChainErrorSource} listed under a wire role. */
+export type WireErrorSource = Omit<ChainErrorSource, "element"> & { readonly element: WireSourceElement };

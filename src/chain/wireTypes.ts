@@ -10,7 +10,6 @@
  * @module
  */
 import type { ContactMetalName } from "../data/wireAlloys.js";
-import type { ChainErrorSource } from "./types.js";
 
 /** A temperature range, °C (min ≤ max; a single temperature is min = max). */
 export interface TemperatureRangeC {
@@ -246,5 +245,12 @@ export type WireElement =
  */
 export type WireSourceElement = "cable" | "connector" | "loop" | "probe";
 
-/** An error source of the wire: a {@link ChainErrorSource} listed under a wire role. */
-export type WireErrorSource = Omit<ChainErrorSource, "element"> & { readonly element: WireSourceElement };
+/** The wire's elements, each optional (plain data). */
+export interface WireDescription {
+  readonly cable?: ExtensionCableElement;
+  /** Connectors and terminal blocks; sources are named `connector.*` for one, `connector1.*`, `connector2.*` … for several. */
+  readonly connectors?: readonly ConnectorElement[];
+  readonly loop?: LoopResistanceElement;
+  readonly leakage?: InsulationLeakageElement;
+  readonly ageing?: AgeingElement;
+}

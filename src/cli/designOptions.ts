@@ -10,7 +10,7 @@ import type { CliIo } from "./io.js";
 import { marginFailExitCode } from "./cliError.js";
 import { _integerParser } from "./parseArgs.js";
 import { _readInputFile, type InputIdentity } from "./readInput.js";
-import type { PropagationMethod } from "../uncertainty/types.js";
+import { _propagationMethods, type PropagationMethod } from "../uncertainty/types.js";
 
 /** Analysis options as parsed. */
 export interface AnalysisOptionValues {
@@ -67,7 +67,7 @@ export function _analysisSettings(design: DesignFile, values: AnalysisOptionValu
 /** The method line of reports for these settings. @internal */
 export function _methodInfo(settings: AnalysisSettings): ReportMethodInfo {
   return {
-    methods: ["worst-case", "rss", "monte-carlo"],
+    methods: _propagationMethods,
     acceptanceMethod: settings.acceptanceMethod,
     coverage: settings.coverage,
     trials: settings.trials,

@@ -7,7 +7,7 @@ import { Command, CommanderError } from "commander";
 import { CAUTION_TEXT } from "../caution.js";
 import { _exitCodeHelp, _oneLine, usageExitCode } from "./cliError.js";
 import type { CliIo } from "./io.js";
-import type { CommandContext } from "./runCli.js";
+import type { CommandContext } from "./commandContext.js";
 import { _packageVersion } from "./version.js";
 
 /** Adds one command to the program and returns it. */

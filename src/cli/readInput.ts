@@ -4,6 +4,7 @@
  * and inode) is kept so the writer can check at write time that no output lands on an input.
  * @module
  */
+import { _fileKind } from "./fileKind.js";
 import { closeSync, constants, fstatSync, openSync, readSync, statSync, type Stats } from "node:fs";
 import { resolve } from "node:path";
 import { CliError, failureExitCode, usageExitCode } from "./cliError.js";
@@ -28,14 +29,6 @@ export interface InputFile {
 /** Largest input the CLI reads, bytes (the design-file cap, 1 MiB). */
 export const inputMaxBytes = 1_048_576;
 
-function kindOf(stats: Stats): string {
-  if (stats.isFIFO()) return "a FIFO";
-  if (stats.isCharacterDevice()) return "a character device";
-  if (stats.isBlockDevice()) return "a block device";
-  if (stats.isDirectory()) return "a directory";
-  if (stats.isSocket()) return "a socket";
-  return "not a regular file";
-}
 
 function reasonOf(error: unknown): string {
   const code = (error as NodeJS.ErrnoException).code;
@@ -45,6 +38,9 @@ function reasonOf(error: unknown): string {
   return code ?? String(error);
 }
 
+// Deliberately alike: src/design/loadDesignFile.ts reads a file with the same steps (one open descriptor, a
+// regular-file check on it, a size cap, strict UTF-8); each throws its own family (CliError with exit codes here,
+// DesignFileError there) and the design entry may not import the CLI.
 /**
  * Reads an input file given on the command line.
  * @param cwd - directory relative paths are resolved from
@@ -62,7 +58,7 @@ export function _readInputFile(cwd: string, displayPath: string): InputFile {
   } catch (error) {
     throw cannot(reasonOf(error));
   }
-  if (!before.isFile()) throw cannot(`it is ${kindOf(before)}, not a regular file`);
+  if (!before.isFile()) throw cannot(`it is ${_fileKind(before)}, not a regular file`);
   let fd: number;
   try {
     // O_NONBLOCK: should a FIFO be swapped in after the check, opening it returns at once instead of waiting.
@@ -74,7 +70,7 @@ export function _readInputFile(cwd: string, displayPath: string): InputFile {
   let stats: Stats;
   try {
     stats = fstatSync(fd);
-    if (!stats.isFile()) throw cannot(`it is ${kindOf(stats)}, not a regular file`);
+    if (!stats.isFile()) throw cannot(`it is ${_fileKind(stats)}, not a regular file`);
     if (stats.dev !== before.dev || stats.ino !== before.ino) throw cannot("the file was replaced while it was opened");
     if (stats.size > inputMaxBytes) throw cannot(`it is larger than ${inputMaxBytes} bytes (1 MiB)`);
     const buffer = Buffer.alloc(inputMaxBytes + 1);

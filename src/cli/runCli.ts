@@ -8,12 +8,6 @@ import { _describeFailure, usageExitCode } from "./cliError.js";
 import { _tryFastPath } from "./fastPath.js";
 import type { CliIo } from "./io.js";
 
-/** What every command registration receives. */
-export interface CommandContext {
-  readonly io: CliIo;
-  /** Exit code of a command that completed (0 unless it sets another, e.g. a design failing its margins). */
-  readonly outcome?: { exitCode: number };
-}
 
 /** Options of {@link _runCli}. @internal */
 export interface RunCliOptions {

@@ -13,6 +13,7 @@
  *   backup). Any failure removes the temporary files and leaves every previous file as it was.
  * @module
  */
+import { _fileKind } from "./fileKind.js";
 import {
   chmodSync,
   closeSync,
@@ -90,16 +91,6 @@ function sameFile(a: FileIdentity, b: FileIdentity): boolean {
   return a.stats !== undefined && b.stats !== undefined && a.stats.dev === b.stats.dev && a.stats.ino === b.stats.ino;
 }
 
-/** What kind of thing that is not a regular file an lstat found. */
-function kindOf(stats: Stats): string {
-  if (stats.isSymbolicLink()) return "a symbolic link";
-  if (stats.isFIFO()) return "a FIFO";
-  if (stats.isCharacterDevice()) return "a character device";
-  if (stats.isBlockDevice()) return "a block device";
-  if (stats.isDirectory()) return "a directory";
-  if (stats.isSocket()) return "a socket";
-  return "not a regular file";
-}
 
 function lstatOrUndefined(path: string): Stats | undefined {
   try {
@@ -143,7 +134,7 @@ export function _planOutputs(outputPaths: readonly string[], options: PlanOutput
     const link = lstatOrUndefined(absolutePath);
     if (link !== undefined && link.isDirectory()) throw new CliError(`cannot write ${displayPath}: it is a directory`, usageExitCode);
     if (link !== undefined && !link.isFile()) {
-      throw new CliError(`refusing to write ${displayPath}: it is ${kindOf(link)}, not a regular file`, usageExitCode);
+      throw new CliError(`refusing to write ${displayPath}: it is ${_fileKind(link)}, not a regular file`, usageExitCode);
     }
     if (link !== undefined && !options.force) {
       throw new CliError(`refusing to overwrite ${displayPath}: it exists (add --force to replace it)`, usageExitCode);
@@ -274,7 +265,7 @@ function verify(entries: readonly OutputContent[], options: WriteOutputsOptions)
       }
     }
     if (!link.isFile()) {
-      throw new CliError(`refusing to write ${output.displayPath}: it became ${kindOf(link)} ${suffix}`, usageExitCode);
+      throw new CliError(`refusing to write ${output.displayPath}: it became ${_fileKind(link)} ${suffix}`, usageExitCode);
     }
     if (!options.force) {
       throw new CliError(`refusing to overwrite ${output.displayPath}: it was created ${suffix} (add --force to replace it)`, usageExitCode);

@@ -7,6 +7,7 @@
  * @module
  */
 import { z } from "zod";
+import { _propagationMethods } from "../uncertainty/types.js";
 
 const temperatureC = (description: string) => z.number().min(-273.15).max(3000).describe(`${description}, °C`);
 const fraction = (description: string) => z.number().min(0).max(1).describe(`${description}, ± fraction (0.01 = 1 %)`);
@@ -259,7 +260,7 @@ const distributionOverrideSchema = z
 const analysisSchema = z
   .strictObject({
     acceptanceMethod: z
-      .enum(["worst-case", "rss", "monte-carlo"])
+      .enum(_propagationMethods)
       .optional()
       .describe("method whose band decides pass/fail (default worst-case)"),
     monteCarloTrials: z.number().int().min(100).max(10_000_000).optional().describe("Monte Carlo trials"),

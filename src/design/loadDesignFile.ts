@@ -16,6 +16,8 @@ export interface LoadDesignFileOptions {
   readonly fileName?: string;
 }
 
+// Deliberately alike: src/cli/readInput.ts (`_readInputFile`) reads a file with the same steps and throws the
+// CLI's errors; this entry may not import the CLI, and its errors are DesignFileError.
 /**
  * Loads and validates a design file.
  * @param path - path of a JSON design file (at most 1 MiB)

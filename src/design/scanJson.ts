@@ -43,6 +43,8 @@ function describeChar(ch: string | undefined): string {
   return `"${ch}"`;
 }
 
+// Deliberately alike: the workbench's form (src/workbench/schemaForm.ts `formatPath`) formats paths the same way
+// for its message slots; it reaches the library through public entries only.
 /** Formats a path of keys and indices the way the messages show it: `a.b[2].c`. @internal */
 export function _formatPath(path: readonly (string | number)[]): string {
   let text = "";
@@ -202,15 +204,20 @@ export function _scanJson(text: string, options: ScanJsonOptions): JsonScanProbl
     return undefined;
   } catch (error) {
     if (!(error instanceof ScanFailure)) throw error;
-    let line = 1;
-    let lineStart = 0;
-    const limit = Math.min(error.index, text.length);
-    for (let i = 0; i < limit; i++) {
-      if (text.charCodeAt(i) === 0x0a) {
-        line++;
-        lineStart = i + 1;
-      }
-    }
-    return { line, column: limit - lineStart + 1, path: error.pathText, problem: error.problem };
+    return problemAt(text, error);
   }
+}
+
+/** The problem of a failed scan with the line and column (1-based) of its offset in `text`. */
+function problemAt(text: string, failure: ScanFailure): JsonScanProblem {
+  let line = 1;
+  let lineStart = 0;
+  const limit = Math.min(failure.index, text.length);
+  for (let i = 0; i < limit; i++) {
+    if (text.charCodeAt(i) === 0x0a) {
+      line++;
+      lineStart = i + 1;
+    }
+  }
+  return { line, column: limit - lineStart + 1, path: failure.pathText, problem: failure.problem };
 }

@@ -158,17 +158,7 @@ export function dynamicsCheckJson(check: DynamicsCheck, options: DynamicsCheckJs
       startC: r.scenario.startC,
       tripTemperatureC: r.scenario.tripTemperatureC,
       hazardLimitC: r.scenario.hazardLimitC,
-      tripped: r.tripped,
-      trueCrossingSeconds: r.trueCrossingSeconds,
-      decisionSeconds: r.decisionSeconds,
-      heatOffSeconds: r.heatOffSeconds,
-      responseTimeSeconds: r.responseTimeSeconds,
-      trueAtHeatOffC: r.trueAtHeatOffC,
-      peakTrueC: r.peakTrueC,
-      peakSeconds: r.peakSeconds,
-      overshootC: r.overshootC,
-      dynamicMarginC: r.dynamicMarginC,
-      exceedsHazard: r.exceedsHazard,
+      ..._runawayFigures(r),
       timeFromTripToHazardSeconds: r.timeFromTripToHazardSeconds,
       stepSeconds: r.stepSeconds,
       ...(options.includeSeries === true
@@ -177,5 +167,41 @@ export function dynamicsCheckJson(check: DynamicsCheck, options: DynamicsCheckJs
     })),
     noise: check.noise === null ? null : { ...check.noise },
     assumptions: [...check.assumptions],
+  };
+}
+
+/** The figures of a runaway that every JSON case carries, in their printed order (no series, no scenario). */
+export type RunawayFigures = Pick<
+  RunawayResponse,
+  | "tripped"
+  | "trueCrossingSeconds"
+  | "decisionSeconds"
+  | "heatOffSeconds"
+  | "responseTimeSeconds"
+  | "trueAtHeatOffC"
+  | "peakTrueC"
+  | "peakSeconds"
+  | "overshootC"
+  | "dynamicMarginC"
+  | "exceedsHazard"
+>;
+
+/**
+ * The figures of a runaway response in their printed order: one assembly for {@link dynamicsCheckJson} and the
+ * trip design's dynamics cases (`trip/tripDynamics.ts`). @internal
+ */
+export function _runawayFigures(r: RunawayResponse): RunawayFigures {
+  return {
+    tripped: r.tripped,
+    trueCrossingSeconds: r.trueCrossingSeconds,
+    decisionSeconds: r.decisionSeconds,
+    heatOffSeconds: r.heatOffSeconds,
+    responseTimeSeconds: r.responseTimeSeconds,
+    trueAtHeatOffC: r.trueAtHeatOffC,
+    peakTrueC: r.peakTrueC,
+    peakSeconds: r.peakSeconds,
+    overshootC: r.overshootC,
+    dynamicMarginC: r.dynamicMarginC,
+    exceedsHazard: r.exceedsHazard,
   };
 }

@@ -33,5 +33,6 @@ export {
   type DynamicsCheckInput,
   type DynamicsCheckJsonOptions,
   type DynamicsThreshold,
+  type RunawayFigures,
 } from "./checkDynamics.js";
 export { runawayChartSvg, type RunawayChartOptions } from "./runawayChartSvg.js";

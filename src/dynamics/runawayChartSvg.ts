@@ -4,6 +4,7 @@
  * library), readable in greys without colour.
  * @module
  */
+import { _wrapWords } from "../textWrap.js";
 import { _requireInRange } from "../errors.js";
 import { CAUTION_TEXT } from "../caution.js";
 import type { RunawayResponse } from "./simulateRunaway.js";
@@ -22,18 +23,6 @@ function escapeXml(text: string): string {
   return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 }
 
-function wrap(text: string, width: number): string[] {
-  const lines: string[] = [];
-  let current = "";
-  for (const word of text.split(" ")) {
-    if (current.length > 0 && current.length + 1 + word.length > width) {
-      lines.push(current);
-      current = word;
-    } else current = current.length > 0 ? `${current} ${word}` : word;
-  }
-  if (current.length > 0) lines.push(current);
-  return lines;
-}
 
 function px(v: number): string {
   return String(Math.round(v * 100) / 100);
@@ -152,7 +141,7 @@ export function runawayChartSvg(response: RunawayResponse, options: RunawayChart
     ? `response ${response.responseTimeSeconds?.toFixed(2)} s, peak ${response.peakTrueC.toFixed(1)} °C, margin ${response.dynamicMarginC.toFixed(1)} °C`
     : `no trip: settles at ${response.peakTrueC.toFixed(1)} °C, margin ${response.dynamicMarginC.toFixed(1)} °C`;
   parts.push(`<text x="${left}" y="${height - 40}">${escapeXml(verdict)}</text>`);
-  wrap(CAUTION_TEXT, Math.max(40, Math.floor((width - left - 10) / 5.4))).forEach((line, k) => {
+  _wrapWords(CAUTION_TEXT, Math.max(40, Math.floor((width - left - 10) / 5.4))).forEach((line, k) => {
     parts.push(`<text x="${left}" y="${height - 24 + 12 * k}" font-size="10">${escapeXml(line)}</text>`);
   });
   parts.push("</svg>");

@@ -245,39 +245,9 @@ export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenar
   const coupleTau = p.kind === "heaterPower" && p.element !== null ? 1 / (p.element.couplingWattsPerK / p.element.capacityJoulesPerK + p.element.couplingWattsPerK / p.capacityJoulesPerK) : 0;
 
   if (!(eqDev > thr)) {
-    // Settles at or below the trip point: the trip never acts; the peak is the equilibrium, approached from below.
+    // Settles at or below the trip point: the trip never acts.
     const tauProcess = p.kind === "heaterPower" ? p.capacityJoulesPerK / Math.max(p.lossWattsPerK, Number.MIN_VALUE) + coupleTau : 0;
-    const horizon = 5 * (tauProcess + lagSum);
-    const h = horizon / STEPS_TARGET;
-    const rec = new Recorder(maxPoints, Math.ceil(STEPS_TARGET / maxPoints), false);
-    const prop = _propagator(system, h);
-    let x = Float64Array.from(system.x0);
-    let next = new Float64Array(system.n);
-    rec.add(0, start + (x[system.trueIndex] as number), start + (x[system.indicatedIndex] as number), 0, true);
-    for (let i = 1; i <= STEPS_TARGET; i++) {
-      _step(prop, system.n, x, 1, next);
-      [x, next] = [next, x];
-      rec.add(i * h, start + (x[system.trueIndex] as number), start + (x[system.indicatedIndex] as number), 0, i === STEPS_TARGET);
-    }
-    const peak = start + eqDev;
-    return {
-      scenario: sc,
-      tripped: false,
-      stepSeconds: h,
-      trueCrossingSeconds: null,
-      decisionSeconds: null,
-      heatOffSeconds: null,
-      responseTimeSeconds: null,
-      trueAtHeatOffC: null,
-      peakTrueC: peak,
-      peakSeconds: null,
-      overshootC: peak - sc.tripTemperatureC,
-      dynamicMarginC: sc.hazardLimitC - peak,
-      exceedsHazard: peak >= sc.hazardLimitC,
-      timeFromStartToHazardSeconds: timeToHazard,
-      timeFromTripToHazardSeconds: null,
-      series: rec.series(),
-    };
+    return settlesBelowTrip(system, sc, eqDev, 5 * (tauProcess + lagSum), timeToHazard, maxPoints);
   }
 
   const crossEstimate = _timeToTrueLevelSeconds(compiled, system, start, thr) as number;
@@ -391,6 +361,7 @@ export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenar
   }
 
   const peak = peakC as number;
+  // Deliberately alike: settlesBelowTrip below returns the same fields for the other outcome (no trip).
   return {
     scenario: sc,
     tripped: true,
@@ -407,6 +378,52 @@ export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenar
     exceedsHazard: peak >= sc.hazardLimitC,
     timeFromStartToHazardSeconds: timeToHazard,
     timeFromTripToHazardSeconds: timeToHazard === null ? null : timeToHazard - (trueCrossing as number),
+    series: rec.series(),
+  };
+}
+
+/**
+ * The response of a process that settles at or below the trip point (equilibrium deviation `eqDev` from the
+ * start): the trip never acts; the peak is the equilibrium, approached from below over `horizon` seconds.
+ */
+function settlesBelowTrip(
+  system: _LinearSystem,
+  sc: RunawayScenario,
+  eqDev: number,
+  horizon: number,
+  timeToHazard: number | null,
+  maxPoints: number,
+): RunawayResponse {
+  const start = sc.startC;
+  const h = horizon / STEPS_TARGET;
+  const rec = new Recorder(maxPoints, Math.ceil(STEPS_TARGET / maxPoints), false);
+  const prop = _propagator(system, h);
+  let x = Float64Array.from(system.x0);
+  let next = new Float64Array(system.n);
+  rec.add(0, start + (x[system.trueIndex] as number), start + (x[system.indicatedIndex] as number), 0, true);
+  for (let i = 1; i <= STEPS_TARGET; i++) {
+    _step(prop, system.n, x, 1, next);
+    [x, next] = [next, x];
+    rec.add(i * h, start + (x[system.trueIndex] as number), start + (x[system.indicatedIndex] as number), 0, i === STEPS_TARGET);
+  }
+  const peak = start + eqDev;
+  // Deliberately alike: _simulateCompiled returns the same fields for a trip.
+  return {
+    scenario: sc,
+    tripped: false,
+    stepSeconds: h,
+    trueCrossingSeconds: null,
+    decisionSeconds: null,
+    heatOffSeconds: null,
+    responseTimeSeconds: null,
+    trueAtHeatOffC: null,
+    peakTrueC: peak,
+    peakSeconds: null,
+    overshootC: peak - sc.tripTemperatureC,
+    dynamicMarginC: sc.hazardLimitC - peak,
+    exceedsHazard: peak >= sc.hazardLimitC,
+    timeFromStartToHazardSeconds: timeToHazard,
+    timeFromTripToHazardSeconds: null,
     series: rec.series(),
   };
 }

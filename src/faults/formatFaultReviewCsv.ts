@@ -2,14 +2,10 @@
  * CSV rendering of a fault review report.
  * @module
  */
+import { _csvField } from "../csvField.js";
 import { _checkReport } from "./_faultReviewWords.js";
 import type { FaultReviewReport } from "./types.js";
 
-function field(value: string | number | boolean | null): string {
-  if (value === null) return "";
-  const text = String(value);
-  return /[",\r\n]/.test(text) || /^\s|\s$/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
 
 /**
  * The report as CSV (RFC 4180 quoting, "\n" line ends): one line per fault and trip with the columns
@@ -40,7 +36,7 @@ export function formatFaultReviewCsv(input: FaultReviewReport): string {
           review.name, r.faultId, r.element, r.effect, r.tripC, r.shiftC, r.safety, r.marginC, r.detected, r.detectedBy.join(";"), r.category,
           review.healthyTripC, review.healthyBandC.lowC, review.healthyBandC.highC, review.noEffectThresholdC, review.maxNormalOperatingC, review.hazardLimitC,
         ]
-          .map(field)
+          .map(_csvField)
           .join(","),
       );
     }

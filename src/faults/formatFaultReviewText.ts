@@ -2,20 +2,12 @@
  * Plain-text rendering of a fault review report.
  * @module
  */
+import { _wrapWords } from "../textWrap.js";
 import { _bandLine, _categoryWords, _checkReport, _countEntries, _fmt1 } from "./_faultReviewWords.js";
 import type { FaultReviewReport } from "./types.js";
 
 function wrap(text: string, width: number, indent: string): string[] {
-  const out: string[] = [];
-  let line = "";
-  for (const word of text.split(" ")) {
-    if (line !== "" && line.length + 1 + word.length > width) {
-      out.push(indent + line);
-      line = word;
-    } else line = line === "" ? word : `${line} ${word}`;
-  }
-  if (line !== "") out.push(indent + line);
-  return out;
+  return _wrapWords(text, width).map((line) => indent + line);
 }
 
 /**

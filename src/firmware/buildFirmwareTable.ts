@@ -352,7 +352,8 @@ function buildWithBudget(r: Request, lo: number, hi: number, roundingBound: numb
         : {
             gain: chain.gain,
             offsetMillivolts: chain.offsetMillivolts,
-            referenceVolts: chain.referenceVolts,
+            fullScaleVolts: chain.fullScaleVolts,
+            referenceVolts: chain.fullScaleVolts,
             bits: chain.bits,
             coldJunctionC: chain.coldJunctionC ?? null,
           },

@@ -7,9 +7,10 @@ import { _requireFinite, HotjunctionRangeError, HotjunctionTypeError } from "../
 
 /**
  * An idealised measurement chain for firmware tables: thermocouple EMF, amplified by `gain`, shifted by
- * `offsetMillivolts`, converted by a unipolar ADC of `bits` bits over 0 … `referenceVolts`.
+ * `offsetMillivolts`, converted by a unipolar ADC of `bits` bits over 0 … `fullScaleVolts` (the name the design
+ * file and the chain's ADC element use).
  *
- * code = (gain · E_measured[mV] + offsetMillivolts) / (1000 · referenceVolts / 2^bits)
+ * code = (gain · E_measured[mV] + offsetMillivolts) / (1000 · fullScaleVolts / 2^bits)
  *
  * The full chain models (tolerances, drift, noise) live elsewhere in the library; this object only
  * fixes the nominal mapping a table is built for.
@@ -19,8 +20,13 @@ export interface FirmwareAdcChain {
   readonly gain: number;
   /** Offset added at the ADC input, mV, finite (default 0), e.g. a level shift so negative EMFs stay above code 0. */
   readonly offsetMillivolts?: number;
-  /** ADC reference (full-scale) voltage, V, finite and > 0 (e.g. 2.5). */
-  readonly referenceVolts: number;
+  /** ADC full-scale (reference) voltage, V, finite and > 0 (e.g. 2.5). Required unless the deprecated `referenceVolts` is given. */
+  readonly fullScaleVolts?: number;
+  /**
+   * The same full-scale voltage under its former name.
+   * @deprecated use `fullScaleVolts` (kept for one minor version; accepted when `fullScaleVolts` is absent or equal).
+   */
+  readonly referenceVolts?: number;
   /** ADC resolution, bits, an integer 1 … 32 (the one range of the library, `chain/adc.ts`). */
   readonly bits: number;
   /**
@@ -35,7 +41,7 @@ export interface FirmwareAdcChain {
 export interface _CheckedAdcChain {
   readonly gain: number;
   readonly offsetMillivolts: number;
-  readonly referenceVolts: number;
+  readonly fullScaleVolts: number;
   readonly bits: number;
   readonly coldJunctionC: number | undefined;
   /** One code in mV at the ADC input. */
@@ -51,7 +57,7 @@ export function _checkAdcChain(chain: unknown, context: string): _CheckedAdcChai
       code: "INVALID_OPTION",
       quantity: "ADC chain",
       value: chain,
-      problem: "is not a chain object { gain, referenceVolts, bits, offsetMillivolts?, coldJunctionC? }",
+      problem: "is not a chain object { gain, fullScaleVolts, bits, offsetMillivolts?, coldJunctionC? }",
       context,
     });
   }
@@ -67,12 +73,12 @@ export function _checkAdcChain(chain: unknown, context: string): _CheckedAdcChai
       problem: "is not positive",
     });
   }
-  const referenceVolts = _requireFinite(c["referenceVolts"], "ADC reference voltage", "V", context);
-  if (referenceVolts <= 0) {
+  const fullScaleVolts = _requireFinite(fullScaleOf(c, context), "ADC full-scale voltage", "V", context);
+  if (fullScaleVolts <= 0) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",
-      quantity: "ADC reference voltage",
-      value: referenceVolts,
+      quantity: "ADC full-scale voltage",
+      value: fullScaleVolts,
       unit: "V",
       context,
       problem: "is not positive",
@@ -85,6 +91,24 @@ export function _checkAdcChain(chain: unknown, context: string): _CheckedAdcChai
     c["coldJunctionC"] === undefined
       ? undefined
       : _requireFinite(c["coldJunctionC"], "cold-junction temperature", "°C", context);
-  const lsbMillivolts = (1000 * referenceVolts) / 2 ** bits;
-  return { gain, offsetMillivolts, referenceVolts, bits, coldJunctionC, lsbMillivolts, maxCode: 2 ** bits - 1 };
+  const lsbMillivolts = (1000 * fullScaleVolts) / 2 ** bits;
+  return { gain, offsetMillivolts, fullScaleVolts, bits, coldJunctionC, lsbMillivolts, maxCode: 2 ** bits - 1 };
+}
+
+/** `fullScaleVolts`, or the deprecated `referenceVolts` when it is absent; both given must agree. */
+function fullScaleOf(c: Record<string, unknown>, context: string): unknown {
+  const fullScale = c["fullScaleVolts"];
+  const former = c["referenceVolts"];
+  if (fullScale === undefined) return former;
+  if (former !== undefined && !Object.is(former, fullScale)) {
+    throw new HotjunctionRangeError({
+      code: "INVALID_OPTION",
+      quantity: "ADC chain referenceVolts (deprecated name of fullScaleVolts)",
+      value: former,
+      unit: "V",
+      context,
+      problem: `differs from fullScaleVolts ${String(fullScale)} V; give fullScaleVolts alone`,
+    });
+  }
+  return fullScale;
 }

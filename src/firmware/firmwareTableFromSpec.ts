@@ -26,7 +26,7 @@ export type FirmwareTableFormat = "c" | "json" | "csv";
  *   "placement": "adaptive",              // or "uniform" (power-of-two spacing)
  *   "input":  { "numberType": "int32", "scale": 1 },      // int16 uint16 int32 uint32 float32 float64
  *   "output": { "numberType": "int32", "scale": 1000 },
- *   "chain": { "gain": 100, "offsetMillivolts": 0, "referenceVolts": 2.5, "bits": 16, "coldJunctionC": 25 },
+ *   "chain": { "gain": 100, "offsetMillivolts": 0, "fullScaleVolts": 2.5, "bits": 16, "coldJunctionC": 25 },
  *   "maxBreakpoints": 4096
  * }
  * ```

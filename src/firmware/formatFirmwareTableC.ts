@@ -148,7 +148,7 @@ function headerComment(table: FirmwareTable, prefix: string, inType: string, out
   if (table.chain !== null) {
     const c = table.chain;
     lines.push(
-      ` * ADC chain: gain ${c.gain}, offset ${c.offsetMillivolts} mV, reference ${c.referenceVolts} V, ${c.bits} bits` +
+      ` * ADC chain: gain ${c.gain}, offset ${c.offsetMillivolts} mV, full scale ${c.fullScaleVolts} V, ${c.bits} bits` +
         (c.coldJunctionC !== null ? `, cold junction ${c.coldJunctionC} degC` : ""),
     );
   }

@@ -4,6 +4,7 @@
  */
 export type { FirmwareAdcChain } from "./firmwareAdcChain.js";
 export type { FirmwareNumberType } from "./firmwareNumberType.js";
+export type { FirmwareTableChain } from "./types.js";
 export type { FirmwareTableKind, FirmwareTableUnit } from "./tableFunction.js";
 export {
   buildFirmwareTable,

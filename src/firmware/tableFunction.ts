@@ -177,112 +177,128 @@ export function _tableFunction(
   const ct = _compile(thermocoupleData(type));
   const needsChain = kind === "adcCodeToTemperature" || kind === "temperatureToAdcCode" || kind === "coldJunctionToAdcCode";
   const chain = needsChain ? _checkAdcChain(chainInput, context) : undefined;
-  let coldEmfMillivolts = 0;
-  if (chain?.coldJunctionC !== undefined) {
-    if (kind === "coldJunctionToAdcCode") {
-      throw new HotjunctionRangeError({
-        code: "INVALID_OPTION",
-        quantity: "ADC chain coldJunctionC",
-        value: chain.coldJunctionC,
-        context,
-        problem: "does not apply to a cold-junction table (its input is the cold-junction temperature)",
-      });
-    }
-    if (chain.coldJunctionC < ct.minC || chain.coldJunctionC > ct.maxC) {
-      throw new HotjunctionRangeError({
-        code: "OUT_OF_RANGE",
-        quantity: "cold-junction temperature",
-        value: chain.coldJunctionC,
-        min: ct.minC,
-        max: ct.maxC,
-        unit: "°C",
-        context,
-      });
-    }
-    coldEmfMillivolts = _emf(ct, chain.coldJunctionC);
+  const coldEmfMillivolts = chainColdJunctionEmf(ct, kind, chain, context);
+  return kind === "emfToTemperature" || kind === "adcCodeToTemperature"
+    ? inverseTableFunction(ct, chain, coldEmfMillivolts)
+    : forwardTableFunction(ct, kind, chain, coldEmfMillivolts);
+}
+
+/** E(chain cold junction) in mV, 0 without a fixed cold junction; checked against the type's range. */
+function chainColdJunctionEmf(ct: CompiledType, kind: FirmwareTableKind, chain: _CheckedAdcChain | undefined, context: string): number {
+  if (chain?.coldJunctionC === undefined) return 0;
+  if (kind === "coldJunctionToAdcCode") {
+    throw new HotjunctionRangeError({
+      code: "INVALID_OPTION",
+      quantity: "ADC chain coldJunctionC",
+      value: chain.coldJunctionC,
+      context,
+      problem: "does not apply to a cold-junction table (its input is the cold-junction temperature)",
+    });
   }
-  const inverse = kind === "emfToTemperature" || kind === "adcCodeToTemperature";
-  if (inverse) {
-    const tables = _exactInverseTables(ct);
-    const lowExclusive = ct.monotonicFromC > ct.minC;
-    // Input → reference EMF (junction at 0 °C) in mV is linear: emf = emfPerInput·x + emfAtZeroInput.
-    let emfPerInput: number;
-    let emfAtZeroInput: number;
-    if (chain !== undefined) {
-      emfPerInput = chain.lsbMillivolts / chain.gain;
-      emfAtZeroInput = -chain.offsetMillivolts / chain.gain + coldEmfMillivolts;
-    } else {
-      emfPerInput = 1e-3;
-      emfAtZeroInput = 0;
-    }
-    const emfOf = (x: number): number => emfPerInput * x + emfAtZeroInput;
-    // Reference error of t̂(E(x)): the EMF's own rounding (2 ulps of |E| and |E₀|) and the forward
-    // evaluation error, both over the smallest Seebeck coefficient; the Newton roots the interpolant passes
-    // through carry the forward error once more; the interpolant's fit (tested at 9 points per segment, not
-    // proven: its90/exactInverse.ts) and 20 ulps of t for the Horner step in s.
-    const inverseReferenceError = (a: number, b: number): number => {
+  if (chain.coldJunctionC < ct.minC || chain.coldJunctionC > ct.maxC) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: "cold-junction temperature",
+      value: chain.coldJunctionC,
+      min: ct.minC,
+      max: ct.maxC,
+      unit: "°C",
+      context,
+    });
+  }
+  return _emf(ct, chain.coldJunctionC);
+}
+
+/** The table function of an inverse kind (EMF or ADC code to temperature). */
+function inverseTableFunction(ct: CompiledType, chain: _CheckedAdcChain | undefined, coldEmfMillivolts: number): _TableFunction {
+  const tables = _exactInverseTables(ct);
+  const lowExclusive = ct.monotonicFromC > ct.minC;
+  // Input → reference EMF (junction at 0 °C) in mV is linear: emf = emfPerInput·x + emfAtZeroInput.
+  let emfPerInput: number;
+  let emfAtZeroInput: number;
+  if (chain !== undefined) {
+    emfPerInput = chain.lsbMillivolts / chain.gain;
+    emfAtZeroInput = -chain.offsetMillivolts / chain.gain + coldEmfMillivolts;
+  } else {
+    emfPerInput = 1e-3;
+    emfAtZeroInput = 0;
+  }
+  const emfOf = (x: number): number => emfPerInput * x + emfAtZeroInput;
+  // Reference error of t̂(E(x)): the EMF's own rounding (2 ulps of |E| and |E₀|) and the forward
+  // evaluation error, both over the smallest Seebeck coefficient; the Newton roots the interpolant passes
+  // through carry the forward error once more; the interpolant's fit (tested at 9 points per segment, not
+  // proven: its90/exactInverse.ts) and 20 ulps of t for the Horner step in s.
+  const inverseReferenceError = (a: number, b: number): number => {
+    const t = inverseTemperatures(a, b);
+    const e = encloseOver(ct, t);
+    if (!(e.minFirst > 0)) return Infinity;
+    const emfMagnitude = Math.max(Math.abs(emfOf(a)), Math.abs(emfOf(b))) + Math.abs(emfAtZeroInput);
+    const emfError = 2 * e.evaluation + 4 * U * emfMagnitude;
+    const fit = Math.max(INVERSE_FIT_C, INVERSE_FIT_MV / e.minFirst);
+    return up3(emfError / e.minFirst + fit + 20 * U * Math.max(Math.abs(t[0]), Math.abs(t[1])));
+  };
+  // Temperatures of a segment of inputs, widened by 1e-7 °C (the reference error is far below it).
+  const inverseTemperatures = (a: number, b: number): _Interval => {
+    const ta = _exactInverse(ct, tables, emfOf(a));
+    const tb = _exactInverse(ct, tables, emfOf(b));
+    return [Math.max(ct.monotonicFromC, Math.min(ta, tb) - 1e-7), Math.min(ct.maxC, Math.max(ta, tb) + 1e-7)];
+  };
+  const kx = emfPerInput * 1000; // µV per input unit
+  const seams: _Seam[] = temperatureSeams(ct)
+    .filter((m) => m.temperatureC > ct.monotonicFromC)
+    .map((m) => ({
+      input: (_emf(ct, m.temperatureC) - emfAtZeroInput) / emfPerInput,
+      slopeJump: (kx / 1000) * (1 / m.slopeAbove - 1 / m.slopeBelow),
+      valueJump: Math.abs(m.emfJump / m.slopeAbove),
+    }));
+  return {
+    seams,
+    ct,
+    chain,
+    inputQuantity: chain !== undefined ? (chain.coldJunctionC !== undefined ? "ADC code" : "compensated ADC code") : "EMF",
+    inputUnit: chain !== undefined ? "code" : "µV",
+    outputQuantity: "temperature",
+    outputUnit: "°C",
+    allowedMinC: ct.monotonicFromC,
+    allowedMaxC: ct.maxC,
+    inputAtTemperature: (t) => (_emf(ct, t) - emfAtZeroInput) / emfPerInput,
+    inDomain: (x) => {
+      const e = emfOf(x);
+      return e <= ct.emfAtMaxC && (lowExclusive ? e > ct.emfAtMinC : e >= ct.emfAtMinC);
+    },
+    value: (x) => _exactInverse(ct, tables, emfOf(x)),
+    curvature: (x) => {
+      const t = _exactInverse(ct, tables, emfOf(x));
+      const s = seebeckMicrovolts(ct, t);
+      return (-kx * kx * seebeckSlope(ct, t)) / (s * s * s);
+    },
+    temperatureAt: (x) => _exactInverse(ct, tables, emfOf(x)),
+    curvatureMethod: "interval enclosure of t''(E) = -E''(t)/E'(t)^3 over each segment's temperatures",
+    curvatureBound: (a, b) => {
+      // In 4 parts: the maximum of |E''| and the minimum of E' then come from nearby temperatures.
       const t = inverseTemperatures(a, b);
-      const e = encloseOver(ct, t);
-      if (!(e.minFirst > 0)) return Infinity;
-      const emfMagnitude = Math.max(Math.abs(emfOf(a)), Math.abs(emfOf(b))) + Math.abs(emfAtZeroInput);
-      const emfError = 2 * e.evaluation + 4 * U * emfMagnitude;
-      const fit = Math.max(INVERSE_FIT_C, INVERSE_FIT_MV / e.minFirst);
-      return up3(emfError / e.minFirst + fit + 20 * U * Math.max(Math.abs(t[0]), Math.abs(t[1])));
-    };
-    // Temperatures of a segment of inputs, widened by 1e-7 °C (the reference error is far below it).
-    const inverseTemperatures = (a: number, b: number): _Interval => {
-      const ta = _exactInverse(ct, tables, emfOf(a));
-      const tb = _exactInverse(ct, tables, emfOf(b));
-      return [Math.max(ct.monotonicFromC, Math.min(ta, tb) - 1e-7), Math.min(ct.maxC, Math.max(ta, tb) + 1e-7)];
-    };
-    const kx = emfPerInput * 1000; // µV per input unit
-    const seams: _Seam[] = temperatureSeams(ct)
-      .filter((m) => m.temperatureC > ct.monotonicFromC)
-      .map((m) => ({
-        input: (_emf(ct, m.temperatureC) - emfAtZeroInput) / emfPerInput,
-        slopeJump: (kx / 1000) * (1 / m.slopeAbove - 1 / m.slopeBelow),
-        valueJump: Math.abs(m.emfJump / m.slopeAbove),
-      }));
-    return {
-      seams,
-      ct,
-      chain,
-      inputQuantity: chain !== undefined ? (chain.coldJunctionC !== undefined ? "ADC code" : "compensated ADC code") : "EMF",
-      inputUnit: chain !== undefined ? "code" : "µV",
-      outputQuantity: "temperature",
-      outputUnit: "°C",
-      allowedMinC: ct.monotonicFromC,
-      allowedMaxC: ct.maxC,
-      inputAtTemperature: (t) => (_emf(ct, t) - emfAtZeroInput) / emfPerInput,
-      inDomain: (x) => {
-        const e = emfOf(x);
-        return e <= ct.emfAtMaxC && (lowExclusive ? e > ct.emfAtMinC : e >= ct.emfAtMinC);
-      },
-      value: (x) => _exactInverse(ct, tables, emfOf(x)),
-      curvature: (x) => {
-        const t = _exactInverse(ct, tables, emfOf(x));
-        const s = seebeckMicrovolts(ct, t);
-        return (-kx * kx * seebeckSlope(ct, t)) / (s * s * s);
-      },
-      temperatureAt: (x) => _exactInverse(ct, tables, emfOf(x)),
-      curvatureMethod: "interval enclosure of t''(E) = -E''(t)/E'(t)^3 over each segment's temperatures",
-      curvatureBound: (a, b) => {
-        // In 4 parts: the maximum of |E''| and the minimum of E' then come from nearby temperatures.
-        const t = inverseTemperatures(a, b);
-        const k = emfPerInput * emfPerInput;
-        let bound = 0;
-        for (let p = 0; p < 4; p++) {
-          const lo = p === 0 ? t[0] : t[0] + ((t[1] - t[0]) * p) / 4;
-          const hi = p === 3 ? t[1] : t[0] + ((t[1] - t[0]) * (p + 1)) / 4;
-          const e = encloseOver(ct, [lo, hi]);
-          if (!(e.minFirst > 0)) return Infinity;
-          bound = Math.max(bound, up3((k * e.maxSecond) / (e.minFirst * e.minFirst * e.minFirst)));
-        }
-        return bound;
-      },
-      referenceError: (a, b) => inverseReferenceError(a, b),
-    };
-  }
+      const k = emfPerInput * emfPerInput;
+      let bound = 0;
+      for (let p = 0; p < 4; p++) {
+        const lo = p === 0 ? t[0] : t[0] + ((t[1] - t[0]) * p) / 4;
+        const hi = p === 3 ? t[1] : t[0] + ((t[1] - t[0]) * (p + 1)) / 4;
+        const e = encloseOver(ct, [lo, hi]);
+        if (!(e.minFirst > 0)) return Infinity;
+        bound = Math.max(bound, up3((k * e.maxSecond) / (e.minFirst * e.minFirst * e.minFirst)));
+      }
+      return bound;
+    },
+    referenceError: (a, b) => inverseReferenceError(a, b),
+  };
+}
+
+/** The table function of a forward kind (temperature or cold-junction temperature to EMF or ADC code). */
+function forwardTableFunction(
+  ct: CompiledType,
+  kind: FirmwareTableKind,
+  chain: _CheckedAdcChain | undefined,
+  coldEmfMillivolts: number,
+): _TableFunction {
   // Temperature input: output = outputPerMillivolt · (E(t) − subtracted) + outputAtZero.
   let outputPerMillivolt = 1000;
   let outputAtZero = 0;

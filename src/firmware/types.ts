@@ -133,7 +133,7 @@ export interface FirmwareTable {
   readonly input: FirmwareTableColumn;
   readonly output: FirmwareTableColumn;
   /** The chain the table was built for, with defaults filled in, or null. */
-  readonly chain: Required<Omit<FirmwareAdcChain, "coldJunctionC">> & { readonly coldJunctionC: number | null } | null;
+  readonly chain: FirmwareTableChain | null;
   /** log2 of the spacing of a uniform table, stored input units; null for adaptive tables. */
   readonly spacingLog2: number | null;
   /**
@@ -158,4 +158,19 @@ export interface _InterpolationData {
   readonly spacingLog2: number | null;
   readonly inputNumberType: FirmwareNumberType;
   readonly outputNumberType: FirmwareNumberType;
+}
+
+/** The ADC chain a table was built for, with defaults filled in (see {@link FirmwareAdcChain}). */
+export interface FirmwareTableChain {
+  readonly gain: number;
+  readonly offsetMillivolts: number;
+  /** ADC full-scale voltage, V. */
+  readonly fullScaleVolts: number;
+  /**
+   * The same value under its former name.
+   * @deprecated read `fullScaleVolts` (kept for one minor version).
+   */
+  readonly referenceVolts: number;
+  readonly bits: number;
+  readonly coldJunctionC: number | null;
 }

@@ -31,6 +31,8 @@ function checkArrays(input: unknown, out: unknown, quantity: string, context: st
   return input.length;
 }
 
+// Deliberately alike: forwardRun and forwardRun10 are the same loop; forwardRun10 holds ≤ 10 coefficients in
+// locals and unrolls Horner over them (bit-identical, the bulk speed target), forwardRun takes any degree.
 /**
  * Converts elements from `start` while they stay in [lo, hi) and ≤ maxC, adding type K's exponential term
  * a0·exp(a1·(t − a2)²) when `hasExp`; returns the index it stopped at.
@@ -67,6 +69,7 @@ function forwardRun(
   return i;
 }
 
+// Deliberately alike: the unrolled twin of forwardRun above (same arithmetic, same bits).
 /**
  * {@link forwardRun} for sub-ranges of at most 10 coefficients (most of them), zero-padded to 10: the Horner
  * scheme unrolled over coefficients held in locals runs faster than a loop over the array. Leading zero

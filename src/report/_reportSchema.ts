@@ -7,12 +7,13 @@
  * @module
  */
 import { z } from "zod";
+import { _propagationMethods } from "../uncertainty/types.js";
 
 /** The report layout version every JSON report carries as `reportSchemaVersion`. */
 export const reportSchemaVersion = 1;
 
 const num = z.number();
-const method = z.enum(["worst-case", "rss", "monte-carlo"]);
+const method = z.enum(_propagationMethods);
 const methodInfo = z.strictObject({
   methods: z.array(method),
   acceptanceMethod: method.optional(),

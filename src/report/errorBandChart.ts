@@ -7,7 +7,9 @@ import { scaleLinear } from "d3-scale";
 import { area, line } from "d3-shape";
 import { _describeMethods, _methodShortName } from "./formatting.js";
 import type { ErrorSweep } from "./reportTypes.js";
-import { _bottomAxis, _element, _leftAxis, _methodFill, _splitCaution, _svgDocument, _text, _wrapText } from "./svg.js";
+import { _bottomAxis, _element, _leftAxis, _methodFill, _splitCaution, _svgDocument, _text } from "./svg.js";
+import { _wrapWords } from "../textWrap.js";
+import { _propagationMethods } from "../uncertainty/types.js";
 
 /**
  * Draws an error sweep as an SVG document (text).
@@ -37,7 +39,7 @@ export function errorBandChartSvg(sweep: ErrorSweep): string {
   const methods = sweep.rows[0]?.bands.map((b) => b.method) ?? [];
   const parts: string[] = [_text(width / 2, 26, title, { "text-anchor": "middle", "font-size": 16, "font-weight": "bold", class: "chart-title" })];
   // Widest band first so narrower ones stay visible on top.
-  const order = [...methods].sort((a, b) => ["worst-case", "rss", "monte-carlo"].indexOf(a) - ["worst-case", "rss", "monte-carlo"].indexOf(b));
+  const order = [...methods].sort((a, b) => _propagationMethods.indexOf(a) - _propagationMethods.indexOf(b));
   const labels: { y: number; text: string }[] = [];
   for (const method of order) {
     const index = methods.indexOf(method);
@@ -74,7 +76,7 @@ export function errorBandChartSvg(sweep: ErrorSweep): string {
   legend.push(_text(lx + 32, legendY + 10, "nominal error", { "font-size": 12 }));
   parts.push(_element("g", { class: "legend" }, legend.join("")));
   const [cautionFirst, cautionRest] = _splitCaution();
-  const noteLines = [..._wrapText(_describeMethods(sweep.methods), 150), `Caution: ${cautionFirst}`, cautionRest];
+  const noteLines = [..._wrapWords(_describeMethods(sweep.methods), 150), `Caution: ${cautionFirst}`, cautionRest];
   noteLines.forEach((text, i) => {
     const cls = i < noteLines.length - 2 ? "method-note" : "caution";
     parts.push(_text(12, height - 14 * (noteLines.length - i), text, { "font-size": 10, class: cls }));

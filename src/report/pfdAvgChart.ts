@@ -6,7 +6,8 @@
 import { scaleLog, type ScaleLogarithmic } from "d3-scale";
 import { line } from "d3-shape";
 import type { PfdAvgCurve } from "../safety/types.js";
-import { _element, _splitCaution, _svgDocument, _text, _wrapText } from "./svg.js";
+import { _element, _splitCaution, _svgDocument, _text } from "./svg.js";
+import { _wrapWords } from "../textWrap.js";
 
 /** Input of {@link pfdAvgChartSvg}. */
 export interface PfdAvgChartInput {
@@ -116,7 +117,7 @@ export function pfdAvgChartSvg(input: PfdAvgChartInput): string {
   for (let i = 1; i < labels.length; i++) labels[i]!.y = Math.max(labels[i]!.y, labels[i - 1]!.y + 13);
   for (const label of labels) parts.push(_text(width - margin.right + 8, label.y, label.text, { "font-size": 11, class: "direct-label" }));
   const [cautionFirst, cautionRest] = _splitCaution();
-  const noteLines = [..._wrapText(`Scope: ${input.scope}`, 150), `Caution: ${cautionFirst}`, cautionRest];
+  const noteLines = [..._wrapWords(`Scope: ${input.scope}`, 150), `Caution: ${cautionFirst}`, cautionRest];
   noteLines.forEach((text, i) => {
     const cls = i < noteLines.length - 2 ? "scope-note" : "caution";
     parts.push(_text(12, height - 14 * (noteLines.length - i), text, { "font-size": 10, class: cls }));

@@ -4,7 +4,7 @@
  * @module
  */
 import type { TripDesignResult } from "../trip/types.js";
-import type { TripBuildSheet } from "../trip/buildSheet.js";
+import type { TripBuildSheet } from "../trip/types.js";
 import { CAUTION_TEXT } from "./caution.js";
 import {
   _cautionLine,

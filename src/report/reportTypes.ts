@@ -4,7 +4,7 @@
  * @module
  */
 import type { TripBand, TripErrorSource, TripServicePoint } from "../trip/types.js";
-import type { TripBuildSheet } from "../trip/buildSheet.js";
+import type { TripBuildSheet } from "../trip/types.js";
 import type { TripDynamicsResult } from "../trip/tripDynamics.js";
 import type { PropagationMethod } from "../uncertainty/types.js";
 

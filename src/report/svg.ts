@@ -12,19 +12,6 @@ export function _splitCaution(): [string, string] {
   return cut < 0 ? [CAUTION_TEXT, ""] : [CAUTION_TEXT.slice(0, cut + 1), CAUTION_TEXT.slice(cut + 2)];
 }
 
-/** Wraps text at spaces into lines of at most `width` characters. @internal */
-export function _wrapText(text: string, width: number): string[] {
-  const lines: string[] = [];
-  let current = "";
-  for (const word of text.split(" ")) {
-    if (current.length > 0 && current.length + 1 + word.length > width) {
-      lines.push(current);
-      current = word;
-    } else current = current.length > 0 ? `${current} ${word}` : word;
-  }
-  if (current.length > 0) lines.push(current);
-  return lines;
-}
 
 /** Escapes text for SVG content and attribute values. @internal */
 export function _escapeXml(text: string): string {

@@ -7,7 +7,8 @@
 import { scaleLinear } from "d3-scale";
 import { _describeMethods, _fixed, _methodShortName } from "./formatting.js";
 import type { TripReport } from "./reportTypes.js";
-import { _bottomAxis, _element, _methodFill, _splitCaution, _svgDocument, _text, _wrapText } from "./svg.js";
+import { _bottomAxis, _element, _methodFill, _splitCaution, _svgDocument, _text } from "./svg.js";
+import { _wrapWords } from "../textWrap.js";
 
 /**
  * Draws the trip bands of a trip report as an SVG document (text).
@@ -86,7 +87,7 @@ export function tripBandChartSvg(report: TripReport): string {
   parts.push(_element("g", { class: "legend" }, legend.join("")));
   const footY = lineY + 24;
   const [cautionFirst, cautionRest] = _splitCaution();
-  const methodLines = _wrapText(_describeMethods(report.methods), 150);
+  const methodLines = _wrapWords(_describeMethods(report.methods), 150);
   methodLines.forEach((text, i) => parts.push(_text(12, footY + 14 * i, text, { "font-size": 10, class: "method-note" })));
   const cautionY = footY + 14 * methodLines.length;
   parts.push(_text(12, cautionY, `Caution: ${cautionFirst}`, { "font-size": 10, class: "caution" }));

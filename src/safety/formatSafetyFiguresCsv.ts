@@ -2,17 +2,13 @@
  * CSV rendering of a safety-figures report.
  * @module
  */
+import { _csvField } from "../csvField.js";
 import { _checkSafetyReport } from "./_safetyWords.js";
 import type { SafetyFiguresReport } from "./types.js";
 
-function field(value: string | number | boolean | null): string {
-  if (value === null) return "";
-  const text = typeof value === "number" ? String(value) : String(value);
-  return /[",\r\n]/.test(text) || /^\s|\s$/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
 
 function row(values: readonly (string | number | boolean | null)[]): string {
-  return values.map(field).join(",");
+  return values.map(_csvField).join(",");
 }
 
 /**

@@ -2,20 +2,12 @@
  * Plain-text rendering of a safety-figures report.
  * @module
  */
+import { _wrapWords } from "../textWrap.js";
 import { _checkSafetyReport, _exp, _fit, _hours, _pairEntries, _pct, _rateEntries, _times } from "./_safetyWords.js";
 import type { SafetyFiguresReport } from "./types.js";
 
 function wrap(text: string, width: number, indent: string): string[] {
-  const out: string[] = [];
-  let line = "";
-  for (const word of text.split(" ")) {
-    if (line !== "" && line.length + 1 + word.length > width) {
-      out.push(indent + line);
-      line = word;
-    } else line = line === "" ? word : `${line} ${word}`;
-  }
-  if (line !== "") out.push(indent + line);
-  return out;
+  return _wrapWords(text, width).map((line) => indent + line);
 }
 
 function block(entries: [string, string][]): string[] {

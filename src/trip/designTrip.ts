@@ -9,7 +9,7 @@ import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors
 import type { DividerElement, MeasurementChain, ReferenceElement } from "../chain/types.js";
 import { propagate } from "../uncertainty/propagate.js";
 import { rectangular } from "../uncertainty/rectangular.js";
-import type { Distribution } from "../uncertainty/types.js";
+import { _propagationMethods, type Distribution } from "../uncertainty/types.js";
 import { ageingBandAt } from "../chain/wire/probe.js";
 import type { PropagationMethod, PropagationResult } from "../uncertainty/types.js";
 import { _realizeReference } from "./realizeReference.js";
@@ -60,7 +60,7 @@ export interface DesignTripOptions {
   readonly onProgress?: (fractionDone: number) => void;
 }
 
-const methods: readonly PropagationMethod[] = ["worst-case", "rss", "monte-carlo"];
+const methods: readonly PropagationMethod[] = _propagationMethods;
 
 /** Nominal voltage of a reference option, V. */
 function optionVolts(option: ReferenceOption): number {

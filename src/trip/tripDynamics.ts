@@ -7,7 +7,7 @@
  * @module
  */
 import { HotjunctionTypeError, _requireNonNegative, _requirePositive } from "../errors.js";
-import { checkDynamics, DYNAMICS_ASSUMPTIONS, type DynamicsCheck } from "../dynamics/checkDynamics.js";
+import { _runawayFigures, checkDynamics, DYNAMICS_ASSUMPTIONS, type DynamicsCheck, type RunawayFigures } from "../dynamics/checkDynamics.js";
 import type { TripNoiseFigures } from "../dynamics/levelCrossing.js";
 import type { RunawayResponse } from "../dynamics/simulateRunaway.js";
 import type { DynamicsModel, NoiseSpec } from "../dynamics/types.js";
@@ -59,32 +59,12 @@ export interface TripDynamicsInput {
   readonly maxPoints?: number;
 }
 
-/** One runaway case of a setpoint, as JSON-ready figures. */
-export interface TripDynamicsCase {
+/** One runaway case of a setpoint, as JSON-ready figures (those of {@link RunawayResponse}, see `RunawayFigures`). */
+export interface TripDynamicsCase extends RunawayFigures {
   /** `"slowest unit"` (band high edge) or `"nominal unit"`. */
   readonly name: string;
   /** True-temperature trip point, °C. */
   readonly tripTemperatureC: number;
-  readonly tripped: boolean;
-  /** True crossing of the trip point after the heater stuck on, s. */
-  readonly trueCrossingSeconds: number | null;
-  /** Trip decision, s. */
-  readonly decisionSeconds: number | null;
-  /** Heat off, s. */
-  readonly heatOffSeconds: number | null;
-  /** From the true crossing to heat off, s. */
-  readonly responseTimeSeconds: number | null;
-  /** True temperature at heat off, °C. */
-  readonly trueAtHeatOffC: number | null;
-  /** Peak true temperature, °C. */
-  readonly peakTrueC: number;
-  /** When the peak is reached, s. */
-  readonly peakSeconds: number | null;
-  /** Peak minus trip point, °C. */
-  readonly overshootC: number;
-  /** Hazard limit minus peak, °C. */
-  readonly dynamicMarginC: number;
-  readonly exceedsHazard: boolean;
 }
 
 /** Noise figures of a setpoint with the comparison against the design's hysteresis. */
@@ -150,21 +130,7 @@ function fmt(value: number, decimals = 1): string {
 }
 
 function caseOf(name: string, r: RunawayResponse): TripDynamicsCase {
-  return {
-    name,
-    tripTemperatureC: r.scenario.tripTemperatureC,
-    tripped: r.tripped,
-    trueCrossingSeconds: r.trueCrossingSeconds,
-    decisionSeconds: r.decisionSeconds,
-    heatOffSeconds: r.heatOffSeconds,
-    responseTimeSeconds: r.responseTimeSeconds,
-    trueAtHeatOffC: r.trueAtHeatOffC,
-    peakTrueC: r.peakTrueC,
-    peakSeconds: r.peakSeconds,
-    overshootC: r.overshootC,
-    dynamicMarginC: r.dynamicMarginC,
-    exceedsHazard: r.exceedsHazard,
-  };
+  return { name, tripTemperatureC: r.scenario.tripTemperatureC, ..._runawayFigures(r) };
 }
 
 function reasonOf(s: TripDynamicsSetpointInput, check: DynamicsCheck): string {

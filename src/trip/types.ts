@@ -11,7 +11,6 @@
  * @module
  */
 import type { MidRailDivider } from "./midRailDivider.js";
-import type { TripBuildSheet } from "./buildSheet.js";
 import type { WireDescription } from "../chain/wire/wireStage.js";
 import type { PreferredSeriesName } from "../data/preferredSeries.js";
 import type {
@@ -349,4 +348,117 @@ export interface ReferenceComparison {
   readonly recommended: string | null;
   /** One sentence summarizing the comparison. */
   readonly summary: string;
+}
+
+/** One resistor of a threshold network on the build sheet. */
+export interface BuildSheetResistor {
+  /** Position name (see {@link resistorDesignator}). */
+  readonly designator: string;
+  /** Standard value, Ω. */
+  readonly ohms: number;
+}
+
+/** One threshold network on the build sheet. */
+export interface BuildSheetNetwork {
+  readonly topology: ThresholdNetwork["topology"];
+  /** From the reference end to ground. */
+  readonly resistors: readonly BuildSheetResistor[];
+  readonly totalOhms: number;
+  /** Divider current at nominal reference voltage, mA. */
+  readonly currentMilliamps: number;
+}
+
+/** One comparator setpoint on the build sheet. */
+export interface BuildSheetSetpoint {
+  readonly name: string;
+  /** Threshold at the comparator's reference input with nominal parts: ideal and from the standard resistors, V. */
+  readonly idealThresholdVolts: number;
+  readonly realizedThresholdVolts: number;
+  /** realized − ideal, V. */
+  readonly thresholdErrorVolts: number;
+  /**
+   * Worst-case extremes of the threshold voltage, V: the reference at ± its total tolerance and every resistor
+   * above the tap at one end of its tolerance (plus tempco over the ambient span from 25 °C) and every one below
+   * at the other (exact for the divider ratio; a matched network is bounded by its absolute tolerances here).
+   */
+  readonly thresholdLowVolts: number;
+  readonly thresholdHighVolts: number;
+  /** Index into `networks`, and the resistors above and below this setpoint's tap (by designator). */
+  readonly networkIndex: number;
+  readonly resistorsAbove: readonly BuildSheetResistor[];
+  readonly resistorsBelow: readonly BuildSheetResistor[];
+  /** Current through this setpoint's divider, mA. */
+  readonly dividerCurrentMilliamps: number;
+  /** Nominal trip and release (from the hysteresis), °C, and their difference, °C. */
+  readonly nominalTripC: number;
+  readonly nominalReleaseC: number;
+  readonly hysteresisC: number;
+  /** Worst-case release band, °C. */
+  readonly releaseLowC: number;
+  readonly releaseHighC: number;
+  /** releaseLowC − highest normal operating temperature, °C (> 0: every unit re-arms at normal operation). */
+  readonly releaseMarginToNormalC: number;
+}
+
+/** One setpoint of an ADC (firmware) design on the build sheet. */
+export interface BuildSheetAdcSetpoint {
+  readonly name: string;
+  /** Detector-input voltage at the setpoint with nominal parts, V. */
+  readonly signalVolts: number;
+  /** Unrounded nominal code at the setpoint, LSB, and the integer code firmware compares against (code ≥ it trips). */
+  readonly nominalCode: number;
+  readonly thresholdCode: number;
+  /** Nominal code slope at the setpoint, LSB/°C. */
+  readonly codesPerC: number;
+  /** Worst-case band of the code read at the true setpoint temperature, LSB (first order: slope × reading error). */
+  readonly codeLow: number;
+  readonly codeHigh: number;
+}
+
+/** The sized shunt series resistor. */
+export interface BuildSheetShuntResistor {
+  readonly ohms: number;
+  readonly series: PreferredSeriesName;
+  readonly toleranceFraction: number;
+  /** Worst dissipation, W, and the smallest standard rating with at least 2× that (50 % derating, common practice). */
+  readonly powerWatts: number;
+  readonly ratingWatts: number;
+}
+
+/** The mid-rail divider: two equal resistors (suggested value: the standard value nearest half the first threshold network's total). */
+export interface BuildSheetMidRail {
+  readonly topOhms: number;
+  readonly bottomOhms: number;
+  readonly nominalVolts: number;
+  readonly worstCaseLowVolts: number;
+  readonly worstCaseHighVolts: number;
+}
+
+/** One line of the bill of materials. */
+export interface BuildSheetPart {
+  /** Designators this line covers, comma-separated. */
+  readonly designators: string;
+  /** `resistor`, `reference`, `thermocouple`. */
+  readonly part: string;
+  /** Value in `unit` (Ω, V) or, for a thermocouple, the type letter. */
+  readonly value: number | string;
+  readonly unit: string;
+  /** ±fraction (thermocouple: the tolerance in °C at the first setpoint). */
+  readonly tolerance: number;
+  readonly toleranceUnit: "fraction" | "°C";
+  /** ±ppm/°C (0 where not given). */
+  readonly tempcoPpmPerC: number;
+  readonly count: number;
+}
+
+/** The build sheet (a plain, JSON-serializable object; every number a field). */
+export interface TripBuildSheet {
+  /** Layout version of this object (1). */
+  readonly sheetVersion: 1;
+  readonly setpoints: readonly BuildSheetSetpoint[];
+  readonly adcSetpoints: readonly BuildSheetAdcSetpoint[];
+  readonly networks: readonly BuildSheetNetwork[];
+  readonly shuntSeriesResistor?: BuildSheetShuntResistor;
+  readonly midRail?: BuildSheetMidRail;
+  readonly parts: readonly BuildSheetPart[];
 }

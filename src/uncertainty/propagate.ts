@@ -44,7 +44,7 @@ const defaultMaxTrials = 10_000_000;
  *   (in the output's unit); must return a finite number everywhere the inputs can go
  * @param inputs - record of named {@link Distribution}s (at least one)
  * @param options - {@link PropagateOptions}: `method`, `coverage` in (0, 1) (default 0.95), `correlations`
- *   `[nameA, nameB, r]` with r in [−1, 1], Monte Carlo `trials` (integer ≥ 1/(1 − coverage), default 1e6),
+ *   `[nameA, nameB, r]` with r in [−1, 1], Monte Carlo `monteCarloTrials` (integer ≥ 1/(1 − coverage), default 1e6; `trials` is its deprecated name),
  *   `seed` (integer 0…2³² − 1, default 1), `adaptive` `{ significantDigits: 1–3, maxTrials? (default 1e7) }`,
  *   `interval`, `onProgress`; worst case `normalBoundCoverage` in (0, 1)
  * @returns {@link PropagationResult} in the output's unit (estimate, standard uncertainty, interval, contributions)
@@ -60,7 +60,7 @@ const defaultMaxTrials = 10_000_000;
  * console.log(rss.estimate, Number(rss.standardUncertainty.toFixed(4))); // 3 0.4163
  * const worst = propagate(({ a, b }) => a + b, inputs, { method: "worst-case", normalBoundCoverage: 0.9973 });
  * console.log(worst.interval.map((v) => Number(v.toFixed(3)))); // [ 1.6, 4.4 ]
- * const mc = propagate(({ a, b }) => a + b, inputs, { method: "monte-carlo", trials: 20000, seed: 7 });
+ * const mc = propagate(({ a, b }) => a + b, inputs, { method: "monte-carlo", monteCarloTrials: 20000, seed: 7 });
  * console.log(mc.trials, Math.abs(mc.standardUncertainty - rss.standardUncertainty) < 0.01); // 20000 true
  * ```
  * @see JCGM 100:2008 (GUM); JCGM 101:2008 (GUM Supplement 1)
@@ -144,14 +144,20 @@ export function _monteCarloSettings(o: PropagateOptions, coverage: number, model
   if (!intervals.includes(interval)) _invalidChoice("interval", interval, intervals, context);
   const minimum = _minimumTrials(coverage);
   const seed = o.seed === undefined ? 1 : _requireInteger(o.seed, "seed", 0, 2 ** 32 - 1, context);
+  // `trials` is the deprecated name of `monteCarloTrials` (one minor version); both at once are refused.
+  if (o.monteCarloTrials !== undefined && o.trials !== undefined) {
+    _invalidChoice("options", "monteCarloTrials and trials", ["monteCarloTrials (trials is its deprecated name)"], context);
+  }
+  const trialsKey = o.monteCarloTrials === undefined ? "trials" : "monteCarloTrials";
+  const givenTrials = o.monteCarloTrials ?? o.trials;
   let adaptive: { significantDigits: number; maxTrials: number } | undefined;
   if (o.adaptive !== undefined) {
     _requireOptionsObject(o.adaptive, `${context} adaptive`, false);
-    if (o.trials !== undefined) {
+    if (givenTrials !== undefined) {
       throw new HotjunctionRangeError({
         code: "INVALID_OPTION",
-        quantity: "trials",
-        value: o.trials,
+        quantity: trialsKey,
+        value: givenTrials,
         context,
         problem: "cannot be given together with adaptive (give adaptive.maxTrials instead)",
       });
@@ -165,7 +171,7 @@ export function _monteCarloSettings(o: PropagateOptions, coverage: number, model
     adaptive = { significantDigits, maxTrials };
   }
   const trials =
-    o.trials === undefined ? Math.max(defaultTrials, minimum) : _requireInteger(o.trials, "trials", minimum, 1e9, context);
+    givenTrials === undefined ? Math.max(defaultTrials, minimum) : _requireInteger(givenTrials, trialsKey, minimum, 1e9, context);
   const planned = adaptive === undefined ? trials : adaptive.maxTrials;
   if (planned * models > _maxModelEvaluations) {
     throw new HotjunctionRangeError({

@@ -25,6 +25,9 @@ export interface InputDistribution {
 /** Propagation methods. */
 export type PropagationMethod = "worst-case" | "rss" | "monte-carlo";
 
+/** The propagation methods, in their reporting order: the one list every module reads. @internal */
+export const _propagationMethods = ["worst-case", "rss", "monte-carlo"] as const satisfies readonly PropagationMethod[];
+
 /** A propagation model: maps a record of input values (by input name) to one output value. */
 export type PropagationModel<Name extends string = string> = (inputs: Readonly<Record<Name, number>>) => number;
 
@@ -42,7 +45,12 @@ export interface PropagateOptions<Name extends string = string> {
   readonly coverage?: number;
   /** Correlation coefficients between named inputs, r in [−1, 1]. */
   readonly correlations?: readonly (readonly [Name, Name, number])[];
-  /** Monte Carlo: number of trials (default 1e6 unless `adaptive`). */
+  /** Monte Carlo: number of trials (default 1e6 unless `adaptive`; the design file's and the chain's name). */
+  readonly monteCarloTrials?: number;
+  /**
+   * Monte Carlo: the number of trials under its former name.
+   * @deprecated use `monteCarloTrials` (kept for one minor version; giving both is an error).
+   */
   readonly trials?: number;
   /** Monte Carlo: seed of the generator (default 1). Same seed, same result, bit for bit. */
   readonly seed?: number;

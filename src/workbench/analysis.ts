@@ -11,6 +11,7 @@ import {
   reviewChainFaults,
   reviewTripDesignFaults,
   type ChainEvaluation,
+  type PropagationMethod,
   type FaultReviewReport,
   type ReferenceComparison,
   type ReviewFaultsOptions,
@@ -30,7 +31,7 @@ export interface AnalysisSettings {
   readonly trials: number;
   /** Monte Carlo seed (the design's, else 1). */
   readonly seed: number;
-  readonly acceptanceMethod: "worst-case" | "rss" | "monte-carlo";
+  readonly acceptanceMethod: PropagationMethod;
   readonly coverage: number;
 }
 

@@ -19,6 +19,8 @@ export interface FormHost {
   readonly set: (path: DraftPath, value: unknown, structural: boolean) => void;
 }
 
+// Deliberately alike: src/design/scanJson.ts `_formatPath` is the same format; the page imports the library only
+// through its public entries, and the path format is an internal detail of the messages.
 /** Formats a path as the design file's messages do (`setpoints[1].tripTemperatureC`). */
 export function formatPath(path: DraftPath): string {
   let text = "";

@@ -6,29 +6,17 @@
  */
 import { HotjunctionRangeError } from "../../errors.js";
 import { rectangular } from "../../uncertainty/rectangular.js";
-import { _limitDistribution, _requireObject, _requireOrderedPair, type _SourceContext } from "../_common.js";
+import { _checkTemperatureRange, _source, type _SourceContext } from "../_common.js";
 import type { ErrorSourceUnit } from "../types.js";
-import type { TemperatureRangeC, WireErrorSource, WireSourceElement } from "../wireTypes.js";
+import type { WireErrorSource } from "../types.js";
+import type { TemperatureRangeC, WireSourceElement } from "../wireTypes.js";
 
 /** @internal Source values by name (as in the chain models). */
 export type _Inputs = Readonly<Record<string, number>>;
 
 /** @internal Checks a temperature range object `{ minC, maxC }` (finite, min ≤ max, not below absolute zero). */
 export function _checkRange(value: unknown, quantity: string, context: string): TemperatureRangeC {
-  const o = _requireObject(value, quantity, context);
-  const [minC, maxC] = _requireOrderedPair(o["minC"], o["maxC"], `${quantity}.minC`, `${quantity}.maxC`, "°C", context);
-  if (minC < -273.15) {
-    throw new HotjunctionRangeError({
-      code: "OUT_OF_RANGE",
-      quantity: `${quantity}.minC`,
-      value: minC,
-      min: -273.15,
-      unit: "°C",
-      context,
-      problem: "is below absolute zero",
-    });
-  }
-  return { minC, maxC };
+  return _checkTemperatureRange(value, quantity, `${quantity}.minC`, `${quantity}.maxC`, context);
 }
 
 /** @internal Throws unless `inner` lies within `outer` (both °C ranges). */
@@ -65,14 +53,8 @@ export function _wireSource(
   limit: number,
   center = 0,
 ): WireErrorSource {
-  return {
-    name,
-    element,
-    description,
-    unit,
-    limit,
-    distribution: _limitDistribution(name, limit, center, ctx.overrides?.[name]),
-  };
+  // The chain's one source builder; only the element's type is narrower here.
+  return _source(ctx, name, element, description, unit, limit, center) as WireErrorSource;
 }
 
 /**

@@ -34,7 +34,8 @@ import { _emfFromTemperature, _seebeckCoefficient } from "../../its90/engine.js"
 import { thermocoupleData } from "../../its90/resolveType.js";
 import { _optionalLimit, _requireObject, type _SourceContext } from "../_common.js";
 import type { AmbientRange } from "../types.js";
-import type { ConnectorElement, ContactMetal, StatedLegSeebeck, TemperatureRangeC, WireErrorSource } from "../wireTypes.js";
+import type { WireErrorSource } from "../types.js";
+import type { ConnectorElement, ContactMetal, StatedLegSeebeck, TemperatureRangeC } from "../wireTypes.js";
 import { _checkRange, _rangeSource, _wireSource, type _Inputs } from "./_wireCommon.js";
 
 /** Seebeck coefficients of a type's legs against a contact metal, µV/°C. */

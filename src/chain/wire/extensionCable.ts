@@ -28,14 +28,8 @@ import { _compile, type CompiledType } from "../../its90/compiled.js";
 import { _emfFromTemperature, _seebeckCoefficient } from "../../its90/engine.js";
 import { thermocoupleData } from "../../its90/resolveType.js";
 import { _requireNonNegative, _requireObject, type _SourceContext } from "../_common.js";
-import type { AmbientRange } from "../types.js";
-import type {
-  CableMismatchModel,
-  CableTolerance,
-  ExtensionCableElement,
-  TemperatureRangeC,
-  WireErrorSource,
-} from "../wireTypes.js";
+import type { AmbientRange, WireErrorSource } from "../types.js";
+import type { CableMismatchModel, CableTolerance, ExtensionCableElement, TemperatureRangeC } from "../wireTypes.js";
 import { _checkRange, _rangeSource, _requireWithin, _wireSource, type _Inputs } from "./_wireCommon.js";
 
 /** A resolved cable tolerance statement. */

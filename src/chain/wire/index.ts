@@ -7,6 +7,7 @@
  * @module
  */
 export type * from "../wireTypes.js";
+export type { WireErrorSource } from "../types.js";
 export {
   astmExtensionWireTolerances,
   iecCableTolerances,

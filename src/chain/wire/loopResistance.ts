@@ -13,7 +13,8 @@ import type { ThermocoupleType } from "../../data/thermocoupleData.js";
 import { thermocoupleLegs } from "../../data/wireAlloys.js";
 import { _invalidChoice, _label, _requireFinite, HotjunctionRangeError } from "../../errors.js";
 import { _optionalLimit, _requireFraction, _requireObject, _requirePositive, type _SourceContext } from "../_common.js";
-import type { DetectionDirection, LoopResistanceElement, ThermocoupleWireRun, WireErrorSource } from "../wireTypes.js";
+import type { WireErrorSource } from "../types.js";
+import type { DetectionDirection, LoopResistanceElement, ThermocoupleWireRun } from "../wireTypes.js";
 import { _wireSource, type _Inputs } from "./_wireCommon.js";
 
 /**

@@ -11,7 +11,8 @@
  */
 import { _invalidChoice, _requireFinite, _requireInteger, HotjunctionRangeError } from "../../errors.js";
 import { _optionalLimit, _requireNonNegative, _requireObject, _requirePositive, type _SourceContext } from "../_common.js";
-import type { AgeingElement, DriftDirection, InsulationLeakageElement, WireErrorSource } from "../wireTypes.js";
+import type { WireErrorSource } from "../types.js";
+import type { AgeingElement, DriftDirection, InsulationLeakageElement } from "../wireTypes.js";
 import { _wireSource, type _Inputs } from "./_wireCommon.js";
 
 /**

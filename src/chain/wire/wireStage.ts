@@ -17,29 +17,23 @@ import { _emfFromTemperature } from "../../its90/engine.js";
 import { thermocoupleData } from "../../its90/resolveType.js";
 import { _checkAmbient, _requireObject, type _SourceContext } from "../_common.js";
 import type { AmbientRange, SourceDistributionOverride } from "../types.js";
+import type { WireErrorSource } from "../types.js";
 import type {
   AgeingElement,
   ConnectorElement,
   ExtensionCableElement,
   InsulationLeakageElement,
   LoopResistanceElement,
-  WireErrorSource,
+  WireDescription,
 } from "../wireTypes.js";
+
+export type { WireDescription } from "../wireTypes.js";
 import type { _Inputs } from "./_wireCommon.js";
 import { _connectorStage, type _ConnectorStage } from "./connector.js";
 import { _extensionCableStage, type _ExtensionCableStage } from "./extensionCable.js";
 import { _loopStage, type _LoopStage } from "./loopResistance.js";
 import { _ageingStage, _leakageStage, type _AgeingStage, type _LeakageStage } from "./probe.js";
 
-/** The wire's elements, each optional (plain data). */
-export interface WireDescription {
-  readonly cable?: ExtensionCableElement;
-  /** Connectors and terminal blocks; sources are named `connector.*` for one, `connector1.*`, `connector2.*` … for several. */
-  readonly connectors?: readonly ConnectorElement[];
-  readonly loop?: LoopResistanceElement;
-  readonly leakage?: InsulationLeakageElement;
-  readonly ageing?: AgeingElement;
-}
 
 /** @internal The wire's slots, in signal-path order (the compile switch of the wire: an unknown key is refused). */
 export const _wireSlots = ["cable", "connectors", "loop", "leakage", "ageing"] as const;

@@ -7,7 +7,8 @@ import type { Command } from "commander";
 import { evaluateChain } from "../../chain/evaluateChain.js";
 import { readingFromChain } from "../../chain/readingFromChain.js";
 import type { ChainEvaluation, MeasurementChain } from "../../chain/types.js";
-import { thermocouplePart, type BuildSheetAdcSetpoint, type BuildSheetPart, type TripBuildSheet } from "../../trip/buildSheet.js";
+import { thermocouplePart } from "../../trip/buildSheet.js";
+import type { BuildSheetAdcSetpoint, BuildSheetPart, TripBuildSheet } from "../../trip/types.js";
 import type { DesignFile } from "../../design/designSchema.js";
 import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { firmwareTripReport } from "../../report/firmwareTripReport.js";
@@ -33,7 +34,7 @@ import {
   type OutputOptionValues,
 } from "../outputOptions.js";
 import { _loadProgress, _startProgress } from "../progress.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 import { _withDesignDynamics } from "../dynamicsOfDesign.js";
 
 type CheckOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean; readonly partsCsv?: string };

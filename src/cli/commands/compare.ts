@@ -24,7 +24,7 @@ import {
   _planCommandOutputs,
   type OutputOptionValues,
 } from "../outputOptions.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 import type { CliIo } from "../io.js";
 import type { AnalysisSettings } from "../designOptions.js";
 import type { DesignFile, DesignReference } from "../../design/designSchema.js";

@@ -26,7 +26,7 @@ import { _designSafety, _reviewDesignFaults, type _DesignSafety } from "../fault
 import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _parseNumber } from "../parseArgs.js";
 import { _readInputFile } from "../readInput.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 
 interface FaultsCommandOptions extends OutputOptionValues {
   readonly bias?: "pull-up" | "pull-down" | "none";

@@ -20,7 +20,7 @@ import {
   type OutputOptionValues,
 } from "../outputOptions.js";
 import { _integerParser, _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 
 interface RefTableOptions extends OutputOptionValues {
   readonly from: number;

@@ -19,7 +19,7 @@ import {
 } from "../designOptions.js";
 import { _dynamicsFigures, _tripDynamicsOfDesign } from "../dynamicsOfDesign.js";
 import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 import { _tripReportOfDesign } from "./check.js";
 import { _loadProgress } from "../progress.js";
 

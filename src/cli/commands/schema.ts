@@ -5,7 +5,7 @@
 import type { Command } from "commander";
 import { _designJsonSchemaText } from "../../design/designJsonSchema.js";
 import { _emitOutputs, _planCommandOutputs } from "../outputOptions.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 
 /** Registers the `schema` command. @internal */
 export function registerSchemaCommand(program: Command, context: CommandContext): Command {

@@ -6,7 +6,7 @@
 import { Option, type Command } from "commander";
 import { starterDesign, starterTopologies, type StarterTopology } from "../../design/starterDesigns.js";
 import { _emitOutputs, _planCommandOutputs } from "../outputOptions.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 
 /** Registers the `starter` command. @internal */
 export function registerStarterCommand(program: Command, context: CommandContext): Command {

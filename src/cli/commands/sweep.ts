@@ -28,7 +28,7 @@ import {
 } from "../outputOptions.js";
 import { _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
 import { _loadProgress, _startProgress } from "../progress.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 
 type SweepOptions = OutputOptionValues & AnalysisOptionValues & { from: number; to: number; step: number };
 

@@ -5,6 +5,7 @@
  */
 import { Option, type Command } from "commander";
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
+import { _adcBitsMax, _adcBitsMin } from "../../chain/adc.js";
 import { firmwareTableFromSpec, type FirmwareTableSpec } from "../../firmware/firmwareTableFromSpec.js";
 import { _firmwareTableKinds, type FirmwareTableKind } from "../../firmware/tableFunction.js";
 import { thermocoupleTypes } from "../../its90/resolveType.js";
@@ -12,7 +13,7 @@ import { isHotjunctionError } from "../../errors.js";
 import { CliError, usageExitCode } from "../cliError.js";
 import { _emitOutputs, _planCommandOutputs } from "../outputOptions.js";
 import { _integerParser, _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 
 interface TableOptions {
   readonly kind: FirmwareTableKind;
@@ -47,6 +48,7 @@ export const _tableVocabulary: readonly (readonly [RegExp, string])[] = [
   [/\bmaxBreakpoints\b/g, "--max-breakpoints"],
   [/\bminC\b/g, "--from"],
   [/\bmaxC\b/g, "--to"],
+  [/\bfullScaleVolts\b/g, "--reference-volts"],
   [/\breferenceVolts\b/g, "--reference-volts"],
   [/\boffsetMillivolts\b/g, "--offset-mv"],
   [/\bcoldJunctionC\b/g, "--cold-junction"],
@@ -72,7 +74,7 @@ export function registerTableCommand(program: Command, context: CommandContext):
     .option("--prefix <name>", "identifier prefix in the C header")
     .option("--gain <V/V>", "ADC kinds: amplifier gain", _parsePositiveNumber)
     .option("--reference-volts <V>", "ADC kinds: ADC full-scale (reference) voltage", _parsePositiveNumber)
-    .option("--bits <n>", "ADC kinds: resolution", _integerParser(8, 31))
+    .option("--bits <n>", "ADC kinds: resolution", _integerParser(_adcBitsMin, _adcBitsMax))
     .option("--offset-mv <mV>", "ADC kinds: offset added at the ADC input, mV", _parseNumber)
     .option("--cold-junction <C>", "ADC kinds: fixed cold-junction temperature, °C", _parseNumber)
     .option("--max-breakpoints <n>", "cap on breakpoints", _integerParser(2, 65536))
@@ -114,7 +116,7 @@ export function registerTableCommand(program: Command, context: CommandContext):
           ? {
               chain: {
                 gain: options.gain as number,
-                referenceVolts: options.referenceVolts as number,
+                fullScaleVolts: options.referenceVolts as number,
                 bits: options.bits as number,
                 ...(options.offsetMv !== undefined ? { offsetMillivolts: options.offsetMv } : {}),
                 ...(options.coldJunction !== undefined ? { coldJunctionC: options.coldJunction } : {}),

@@ -8,7 +8,7 @@ import { thermocoupleTypes } from "../../its90/resolveType.js";
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
 import { _addOutputOptions, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _integerParser, _parseNumber } from "../parseArgs.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 import { emfUnits, temperatureUnits, type EmfUnit, type TemperatureUnit } from "../temperatureUnits.js";
 import { _tempText } from "../conversionText.js";
 

@@ -6,7 +6,7 @@
  */
 import type { Command } from "commander";
 import { faultsFromJson } from "../../faults/faultsFromJson.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 import { _loadDesign } from "../designOptions.js";
 import { CliError } from "../cliError.js";
 import { _designFailureDataProblems, _designFaultIds, _failureDataError } from "../faultSafety.js";

@@ -10,7 +10,7 @@ import { withInitialDesign } from "../../workbench/pageFile.js";
 import { CliError } from "../cliError.js";
 import { _emitOutputs, _planCommandOutputs } from "../outputOptions.js";
 import { _readInputFile } from "../readInput.js";
-import type { CommandContext } from "../runCli.js";
+import type { CommandContext } from "../commandContext.js";
 
 interface WorkbenchOptions {
   readonly out?: string;

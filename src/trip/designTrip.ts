@@ -19,6 +19,7 @@ import { _comparatorBuildSheet, resistorDesignator } from "./buildSheet.js";
 import { _rssCoverageFactor, _selfConsistentEdge } from "./_bandRules.js";
 import { _requireSeries } from "./standardResistorValues.js";
 import {
+  type _TripModel,
   _comparatorTripModel,
   _compileComparatorChain,
   _edgeMillivolts,
@@ -173,6 +174,30 @@ function pointResult(model: (x: Readonly<Record<string, number>>) => number, see
     ...(method === "monte-carlo" ? { trials: 0, seed } : {}),
     note: "no error source is non-zero: the band is the nominal value",
   });
+}
+
+/** Worst case of a trip model, with its interval enclosure (a bracket whose gap closes, see chain/_tripEnclosure.ts). */
+function worstCaseOf(m: _TripModel, seed: number, coverage: number, normalBoundCoverage: number): PropagationResult {
+  if (Object.keys(m.inputs).length === 0) return pointResult(m.model, seed, coverage)("worst-case");
+  return propagate(m.model, m.inputs, { method: "worst-case", normalBoundCoverage, modelEnclosure: m.enclosure });
+}
+
+/**
+ * The largest gap we state between a worst-case edge and its enclosure, °C: the chain models' enclosures meet their
+ * attained extremes within it (tests/trip/worstCaseEnclosure.test.ts; the gap itself is printed).
+ */
+export const _enclosureGapToleranceC = 1e-9;
+
+/** The bracket fields of a worst-case band from the results its low and high edges were read from. */
+function bracketOf(low: PropagationResult, high: PropagationResult): Partial<TripBand> {
+  if (low.enclosure === undefined || high.enclosure === undefined) return {};
+  return {
+    enclosureLowC: low.enclosure[0],
+    enclosureHighC: high.enclosure[1],
+    enclosureGapLowC: low.interval[0] - low.enclosure[0],
+    enclosureGapHighC: high.enclosure[1] - high.interval[1],
+    enclosureGapToleranceC: _enclosureGapToleranceC,
+  };
 }
 
 function band(method: PropagationMethod, r: PropagationResult): TripBand {
@@ -448,13 +473,13 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     // A chain with every error source at zero (an ideal design) has nothing to propagate: its band is the
     // nominal trip itself, by every method.
     const exact = Object.keys(inputs).length === 0 ? pointResult(model, seed, coverage) : undefined;
-    const worstAt = (toleranceAtC: number): PropagationResult => {
-      const m = _comparatorTripModel(tc.compiled, tap, "trip", toleranceAtC);
-      return Object.keys(m.inputs).length === 0 ? pointResult(m.model, seed, coverage)("worst-case") : propagate(m.model, m.inputs, { method: "worst-case", normalBoundCoverage });
-    };
+    const worstAt = (toleranceAtC: number): PropagationResult => worstCaseOf(_comparatorTripModel(tc.compiled, tap, "trip", toleranceAtC), seed, coverage, normalBoundCoverage);
     const worstAtSetpoint = exact?.("worst-case") ?? worstAt(plan.tripC);
-    const highEdge = _selfConsistentEdge((t) => worstAt(t).interval[1], plan.tripC);
-    const lowEdge = _selfConsistentEdge((t) => worstAt(t).interval[0], plan.tripC);
+    // Each edge keeps the result it was read from: its bracket (attained, enclosure, gap) is that edge's.
+    let atHigh = worstAtSetpoint;
+    let atLow = worstAtSetpoint;
+    const highEdge = _selfConsistentEdge((t) => (atHigh = worstAt(t)).interval[1], plan.tripC);
+    const lowEdge = _selfConsistentEdge((t) => (atLow = worstAt(t)).interval[0], plan.tripC);
     const worst: PropagationResult = {
       ...worstAtSetpoint,
       interval: [lowEdge.edgeC, highEdge.edgeC],
@@ -491,13 +516,11 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
       toleranceAtLowC: lowEdge.edgeC,
       toleranceAtHighC: highEdge.edgeC,
       iterations: Math.max(lowEdge.iterations, highEdge.iterations),
+      ...bracketOf(atLow, atHigh),
     };
     const bands = { "worst-case": worstBand, rss: rssBand, "monte-carlo": band("monte-carlo", mc) };
     // Release: the worst case of the falling edge, also self-consistent.
-    const releaseAt = (toleranceAtC: number): PropagationResult => {
-      const m = _comparatorTripModel(tc.compiled, tap, "release", toleranceAtC);
-      return Object.keys(m.inputs).length === 0 ? pointResult(m.model, seed, coverage)("worst-case") : propagate(m.model, m.inputs, { method: "worst-case", normalBoundCoverage });
-    };
+    const releaseAt = (toleranceAtC: number): PropagationResult => worstCaseOf(_comparatorTripModel(tc.compiled, tap, "release", toleranceAtC), seed, coverage, normalBoundCoverage);
     const releaseLow = _selfConsistentEdge((t) => releaseAt(t).interval[0], nominalReleaseC).edgeC;
     const releaseHigh = _selfConsistentEdge((t) => releaseAt(t).interval[1], nominalReleaseC).edgeC;
     const accepted = bands[acceptanceMethod];

@@ -192,6 +192,8 @@ export interface _ColdJunctionStage {
   errorC(x: Readonly<Record<string, number>>): number;
   /** Hardware: compensation voltage added before the amplifier at cold-junction temperature tc, mV. */
   compensationMillivolts(x: Readonly<Record<string, number>>, coldJunctionC: number): number;
+  /** Slope of `compensationMillivolts` in the cold-junction temperature (hardware: α; software: 0), mV/°C. */
+  readonly compensationSlopeMillivoltsPerC: number;
 }
 
 /** @internal Builds the stage: sources and transfer function. */
@@ -224,6 +226,7 @@ export function _coldJunctionStage(
         (hasSensor ? (x["coldJunction.sensorAccuracy"] as number) : 0) +
         (hasGradient ? (x["coldJunction.isothermalGradient"] as number) : 0),
       compensationMillivolts: () => 0,
+      compensationSlopeMillivoltsPerC: 0,
     };
   }
   if (o["method"] === "hardware") {
@@ -258,6 +261,7 @@ export function _coldJunctionStage(
       errorC,
       compensationMillivolts: (x, tc) =>
         e0 + alphaMv * (tc + errorC(x) - t0) + (hasAccuracy ? (x["coldJunction.compensationAccuracy"] as number) / 1000 : 0),
+      compensationSlopeMillivoltsPerC: alphaMv,
     };
   }
   return _invalidChoice("cold-junction method", o["method"], ["software", "hardware"], context);

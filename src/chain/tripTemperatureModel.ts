@@ -20,6 +20,7 @@ import {
   type _PrebuiltStages,
 } from "./_compileChain.js";
 import type { _ComparatorStage } from "./comparator.js";
+import { _comparatorTripEnclosure, type _TripEnclosure } from "./_tripEnclosure.js";
 import type { _ReferenceStage } from "./reference.js";
 import type { ChainErrorSource, ChainModel, ComparatorEdge, MeasurementChain, NominalTrip } from "./types.js";
 
@@ -94,6 +95,8 @@ export interface _TripModel {
   readonly model: Model;
   readonly inputs: Readonly<Record<string, Distribution>>;
   readonly sources: readonly ChainErrorSource[];
+  /** The model's interval enclosure over a box of its inputs (`_tripEnclosure.ts`); absent if a source is not accounted for. */
+  readonly enclosure?: _TripEnclosure;
 }
 
 /**
@@ -107,7 +110,9 @@ export function _comparatorTripModel(cc: _CompiledChain, tap: number, edge: Comp
   const inputs: Record<string, Distribution> = {};
   for (const s of sources) inputs[s.name] = s.distribution;
   const model: Model = (x) => _hotFromVolts(cc, _switchingVolts(cc, x, tap, edgeMv), x, _coldJunctionC(cc, x));
-  return { model, inputs, sources };
+  const { enclosure, accountsFor } = _comparatorTripEnclosure(cc, tap, edgeMv);
+  const complete = sources.every((s) => accountsFor.has(s.name));
+  return { model, inputs, sources, ...(complete ? { enclosure } : {}) };
 }
 
 /**
@@ -151,7 +156,9 @@ export function nominalTripTemperature(chain: MeasurementChain, tapIndex: number
  * The trip model of a comparator chain: a function of the named source values returning the hot-junction
  * temperature (°C) at which the comparator trips (or releases), with the sources' distributions, ready for
  * `propagate(model, inputs, options)`. The thermocouple tolerance is taken at the nominal trip temperature.
- * Allocation-free per call.
+ * Allocation-free per call. `enclosure` is the model's interval enclosure over a box of its inputs: give it to
+ * worst case as `modelEnclosure` and the bracket's enclosure meets the attained extremes (gap of a few
+ * 1e-12 °C; how it is built and what it rests on: DEVELOPERS.md, "Worst case of the chain models").
  * @param chain - a comparator chain
  * @param tapIndex - divider tap, 0 … n − 2 (0 without a divider)
  * @param options - `edge`: `"trip"` (default) or `"release"`
@@ -182,8 +189,8 @@ export function tripTemperatureModel(
   const cc = _compileComparatorChain(chain, context);
   const tap = checkTap(cc, tapIndex, context);
   const edge = checkEdge(options, context);
-  const { model, inputs, sources } = _comparatorTripModel(cc, tap, edge, _nominalSwitchingC(cc, tap, edge));
-  return { model, inputs, sources, nominalC: model(_meansRecord(sources)) };
+  const { model, inputs, sources, enclosure } = _comparatorTripModel(cc, tap, edge, _nominalSwitchingC(cc, tap, edge));
+  return { model, inputs, sources, nominalC: model(_meansRecord(sources)), ...(enclosure !== undefined ? { enclosure } : {}) };
 }
 
 /**

@@ -494,6 +494,11 @@ export interface ChainModel {
   readonly sources: readonly ChainErrorSource[];
   /** The model's output with every input at its mean, °C. */
   readonly nominalC: number;
+  /**
+   * Comparator trip models: an interval enclosure of the model over a box of its inputs ([low, high] by source
+   * name → [low, high] °C), for worst case's `modelEnclosure`.
+   */
+  readonly enclosure?: (box: Readonly<Record<string, readonly [number, number]>>) => readonly [number, number];
 }
 
 /** The raw reading of a chain at its detector. */

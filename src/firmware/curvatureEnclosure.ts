@@ -24,27 +24,31 @@ export type _Interval = readonly [number, number];
 const ULP = 2.220446049250313e-16; // 2^-52 (a literal: a module-level `**` is kept by every bundle)
 const TINY = 9.332636185032189e-302; // 2^-1000
 
-function down(x: number): number {
+/** x rounded down by two ulps (outward rounding of a lower end). @internal */
+export function _down(x: number): number {
   return x - (Math.abs(x) * 2 * ULP + TINY);
 }
 
-function up(x: number): number {
+/** x rounded up by two ulps (outward rounding of an upper end). @internal */
+export function _up(x: number): number {
   return x + (Math.abs(x) * 2 * ULP + TINY);
 }
 
-function add(a: _Interval, b: _Interval): _Interval {
-  return [down(a[0] + b[0]), up(a[1] + b[1])];
+/** Outward-rounded interval sum. @internal */
+export function _addInterval(a: _Interval, b: _Interval): _Interval {
+  return [_down(a[0] + b[0]), _up(a[1] + b[1])];
 }
 
-function mul(a: _Interval, b: _Interval): _Interval {
+/** Outward-rounded interval product. @internal */
+export function _mulInterval(a: _Interval, b: _Interval): _Interval {
   const p = [a[0] * b[0], a[0] * b[1], a[1] * b[0], a[1] * b[1]];
-  return [down(Math.min(...p)), up(Math.max(...p))];
+  return [_down(Math.min(...p)), _up(Math.max(...p))];
 }
 
 function square(a: _Interval): _Interval {
-  if (a[0] >= 0) return [down(a[0] * a[0]), up(a[1] * a[1])];
-  if (a[1] <= 0) return [down(a[1] * a[1]), up(a[0] * a[0])];
-  return [0, up(Math.max(a[0] * a[0], a[1] * a[1]))];
+  if (a[0] >= 0) return [_down(a[0] * a[0]), _up(a[1] * a[1])];
+  if (a[1] <= 0) return [_down(a[1] * a[1]), _up(a[0] * a[0])];
+  return [0, _up(Math.max(a[0] * a[0], a[1] * a[1]))];
 }
 
 /** Coefficient intervals of the k-th derivative of Σ cᵢ·tⁱ, each widened to hold the decimal coefficient. */
@@ -54,7 +58,7 @@ function derivativeCoefficients(c: Float64Array, k: number): _Interval[] {
     let factor = 1;
     for (let j = 0; j < k; j++) factor *= i - j;
     const v = factor * (c[i] as number); // factor ≤ 16·15·14: exact; one rounding in the product
-    out.push([down(down(v)), up(up(v))]);
+    out.push([_down(_down(v)), _up(_up(v))]);
   }
   return out;
 }
@@ -62,23 +66,23 @@ function derivativeCoefficients(c: Float64Array, k: number): _Interval[] {
 function hornerInterval(ci: readonly _Interval[], x: _Interval): _Interval {
   if (ci.length === 0) return [0, 0];
   let acc = ci[ci.length - 1] as _Interval;
-  for (let i = ci.length - 2; i >= 0; i--) acc = add(mul(acc, x), ci[i] as _Interval);
+  for (let i = ci.length - 2; i >= 0; i--) acc = _addInterval(_mulInterval(acc, x), ci[i] as _Interval);
   return acc;
 }
 
 /** Enclosure of the k-th derivative (k = 1 or 2) of type K's exponential term over t. */
 function exponentialDerivative(ct: CompiledType, k: 1 | 2, t: _Interval): _Interval {
-  const d: _Interval = [down(t[0] - ct.a2), up(t[1] - ct.a2)];
+  const d: _Interval = [_down(t[0] - ct.a2), _up(t[1] - ct.a2)];
   const d2 = square(d);
   // a1 < 0 for type K: exp(a1·d²) decreases in d²; for a1 ≥ 0 it increases.
-  const arg = mul([ct.a1, ct.a1], d2);
+  const arg = _mulInterval([ct.a1, ct.a1], d2);
   const widen = 4 * ULP;
   const g: _Interval = [Math.exp(arg[0]) * (1 - widen), Math.exp(arg[1]) * (1 + widen)];
-  const a0g = mul([ct.a0, ct.a0], g);
-  if (k === 1) return mul(a0g, mul([2 * ct.a1, 2 * ct.a1], d));
+  const a0g = _mulInterval([ct.a0, ct.a0], g);
+  if (k === 1) return _mulInterval(a0g, _mulInterval([2 * ct.a1, 2 * ct.a1], d));
   // g'' = a0·g·(2a1 + 4a1²·d²)
-  const a1sq = up(4 * ct.a1 * ct.a1);
-  return mul(a0g, add([2 * ct.a1, 2 * ct.a1], mul([down(4 * ct.a1 * ct.a1), a1sq], d2)));
+  const a1sq = _up(4 * ct.a1 * ct.a1);
+  return _mulInterval(a0g, _addInterval([2 * ct.a1, 2 * ct.a1], _mulInterval([_down(4 * ct.a1 * ct.a1), a1sq], d2)));
 }
 
 /**
@@ -90,8 +94,8 @@ export function _encloseEmfDerivative(ct: CompiledType, index: number, k: 1 | 2,
   const m = 0.5 * (t[0] + t[1]);
   const atMid = hornerInterval(derivativeCoefficients(sub.c, k), [m, m]);
   const next = hornerInterval(derivativeCoefficients(sub.c, k + 1), t);
-  let result = add(atMid, mul(next, [down(t[0] - m), up(t[1] - m)]));
-  if (sub.hasExp) result = add(result, exponentialDerivative(ct, k, t));
+  let result = _addInterval(atMid, _mulInterval(next, [_down(t[0] - m), _up(t[1] - m)]));
+  if (sub.hasExp) result = _addInterval(result, exponentialDerivative(ct, k, t));
   return result;
 }
 

@@ -35,6 +35,11 @@ const band = z.strictObject({
   toleranceAtLowC: num.optional(),
   toleranceAtHighC: num.optional(),
   iterations: num.optional(),
+  enclosureLowC: num.optional(),
+  enclosureHighC: num.optional(),
+  enclosureGapLowC: num.optional(),
+  enclosureGapHighC: num.optional(),
+  enclosureGapToleranceC: num.optional(),
 });
 const errorSource = z.strictObject({ name: z.string(), description: z.string(), worstCaseC: num, standardUncertaintyC: num });
 const resistor = z.strictObject({ designator: z.string(), ohms: num });

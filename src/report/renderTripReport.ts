@@ -231,6 +231,14 @@ export function formatPartsCsv(sheet: TripBuildSheet): string {
 function coverageLines(report: TripReport): string[] {
   const out: string[] = [];
   for (const s of report.setpoints) {
+    const w = s.bands.find((b) => b.method === "worst-case");
+    if (w?.enclosureLowC !== undefined && w.enclosureHighC !== undefined) {
+      const gap = (g: number | undefined): string => (g === undefined ? "?" : g === 0 ? "0" : g.toExponential(1));
+      out.push(
+        `Worst case at "${s.name}": attained ${w.lowC} to ${w.highC} °C (points of the source box reach them), enclosure ${w.enclosureLowC} to ${w.enclosureHighC} °C (over the whole box: interval arithmetic with outward rounding), gap ${gap(w.enclosureGapLowC)} / ${gap(w.enclosureGapHighC)} °C` +
+          (w.enclosureGapToleranceC !== undefined ? ` (stated tolerance ${w.enclosureGapToleranceC} °C).` : "."),
+      );
+    }
     const rss = s.bands.find((b) => b.method === "rss");
     if (rss?.coverageFactor !== undefined && rss.coverageFactor > 0) {
       out.push(

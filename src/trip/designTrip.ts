@@ -19,6 +19,7 @@ import { _comparatorBuildSheet, resistorDesignator } from "./buildSheet.js";
 import { _rssCoverageFactor, _selfConsistentEdge } from "./_bandRules.js";
 import { _requireSeries } from "./standardResistorValues.js";
 import {
+  type _TripModel,
   _comparatorTripModel,
   _compileComparatorChain,
   _edgeMillivolts,
@@ -205,14 +206,38 @@ function worstCaseAtTolerance(
   const known = new Map<string, PropagationResult>();
   return (toleranceAtC) => {
     const m = _comparatorTripModel(tc.compiled, tap, edge, toleranceAtC);
-    if (Object.keys(m.inputs).length === 0) return pointResult(m.model, seed, coverage)("worst-case");
+    if (Object.keys(m.inputs).length === 0) return worstCaseOf(m, seed, coverage, normalBoundCoverage);
     const key = inputsKey(m.inputs);
     let result = known.get(key);
     if (result === undefined) {
-      result = propagate(m.model, m.inputs, { method: "worst-case", normalBoundCoverage });
+      result = worstCaseOf(m, seed, coverage, normalBoundCoverage);
       known.set(key, result);
     }
     return result;
+  };
+}
+
+/** Worst case of a trip model, with its interval enclosure (a bracket whose gap closes, see chain/_tripEnclosure.ts). */
+function worstCaseOf(m: _TripModel, seed: number, coverage: number, normalBoundCoverage: number): PropagationResult {
+  if (Object.keys(m.inputs).length === 0) return pointResult(m.model, seed, coverage)("worst-case");
+  return propagate(m.model, m.inputs, { method: "worst-case", normalBoundCoverage, modelEnclosure: m.enclosure });
+}
+
+/**
+ * The largest gap we state between a worst-case edge and its enclosure, °C: the chain models' enclosures meet their
+ * attained extremes within it (tests/trip/worstCaseEnclosure.test.ts; the gap itself is printed).
+ */
+export const _enclosureGapToleranceC = 1e-9;
+
+/** The bracket fields of a worst-case band from the results its low and high edges were read from. */
+function bracketOf(low: PropagationResult, high: PropagationResult): Partial<TripBand> {
+  if (low.enclosure === undefined || high.enclosure === undefined) return {};
+  return {
+    enclosureLowC: low.enclosure[0],
+    enclosureHighC: high.enclosure[1],
+    enclosureGapLowC: low.interval[0] - low.enclosure[0],
+    enclosureGapHighC: high.enclosure[1] - high.interval[1],
+    enclosureGapToleranceC: _enclosureGapToleranceC,
   };
 }
 
@@ -491,8 +516,11 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     const exact = Object.keys(inputs).length === 0 ? pointResult(model, seed, coverage) : undefined;
     const worstAt = worstCaseAtTolerance(tc, tap, "trip", seed, coverage, normalBoundCoverage);
     const worstAtSetpoint = exact?.("worst-case") ?? worstAt(plan.tripC);
-    const highEdge = _selfConsistentEdge((t) => worstAt(t).interval[1], plan.tripC);
-    const lowEdge = _selfConsistentEdge((t) => worstAt(t).interval[0], plan.tripC);
+    // Each edge keeps the result it was read from: its bracket (attained, enclosure, gap) is that edge's.
+    let atHigh = worstAtSetpoint;
+    let atLow = worstAtSetpoint;
+    const highEdge = _selfConsistentEdge((t) => (atHigh = worstAt(t)).interval[1], plan.tripC);
+    const lowEdge = _selfConsistentEdge((t) => (atLow = worstAt(t)).interval[0], plan.tripC);
     const worst: PropagationResult = {
       ...worstAtSetpoint,
       interval: [lowEdge.edgeC, highEdge.edgeC],
@@ -529,6 +557,7 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
       toleranceAtLowC: lowEdge.edgeC,
       toleranceAtHighC: highEdge.edgeC,
       iterations: Math.max(lowEdge.iterations, highEdge.iterations),
+      ...bracketOf(atLow, atHigh),
     };
     const bands = { "worst-case": worstBand, rss: rssBand, "monte-carlo": band("monte-carlo", mc) };
     // Release: the worst case of the falling edge, also self-consistent.

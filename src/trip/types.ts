@@ -176,6 +176,18 @@ export interface TripBand {
   readonly toleranceAtLowC?: number;
   readonly toleranceAtHighC?: number;
   readonly iterations?: number;
+  /**
+   * Worst case only, the bracket: `lowC`/`highC` are the attained extremes (values the model reaches at points of
+   * the source box); `enclosureLowC`/`enclosureHighC` a proven enclosure of the model over the whole box (interval
+   * arithmetic with outward rounding, a monotonicity proof per source and subdivision of the cold-junction
+   * temperature; see DEVELOPERS.md), °C; the gaps between them (≥ 0), °C; and the largest gap we state for the
+   * chain models, °C. Absent when nothing is propagated.
+   */
+  readonly enclosureLowC?: number;
+  readonly enclosureHighC?: number;
+  readonly enclosureGapLowC?: number;
+  readonly enclosureGapHighC?: number;
+  readonly enclosureGapToleranceC?: number;
 }
 
 /** One error source's share of the trip band. */

@@ -167,11 +167,15 @@ export function _branchAndBound(
     let boxes: { lo: Float64Array; hi: Float64Array; ub: number }[] = [{ lo: Float64Array.from(lower), hi: Float64Array.from(upper), ub: rootBound }];
     const tolerance = 1e-12 * (Math.abs(root[1] - root[0]) + Math.abs(best()));
     const budget = calls + maxEnclosureCalls;
+    // Boxes dropped because their bound is within the tolerance of the attained value still bound the model:
+    // the largest such bound stays part of the enclosure (dropping them must not shrink it to the attained value).
+    let dropped = Number.NEGATIVE_INFINITY;
     while (boxes.length > 0 && calls < budget) {
       let top = 0;
       for (let b = 1; b < boxes.length; b++) if ((boxes[b]?.ub as number) > (boxes[top]?.ub as number)) top = b;
       const box = boxes[top] as { lo: Float64Array; hi: Float64Array; ub: number };
       if (box.ub <= best() + tolerance) {
+        dropped = Math.max(dropped, box.ub);
         boxes = [];
         break;
       }
@@ -207,9 +211,10 @@ export function _branchAndBound(
         const e = bound(lo, hi);
         const ub = sign * (s === 0 ? e[1] : e[0]);
         if (ub > best() + tolerance) boxes.push({ lo, hi, ub });
+        else dropped = Math.max(dropped, ub);
       }
     }
-    let remaining = best();
+    let remaining = Math.max(best(), dropped);
     for (const b of boxes) remaining = Math.max(remaining, b.ub);
     if (boxes.length > 0) result.complete = false;
     if (s === 0) result.high = Math.min(root[1], remaining);

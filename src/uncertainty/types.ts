@@ -69,7 +69,7 @@ export interface PropagateOptions<Name extends string = string> {
    * outward rounding. With it the result carries a proven `enclosure` (branch and bound over the input box)
    * beside the `attained` extremes. The bracket holds only as far as the extension is a true enclosure.
    */
-  readonly modelEnclosure?: (box: Readonly<Record<Name, readonly [number, number]>>) => readonly [number, number];
+  readonly modelEnclosure?: ((box: Readonly<Record<Name, readonly [number, number]>>) => readonly [number, number]) | undefined;
   /** Monte Carlo: called now and then with the fraction done (0–1), for progress display. */
   readonly onProgress?: (fractionDone: number) => void;
 }

@@ -14,6 +14,9 @@ import type { TemperatureRangeC, WireSourceElement } from "../wireTypes.js";
 /** @internal Source values by name (as in the chain models). */
 export type _Inputs = Readonly<Record<string, number>>;
 
+/** @internal A box of source values: [low, high] by name. */
+export type _Box = Readonly<Record<string, readonly [number, number]>>;
+
 /** @internal Checks a temperature range object `{ minC, maxC }` (finite, min ≤ max, not below absolute zero). */
 export function _checkRange(value: unknown, quantity: string, context: string): TemperatureRangeC {
   return _checkTemperatureRange(value, quantity, `${quantity}.minC`, `${quantity}.maxC`, context);

@@ -36,7 +36,8 @@ import { _optionalLimit, _requireObject, type _SourceContext } from "../_common.
 import type { AmbientRange } from "../types.js";
 import type { WireErrorSource } from "../types.js";
 import type { ConnectorElement, ContactMetal, StatedLegSeebeck, TemperatureRangeC } from "../wireTypes.js";
-import { _checkRange, _rangeSource, _wireSource, type _Inputs } from "./_wireCommon.js";
+import { _addInterval, _divInterval, _emfOver, _mulInterval, _seebeckOver, _subInterval, type _Interval } from "../_intervals.js";
+import { _checkRange, _rangeSource, _wireSource, type _Box, type _Inputs } from "./_wireCommon.js";
 
 /** Seebeck coefficients of a type's legs against a contact metal, µV/°C. */
 export interface LegSeebeck {
@@ -121,6 +122,13 @@ export interface _ConnectorStage {
   readonly arrangement: "terminates" | "inline";
   /** EMF error ΔE the connector adds to the thermocouple's EMF, mV, with the cold-junction sensor at `coldJunctionC`. */
   emfErrorMillivolts(x: _Inputs, coldJunctionC: number): number;
+  /**
+   * Terminating connectors (the only ones whose error depends on the cold-junction temperature): every value of
+   * `emfErrorMillivolts` over a box of the sources and an interval of the cold-junction temperature (outward
+   * rounded, in the model's order of operations), and an enclosure of its derivative in that temperature
+   * (E′(t_cj) − E′(t_connector) for a connector above the cold junction, E′(t_cj) for one at its own temperature).
+   */
+  emfErrorOver?(box: _Box, coldJunctionC: _Interval): { readonly value: _Interval; readonly coldJunctionSlope: _Interval };
 }
 
 function statedLegs(value: unknown, context: string): LegSeebeck {
@@ -211,6 +219,15 @@ export function _connectorStage(
         const tConn = hasAbs ? r : tcj + r;
         const leg = hasLeg ? (-legSum * (x[`${name}.legDifference`] as number)) / 1000 : 0;
         return _emfFromTemperature(ct, tcj) - _emfFromTemperature(ct, tConn) + leg;
+      },
+      emfErrorOver: (box, tcj) => {
+        const r: _Interval = varies ? (box[tName] as _Interval) : [fixed, fixed];
+        const tConn = hasAbs ? r : _addInterval(tcj, r);
+        const leg: _Interval = hasLeg ? _divInterval(_mulInterval([-legSum, -legSum], box[`${name}.legDifference`] as _Interval), [1000, 1000]) : [0, 0];
+        return {
+          value: _addInterval(_subInterval(_emfOver(ct, tcj), _emfOver(ct, tConn)), leg),
+          coldJunctionSlope: hasAbs ? _seebeckOver(ct, tcj) : _subInterval(_seebeckOver(ct, tcj), _seebeckOver(ct, tConn)),
+        };
       },
     };
   }

@@ -30,7 +30,8 @@ import { thermocoupleData } from "../../its90/resolveType.js";
 import { _requireNonNegative, _requireObject, type _SourceContext } from "../_common.js";
 import type { AmbientRange, WireErrorSource } from "../types.js";
 import type { CableMismatchModel, CableTolerance, ExtensionCableElement, TemperatureRangeC } from "../wireTypes.js";
-import { _checkRange, _rangeSource, _requireWithin, _wireSource, type _Inputs } from "./_wireCommon.js";
+import { _emfOver, _mulInterval, _seebeckOver, _subInterval, type _Interval } from "../_intervals.js";
+import { _checkRange, _rangeSource, _requireWithin, _wireSource, type _Box, type _Inputs } from "./_wireCommon.js";
 
 /** A resolved cable tolerance statement. */
 export interface CableToleranceStatement {
@@ -267,6 +268,12 @@ export interface _ExtensionCableStage {
   readonly mismatch: CableMismatchModel;
   /** EMF error ΔE the cable adds to the thermocouple's EMF, mV, with the cold end at `coldJunctionC`. */
   emfErrorMillivolts(x: _Inputs, coldJunctionC: number): number;
+  /**
+   * The proportional model (the only one whose error depends on the cold-junction temperature): every value of
+   * `emfErrorMillivolts` over a box of the sources and an interval of the cold-junction temperature (outward
+   * rounded, in the model's order of operations), and an enclosure of its derivative in that temperature, −k·E′(t_cj).
+   */
+  emfErrorOver?(box: _Box, coldJunctionC: _Interval): { readonly value: _Interval; readonly coldJunctionSlope: _Interval };
 }
 
 /**
@@ -341,6 +348,13 @@ export function _extensionCableStage(
       const tj = junctionVaries ? (x["cable.junctionTemperature"] as number) : fixedJunctionC;
       const k = (x["cable.tolerance"] as number) * perMicrovolt;
       return k * (_emfFromTemperature(ct, tj) - _emfFromTemperature(ct, tcj));
+    },
+    emfErrorOver: (box, tcj) => {
+      if (!has) return { value: [0, 0], coldJunctionSlope: [0, 0] };
+      const tj: _Interval = junctionVaries ? (box["cable.junctionTemperature"] as _Interval) : [fixedJunctionC, fixedJunctionC];
+      const k = _mulInterval(box["cable.tolerance"] as _Interval, [perMicrovolt, perMicrovolt]);
+      const slope = _mulInterval(k, _seebeckOver(ct, tcj));
+      return { value: _mulInterval(k, _subInterval(_emfOver(ct, tj), _emfOver(ct, tcj))), coldJunctionSlope: [-slope[1], -slope[0]] };
     },
   };
 }

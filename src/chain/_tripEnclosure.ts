@@ -1,0 +1,395 @@
+/**
+ * An interval enclosure of the comparator trip model over a box of its sources (the `modelEnclosure` of worst
+ * case, so the bracket's enclosure meets its attained extremes for the chain models).
+ *
+ * The model is t = E⁻¹(A) − ε − a with the argument
+ *
+ *   A = (e(t_cj) − W(t_cj)) / s + Ê(t_cj),   e(t_cj) = V_sw·1000/G − V_os − V_comp(t_cj)   (fixed scale: (V_sw·1000/k − t_cj − x)·α)
+ *
+ * V_sw = V_ref·r + V_cmp the switching voltage, W the wire's added EMF, s its leakage factor, ε the thermocouple
+ * tolerance and a the ageing drift. How each part is enclosed, and why it is exact:
+ *
+ * 1. **Each element's transfer is monotone in each of its own sources, in a direction that does not depend on
+ *    the others** (proof by its formula): the reference V·(1 + Σ rel) and every offset, compensation and loop
+ *    term are affine; a divider tap ratio below/total rises with every resistor below the tap and falls with
+ *    every one above it (∂/∂R = (total − below)/total² or −below/total²) and each resistor R·(1 + tol + tempco)
+ *    is affine with R > 0; a resistor-set gain 1 + (R_f/R_g)·f/g rises with f and falls with g; the leakage
+ *    factor is affine. So its range over the box is its value at two corners (each source at the end that
+ *    raises it, or lowers it; the direction is read off the formula at the box's centre). The corner values are
+ *    the float64 values of the model's own code, widened by (16 + 4k) unit roundoffs of their magnitude for the
+ *    rounding of a k-source formula inside the box (a rounding count, stated, not machine-checked).
+ * 2. **The elements' sources are disjoint**, so the rest is a single-use expression in independent
+ *    intervals, and interval arithmetic (outward rounded, in the model's order of operations) gives its exact
+ *    range up to rounding — except for the cold-junction temperature t_cj, which appears in V_comp, in Ê(t_cj)
+ *    and in the wire.
+ * 3. **t_cj by a monotonicity proof, else subdivision.** The t_cj range is cut at the ITS-90 sub-range seams
+ *    and then recursively: where an interval enclosure of ∂A/∂t_cj (E′ by interval Horner, see `_intervals.ts`)
+ *    has one sign over the piece and the whole box, A is monotone in t_cj there and its range is the union of
+ *    the two end values (exact by 2); otherwise the piece is halved, down to 2⁻²⁰ of the range (or 40 halvings),
+ *    where the mean-value form A(m) + ∂A/∂t_cj·(t_cj − m) is used. This is where non-monotone chains (a hardware
+ *    compensation slope that crosses the Seebeck coefficient inside the ambient range) find their interior
+ *    extreme.
+ * 4. The argument's enclosure is widened by an allowance for the difference between the model as computed in
+ *    float64 and its exact value: 64 unit roundoffs of the sum of its terms' magnitudes plus twice the a-priori
+ *    bound of Ê per reference-function evaluation (and the largest seam step where a wire temperature
+ *    may cross a seam). The exact inverse is non-decreasing in the EMF (constructed so, `its90/exactInverse.ts`,
+ *    tested on every piece edge ± ulps), and float subtraction is monotone, so t's enclosure is E⁻¹ at the two
+ *    ends minus ε and a at theirs.
+ *
+ * What it rests on: the formulas in 1 (proof), outward rounding (proof), the allowance in 1 and 4 (a rounding
+ * count) and the exact inverse's monotonicity (construction, tested). The gap it leaves is a few 1e-12 °C.
+ * @module
+ * @internal
+ */
+import { _temperatureFromEmf } from "../its90/engine.js";
+import { _emfInSubrange } from "../its90/compiled.js";
+import { _emfEvaluationBound } from "../firmware/curvatureEnclosure.js";
+import {
+  _addInterval,
+  _divInterval,
+  _down,
+  _emfOver,
+  _hull,
+  _mag,
+  _mulInterval,
+  _seebeckOver,
+  _subInterval,
+  _up,
+  _widen,
+  type _Interval,
+} from "./_intervals.js";
+import { _ambientInputName, type _CompiledChain } from "./_compileChain.js";
+import type { _ComparatorStage } from "./comparator.js";
+import type { _ReferenceStage } from "./reference.js";
+
+type Box = Readonly<Record<string, readonly [number, number]>>;
+type Values = Record<string, number>;
+type Transfer = (x: Readonly<Record<string, number>>) => number;
+
+/** @internal The box enclosure of a trip model: box → [low, high] °C. */
+export type _TripEnclosure = (box: Box) => readonly [number, number];
+
+/** @internal The enclosure and the source names it accounts for (a box with any other name is not enclosed). */
+export interface _TripEnclosureOf {
+  readonly enclosure: _TripEnclosure;
+  readonly accountsFor: ReadonlySet<string>;
+}
+
+const U = 1.1102230246251565e-16; // 2^-53, the unit roundoff
+const minPieceFraction = 9.5367431640625e-7; // 2^-20
+const maxHalvings = 40;
+const maxPieces = 4096;
+
+/** The largest float below x (x finite). */
+function previousFloat(x: number): number {
+  if (x === 0) return -Number.MIN_VALUE;
+  const buf = new DataView(new ArrayBuffer(8));
+  buf.setFloat64(0, x);
+  const bits = buf.getBigUint64(0);
+  buf.setBigUint64(0, x > 0 ? bits - 1n : bits + 1n);
+  return buf.getFloat64(0);
+}
+
+/**
+ * Range of a transfer that is monotone in each of `names` (direction independent of the others) over the box:
+ * its values at the two corners, widened for rounding inside the box (see the module note, 1). `x` holds the
+ * box's centre on entry and on return.
+ */
+function cornerRange(f: Transfer, x: Values, box: Box, names: readonly string[]): _Interval {
+  const up: boolean[] = [];
+  for (const name of names) {
+    const [lo, hi] = box[name] as readonly [number, number];
+    const mid = x[name] as number;
+    x[name] = lo;
+    const fl = f(x);
+    x[name] = hi;
+    const fh = f(x);
+    x[name] = mid;
+    up.push(fh >= fl);
+  }
+  const fMid = f(x);
+  const corner = (high: boolean): number => {
+    names.forEach((name, i) => {
+      const b = box[name] as readonly [number, number];
+      x[name] = up[i] === high ? b[1] : b[0];
+    });
+    const v = f(x);
+    for (const name of names) {
+      const b = box[name] as readonly [number, number];
+      x[name] = 0.5 * (b[0] + b[1]);
+    }
+    return v;
+  };
+  const vHigh = corner(true);
+  const vLow = corner(false);
+  const allowance = (16 + 4 * names.length) * U * (Math.abs(vHigh) + Math.abs(vLow) + Math.abs(fMid));
+  return [_down(Math.min(vLow, vHigh, fMid) - allowance), _up(Math.max(vLow, vHigh, fMid) + allowance)];
+}
+
+const point = (v: number): _Interval => [v, v];
+
+/**
+ * @internal The enclosure of `_comparatorTripModel(cc, tap, edge, …)`'s model (any tolerance temperature: the
+ * tolerance is a box input like the others) over any box of its inputs. See the module note.
+ */
+export function _comparatorTripEnclosure(cc: _CompiledChain, tap: number, edgeMillivolts: number): _TripEnclosureOf {
+  const ct = cc.ct;
+  const reference = cc.reference as _ReferenceStage;
+  const divider = cc.divider;
+  const comparator = cc.comparator as _ComparatorStage;
+  const fixedScale = cc.fixedScale;
+  const amplifier = cc.amplifier;
+  const cj = cc.coldJunction?.method === "hardware" ? cc.coldJunction : undefined;
+  const wire = cc.wire;
+  const names = (sources: readonly { readonly name: string }[] | undefined): string[] => (sources ?? []).map((s) => s.name);
+  const referenceNames = names(reference.sources);
+  const dividerNames = names(divider?.sources);
+  const comparatorNames = names(comparator.sources);
+  const frontNames = fixedScale !== undefined ? names(fixedScale.sources) : names(amplifier.sources);
+  const cjNames = names(cj?.sources);
+  // The wire's added EMF, piece by piece in the model's order (cable, connectors, loop).
+  type AddedPiece =
+    | { readonly over: (box: Box, tc: _Interval) => { readonly value: _Interval; readonly coldJunctionSlope: _Interval } }
+    | { readonly transfer: Transfer; readonly names: readonly string[] };
+  const added: AddedPiece[] = [];
+  let wireEmfEvaluations = 0;
+  if (wire !== undefined) {
+    for (const piece of [wire.cable, ...wire.connectors]) {
+      if (piece === undefined) continue;
+      const over = piece.emfErrorOver;
+      if (over !== undefined) {
+        added.push({ over });
+        wireEmfEvaluations += 2;
+      } else added.push({ transfer: (x) => piece.emfErrorMillivolts(x, 0), names: names(piece.sources) });
+    }
+    if (wire.loop !== undefined) {
+      const loop = wire.loop;
+      added.push({ transfer: (x) => loop.offsetMillivolts(x), names: names(loop.sources) });
+    }
+  }
+  const leakage = wire?.leakage;
+  const leakageNames = names(leakage?.sources);
+  // The largest step between neighbouring sub-range polynomials, for wire temperatures that may cross a seam.
+  let seamStep = 0;
+  for (let i = 1; i < ct.subranges.length; i++) {
+    const s = (ct.subranges[i] as (typeof ct.subranges)[number]).minC;
+    const d = _emfEvaluationBound(ct, i - 1, [s, s]) + _emfEvaluationBound(ct, i, [s, s]);
+    seamStep = Math.max(seamStep, Math.abs(_emfInSubrange(ct, i - 1, s) - _emfInSubrange(ct, i, s)) + d);
+  }
+  const seams = ct.subranges.slice(1).map((s) => s.minC);
+  const lowestEmf = Math.max(ct.lowestEmf, ct.emfAtMinC);
+  // Software compensation does not act on a comparator's input: its sources leave the trip model unchanged.
+  const accountsFor = new Set<string>([
+    ...referenceNames,
+    ...dividerNames,
+    ...comparatorNames,
+    ...frontNames,
+    ...names(cc.coldJunction?.sources),
+    ...leakageNames,
+    ...names(wire?.cable?.sources),
+    ...(wire?.connectors ?? []).flatMap((c) => names(c.sources)),
+    ...names(wire?.loop?.sources),
+    _ambientInputName,
+    "thermocouple.tolerance",
+    ...(wire !== undefined ? ["probe.ageing"] : []),
+  ]);
+
+  const enclosure = (box: Box): readonly [number, number] => {
+    const x: Values = {};
+    for (const name of Object.keys(box)) {
+      const b = box[name] as readonly [number, number];
+      x[name] = 0.5 * (b[0] + b[1]);
+    }
+    const present = (list: readonly string[]): string[] => list.filter((n) => n in box);
+    const range = (f: Transfer, list: readonly string[]): _Interval => cornerRange(f, x, box, present(list));
+    const vRef = range((v) => reference.volts(v), referenceNames);
+    const ratio = divider === undefined ? point(1) : range((v) => divider.ratio(v, tap), dividerNames);
+    const vCmp = range((v) => comparator.switchingOffsetVolts(v, edgeMillivolts), comparatorNames);
+    const vSwitch = _addInterval(_mulInterval(vRef, ratio), vCmp);
+    const out = _mulInterval(vSwitch, point(1000));
+
+    // e(t_cj) for a point t_cj (the model's own order) and for an interval (affine in t_cj, slope −α).
+    let front: (tc: _Interval) => _Interval;
+    let frontSlope: number;
+    if (fixedScale !== undefined) {
+      const alpha = fixedScale.alphaMillivoltsPerC;
+      const scaled = _divInterval(out, point(fixedScale.millivoltsPerC));
+      const extra = range((v) => fixedScale.emfForOutput(v, 0, 0), frontNames); // = −x·α
+      front = (tc) => _addInterval(_mulInterval(_subInterval(scaled, tc), point(alpha)), extra);
+      frontSlope = -alpha;
+    } else {
+      const gain = range((v) => amplifier.gain(v), frontNames);
+      const offset = range((v) => amplifier.inputOffsetMillivolts(v), frontNames);
+      const e0 = _subInterval(_divInterval(out, gain), offset);
+      if (cj !== undefined) {
+        const alpha = cj.compensationSlopeMillivoltsPerC;
+        const compAtZero = range((v) => cj.compensationMillivolts(v, 0), cjNames);
+        front = (tc) =>
+          tc[0] === tc[1]
+            ? _subInterval(e0, range((v) => cj.compensationMillivolts(v, tc[0]), cjNames))
+            : _subInterval(e0, _addInterval(compAtZero, _mulInterval(point(alpha), tc)));
+        frontSlope = -alpha;
+      } else {
+        front = () => e0;
+        frontSlope = 0;
+      }
+    }
+    const scaleRange = leakage === undefined ? point(1) : range((v) => leakage.emfScale(v), leakageNames);
+    const fixedAdded = added.map((p) => ("transfer" in p ? range(p.transfer, p.names) : undefined));
+    const tcRange: _Interval = cc.hasAmbientInput ? (box[_ambientInputName] as _Interval) : point(cc.ambient.minC);
+
+    let magnitude = 0;
+    let emfEvaluations = 1 + wireEmfEvaluations;
+    /** A over a t_cj interval with the wire's sources from `wireBox` and the leakage factor `scale`. */
+    const argument = (tc: _Interval, wireBox: Box, scale: _Interval): _Interval => {
+      const e = front(tc);
+      const emfCj = _emfOver(ct, tc);
+      magnitude = Math.max(magnitude, _mag(e) + _mag(emfCj));
+      if (wire === undefined) return _addInterval(e, emfCj);
+      let w: _Interval = point(0);
+      added.forEach((p, i) => {
+        const v = "over" in p ? p.over(wireBox, tc).value : (fixedAdded[i] as _Interval);
+        w = i === 0 ? v : _addInterval(w, v);
+        magnitude = Math.max(magnitude, _mag(v));
+      });
+      return _addInterval(_divInterval(_subInterval(e, w), scale), emfCj);
+    };
+    /** An enclosure of ∂A/∂t_cj over a t_cj interval (real derivatives). */
+    const slope = (tc: _Interval, wireBox: Box, scale: _Interval): _Interval => {
+      let d: _Interval = point(frontSlope);
+      for (const p of added) if ("over" in p) d = _subInterval(d, p.over(wireBox, tc).coldJunctionSlope);
+      if (wire !== undefined) d = _divInterval(d, scale);
+      return _addInterval(d, _seebeckOver(ct, tc));
+    };
+
+    // Allowance for the float evaluation (module note, 4): Ê's a-priori bound over every temperature used.
+    let temps: _Interval = tcRange;
+    for (const name of cc.wireRangeNames) {
+      const r = box[name];
+      if (r !== undefined) temps = _hull(_hull(temps, r), _addInterval(tcRange, r));
+    }
+    let emfBound = 0;
+    ct.subranges.forEach((sub, i) => {
+      const lo = Math.max(temps[0], sub.minC);
+      const hi = Math.min(temps[1], sub.maxC);
+      if (lo <= hi) emfBound = Math.max(emfBound, _emfEvaluationBound(ct, i, [lo, hi]));
+    });
+    const allowance = (): number => 64 * U * magnitude + 2 * emfEvaluations * emfBound + seamAllowance;
+    let seamAllowance = 0;
+
+    let pieces = 0;
+    /** A over t_cj ∈ [tcLow, tcHigh] (module note, 3), cut where a reference-function evaluation changes polynomial. */
+    const overTc = (wireBox: Box, scale: _Interval): _Interval => {
+      const atPoint = (t: number): _Interval => _widen(argument(point(t), wireBox, scale), allowance());
+      const overPiece = (p: _Interval, depth: number): _Interval => {
+        if (p[0] === p[1]) return atPoint(p[0]);
+        pieces++;
+        const d = slope(p, wireBox, scale);
+        if (d[0] >= 0) return _widen([atPoint(p[0])[0], atPoint(p[1])[1]], allowance());
+        if (d[1] <= 0) return _widen([atPoint(p[1])[0], atPoint(p[0])[1]], allowance());
+        const m = 0.5 * (p[0] + p[1]);
+        if (depth >= maxHalvings || pieces > maxPieces || p[1] - p[0] <= (tcRange[1] - tcRange[0]) * minPieceFraction) {
+          emfEvaluations += 1;
+          return _widen(_addInterval(atPoint(m), _mulInterval(d, [_down(p[0] - m), _up(p[1] - m)])), allowance());
+        }
+        return _hull(overPiece([p[0], m], depth + 1), overPiece([m, p[1]], depth + 1));
+      };
+      // E(t_cj) changes polynomial exactly at a seam (floats below use the lower one). E(t_cj + r) of a connector
+      // above the cold junction at a fixed r changes near seam − r (to within the rounding of the sum): a few ulps
+      // around it are enclosed by plain interval evaluation (no derivative across the step). With r an interval,
+      // the step can fall anywhere: the largest seam step is allowed for (module note, 4).
+      seamAllowance = 0;
+      const nearCuts: number[] = [];
+      for (const name of cc.wireRangeNames) {
+        if (!name.endsWith(".aboveColdJunction")) continue;
+        const r = wireBox[name];
+        if (r === undefined) continue;
+        const tConn = _addInterval(tcRange, r);
+        for (const seam of seams) {
+          if (!(seam > tConn[0] && seam <= tConn[1])) continue;
+          if (r[0] === r[1]) nearCuts.push(seam - r[0]);
+          else seamAllowance += (2 * seamStep) / Math.min(1, scale[0] > 0 ? scale[0] : 1);
+        }
+      }
+      type Cut = { at: number; near: boolean };
+      const cuts: Cut[] = [...seams.map((at) => ({ at, near: false })), ...nearCuts.map((at) => ({ at, near: true }))].sort((a, b) => a.at - b.at);
+      let result: _Interval | undefined;
+      const add = (piece: _Interval): void => {
+        result = result === undefined ? piece : _hull(result, piece);
+      };
+      let start = tcRange[0];
+      for (const cut of cuts) {
+        if (!cut.near) {
+          if (cut.at > start && cut.at <= tcRange[1]) {
+            add(overPiece([start, previousFloat(cut.at)], 0));
+            start = cut.at;
+          }
+          continue;
+        }
+        const width = 8 * 2 * U * (Math.abs(cut.at) + Math.abs(tcRange[0]) + Math.abs(tcRange[1]) + 1);
+        const lo = Math.max(start, cut.at - width);
+        const hi = Math.min(tcRange[1], cut.at + width);
+        if (!(hi >= lo) || hi < start) continue;
+        if (lo > start) add(overPiece([start, lo], 0));
+        add(_widen(argument([lo, hi], wireBox, scale), allowance()));
+        start = hi;
+      }
+      if (start <= tcRange[1]) add(overPiece([start, tcRange[1]], 0));
+      return result as _Interval;
+    };
+
+    let arg: _Interval;
+    if (wire === undefined) arg = overTc(box, scaleRange);
+    else {
+      // With a wire, the leakage factor and a terminating connector's temperature couple with t_cj. Each takes
+      // the end that raises (or lowers) A when its direction is proven over the whole box: A falls with s when
+      // its numerator e − W is positive over the box (rises when negative), and rises with a connector's
+      // temperature where E′ > 0 over the connector's temperatures (−W holds +E(t_connector), s > 0).
+      const numerator = _subInterval(
+        front(tcRange),
+        added.reduce<_Interval>((w, p, i) => {
+          const v = "over" in p ? p.over(box, tcRange).value : (fixedAdded[i] as _Interval);
+          return i === 0 ? v : _addInterval(w, v);
+        }, point(0)),
+      );
+      const sideBox = (high: boolean): Box => {
+        const b: Record<string, readonly [number, number]> = { ...box };
+        for (const name of cc.wireRangeNames) {
+          const r = box[name];
+          if (r === undefined || name === "cable.junctionTemperature") continue;
+          const relative = name.endsWith(".aboveColdJunction");
+          const slopeThere = _seebeckOver(ct, relative ? _addInterval(tcRange, r) : r);
+          if (slopeThere[0] > 0 && scaleRange[0] > 0) b[name] = high ? [r[1], r[1]] : [r[0], r[0]];
+        }
+        return b;
+      };
+      const sideScale = (high: boolean): _Interval => {
+        if (!(scaleRange[0] > 0)) return scaleRange;
+        if (numerator[0] > 0) return high ? point(scaleRange[0]) : point(scaleRange[1]);
+        if (numerator[1] < 0) return high ? point(scaleRange[1]) : point(scaleRange[0]);
+        return scaleRange;
+      };
+      arg = [overTc(sideBox(false), sideScale(false))[0], overTc(sideBox(true), sideScale(true))[1]];
+    }
+
+    // Any argument the model can evaluate lies in the type's EMF range; E⁻¹ is non-decreasing.
+    const inverse = (emf: number): number => {
+      const clamped = Math.min(ct.emfAtMaxC, Math.max(lowestEmf, emf));
+      try {
+        return _temperatureFromEmf(ct, clamped);
+      } catch {
+        return emf < 0.5 * (lowestEmf + ct.emfAtMaxC) ? ct.minC : ct.maxC;
+      }
+    };
+    const eps = (box["thermocouple.tolerance"] ?? [0, 0]) as _Interval;
+    const ageing = (box["probe.ageing"] ?? [0, 0]) as _Interval;
+    let low = inverse(arg[0]) - eps[1];
+    let high = inverse(arg[1]) - eps[0];
+    if (wire !== undefined) {
+      low -= ageing[1];
+      high -= ageing[0];
+    }
+    return [low, high];
+  };
+  return { enclosure, accountsFor };
+}

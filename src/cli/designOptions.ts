@@ -91,3 +91,14 @@ export async function _loadDesign(io: CliIo, path: string): Promise<LoadedDesign
   const { parseDesign } = await import("../design/parseDesign.js");
   return { design: parseDesign(file.text, { fileName: path }), input: file.identity };
 }
+
+/** Each setpoint's target and limits as the design file states them (per setpoint, else the process limits), °C. @internal */
+export function _setpointLimitsOfDesign(design: DesignFile): { name: string; tripTemperatureC: number; maxNormalOperatingC: number; hazardLimitC: number }[] {
+  return design.setpoints.map((s) => ({
+    name: s.name,
+    tripTemperatureC: s.tripTemperatureC,
+    // Presence was checked when the design was validated.
+    maxNormalOperatingC: s.maxNormalOperatingC ?? design.processLimits?.maxNormalOperatingC ?? Number.NaN,
+    hazardLimitC: s.hazardLimitC ?? design.processLimits?.hazardLimitC ?? Number.NaN,
+  }));
+}

@@ -18,6 +18,7 @@ import {
   _analysisSettings,
   _loadDesign,
   _methodInfo,
+  _setpointLimitsOfDesign,
   type AnalysisOptionValues,
 } from "../designOptions.js";
 import {
@@ -132,6 +133,7 @@ export function registerSweepCommand(program: Command, context: CommandContext):
       title: "Reading error sweep",
       ...(design.name !== undefined ? { designName: design.name } : {}),
       rows,
+      setpoints: _setpointLimitsOfDesign(design),
       notes: [
         design.comparator !== undefined
           ? "Comparator design: the error is that of the signal at the comparator input read as a temperature (no threshold)."

@@ -329,6 +329,7 @@ export {
   type FaultReviewFormat,
   faultReviewJsonFormat,
   faultReviewReport,
+  type FaultReviewDisplayOptions,
   type FaultReviewReport,
   type FaultReviewRow,
   faultReviewScope,

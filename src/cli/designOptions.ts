@@ -46,6 +46,15 @@ export function _addAnalysisOptions(command: Command, svgWhat: string | undefine
   return command;
 }
 
+/** Adds `--unit C|F|K`, the temperature unit a design report shows (the `emf`/`temp` option's name and units). @internal */
+export function _addDisplayUnitOption(command: Command, what = ""): Command {
+  return command.addOption(
+    new Option("--unit <unit>", `temperature unit of the report${what}: text, Markdown, HTML, CSV and SVG (design files and JSON fields stay in °C; JSON records the unit)`)
+      .choices(["C", "F", "K"])
+      .default("C"),
+  );
+}
+
 /** Adds `--report-only` to `check` and `compare`. @internal */
 export function _addReportOnlyOption(command: Command): Command {
   return command.option(

@@ -35,20 +35,30 @@ export interface _TemperatureDisplay {
   readonly csvSuffix: ReportTemperatureUnit;
 }
 
+/** A converted value to 15 significant digits (drops the conversion's last-bit noise: 262 °C is 503.6 °F, not 503.6000000000001). */
+function _clean(value: number): number {
+  return Number.isFinite(value) ? Number(value.toPrecision(15)) : value;
+}
+
 /**
  * The display of a unit (default °C); an unknown unit is a typed error.
  * @internal
  */
 export function _temperatureDisplay(unit: ReportTemperatureUnit | undefined = "C"): _TemperatureDisplay {
   if (unit === "C") return { unit, symbol: "°C", at: (t) => t, diff: (d) => d, perDegree: (p) => p, csvSuffix: "C" };
-  if (unit === "F") return { unit, symbol: "°F", at: (t) => t * 1.8 + 32, diff: (d) => d * 1.8, perDegree: (p) => p / 1.8, csvSuffix: "F" };
-  if (unit === "K") return { unit, symbol: "K", at: (t) => t + 273.15, diff: (d) => d, perDegree: (p) => p, csvSuffix: "K" };
+  if (unit === "F") return { unit, symbol: "°F", at: (t) => _clean(t * 1.8 + 32), diff: (d) => _clean(d * 1.8), perDegree: (p) => _clean(p / 1.8), csvSuffix: "F" };
+  if (unit === "K") return { unit, symbol: "K", at: (t) => _clean(t + 273.15), diff: (d) => d, perDegree: (p) => p, csvSuffix: "K" };
   return _invalidChoice("temperature unit", unit, reportTemperatureUnits, "report");
 }
 
 /** The display of a renderer's options object (absent: °C). @internal */
 export function _displayOf(options: ReportDisplayOptions | undefined): _TemperatureDisplay {
   return _temperatureDisplay(options?.temperatureUnit ?? "C");
+}
+
+/** The CSV comment line naming a display unit other than °C (empty for °C). @internal */
+export function _csvUnitLine(display: _TemperatureDisplay): string {
+  return display.unit === "C" ? "" : `# temperatures in ${display.symbol} (differences ×${display.unit === "F" ? "1.8" : "1"} of °C); the JSON report keeps °C\n`;
 }
 
 /**

@@ -13,11 +13,13 @@ import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/d
 import { firmwareTripReport } from "../../report/firmwareTripReport.js";
 import { formatPartsCsv, formatTripReport, tripReportFromResult } from "../../report/renderTripReport.js";
 import type { TripReport } from "../../report/reportTypes.js";
+import type { ReportTemperatureUnit } from "../../report/displayUnit.js";
 import { tripBandChartSvg } from "../../report/tripBandChart.js";
 import { designTrip } from "../../trip/designTrip.js";
 import type { CliIo } from "../io.js";
 import {
   _addAnalysisOptions,
+  _addDisplayUnitOption,
   _addReportOnlyOption,
   _analysisSettings,
   _loadDesign,
@@ -37,7 +39,7 @@ import { _startProgress } from "../progress.js";
 import type { CommandContext } from "../runCli.js";
 import { _withDesignDynamics } from "../dynamicsOfDesign.js";
 
-type CheckOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean; readonly partsCsv?: string };
+type CheckOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean; readonly partsCsv?: string; readonly unit?: ReportTemperatureUnit };
 
 /** The extra output files of `check`, in order: the SVG chart, then the bill of materials. @internal */
 function checkExtraPaths(options: CheckOptions): string[] {
@@ -47,7 +49,7 @@ function checkExtraPaths(options: CheckOptions): string[] {
 /** The contents of `check`'s extra files, same order as {@link checkExtraPaths}. @internal */
 function checkExtraContents(options: CheckOptions, report: TripReport): string[] {
   const out: string[] = [];
-  if (options.svg !== undefined) out.push(tripBandChartSvg(report));
+  if (options.svg !== undefined) out.push(tripBandChartSvg(report, { temperatureUnit: options.unit ?? "C" }));
   if (options.partsCsv !== undefined) {
     if (report.buildSheet === undefined) throw new CliError("this design has no build sheet to write a bill of materials from");
     out.push(formatPartsCsv(report.buildSheet));
@@ -161,13 +163,14 @@ export function registerCheckCommand(program: Command, context: CommandContext):
   _addAnalysisOptions(command, "the trip bands");
   _addOutputOptions(command, ["json", "markdown", "csv"], true);
   _addReportOnlyOption(command);
+  _addDisplayUnitOption(command);
   command.option("--parts-csv <file>", "also write the bill of materials (every part the design chose: value, tolerance, tempco, count) as CSV");
   command.action(async (path: string, options: CheckOptions) => {
     const plan = _planCommandOutputs(context.io, options, [path], checkExtraPaths(options));
     const { design, input } = await _loadDesign(context.io, path);
     const report = _tripReportOfDesign(context.io, design, _analysisSettings(design, options));
     const named = _withDesignDynamics(design, design.name !== undefined ? { ...report, designName: design.name } : report);
-    const text = formatTripReport(named, _chosenFormat(options));
+    const text = formatTripReport(named, _chosenFormat(options), { temperatureUnit: options.unit ?? "C" });
     const extras = checkExtraContents(options, named);
     _emitOutputs(context.io, plan, options, text, extras, [input]);
     if (!named.pass && options.reportOnly !== true) {

@@ -7,11 +7,13 @@ import type { Command } from "commander";
 import { referenceOptionFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { formatComparisonReport } from "../../report/renderComparisonReport.js";
 import { comparisonChartSvg } from "../../report/comparisonChart.js";
+import type { ReportTemperatureUnit } from "../../report/displayUnit.js";
 import { compareReferences } from "../../trip/compareReferences.js";
 import { _startProgress } from "../progress.js";
 import { CliError, marginFailExitCode } from "../cliError.js";
 import {
   _addAnalysisOptions,
+  _addDisplayUnitOption,
   _addReportOnlyOption,
   _analysisSettings,
   _loadDesign,
@@ -34,7 +36,7 @@ import type { ReferenceComparison, ReferenceComparisonEntry, TripBand } from "..
 import type { TripReportSetpoint } from "../../report/reportTypes.js";
 import { _tripReportOfDesign } from "./check.js";
 
-type CompareOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean };
+type CompareOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean; readonly unit?: ReportTemperatureUnit };
 
 
 
@@ -113,6 +115,7 @@ export function registerCompareCommand(program: Command, context: CommandContext
   _addAnalysisOptions(command, "the options' trip bands side by side against the normal and hazard limits");
   _addOutputOptions(command, ["json", "markdown", "csv"], true);
   _addReportOnlyOption(command);
+  _addDisplayUnitOption(command);
   command.action(async (path: string, options: CompareOptions) => {
     const plan = _planCommandOutputs(context.io, options, [path], options.svg !== undefined ? [options.svg] : []);
     const { design, input } = await _loadDesign(context.io, path);
@@ -132,8 +135,9 @@ export function registerCompareCommand(program: Command, context: CommandContext
       progress.stop();
     }
     const methods = _methodInfo(settings);
-    const extras = options.svg !== undefined ? [comparisonChartSvg({ comparison, methods, setpoints: _setpointLimitsOfDesign(design), ...(design.name !== undefined ? { designName: design.name } : {}) })] : [];
-    _emitOutputs(context.io, plan, options, formatComparisonReport(comparison, _chosenFormat(options), methods, design.name), extras, [input]);
+    const unit = { temperatureUnit: options.unit ?? "C" } as const;
+    const extras = options.svg !== undefined ? [comparisonChartSvg({ comparison, methods, setpoints: _setpointLimitsOfDesign(design), ...(design.name !== undefined ? { designName: design.name } : {}) }, unit)] : [];
+    _emitOutputs(context.io, plan, options, formatComparisonReport(comparison, _chosenFormat(options), methods, design.name, unit), extras, [input]);
     // The design as drawn is its own reference (the first option); the alternatives failing is what a comparison shows.
     const own = comparison.options[0];
     if (own !== undefined && own.verdict !== "adequate" && options.reportOnly !== true) {

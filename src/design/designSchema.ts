@@ -583,7 +583,7 @@ const failureModeSchema = z
 
 const elementFailureSchema = z
   .strictObject({
-    element: label("the element in words or by position, e.g. thermocouple, divider resistor 0 (top)"),
+    element: label("the element in words or by position, e.g. thermocouple, top resistor of the divider (positions as the reports name them: top, ladder 1 …, bottom)"),
     rateFit: z.number().min(0).max(1e9).describe("failure rate of the element, FIT (failures per 10⁹ h)"),
     rateSource: z.string().max(500).optional().describe("where the rate comes from (handbook, standard, field data); reported only"),
     modes: z.array(failureModeSchema).min(1).max(64).describe("the element's failure modes"),

@@ -2,7 +2,7 @@
  * CSV rendering of a fault review report.
  * @module
  */
-import { _checkReport, _faultDisplay } from "./_faultReviewWords.js";
+import { _checkReport, _faultDisplay, _sentenceInUnit } from "./_faultReviewWords.js";
 import type { FaultReviewDisplayOptions, FaultReviewReport } from "./types.js";
 
 function field(value: string | number | boolean | null): string {
@@ -34,7 +34,7 @@ export function formatFaultReviewCsv(input: FaultReviewReport, options?: FaultRe
   const diff = (v: number | null): number | null => (v === null ? null : d.diff(v));
   const header = [
     "trip", "faultId", "element", "effect", `trip${x}`, `shift${x}`, "safety", `margin${x}`, "detected", "detectedBy", "category",
-    `healthyTrip${x}`, `bandLow${x}`, `bandHigh${x}`, `noEffectThreshold${x}`, `maxNormalOperating${x}`, `hazardLimit${x}`,
+    `healthyTrip${x}`, `bandLow${x}`, `bandHigh${x}`, `noEffectThreshold${x}`, `maxNormalOperating${x}`, `hazardLimit${x}`, "description",
   ];
   const lines = [header.join(",")];
   for (const review of report.reviews) {
@@ -42,7 +42,7 @@ export function formatFaultReviewCsv(input: FaultReviewReport, options?: FaultRe
       lines.push(
         [
           review.name, r.faultId, r.element, r.effect, at(r.tripC), diff(r.shiftC), r.safety, diff(r.marginC), r.detected, r.detectedBy.join(";"), r.category,
-          at(review.healthyTripC), at(review.healthyBandC.lowC), at(review.healthyBandC.highC), diff(review.noEffectThresholdC), at(review.maxNormalOperatingC), at(review.hazardLimitC),
+          at(review.healthyTripC), at(review.healthyBandC.lowC), at(review.healthyBandC.highC), diff(review.noEffectThresholdC), at(review.maxNormalOperatingC), at(review.hazardLimitC), _sentenceInUnit(r.description, d),
         ]
           .map(field)
           .join(","),

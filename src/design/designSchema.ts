@@ -221,7 +221,7 @@ export const referenceSchema = z.discriminatedUnion("kind", referenceSchemaList)
 const resistorsSchema = z
   .strictObject({
     series: seriesName.describe("preferred series (IEC 60063)"),
-    toleranceFraction: z.number().positive().max(0.5).describe("tolerance of each resistor, ± fraction (0.01 = 1 %)"),
+    toleranceFraction: z.number().min(0).max(0.5).describe("tolerance of each resistor, ± fraction (0.01 = 1 %; 0 for a perfect part)"),
     tempcoPpmPerC: nonNegative("tempco of each resistor, ± ppm/°C").optional(),
     matched: z
       .strictObject({

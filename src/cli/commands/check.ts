@@ -99,14 +99,40 @@ export function _tripReportOfDesign(io: CliIo, design: DesignFile, settings: Ana
     const reference = design.reference;
     const details = [`Reference: ${reference.name} (${reference.kind}), ${reference.nominalVolts} V.`, `ADC: ${design.adc?.bits ?? "?"} bits.`];
     const report = firmwareTripReport(setpoints, evaluations, methods, details);
-    return {
-      ...report,
-      ...(design.name !== undefined ? { designName: design.name } : {}),
-      buildSheet: _adcBuildSheet(design, chain, report, evaluations),
-    };
+    const buildSheet = _adcBuildSheet(design, chain, report, evaluations);
+    return _withAdcFullScale(
+      { ...report, ...(design.name !== undefined ? { designName: design.name } : {}), buildSheet },
+      design.adc?.bits ?? 0,
+      reference.nominalVolts,
+    );
   } finally {
     progress.stop();
   }
+}
+
+/**
+ * An ADC design whose firmware threshold code lies beyond the converter's largest code (2^bits − 1) can never trip:
+ * the reading saturates below it. Such a setpoint fails, whatever its bands say, with the reason in figures (the
+ * signal at the setpoint against the full scale). The bands of a saturating chain are not a trip band. @internal
+ */
+export function _withAdcFullScale(report: TripReport, bits: number, fullScaleVolts: number): TripReport {
+  const maxCode = 2 ** bits - 1;
+  const sheet = report.buildSheet;
+  if (sheet === undefined || !(bits >= 1)) return report;
+  let changed = false;
+  const setpoints = report.setpoints.map((s) => {
+    const code = sheet.adcSetpoints.find((a) => a.name === s.name);
+    if (code === undefined || code.thresholdCode <= maxCode) return s;
+    changed = true;
+    return {
+      ...s,
+      pass: false,
+      reason:
+        `the ADC saturates: the signal at the setpoint is ${code.signalVolts.toFixed(4)} V, beyond the full scale ${fullScaleVolts} V ` +
+        `(threshold code ${code.thresholdCode} above the largest code ${maxCode} of ${bits} bits), so the firmware never sees the trip; lower the gain or raise the full scale.`,
+    };
+  });
+  return changed ? { ...report, setpoints, pass: false } : report;
 }
 
 /**

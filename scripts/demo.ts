@@ -22,7 +22,7 @@ const runs: string[][] = [
   // passes the hazard limit (check folds that into its verdict; runaway shows it alone and draws the chart).
   ["runaway", "examples/ceramic-kiln-cutout.json", "--svg", "out/ceramic-kiln-runaway.svg", "--force", "--report-only"],
   ["check", "examples/reflow-oven-trip.json", "--svg", "out/reflow-oven-trip-bands.svg", "--force", "--report-only"],
-  ["compare", "examples/reflow-oven-trip.json", "--report-only"],
+  ["compare", "examples/reflow-oven-trip.json", "--svg", "out/reflow-oven-references.svg", "--force", "--report-only"],
   ["check", "examples/heated-enclosure-adc.json", "--svg", "out/heated-enclosure-trip-bands.svg", "--force", "--report-only"],
   ["sweep", "examples/heated-enclosure-adc.json", "--from", "0", "--to", "150", "--step", "10", "--svg", "out/heated-enclosure-error-sweep.svg", "--force"],
   ["sweep", "examples/ceramic-kiln-cutout.json", "--from", "900", "--to", "1275", "--step", "25", "--svg", "out/ceramic-kiln-error-sweep.svg", "--force"],

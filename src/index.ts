@@ -333,6 +333,7 @@ export {
   type FaultReviewFormat,
   faultReviewJsonFormat,
   faultReviewReport,
+  type FaultReviewDisplayOptions,
   type FaultReviewReport,
   type FaultReviewRow,
   faultReviewScope,

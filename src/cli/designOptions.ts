@@ -46,6 +46,15 @@ export function _addAnalysisOptions(command: Command, svgWhat: string | undefine
   return command;
 }
 
+/** Adds `--unit C|F|K`, the temperature unit a design report shows (the `emf`/`temp` option's name and units). @internal */
+export function _addDisplayUnitOption(command: Command, what = ""): Command {
+  return command.addOption(
+    new Option("--unit <unit>", `temperature unit of the report${what}: text, Markdown, HTML, CSV and SVG (design files and JSON fields stay in °C; JSON records the unit)`)
+      .choices(["C", "F", "K"])
+      .default("C"),
+  );
+}
+
 /** Adds `--report-only` to `check` and `compare`. @internal */
 export function _addReportOnlyOption(command: Command): Command {
   return command.option(
@@ -90,4 +99,15 @@ export async function _loadDesign(io: CliIo, path: string): Promise<LoadedDesign
   const file = _readInputFile(io.cwd, path);
   const { parseDesign } = await import("../design/parseDesign.js");
   return { design: parseDesign(file.text, { fileName: path }), input: file.identity };
+}
+
+/** Each setpoint's target and limits as the design file states them (per setpoint, else the process limits), °C. @internal */
+export function _setpointLimitsOfDesign(design: DesignFile): { name: string; tripTemperatureC: number; maxNormalOperatingC: number; hazardLimitC: number }[] {
+  return design.setpoints.map((s) => ({
+    name: s.name,
+    tripTemperatureC: s.tripTemperatureC,
+    // Presence was checked when the design was validated.
+    maxNormalOperatingC: s.maxNormalOperatingC ?? design.processLimits?.maxNormalOperatingC ?? Number.NaN,
+    hazardLimitC: s.hazardLimitC ?? design.processLimits?.hazardLimitC ?? Number.NaN,
+  }));
 }

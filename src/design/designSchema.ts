@@ -222,7 +222,7 @@ export const referenceSchema = z.discriminatedUnion("kind", referenceSchemaList)
 const resistorsSchema = z
   .strictObject({
     series: seriesName.describe("preferred series (IEC 60063)"),
-    toleranceFraction: z.number().positive().max(0.5).describe("tolerance of each resistor, ± fraction (0.01 = 1 %)"),
+    toleranceFraction: z.number().min(0).max(0.5).describe("tolerance of each resistor, ± fraction (0.01 = 1 %; 0 for a perfect part)"),
     tempcoPpmPerC: nonNegative("tempco of each resistor, ± ppm/°C").optional(),
     matched: z
       .strictObject({
@@ -584,7 +584,7 @@ const failureModeSchema = z
 
 const elementFailureSchema = z
   .strictObject({
-    element: label("the element in words or by position, e.g. thermocouple, divider resistor 0 (top)"),
+    element: label("the element in words or by position, e.g. thermocouple, top resistor of the divider (positions as the reports name them: top, ladder 1 …, bottom)"),
     rateFit: z.number().min(0).max(1e9).describe("failure rate of the element, FIT (failures per 10⁹ h)"),
     rateSource: z.string().max(500).optional().describe("where the rate comes from (handbook, standard, field data); reported only"),
     modes: z.array(failureModeSchema).min(1).max(64).describe("the element's failure modes"),

@@ -161,3 +161,59 @@ export function _reviewNotes(r: {
     ...crossing,
   ];
 }
+
+/** A temperature display for the review's renderers (kept free of the report entry: plain functions). @internal */
+export interface _FaultDisplay {
+  readonly unit: "C" | "F" | "K";
+  readonly symbol: string;
+  readonly at: (temperatureC: number) => number;
+  readonly diff: (differenceC: number) => number;
+}
+
+/** The display of a unit for the fault review (°C default; °F and K as in every design report). @internal */
+export function _faultDisplay(unit: "C" | "F" | "K" | undefined, context: string): _FaultDisplay {
+  const clean = (v: number): number => Number(v.toPrecision(15));
+  if (unit === undefined || unit === "C") return { unit: "C", symbol: "°C", at: (t) => t, diff: (d) => d };
+  if (unit === "F") return { unit, symbol: "°F", at: (t) => clean(t * 1.8 + 32), diff: (d) => clean(d * 1.8) };
+  if (unit === "K") return { unit, symbol: "K", at: (t) => clean(t + 273.15), diff: (d) => d };
+  return _invalidChoice("temperature unit", unit, ["C", "F", "K"], context);
+}
+
+/**
+ * Which figures of the review's own sentences are temperature differences (scale only): the word before each
+ * figure says so, or a leading `+`. Every other "<n> °C" of those sentences is an absolute temperature (offset and
+ * scale), and so are both ends of a range "<a>–<b> °C" / "<a> to <b> °C".
+ */
+const differenceBefore = /(?:moves|by|keeps|above|exceeds|in|refined to|drift runs on to)\s*$/;
+
+function _shown(value: number, decimals: number, plus: boolean): string {
+  const text = value.toFixed(Math.max(decimals, 1));
+  return plus && value > 0 ? `+${text}` : text;
+}
+
+const figure = "([+−-]?)(\\d+(?:\\.\\d+)?)";
+
+/**
+ * A sentence of the review (effect, detection, notes, descriptions) with its °C figures in the display unit:
+ * differences (a shift, a margin, a threshold, a step) by the scale, temperatures with the offset; the same text
+ * in °C. `tests/faults/displayUnit.test.ts` checks that no °C figure is left in the examples' reviews. @internal
+ */
+export function _sentenceInUnit(text: string, d: _FaultDisplay): string {
+  if (d.unit === "C") return text;
+  const read = (sign: string, digits: string): { value: number; decimals: number } => ({
+    value: Number(digits) * (sign === "−" || sign === "-" ? -1 : 1),
+    decimals: digits.includes(".") ? (digits.split(".")[1] as string).length : 0,
+  });
+  const ranges = new RegExp(`${figure}(–| to )${figure} ?°C`, "g");
+  const withRanges = text.replace(ranges, (_m, s1: string, d1: string, joiner: string, s2: string, d2: string) => {
+    const a = read(s1, d1);
+    const b = read(s2, d2);
+    return `${_shown(d.at(a.value), a.decimals, false)}${joiner}${_shown(d.at(b.value), b.decimals, false)} ${d.symbol}`;
+  });
+  const singles = new RegExp(`${figure} ?°C`, "g");
+  return withRanges.replace(singles, (_m, sign: string, digits: string, offset: number, whole: string) => {
+    const { value, decimals } = read(sign, digits);
+    const isDifference = sign === "+" || differenceBefore.test(whole.slice(Math.max(0, offset - 24), offset));
+    return `${_shown(isDifference ? d.diff(value) : d.at(value), decimals, sign === "+")} ${d.symbol}`;
+  });
+}

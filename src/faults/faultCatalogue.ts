@@ -9,6 +9,7 @@ import { thermocoupleData } from "../its90/resolveType.js";
 import { _invalidChoice, _requireFinite, _requireInRange, HotjunctionRangeError } from "../errors.js";
 import { detectionOffsetMicrovolts, loopResistanceOhms } from "../chain/wire/loopResistance.js";
 import type { Fault, FaultContext } from "./types.js";
+import { resistorPositionNames } from "../chain/resistorPositions.js";
 
 /** Options of {@link faultCatalogue} (the same meaning and defaults as in {@link FaultContext}). */
 export interface FaultCatalogueOptions {
@@ -316,12 +317,15 @@ function detectorFaults(chain: MeasurementChain, level: "high" | "low"): Fault[]
   const det = chain.detector;
   if (det?.kind === "comparator") {
     const ohms = chain.divider?.resistorsOhms ?? [];
+    // Named by position as every report names them (top, ladder 1 … from the reference, bottom); the id keeps the
+    // index from the reference (0 = top) as its stable key, which failure data maps onto.
+    const positions = resistorPositionNames(ohms.length);
     ohms.forEach((r, index) => {
       for (const state of ["open", "short"] as const) {
         add({
           id: `divider.resistor${index}.${state}`,
           element: "divider",
-          description: `divider resistor ${index} (${r} Ω, ${index === 0 ? "top" : index === ohms.length - 1 ? "bottom" : "middle"}) ${state === "open" ? "open" : "shorted"}`,
+          description: `${positions[index] ?? `resistor ${index}`} resistor of the threshold divider (${r} Ω) ${state === "open" ? "open" : "shorted"}`,
           effects: [{ kind: "resistor-fault", element: "divider", index, state }],
           mitigation: mitigationText.divider,
         });

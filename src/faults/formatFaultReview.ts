@@ -6,7 +6,7 @@ import { formatFaultReviewCsv } from "./formatFaultReviewCsv.js";
 import { formatFaultReviewJson } from "./formatFaultReviewJson.js";
 import { formatFaultReviewMarkdown } from "./formatFaultReviewMarkdown.js";
 import { formatFaultReviewText } from "./formatFaultReviewText.js";
-import type { FaultReviewReport } from "./types.js";
+import type { FaultReviewDisplayOptions, FaultReviewReport } from "./types.js";
 import { _invalidChoice } from "../errors.js";
 
 /** Formats of a fault review. */
@@ -29,16 +29,16 @@ const formats: readonly FaultReviewFormat[] = ["text", "markdown", "json", "csv"
  * console.log(formatFaultReview(report, "text") === formatFaultReviewText(report)); // true
  * ```
  */
-export function formatFaultReview(report: FaultReviewReport, format: FaultReviewFormat): string {
+export function formatFaultReview(report: FaultReviewReport, format: FaultReviewFormat, options?: FaultReviewDisplayOptions): string {
   switch (format) {
     case "text":
-      return formatFaultReviewText(report);
+      return formatFaultReviewText(report, options);
     case "markdown":
-      return formatFaultReviewMarkdown(report);
+      return formatFaultReviewMarkdown(report, options);
     case "json":
       return formatFaultReviewJson(report);
     case "csv":
-      return formatFaultReviewCsv(report);
+      return formatFaultReviewCsv(report, options);
     default:
       return _invalidChoice("fault review format", format, formats, "formatFaultReview");
   }

@@ -2,8 +2,8 @@
  * Markdown rendering of a fault review report.
  * @module
  */
-import { _bandLine, _categoryWords, _checkReport, _countEntries, _fmt1 } from "./_faultReviewWords.js";
-import type { FaultReviewReport } from "./types.js";
+import { _bandLine, _categoryWords, _checkReport, _countEntries, _faultDisplay, _fmt1, _sentenceInUnit } from "./_faultReviewWords.js";
+import type { FaultReviewDisplayOptions, FaultReviewReport } from "./types.js";
 
 function cell(text: string): string {
   return text.replace(/\\/g, "\\\\").replace(/\|/g, "\\|").replace(/\r?\n/g, " ");
@@ -22,27 +22,29 @@ function cell(text: string): string {
  * console.log(md.split("\n")[0]); // "# Single-fault review: demo"
  * ```
  */
-export function formatFaultReviewMarkdown(input: FaultReviewReport): string {
+export function formatFaultReviewMarkdown(input: FaultReviewReport, options?: FaultReviewDisplayOptions): string {
   const report = _checkReport(input, "formatFaultReviewMarkdown");
+  const d = _faultDisplay(options?.temperatureUnit, "formatFaultReviewMarkdown");
+  const u = (text: string): string => _sentenceInUnit(text, d);
   const out: string[] = [`# Single-fault review${report.name !== undefined ? `: ${cell(report.name)}` : ""}`, ""];
   out.push(`> **Caution.** ${report.caution}`, "");
   for (const review of report.reviews) {
     out.push(
       `## Trip: ${cell(review.name)}`,
       "",
-      `Healthy trip ${_fmt1(review.healthyTripC)} °C; normal operation up to ${_fmt1(review.maxNormalOperatingC)} °C; hazard limit ${_fmt1(review.hazardLimitC)} °C. ${_bandLine(review)}`,
+      u(`Healthy trip ${_fmt1(review.healthyTripC)} °C; normal operation up to ${_fmt1(review.maxNormalOperatingC)} °C; hazard limit ${_fmt1(review.hazardLimitC)} °C. ${_bandLine(review)}`),
       "",
       "| Fault | Element | Effect on the trip | Class | Detection | Suggested mitigation |",
       "| --- | --- | --- | --- | --- | --- |",
     );
     for (const r of review.rows) {
       out.push(
-        `| \`${cell(r.faultId)}\`: ${cell(r.description)} | ${cell(r.element)} | ${cell(r.effectText)} | ${_categoryWords[r.category]} | ${cell(r.detectionText)} | ${cell(r.mitigations.join("; ") || "—")} |`,
+        `| \`${cell(r.faultId)}\`: ${cell(u(r.description))} | ${cell(r.element)} | ${cell(u(r.effectText))} | ${_categoryWords[r.category]} | ${cell(u(r.detectionText))} | ${cell(r.mitigations.join("; ") || "—")} |`,
       );
     }
     out.push("", "| Class | Faults |", "| --- | ---: |");
     for (const [label, n] of _countEntries(review.counts)) out.push(`| ${label} | ${n} |`);
-    out.push("", ...review.notes.map((n) => `- ${cell(n)}`), "");
+    out.push("", ...review.notes.map((n) => `- ${cell(u(n))}`), "");
   }
   if (report.reviews.length !== 1) {
     out.push("## Counts over all trips", "", "| Class | Faults |", "| --- | ---: |");

@@ -3,8 +3,8 @@
  * @module
  */
 import { _wrapWords } from "../textWrap.js";
-import { _bandLine, _categoryWords, _checkReport, _countEntries, _fmt1 } from "./_faultReviewWords.js";
-import type { FaultReviewReport } from "./types.js";
+import { _bandLine, _categoryWords, _checkReport, _countEntries, _faultDisplay, _fmt1, _sentenceInUnit } from "./_faultReviewWords.js";
+import type { FaultReviewDisplayOptions, FaultReviewReport } from "./types.js";
 
 function wrap(text: string, width: number, indent: string): string[] {
   return _wrapWords(text, width).map((line) => indent + line);
@@ -23,28 +23,30 @@ function wrap(text: string, width: number, indent: string): string[] {
  * console.log(text.split("\n")[0]); // "Single-fault review: demo"
  * ```
  */
-export function formatFaultReviewText(input: FaultReviewReport): string {
+export function formatFaultReviewText(input: FaultReviewReport, options?: FaultReviewDisplayOptions): string {
   const report = _checkReport(input, "formatFaultReviewText");
+  const d = _faultDisplay(options?.temperatureUnit, "formatFaultReviewText");
+  const u = (text: string): string => _sentenceInUnit(text, d);
   const lines: string[] = [`Single-fault review${report.name !== undefined ? `: ${report.name}` : ""}`, ""];
   for (const review of report.reviews) {
     lines.push(
-      `Trip "${review.name}": healthy trip ${_fmt1(review.healthyTripC)} °C, normal operation up to ${_fmt1(review.maxNormalOperatingC)} °C, hazard limit ${_fmt1(review.hazardLimitC)} °C`,
-      _bandLine(review),
+      u(`Trip "${review.name}": healthy trip ${_fmt1(review.healthyTripC)} °C, normal operation up to ${_fmt1(review.maxNormalOperatingC)} °C, hazard limit ${_fmt1(review.hazardLimitC)} °C`),
+      u(_bandLine(review)),
       "",
     );
     const idWidth = Math.max(5, ...review.rows.map((r) => r.faultId.length));
     const classWidth = Math.max(...Object.values(_categoryWords).map((w) => w.length));
     for (const row of review.rows) {
-      lines.push(`${row.faultId.padEnd(idWidth)}  ${_categoryWords[row.category].padEnd(classWidth)}  ${row.effectText}`);
+      lines.push(`${row.faultId.padEnd(idWidth)}  ${_categoryWords[row.category].padEnd(classWidth)}  ${u(row.effectText)}`);
       const indent = " ".repeat(idWidth + 2);
-      lines.push(...wrap(row.description, 100, indent));
-      lines.push(...wrap(`detection: ${row.detectionText}`, 100, indent));
+      lines.push(...wrap(u(row.description), 100, indent));
+      lines.push(...wrap(`detection: ${u(row.detectionText)}`, 100, indent));
       if (row.mitigations.length > 0) lines.push(...wrap(`mitigation: ${row.mitigations.join("; ")}`, 100, indent));
     }
     lines.push("", "Counts:");
     for (const [label, n] of _countEntries(review.counts)) lines.push(`  ${label.padEnd(22)} ${n}`);
     lines.push("", "Notes:");
-    for (const note of review.notes) lines.push(...wrap(note, 100, "  "));
+    for (const note of review.notes) lines.push(...wrap(u(note), 100, "  "));
     lines.push("");
   }
   if (report.reviews.length !== 1) {

@@ -20,6 +20,7 @@ export type {
   FaultEffect,
   FaultNodeName,
   FaultReview,
+  FaultReviewDisplayOptions,
   FaultReviewReport,
   FaultReviewRow,
   FaultReviewTrip,

@@ -94,7 +94,7 @@ export function reviewTripDesignFaults(
       ...(design.wire !== undefined ? { wire: design.wire } : {}),
       ...(design.name !== undefined ? { label: design.name } : {}),
     };
-    return reviewFaults(
+    const review = reviewFaults(
       chain,
       {
         name: sp.name,
@@ -106,6 +106,10 @@ export function reviewTripDesignFaults(
       },
       coldJunctionC !== undefined ? { ...options, coldJunctionC } : options,
     );
+    // With several networks a resistor's name carries its divider, as on the build sheet (resistorDesignator).
+    if (result.networks.length < 2) return review;
+    const prefix = `divider ${sp.networkIndex + 1} `;
+    return { ...review, rows: review.rows.map((r) => (r.element === "divider" && /^(top|bottom|ladder \d+) resistor/.test(r.description) ? { ...r, description: prefix + r.description } : r)) };
   });
   return faultReviewReport(reviews, design.name ?? result.name);
 }

@@ -409,6 +409,15 @@ export interface FaultReview {
   readonly notes: readonly string[];
 }
 
+/**
+ * How the text, Markdown and CSV fault reviews show temperatures: `temperatureUnit` `"C"` (default), `"F"` or `"K"`
+ * (temperatures with the offset; shifts, margins, thresholds and steps by the scale). The review's data and its
+ * JSON stay in °C.
+ */
+export interface FaultReviewDisplayOptions {
+  readonly temperatureUnit?: "C" | "F" | "K";
+}
+
 /** Several trips (setpoints) of one design, with the scope statement and the safety caution. */
 export interface FaultReviewReport {
   readonly name?: string;

@@ -152,6 +152,7 @@ const sweepReport = z.looseObject({
       largestSources: z.array(z.strictObject({ source: z.string(), halfSwingC: num })).optional(),
     }),
   ),
+  setpoints: z.array(z.strictObject({ name: z.string(), tripTemperatureC: num, maxNormalOperatingC: num, hazardLimitC: num })).optional(),
   notes: z.array(z.string()),
   methods: methodInfo,
 });

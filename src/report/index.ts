@@ -8,6 +8,7 @@ export { CAUTION_TEXT } from "../caution.js";
 export type {
   ErrorSweep,
   ErrorSweepRow,
+  ErrorSweepSetpoint,
   ReportFormat,
   ReportMethodInfo,
   TripReport,
@@ -19,6 +20,8 @@ export { formatComparisonReport, renderComparisonReport } from "./renderComparis
 export { formatSweepReport, renderSweepReport } from "./renderSweepReport.js";
 export { tripBandChartSvg } from "./tripBandChart.js";
 export { errorBandChartSvg } from "./errorBandChart.js";
+export { comparisonChartSvg, type ComparisonChartInput } from "./comparisonChart.js";
+export { reportTemperatureUnits, type ReportDisplayOptions, type ReportTemperatureUnit } from "./displayUnit.js";
 export { pfdAvgChartSvg, type PfdAvgChartInput } from "./pfdAvgChart.js";
 export { firmwareTripReport, type FirmwareTripSetpoint } from "./firmwareTripReport.js";
 export { formatRunawayReport, type RunawayReport } from "./runawayReport.js";

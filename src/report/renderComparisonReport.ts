@@ -7,10 +7,13 @@ import type { ReferenceComparison } from "../trip/types.js";
 import { CAUTION_TEXT } from "./caution.js";
 import { _cautionLine, _csv, _describeMethods, _fixed, _markdownTable, _signed, _textTable } from "./formatting.js";
 import type { ReportFormat, ReportMethodInfo } from "./reportTypes.js";
+import { _sentenceInUnit } from "../faults/_faultReviewWords.js";
+import { _csvUnitLine, _displayOf, _jsonUnitField, type ReportDisplayOptions, type _TemperatureDisplay } from "./displayUnit.js";
 
-function rows(comparison: ReferenceComparison): string[][] {
+function rows(comparison: ReferenceComparison, d: _TemperatureDisplay): string[][] {
+  const u = d.symbol;
   const out: string[][] = [
-    ["reference", "kind", "cost", "setpoint", "band °C", "ideal-reference band °C", "extra width °C", "margin low °C", "margin high °C", "result"],
+    ["reference", "kind", "cost", "setpoint", `band ${u}`, `ideal-reference band ${u}`, `extra width ${u}`, `margin low ${u}`, `margin high ${u}`, "result"],
   ];
   for (const option of comparison.options) {
     option.setpoints.forEach((s, i) => {
@@ -19,11 +22,11 @@ function rows(comparison: ReferenceComparison): string[][] {
         i === 0 ? option.kind : "",
         i === 0 ? (option.cost === null ? "-" : String(option.cost)) : "",
         s.name,
-        `${_fixed(s.lowC)} to ${_fixed(s.highC)}`,
-        `${_fixed(s.idealLowC)} to ${_fixed(s.idealHighC)}`,
-        _fixed(s.extraWidthC),
-        _signed(s.marginToNormalC),
-        _signed(s.marginToHazardC),
+        `${_fixed(d.at(s.lowC))} to ${_fixed(d.at(s.highC))}`,
+        `${_fixed(d.at(s.idealLowC))} to ${_fixed(d.at(s.idealHighC))}`,
+        _fixed(d.diff(s.extraWidthC)),
+        _signed(d.diff(s.marginToNormalC)),
+        _signed(d.diff(s.marginToHazardC)),
         s.pass ? "PASS" : "FAIL",
       ]);
     });
@@ -37,6 +40,8 @@ function rows(comparison: ReferenceComparison): string[][] {
  * @param format - `"text"`, `"markdown"`, `"csv"` or `"json"`
  * @param methods - methods, coverage, trials and seed used
  * @param designName - name of the design, shown in the heading
+ * @param options - `temperatureUnit` `"C"` (default), `"F"` or `"K"` for text, Markdown and CSV (bands with the
+ *   offset, widths and margins by the scale); JSON keeps °C and records the unit as `temperatureUnit`
  * @returns the report text
  * @example
  * ```ts
@@ -54,24 +59,27 @@ export function formatComparisonReport(
   format: ReportFormat,
   methods: ReportMethodInfo,
   designName?: string,
+  options?: ReportDisplayOptions,
 ): string {
+  const d = _displayOf(options);
+  const x = d.csvSuffix;
   const info: ReportMethodInfo = { ...methods, acceptanceMethod: comparison.acceptanceMethod };
   const heading = `Reference comparison${designName !== undefined ? `: ${designName}` : ""}`;
-  const verdicts = comparison.options.map((o) => `${o.name}: ${o.verdict.toUpperCase()}. ${o.verdictText}`);
+  const verdicts = comparison.options.map((o) => `${o.name}: ${o.verdict.toUpperCase()}. ${_sentenceInUnit(o.verdictText, d)}`);
   const recommended = `Recommended: ${comparison.recommended ?? "none of the options is adequate"}.`;
   switch (format) {
     case "json":
-      return `${JSON.stringify({ report: "reference-comparison", reportSchemaVersion: 1, caution: CAUTION_TEXT, method: info, designName, ...comparison }, null, 2)}\n`;
+      return `${JSON.stringify({ report: "reference-comparison", reportSchemaVersion: 1, caution: CAUTION_TEXT, method: info, designName, ..._jsonUnitField(d), ...comparison }, null, 2)}\n`;
     case "csv": {
       const table: (string | number | boolean | null)[][] = [
-        ["reference", "kind", "cost", "verdict", "setpoint", "low_C", "high_C", "ideal_low_C", "ideal_high_C", "extra_width_C", "margin_to_normal_C", "margin_to_hazard_C", "pass"],
+        ["reference", "kind", "cost", "verdict", "setpoint", `low_${x}`, `high_${x}`, `ideal_low_${x}`, `ideal_high_${x}`, `extra_width_${x}`, `margin_to_normal_${x}`, `margin_to_hazard_${x}`, "pass"],
       ];
       for (const o of comparison.options) {
         for (const s of o.setpoints) {
-          table.push([o.name, o.kind, o.cost, o.verdict, s.name, s.lowC, s.highC, s.idealLowC, s.idealHighC, s.extraWidthC, s.marginToNormalC, s.marginToHazardC, s.pass]);
+          table.push([o.name, o.kind, o.cost, o.verdict, s.name, d.at(s.lowC), d.at(s.highC), d.at(s.idealLowC), d.at(s.idealHighC), d.diff(s.extraWidthC), d.diff(s.marginToNormalC), d.diff(s.marginToHazardC), s.pass]);
         }
       }
-      return `# ${_cautionLine()}\n# ${_describeMethods(info)}\n${_csv(table)}`;
+      return `# ${_cautionLine()}\n# ${_describeMethods(info)}\n${_csvUnitLine(d)}${_csv(table)}`;
     }
     case "markdown":
       return [
@@ -81,7 +89,7 @@ export function formatComparisonReport(
         "",
         comparison.summary,
         "",
-        _markdownTable(rows(comparison)),
+        _markdownTable(rows(comparison, d)),
         "",
         ...verdicts.map((v) => `- ${v}`),
         "",
@@ -99,7 +107,7 @@ export function formatComparisonReport(
         "",
         comparison.summary,
         "",
-        _textTable(rows(comparison)),
+        _textTable(rows(comparison, d)),
         "",
         ...verdicts,
         "",

@@ -5,25 +5,38 @@
 import { CAUTION_TEXT } from "./caution.js";
 import { _cautionLine, _csv, _describeMethods, _fixed, _markdownTable, _methodShortName, _signed, _textTable } from "./formatting.js";
 import type { ErrorSweep, ReportFormat } from "./reportTypes.js";
+import { _sentenceInUnit } from "../faults/_faultReviewWords.js";
+import { _csvUnitLine, _displayOf, _jsonUnitField, type ReportDisplayOptions, type _TemperatureDisplay } from "./displayUnit.js";
 
-function rows(sweep: ErrorSweep): string[][] {
+function rows(sweep: ErrorSweep, d: _TemperatureDisplay): string[][] {
   const methods = sweep.rows[0]?.bands.map((b) => b.method) ?? [];
   const withSources = sweep.rows.some((r) => r.largestSources !== undefined);
+  const u = d.symbol;
   return [
-    ["true °C", "nominal error °C", ...methods.map((m) => `${_methodShortName(m)} error °C`), ...(withSources ? ["largest sources ±°C"] : [])],
+    [`true ${u}`, `nominal error ${u}`, ...methods.map((m) => `${_methodShortName(m)} error ${u}`), ...(withSources ? [`largest sources ±${u}`] : [])],
     ...sweep.rows.map((r) => [
-      _fixed(r.temperatureC, 1),
-      _signed(r.nominalErrorC, 2),
-      ...r.bands.map((b) => `${_signed(b.errorLowC, 2)} to ${_signed(b.errorHighC, 2)}`),
-      ...(withSources ? [(r.largestSources ?? []).map((s) => `${s.source} ${_fixed(s.halfSwingC, 2)}`).join(", ")] : []),
+      _fixed(d.at(r.temperatureC), 1),
+      _signed(d.diff(r.nominalErrorC), 2),
+      ...r.bands.map((b) => `${_signed(d.diff(b.errorLowC), 2)} to ${_signed(d.diff(b.errorHighC), 2)}`),
+      ...(withSources ? [(r.largestSources ?? []).map((s) => `${s.source} ${_fixed(d.diff(s.halfSwingC), 2)}`).join(", ")] : []),
     ]),
   ];
+}
+
+/** The line naming the design's setpoints and limits (marked on the chart), empty without them. */
+function setpointLines(sweep: ErrorSweep, d: _TemperatureDisplay): string[] {
+  const u = d.symbol;
+  return (sweep.setpoints ?? []).map(
+    (s) => `Setpoint "${s.name}": trip ${_fixed(d.at(s.tripTemperatureC))} ${u}, highest normal operating ${_fixed(d.at(s.maxNormalOperatingC))} ${u}, hazard limit ${_fixed(d.at(s.hazardLimitC))} ${u}.`,
+  );
 }
 
 /**
  * Renders an error sweep.
  * @param sweep - sweep data
  * @param format - `"text"`, `"markdown"`, `"csv"` or `"json"`
+ * @param options - `temperatureUnit` `"C"` (default), `"F"` or `"K"` for text, Markdown and CSV (true
+ *   temperatures with the offset, errors by the scale); JSON keeps °C and records the unit as `temperatureUnit`
  * @returns the report text
  * @example
  * ```ts
@@ -35,15 +48,18 @@ function rows(sweep: ErrorSweep): string[][] {
  * console.log(csv.trim().split("\n").at(-1)); // "100,0,worst-case,-2,2"
  * ```
  */
-export function formatSweepReport(sweep: ErrorSweep, format: ReportFormat): string {
+export function formatSweepReport(sweep: ErrorSweep, format: ReportFormat, options?: ReportDisplayOptions): string {
+  const d = _displayOf(options);
+  const x = d.csvSuffix;
   const heading = `${sweep.title}${sweep.designName !== undefined ? `: ${sweep.designName}` : ""}`;
   switch (format) {
     case "json":
-      return `${JSON.stringify({ report: "error-sweep", reportSchemaVersion: 1, caution: CAUTION_TEXT, method: sweep.methods, ...sweep }, null, 2)}\n`;
+      return `${JSON.stringify({ report: "error-sweep", reportSchemaVersion: 1, caution: CAUTION_TEXT, method: sweep.methods, ..._jsonUnitField(d), ...sweep }, null, 2)}\n`;
     case "csv": {
-      const table: (string | number)[][] = [["true_C", "nominal_error_C", "method", "error_low_C", "error_high_C"]];
-      for (const r of sweep.rows) for (const b of r.bands) table.push([r.temperatureC, r.nominalErrorC, b.method, b.errorLowC, b.errorHighC]);
-      return `# ${_cautionLine()}\n# ${_describeMethods(sweep.methods)}\n${_csv(table)}`;
+      const table: (string | number)[][] = [[`true_${x}`, `nominal_error_${x}`, "method", `error_low_${x}`, `error_high_${x}`]];
+      for (const r of sweep.rows) for (const b of r.bands) table.push([d.at(r.temperatureC), d.diff(r.nominalErrorC), b.method, d.diff(b.errorLowC), d.diff(b.errorHighC)]);
+      const marks = setpointLines(sweep, d).map((l) => `# ${l}\n`).join("");
+      return `# ${_cautionLine()}\n# ${_describeMethods(sweep.methods)}\n${_csvUnitLine(d)}${marks}${_csv(table)}`;
     }
     case "markdown":
       return [
@@ -53,12 +69,14 @@ export function formatSweepReport(sweep: ErrorSweep, format: ReportFormat): stri
         "",
         "Error = indicated minus true temperature.",
         "",
-        _markdownTable(rows(sweep)),
+        _markdownTable(rows(sweep, d)),
         "",
+        ...setpointLines(sweep, d).map((l) => `- ${l}`),
+        ...(sweep.setpoints !== undefined && sweep.setpoints.length > 0 ? [""] : []),
         "## Method",
         "",
         _describeMethods(sweep.methods),
-        ...(sweep.notes.length > 0 ? ["", ...sweep.notes.map((n) => `- ${n}`)] : []),
+        ...(sweep.notes.length > 0 ? ["", ...sweep.notes.map((n) => `- ${_sentenceInUnit(n, d)}`)] : []),
         "",
       ].join("\n");
     default:
@@ -67,10 +85,11 @@ export function formatSweepReport(sweep: ErrorSweep, format: ReportFormat): stri
         "=".repeat([...heading].length),
         "Error = indicated minus true temperature.",
         "",
-        _textTable(rows(sweep)),
+        _textTable(rows(sweep, d)),
         "",
+        ...setpointLines(sweep, d),
         _describeMethods(sweep.methods),
-        ...sweep.notes.map((n) => `Note: ${n}`),
+        ...sweep.notes.map((n) => `Note: ${_sentenceInUnit(n, d)}`),
         "",
         _cautionLine(),
         "",

@@ -16,7 +16,9 @@ import {
   _signed,
   _textTable,
 } from "./formatting.js";
-import type { ReportFormat, ReportMethodInfo, TripReport } from "./reportTypes.js";
+import type { ReportFormat, ReportMethodInfo, TripReport, TripReportSetpoint } from "./reportTypes.js";
+import { _sentenceInUnit } from "../faults/_faultReviewWords.js";
+import { _csvUnitLine, _displayOf, _jsonUnitField, type ReportDisplayOptions, type _TemperatureDisplay } from "./displayUnit.js";
 import { _dynamicsCsv, _dynamicsMarkdownLines, _dynamicsTextLines } from "./runawayReport.js";
 
 function formatOhms(ohms: number): string {
@@ -96,45 +98,71 @@ export function tripReportFromResult(result: TripDesignResult, methods: ReportMe
   };
 }
 
-function bandText(low: number, high: number): string {
-  return `${_fixed(low)} to ${_fixed(high)}`;
+function bandText(low: number, high: number, d?: _TemperatureDisplay): string {
+  return d === undefined ? `${_fixed(low)} to ${_fixed(high)}` : `${_fixed(d.at(low))} to ${_fixed(d.at(high))}`;
 }
 
-function setpointRows(report: TripReport): string[][] {
+function setpointRows(report: TripReport, d: _TemperatureDisplay): string[][] {
   const methods = report.setpoints[0]?.bands.map((b) => b.method) ?? [];
+  const u = d.symbol;
   const header = [
     "setpoint",
-    "target °C",
-    "nominal °C",
-    ...methods.map((m) => `${_methodShortName(m)} °C`),
-    "normal ≤ °C",
-    "hazard < °C",
-    "margin low °C",
-    "margin high °C",
+    `target ${u}`,
+    `nominal ${u}`,
+    ...methods.map((m) => `${_methodShortName(m)} ${u}`),
+    `normal ≤ ${u}`,
+    `hazard < ${u}`,
+    `margin low ${u}`,
+    `margin high ${u}`,
     "result",
   ];
   return [
     header,
     ...report.setpoints.map((s) => [
       s.name,
-      _fixed(s.tripTemperatureC),
-      _fixed(s.nominalTripC, 2),
-      ...s.bands.map((b) => bandText(b.lowC, b.highC)),
-      _fixed(s.maxNormalOperatingC),
-      _fixed(s.hazardLimitC),
-      _signed(s.marginToNormalC),
-      _signed(s.marginToHazardC),
+      _fixed(d.at(s.tripTemperatureC)),
+      _fixed(d.at(s.nominalTripC), 2),
+      ...s.bands.map((b) => bandText(b.lowC, b.highC, d)),
+      _fixed(d.at(s.maxNormalOperatingC)),
+      _fixed(d.at(s.hazardLimitC)),
+      _signed(d.diff(s.marginToNormalC)),
+      _signed(d.diff(s.marginToHazardC)),
       s.pass ? "PASS" : "FAIL",
     ]),
   ];
 }
 
-function sourceRows(report: TripReport, limit: number): { name: string; rows: string[][] }[] {
+/**
+ * Temperatures named in an engine's description text ("… at 1250 °C", a rating point): absolute, in the display
+ * unit (°C text unchanged). @internal
+ */
+export function _descriptionInUnit(text: string, d: _TemperatureDisplay): string {
+  return _sentenceInUnit(text, d);
+}
+
+/**
+ * The verdict sentence of a setpoint. In °C the engine's own sentence; in another unit one built from the
+ * setpoint's fields (the engine's sentences quote °C), naming the band of the acceptance method. @internal
+ */
+export function _reasonInUnit(report: TripReport, s: TripReportSetpoint, d: _TemperatureDisplay): string {
+  if (d.unit === "C") return s.reason;
+  const method = report.methods.acceptanceMethod ?? s.bands[0]?.method ?? "worst-case";
+  const band = s.bands.find((b) => b.method === method) ?? s.bands[0];
+  const u = d.symbol;
+  const where = band === undefined ? "" : `trips between ${_fixed(d.at(band.lowC))} and ${_fixed(d.at(band.highC))} ${u} (${_methodShortName(band.method)}): `;
+  const dynamic = report.dynamics?.setpoints.find((x) => x.name === s.name) !== undefined ? " The verdict uses the dynamic peak (runaway section)." : "";
+  return (
+    `${s.pass ? "PASS" : "FAIL"}: ${where}margin ${_signed(d.diff(s.marginToNormalC))} ${u} to the highest normal operating temperature ${_fixed(d.at(s.maxNormalOperatingC))} ${u}, ` +
+    `${_signed(d.diff(s.marginToHazardC))} ${u} to the hazard limit ${_fixed(d.at(s.hazardLimitC))} ${u}.${dynamic}`
+  );
+}
+
+function sourceRows(report: TripReport, limit: number, d: _TemperatureDisplay): { name: string; rows: string[][] }[] {
   return report.setpoints.map((s) => ({
     name: s.name,
     rows: [
-      ["error source", "worst-case swing ±°C", "standard uncertainty °C", "what it is"],
-      ...s.errorSources.slice(0, limit).map((e) => [e.name, _fixed(e.worstCaseC, 2), _fixed(e.standardUncertaintyC, 2), e.description]),
+      ["error source", `worst-case swing ±${d.symbol}`, `standard uncertainty ${d.symbol}`, "what it is"],
+      ...s.errorSources.slice(0, limit).map((e) => [e.name, _fixed(d.diff(e.worstCaseC), 2), _fixed(d.diff(e.standardUncertaintyC), 2), _descriptionInUnit(e.description, d)]),
     ],
   }));
 }
@@ -148,13 +176,14 @@ function resistorList(list: readonly { designator: string; ohms: number }[]): st
 }
 
 /** The build sheet's tables: per setpoint, per ADC setpoint, and the bill of materials. @internal */
-export function _buildSheetTables(sheet: TripBuildSheet): { title: string; rows: string[][] }[] {
+export function _buildSheetTables(sheet: TripBuildSheet, d: _TemperatureDisplay = _displayOf(undefined)): { title: string; rows: string[][] }[] {
+  const u = d.symbol;
   const tables: { title: string; rows: string[][] }[] = [];
   if (sheet.setpoints.length > 0) {
     tables.push({
       title: "Build sheet: thresholds",
       rows: [
-        ["setpoint", "ideal threshold V", "realized V", "threshold band V", "above tap", "below tap", "divider mA", "nominal release °C", "release band °C", "release margin °C"],
+        ["setpoint", "ideal threshold V", "realized V", "threshold band V", "above tap", "below tap", "divider mA", `nominal release ${u}`, `release band ${u}`, `release margin ${u}`],
         ...sheet.setpoints.map((s) => [
           s.name,
           _fixed(s.idealThresholdVolts, 5),
@@ -163,9 +192,9 @@ export function _buildSheetTables(sheet: TripBuildSheet): { title: string; rows:
           resistorList(s.resistorsAbove),
           resistorList(s.resistorsBelow),
           _fixed(s.dividerCurrentMilliamps, 4),
-          _fixed(s.nominalReleaseC, 2),
-          bandText(s.releaseLowC, s.releaseHighC),
-          _signed(s.releaseMarginToNormalC),
+          _fixed(d.at(s.nominalReleaseC), 2),
+          bandText(s.releaseLowC, s.releaseHighC, d),
+          _signed(d.diff(s.releaseMarginToNormalC)),
         ]),
       ],
     });
@@ -174,13 +203,13 @@ export function _buildSheetTables(sheet: TripBuildSheet): { title: string; rows:
     tables.push({
       title: "Build sheet: firmware codes",
       rows: [
-        ["setpoint", "signal V", "nominal code", "trip at code ≥", "LSB/°C", "code band"],
+        ["setpoint", "signal V", "nominal code", "trip at code ≥", `LSB/${u}`, "code band"],
         ...sheet.adcSetpoints.map((s) => [
           s.name,
           _fixed(s.signalVolts, 5),
           _fixed(s.nominalCode, 2),
           String(s.thresholdCode),
-          _fixed(s.codesPerC, 3),
+          _fixed(d.perDegree(s.codesPerC), 3),
           bandText(s.codeLow, s.codeHigh),
         ]),
       ],
@@ -190,13 +219,13 @@ export function _buildSheetTables(sheet: TripBuildSheet): { title: string; rows:
     tables.push({
       title: "Bill of materials",
       rows: [
-        ["designators", "part", "value", "tolerance", "tempco ppm/°C", "count"],
+        ["designators", "part", "value", "tolerance", `tempco ppm/${u}`, "count"],
         ...sheet.parts.map((p) => [
           p.designators,
           p.part,
           typeof p.value === "number" ? (p.unit === "Ω" ? formatOhms(p.value) : `${p.value} ${p.unit}`) : p.value,
-          p.toleranceUnit === "°C" ? `±${_fixed(p.tolerance, 2)} °C` : `±${+(p.tolerance * 100).toPrecision(4)} %`,
-          _fixed(p.tempcoPpmPerC, 0),
+          p.toleranceUnit === "°C" ? `±${_fixed(d.diff(p.tolerance), 2)} ${u}` : `±${+(p.tolerance * 100).toPrecision(4)} %`,
+          _fixed(d.perDegree(p.tempcoPpmPerC), 0),
           String(p.count),
         ]),
       ],
@@ -229,6 +258,7 @@ export function formatPartsCsv(sheet: TripBuildSheet): string {
 }
 
 function coverageLines(report: TripReport): string[] {
+  // Coverage factors are pure numbers: no unit.
   const out: string[] = [];
   for (const s of report.setpoints) {
     const w = s.bands.find((b) => b.method === "worst-case");
@@ -250,39 +280,39 @@ function coverageLines(report: TripReport): string[] {
 }
 
 /** One line per setpoint with an ageing drift: how the worst-case band widens with time in service. */
-function serviceLines(report: TripReport): string[] {
+function serviceLines(report: TripReport, d: _TemperatureDisplay): string[] {
   return report.setpoints
     .filter((s) => s.bandOverService !== undefined)
     .map(
       (s) =>
         `${s.name}: worst-case band over time in service (probe ageing): ` +
-        (s.bandOverService ?? []).map((p) => `${+p.hours.toPrecision(6)} h ${bandText(p.lowC, p.highC)} °C`).join("; ") +
+        (s.bandOverService ?? []).map((p) => `${+p.hours.toPrecision(6)} h ${bandText(p.lowC, p.highC, d)} ${d.symbol}`).join("; ") +
         ".",
     );
 }
 
-function renderText(report: TripReport): string {
+function renderText(report: TripReport, d: _TemperatureDisplay): string {
   const heading = `${report.title}${report.designName !== undefined ? `: ${report.designName}` : ""} — ${report.pass ? "PASS" : "FAIL"}`;
-  const out = [heading, "=".repeat([...heading].length), "", ...report.details, "", _textTable(setpointRows(report)), ""];
-  for (const s of report.setpoints) out.push(`${s.name}: ${s.reason}`);
+  const out = [heading, "=".repeat([...heading].length), "", ...report.details.map((l) => _sentenceInUnit(l, d)), "", _textTable(setpointRows(report, d)), ""];
+  for (const s of report.setpoints) out.push(`${s.name}: ${_reasonInUnit(report, s, d)}`);
   out.push(...coverageLines(report));
   if (report.buildSheet !== undefined) {
-    for (const t of _buildSheetTables(report.buildSheet)) out.push("", `${t.title}:`, _textTable(t.rows));
+    for (const t of _buildSheetTables(report.buildSheet, d)) out.push("", `${t.title}:`, _textTable(t.rows));
     const lines = _buildSheetLines(report.buildSheet);
     if (lines.length > 0) out.push("", ...lines);
   }
-  out.push(...serviceLines(report));
-  for (const block of sourceRows(report, 8)) {
+  out.push(...serviceLines(report, d));
+  for (const block of sourceRows(report, 8, d)) {
     out.push("", `Largest error sources at "${block.name}":`, _textTable(block.rows));
   }
-  if (report.dynamics !== undefined) out.push(..._dynamicsTextLines(report.dynamics));
+  if (report.dynamics !== undefined) out.push(..._dynamicsTextLines(report.dynamics, d));
   out.push("", _describeMethods(report.methods));
-  for (const note of report.notes) out.push(`Note: ${note}`);
+  for (const note of report.notes) out.push(`Note: ${_sentenceInUnit(note, d)}`);
   out.push("", _cautionLine(), "");
   return out.join("\n");
 }
 
-function renderMarkdown(report: TripReport): string {
+function renderMarkdown(report: TripReport, d: _TemperatureDisplay): string {
   const out = [
     `# ${report.title}${report.designName !== undefined ? `: ${report.designName}` : ""}`,
     "",
@@ -290,56 +320,58 @@ function renderMarkdown(report: TripReport): string {
     "",
     `> **Caution.** ${CAUTION_TEXT}`,
     "",
-    ...report.details.map((d) => `- ${d}`),
+    ...report.details.map((l) => `- ${_sentenceInUnit(l, d)}`),
     "",
-    _markdownTable(setpointRows(report)),
+    _markdownTable(setpointRows(report, d)),
     "",
-    ...report.setpoints.map((s) => `- **${s.name}**: ${s.reason}`),
+    ...report.setpoints.map((s) => `- **${s.name}**: ${_reasonInUnit(report, s, d)}`),
     ...coverageLines(report).map((l) => `- ${l}`),
-    ...serviceLines(report).map((l) => `- ${l}`),
+    ...serviceLines(report, d).map((l) => `- ${l}`),
   ];
   if (report.buildSheet !== undefined) {
-    for (const t of _buildSheetTables(report.buildSheet)) out.push("", `## ${t.title}`, "", _markdownTable(t.rows));
+    for (const t of _buildSheetTables(report.buildSheet, d)) out.push("", `## ${t.title}`, "", _markdownTable(t.rows));
     const lines = _buildSheetLines(report.buildSheet);
     if (lines.length > 0) out.push("", ...lines.map((l) => `- ${l}`));
   }
-  for (const block of sourceRows(report, 8)) out.push("", `## Largest error sources at "${block.name}"`, "", _markdownTable(block.rows));
-  if (report.dynamics !== undefined) out.push(..._dynamicsMarkdownLines(report.dynamics));
+  for (const block of sourceRows(report, 8, d)) out.push("", `## Largest error sources at "${block.name}"`, "", _markdownTable(block.rows));
+  if (report.dynamics !== undefined) out.push(..._dynamicsMarkdownLines(report.dynamics, "##", d));
   out.push("", "## Method", "", _describeMethods(report.methods));
-  if (report.notes.length > 0) out.push("", ...report.notes.map((n) => `- ${n}`));
+  if (report.notes.length > 0) out.push("", ...report.notes.map((n) => `- ${_sentenceInUnit(n, d)}`));
   out.push("");
   return out.join("\n");
 }
 
-function renderCsv(report: TripReport): string {
+function renderCsv(report: TripReport, d: _TemperatureDisplay): string {
+  const x = d.csvSuffix;
   const rows: (string | number | boolean)[][] = [
-    ["setpoint", "target_C", "nominal_trip_C", "method", "low_C", "high_C", "coverage", "standard_uncertainty_C", "trials", "seed",
-      "max_normal_operating_C", "hazard_limit_C", "margin_to_normal_C", "margin_to_hazard_C", "pass", "coverage_factor"],
+    ["setpoint", `target_${x}`, `nominal_trip_${x}`, "method", `low_${x}`, `high_${x}`, "coverage", `standard_uncertainty_${x}`, "trials", "seed",
+      `max_normal_operating_${x}`, `hazard_limit_${x}`, `margin_to_normal_${x}`, `margin_to_hazard_${x}`, "pass", "coverage_factor"],
   ];
   for (const s of report.setpoints) {
     for (const b of s.bands) {
-      rows.push([s.name, s.tripTemperatureC, s.nominalTripC, b.method, b.lowC, b.highC, b.coverage, b.standardUncertaintyC,
-        b.trials ?? "", b.seed ?? "", s.maxNormalOperatingC, s.hazardLimitC, s.marginToNormalC, s.marginToHazardC, s.pass, b.coverageFactor ?? ""]);
+      rows.push([s.name, d.at(s.tripTemperatureC), d.at(s.nominalTripC), b.method, d.at(b.lowC), d.at(b.highC), b.coverage, d.diff(b.standardUncertaintyC),
+        b.trials ?? "", b.seed ?? "", d.at(s.maxNormalOperatingC), d.at(s.hazardLimitC), d.diff(s.marginToNormalC), d.diff(s.marginToHazardC), s.pass, b.coverageFactor ?? ""]);
     }
   }
-  let text = `# ${_cautionLine()}\n# ${_describeMethods(report.methods)}\n${_csv(rows)}`;
+  const unitLine = _csvUnitLine(d);
+  let text = `# ${_cautionLine()}\n# ${_describeMethods(report.methods)}\n${unitLine}${_csv(rows)}`;
   const sheet = report.buildSheet;
   if (sheet !== undefined && sheet.setpoints.length > 0) {
     const sheetRows: (string | number)[][] = [["setpoint", "ideal_threshold_V", "realized_threshold_V", "threshold_low_V", "threshold_high_V", "resistors_above", "resistors_below", "divider_current_mA",
-      "nominal_trip_C", "nominal_release_C", "hysteresis_C", "release_low_C", "release_high_C", "release_margin_to_normal_C"]];
+      `nominal_trip_${x}`, `nominal_release_${x}`, `hysteresis_${x}`, `release_low_${x}`, `release_high_${x}`, `release_margin_to_normal_${x}`]];
     for (const s of sheet.setpoints) {
       sheetRows.push([s.name, s.idealThresholdVolts, s.realizedThresholdVolts, s.thresholdLowVolts, s.thresholdHighVolts, s.resistorsAbove.map((r) => `${r.designator}=${r.ohms}`).join(" "),
-        s.resistorsBelow.map((r) => `${r.designator}=${r.ohms}`).join(" "), s.dividerCurrentMilliamps, s.nominalTripC, s.nominalReleaseC, s.hysteresisC,
-        s.releaseLowC, s.releaseHighC, s.releaseMarginToNormalC]);
+        s.resistorsBelow.map((r) => `${r.designator}=${r.ohms}`).join(" "), s.dividerCurrentMilliamps, d.at(s.nominalTripC), d.at(s.nominalReleaseC), d.diff(s.hysteresisC),
+        d.at(s.releaseLowC), d.at(s.releaseHighC), d.diff(s.releaseMarginToNormalC)]);
     }
     text += `\n# build sheet\n${_csv(sheetRows)}`;
   }
   if (sheet !== undefined && sheet.adcSetpoints.length > 0) {
-    const codeRows: (string | number)[][] = [["setpoint", "signal_V", "nominal_code", "threshold_code", "codes_per_C", "code_low", "code_high"]];
-    for (const s of sheet.adcSetpoints) codeRows.push([s.name, s.signalVolts, s.nominalCode, s.thresholdCode, s.codesPerC, s.codeLow, s.codeHigh]);
+    const codeRows: (string | number)[][] = [["setpoint", "signal_V", "nominal_code", "threshold_code", `codes_per_${x}`, "code_low", "code_high"]];
+    for (const s of sheet.adcSetpoints) codeRows.push([s.name, s.signalVolts, s.nominalCode, s.thresholdCode, d.perDegree(s.codesPerC), s.codeLow, s.codeHigh]);
     text += `\n# build sheet\n${_csv(codeRows)}`;
   }
-  const dynamics = report.dynamics === undefined ? "" : `# dynamics: runaway response per setpoint and case (the verdict uses the dynamic peak)\n${_dynamicsCsv(report.dynamics)}`;
+  const dynamics = report.dynamics === undefined ? "" : `# dynamics: runaway response per setpoint and case (the verdict uses the dynamic peak)\n${_dynamicsCsv(report.dynamics, d)}`;
   return `${text}${dynamics}`;
 }
 
@@ -347,6 +379,9 @@ function renderCsv(report: TripReport): string {
  * Renders a trip report. Every format includes the caution and the methods with the seed.
  * @param report - report data (see {@link tripReportFromResult})
  * @param format - `"text"` (terminal table), `"markdown"`, `"csv"` (caution and method as leading `#` lines) or `"json"`
+ * @param options - `temperatureUnit` `"C"` (default), `"F"` or `"K"`: the unit text, Markdown and CSV show
+ *   temperatures in (absolute values with the offset, differences such as margins and half-widths by the scale;
+ *   CSV column names end in the unit). JSON keeps every field in °C and records the unit as `temperatureUnit`.
  * @returns the report text
  * @example
  * ```ts
@@ -358,16 +393,17 @@ function renderCsv(report: TripReport): string {
  * console.log(text.includes("do not certify a safety function")); // true
  * ```
  */
-export function formatTripReport(report: TripReport, format: ReportFormat): string {
+export function formatTripReport(report: TripReport, format: ReportFormat, options?: ReportDisplayOptions): string {
+  const d = _displayOf(options);
   switch (format) {
     case "markdown":
-      return renderMarkdown(report);
+      return renderMarkdown(report, d);
     case "csv":
-      return renderCsv(report);
+      return renderCsv(report, d);
     case "json":
-      return `${JSON.stringify({ report: "trip", reportSchemaVersion: 1, caution: CAUTION_TEXT, method: report.methods, ...report }, null, 2)}\n`;
+      return `${JSON.stringify({ report: "trip", reportSchemaVersion: 1, caution: CAUTION_TEXT, method: report.methods, ..._jsonUnitField(d), ...report }, null, 2)}\n`;
     default:
-      return renderText(report);
+      return renderText(report, d);
   }
 }
 

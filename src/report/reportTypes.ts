@@ -82,11 +82,21 @@ export interface ErrorSweepRow {
   readonly largestSources?: readonly { readonly source: string; readonly halfSwingC: number }[];
 }
 
+/** A setpoint of the design a sweep belongs to: where the chart marks it and its limits, °C. */
+export interface ErrorSweepSetpoint {
+  readonly name: string;
+  readonly tripTemperatureC: number;
+  readonly maxNormalOperatingC: number;
+  readonly hazardLimitC: number;
+}
+
 /** An error sweep of a chain over temperature. */
 export interface ErrorSweep {
   readonly title: string;
   readonly designName?: string;
   readonly rows: readonly ErrorSweepRow[];
+  /** The design's setpoints and limits, marked on the chart and listed by the reports; absent for a bare chain. */
+  readonly setpoints?: readonly ErrorSweepSetpoint[];
   readonly notes: readonly string[];
   readonly methods: ReportMethodInfo;
 }

@@ -38,4 +38,31 @@ describe("trade fact through a design file", () => {
     expect(band.highC).toBeLessThan(52.1);
     expect(band.highC - band.lowC).toBeCloseTo(4, 1);
   });
+
+  it("the threshold voltages are printed: 250 mV for 50 °C lands at 240–260 mV (250 mV ± 4 %, common practice, no source)", async () => {
+    const dir = tempDir();
+    writeFileSync(join(dir, "rail.json"), JSON.stringify(design));
+    const json = JSON.parse((await run(["check", "rail.json", "--json", "--trials", "1000"], dir)).stdout);
+    const sheet = json.buildSheet.setpoints[0];
+    // 5 mV/°C × 50 °C = 250 mV ideal (the part is trimmed to read exactly at 25 and 50 °C)
+    expect(sheet.idealThresholdVolts).toBeCloseTo(0.25, 9);
+    // E192 values realize it within the series' step (< 0.5 %), and the ±4 % rail moves it by ±4 % of itself
+    expect(Math.abs(sheet.realizedThresholdVolts / 0.25 - 1)).toBeLessThan(0.005);
+    expect(sheet.thresholdLowVolts / sheet.realizedThresholdVolts).toBeCloseTo(0.96, 5);
+    expect(sheet.thresholdHighVolts / sheet.realizedThresholdVolts).toBeCloseTo(1.04, 5);
+    expect(sheet.thresholdLowVolts).toBeGreaterThan(0.2385);
+    expect(sheet.thresholdLowVolts).toBeLessThan(0.2415);
+    expect(sheet.thresholdHighVolts).toBeGreaterThan(0.2585);
+    expect(sheet.thresholdHighVolts).toBeLessThan(0.2615);
+    // the text and Markdown reports print the same figures (4 decimals in the band column, 5 for the thresholds)
+    for (const format of [[], ["--markdown"]]) {
+      const out = (await run(["check", "rail.json", "--trials", "1000", ...format], dir)).stdout;
+      expect(out).toContain(sheet.idealThresholdVolts.toFixed(5));
+      expect(out).toContain(sheet.realizedThresholdVolts.toFixed(5));
+      expect(out).toContain(`${sheet.thresholdLowVolts.toFixed(4)} to ${sheet.thresholdHighVolts.toFixed(4)}`);
+    }
+    // and the CSV carries them as columns
+    const csv = (await run(["check", "rail.json", "--csv", "--trials", "1000"], dir)).stdout;
+    expect(csv).toContain(`,${sheet.thresholdLowVolts},${sheet.thresholdHighVolts},`);
+  });
 });

@@ -19,7 +19,7 @@ import {
   type ThermocoupleType,
   type TripDesignResult,
 } from "../../src/index.js";
-import { formatTripReport, type ReportFormat, type TripReport } from "../../src/report/index.js";
+import { formatTripReport, type ReportDisplayOptions, type ReportFormat, type TripReport } from "../../src/report/index.js";
 import { parseDesign, type DesignFile } from "../../src/design/index.js";
 
 describe("public shapes", () => {
@@ -62,8 +62,9 @@ describe("public shapes", () => {
     expectTypeOf<FaultDefinition>().toHaveProperty("id").toEqualTypeOf<string>();
   });
 
-  it("report and design entries: formatTripReport(report, format) returns text; parseDesign returns a DesignFile", () => {
-    expectTypeOf(formatTripReport).parameters.toEqualTypeOf<[TripReport, ReportFormat]>();
+  it("report and design entries: formatTripReport(report, format, options?) returns text; parseDesign returns a DesignFile", () => {
+    // options (the display unit) is optional: every call of formatTripReport(report, format) stays valid.
+    expectTypeOf(formatTripReport).parameters.toEqualTypeOf<[TripReport, ReportFormat, (ReportDisplayOptions | undefined)?]>();
     expectTypeOf(formatTripReport).returns.toEqualTypeOf<string>();
     expectTypeOf(parseDesign).returns.toEqualTypeOf<DesignFile>();
   });

@@ -14,10 +14,12 @@ import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/d
 import { firmwareTripReport } from "../../report/firmwareTripReport.js";
 import { formatPartsCsv, formatTripReport, tripReportFromResult } from "../../report/renderTripReport.js";
 import type { TripReport } from "../../report/reportTypes.js";
+import type { ReportTemperatureUnit } from "../../report/displayUnit.js";
 import { designTrip } from "../../trip/designTrip.js";
 import type { CliIo } from "../io.js";
 import {
   _addAnalysisOptions,
+  _addDisplayUnitOption,
   _addReportOnlyOption,
   _analysisSettings,
   _loadDesign,
@@ -37,7 +39,7 @@ import { _loadProgress, _startProgress } from "../progress.js";
 import type { CommandContext } from "../commandContext.js";
 import { _withDesignDynamics } from "../dynamicsOfDesign.js";
 
-type CheckOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean; readonly partsCsv?: string };
+type CheckOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean; readonly partsCsv?: string; readonly unit?: ReportTemperatureUnit };
 
 /** The extra output files of `check`, in order: the SVG chart, then the bill of materials. @internal */
 function checkExtraPaths(options: CheckOptions): string[] {
@@ -48,7 +50,7 @@ function checkExtraPaths(options: CheckOptions): string[] {
 async function checkExtraContents(options: CheckOptions, report: TripReport): Promise<string[]> {
   const out: string[] = [];
   // The chart code (and its d3 scales) loads only when a chart is asked for.
-  if (options.svg !== undefined) out.push((await import("../../report/tripBandChart.js")).tripBandChartSvg(report));
+  if (options.svg !== undefined) out.push((await import("../../report/tripBandChart.js")).tripBandChartSvg(report, { temperatureUnit: options.unit ?? "C" }));
   if (options.partsCsv !== undefined) {
     if (report.buildSheet === undefined) throw new CliError("this design has no build sheet to write a bill of materials from");
     out.push(formatPartsCsv(report.buildSheet));
@@ -98,14 +100,40 @@ export function _tripReportOfDesign(io: CliIo, design: DesignFile, settings: Ana
     const reference = design.reference;
     const details = [`Reference: ${reference.name} (${reference.kind}), ${reference.nominalVolts} V.`, `ADC: ${design.adc?.bits ?? "?"} bits.`];
     const report = firmwareTripReport(setpoints, evaluations, methods, details);
-    return {
-      ...report,
-      ...(design.name !== undefined ? { designName: design.name } : {}),
-      buildSheet: _adcBuildSheet(design, chain, report, evaluations),
-    };
+    const buildSheet = _adcBuildSheet(design, chain, report, evaluations);
+    return _withAdcFullScale(
+      { ...report, ...(design.name !== undefined ? { designName: design.name } : {}), buildSheet },
+      design.adc?.bits ?? 0,
+      reference.nominalVolts,
+    );
   } finally {
     progress.stop();
   }
+}
+
+/**
+ * An ADC design whose firmware threshold code lies beyond the converter's largest code (2^bits − 1) can never trip:
+ * the reading saturates below it. Such a setpoint fails, whatever its bands say, with the reason in figures (the
+ * signal at the setpoint against the full scale). The bands of a saturating chain are not a trip band. @internal
+ */
+export function _withAdcFullScale(report: TripReport, bits: number, fullScaleVolts: number): TripReport {
+  const maxCode = 2 ** bits - 1;
+  const sheet = report.buildSheet;
+  if (sheet === undefined || !(bits >= 1)) return report;
+  let changed = false;
+  const setpoints = report.setpoints.map((s) => {
+    const code = sheet.adcSetpoints.find((a) => a.name === s.name);
+    if (code === undefined || code.thresholdCode <= maxCode) return s;
+    changed = true;
+    return {
+      ...s,
+      pass: false,
+      reason:
+        `the ADC saturates: the signal at the setpoint is ${code.signalVolts.toFixed(4)} V, beyond the full scale ${fullScaleVolts} V ` +
+        `(threshold code ${code.thresholdCode} above the largest code ${maxCode} of ${bits} bits), so the firmware never sees the trip; lower the gain or raise the full scale.`,
+    };
+  });
+  return changed ? { ...report, setpoints, pass: false } : report;
 }
 
 /**
@@ -162,6 +190,7 @@ export function registerCheckCommand(program: Command, context: CommandContext):
   _addAnalysisOptions(command, "the trip bands");
   _addOutputOptions(command, ["json", "markdown", "csv"], true);
   _addReportOnlyOption(command);
+  _addDisplayUnitOption(command);
   command.option("--parts-csv <file>", "also write the bill of materials (every part the design chose: value, tolerance, tempco, count) as CSV");
   command.action(async (path: string, options: CheckOptions) => {
     const plan = _planCommandOutputs(context.io, options, [path], checkExtraPaths(options));
@@ -169,7 +198,7 @@ export function registerCheckCommand(program: Command, context: CommandContext):
     await _loadProgress(context.io);
     const report = _tripReportOfDesign(context.io, design, _analysisSettings(design, options));
     const named = _withDesignDynamics(design, design.name !== undefined ? { ...report, designName: design.name } : report);
-    const text = formatTripReport(named, _chosenFormat(options));
+    const text = formatTripReport(named, _chosenFormat(options), { temperatureUnit: options.unit ?? "C" });
     const extras = await checkExtraContents(options, named);
     _emitOutputs(context.io, plan, options, text, extras, [input]);
     if (!named.pass && options.reportOnly !== true) {

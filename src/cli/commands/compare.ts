@@ -6,15 +6,19 @@
 import type { Command } from "commander";
 import { referenceOptionFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { formatComparisonReport } from "../../report/renderComparisonReport.js";
+import { comparisonChartSvg } from "../../report/comparisonChart.js";
+import type { ReportTemperatureUnit } from "../../report/displayUnit.js";
 import { compareReferences } from "../../trip/compareReferences.js";
 import { _loadProgress, _startProgress } from "../progress.js";
 import { CliError, marginFailExitCode } from "../cliError.js";
 import {
   _addAnalysisOptions,
+  _addDisplayUnitOption,
   _addReportOnlyOption,
   _analysisSettings,
   _loadDesign,
   _methodInfo,
+  _setpointLimitsOfDesign,
   type AnalysisOptionValues,
 } from "../designOptions.js";
 import {
@@ -32,7 +36,9 @@ import type { ReferenceComparison, ReferenceComparisonEntry, TripBand } from "..
 import type { TripReportSetpoint } from "../../report/reportTypes.js";
 import { _tripReportOfDesign } from "./check.js";
 
-type CompareOptions = OutputOptionValues & Omit<AnalysisOptionValues, "svg"> & { readonly reportOnly?: boolean };
+type CompareOptions = OutputOptionValues & AnalysisOptionValues & { readonly reportOnly?: boolean; readonly unit?: ReportTemperatureUnit };
+
+
 
 /** The ± total tolerance a design-file reference states, fraction (0 for an ideal one). */
 function statedToleranceFraction(reference: DesignReference): number {
@@ -105,13 +111,13 @@ export function registerCompareCommand(program: Command, context: CommandContext
     .command("compare")
     .description("compare the reference options of a design file (reference and referenceAlternatives)")
     .argument("<design>", "design file (JSON): comparator thresholds or an ADC with firmware trip")
-    .addHelpText("after", "\nExample:\n  hotjunction compare examples/reflow-oven-trip.json --markdown\n");
-  // No --svg yet: the chart of the options' bands side by side is still to come (check --svg draws one design's).
-  _addAnalysisOptions(command, undefined);
-  _addOutputOptions(command, ["json", "markdown", "csv"]);
+    .addHelpText("after", "\nExamples:\n  hotjunction compare examples/reflow-oven-trip.json --markdown\n  hotjunction compare examples/reflow-oven-trip.json --svg oven-references.svg\n");
+  _addAnalysisOptions(command, "the options' trip bands side by side against the normal and hazard limits");
+  _addOutputOptions(command, ["json", "markdown", "csv"], true);
   _addReportOnlyOption(command);
+  _addDisplayUnitOption(command);
   command.action(async (path: string, options: CompareOptions) => {
-    const plan = _planCommandOutputs(context.io, options, [path]);
+    const plan = _planCommandOutputs(context.io, options, [path], options.svg !== undefined ? [options.svg] : []);
     const { design, input } = await _loadDesign(context.io, path);
     const settings = _analysisSettings(design, options);
     const references = [design.reference, ...(design.referenceAlternatives ?? [])].map(referenceOptionFromDesign);
@@ -129,7 +135,10 @@ export function registerCompareCommand(program: Command, context: CommandContext
     } finally {
       progress.stop();
     }
-    _emitOutputs(context.io, plan, options, formatComparisonReport(comparison, _chosenFormat(options), _methodInfo(settings), design.name), [], [input]);
+    const methods = _methodInfo(settings);
+    const unit = { temperatureUnit: options.unit ?? "C" } as const;
+    const extras = options.svg !== undefined ? [comparisonChartSvg({ comparison, methods, setpoints: _setpointLimitsOfDesign(design), ...(design.name !== undefined ? { designName: design.name } : {}) }, unit)] : [];
+    _emitOutputs(context.io, plan, options, formatComparisonReport(comparison, _chosenFormat(options), methods, design.name, unit), extras, [input]);
     // The design as drawn is its own reference (the first option); the alternatives failing is what a comparison shows.
     const own = comparison.options[0];
     if (own !== undefined && own.verdict !== "adequate" && options.reportOnly !== true) {

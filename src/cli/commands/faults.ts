@@ -21,7 +21,7 @@ import { formatSafetyFiguresJson } from "../../safety/formatSafetyFiguresJson.js
 import { formatSafetyFiguresMarkdown } from "../../safety/formatSafetyFiguresMarkdown.js";
 import { formatSafetyFiguresText } from "../../safety/formatSafetyFiguresText.js";
 import { CliError } from "../cliError.js";
-import { _loadDesign } from "../designOptions.js";
+import { _addDisplayUnitOption, _loadDesign } from "../designOptions.js";
 import { _designSafety, _reviewDesignFaults, type _DesignSafety } from "../faultSafety.js";
 import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _parseNumber } from "../parseArgs.js";
@@ -29,6 +29,8 @@ import { _readInputFile } from "../readInput.js";
 import type { CommandContext } from "../commandContext.js";
 
 interface FaultsCommandOptions extends OutputOptionValues {
+  /** Display unit of the text, Markdown and CSV review. */
+  readonly unit?: "C" | "F" | "K";
   readonly bias?: "pull-up" | "pull-down" | "none";
   readonly outputStage?: "energize-to-trip" | "de-energize-to-trip";
   readonly tripLevel?: "high" | "low";
@@ -141,6 +143,7 @@ export function registerFaultsCommand(program: Command, context: CommandContext)
         "  hotjunction faults examples/kiln-two-channel-cutout.json --svg kiln-pfd.svg\n",
     );
   _addOutputOptions(command, ["json", "markdown", "csv"], true);
+  _addDisplayUnitOption(command, " (command-line temperatures stay in °C)");
   command.action(async (path: string, options: FaultsCommandOptions) => {
     const inputPaths = [path, ...(options.extraFaults !== undefined ? [options.extraFaults] : [])];
     const plan = _planCommandOutputs(context.io, options, inputPaths, options.svg !== undefined ? [options.svg] : []);
@@ -163,7 +166,7 @@ export function registerFaultsCommand(program: Command, context: CommandContext)
       );
       safety = _designSafety(path, design, report, secondOptions);
     }
-    const text = _faultsText(_chosenFormat(options), report, safety);
+    const text = _faultsText(_chosenFormat(options), report, safety, options.unit ?? "C");
     const extras =
       options.svg !== undefined && safety !== undefined
         ? [pfdAvgChartSvg({
@@ -185,18 +188,25 @@ export function registerFaultsCommand(program: Command, context: CommandContext)
  * safety figures when there is failure data, else the fault table.
  * @internal
  */
-export function _faultsText(format: "text" | "json" | "markdown" | "csv", report: FaultReviewReport, safety: _DesignSafety | undefined): string {
+export function _faultsText(
+  format: "text" | "json" | "markdown" | "csv",
+  report: FaultReviewReport,
+  safety: _DesignSafety | undefined,
+  unit: "C" | "F" | "K" = "C",
+): string {
   const second = safety?.secondReview;
+  const display = { temperatureUnit: unit } as const;
   if (format === "json") {
-    const body = JSON.parse(formatFaultReviewJson(report)) as Record<string, unknown>;
+    // JSON keeps every temperature in °C and records the unit the other forms show.
+    const body = { ...(JSON.parse(formatFaultReviewJson(report)) as Record<string, unknown>), temperatureUnit: unit === "C" ? "°C" : unit === "F" ? "°F" : "K" } as Record<string, unknown>;
     if (second !== undefined) body["secondChannel"] = JSON.parse(formatFaultReviewJson(second)) as unknown;
     if (safety !== undefined) body["safetyFigures"] = JSON.parse(formatSafetyFiguresJson(safety.report)) as unknown;
     return `${JSON.stringify(body, null, 2)}\n`;
   }
-  if (format === "csv") return safety !== undefined ? formatSafetyFiguresCsv(safety.report) : formatFaultReviewCsv(report);
+  if (format === "csv") return safety !== undefined ? formatSafetyFiguresCsv(safety.report) : formatFaultReviewCsv(report, display);
   const render = format === "markdown" ? formatFaultReviewMarkdown : formatFaultReviewText;
-  const parts = [render(report)];
-  if (second !== undefined) parts.push(render(second));
+  const parts = [render(report, display)];
+  if (second !== undefined) parts.push(render(second, display));
   if (safety !== undefined) parts.push(format === "markdown" ? formatSafetyFiguresMarkdown(safety.report) : formatSafetyFiguresText(safety.report));
   return parts.join("\n");
 }

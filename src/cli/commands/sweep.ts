@@ -15,8 +15,10 @@ import { CliError } from "../cliError.js";
 import {
   _addAnalysisOptions,
   _analysisSettings,
+  _addDisplayUnitOption,
   _loadDesign,
   _methodInfo,
+  _setpointLimitsOfDesign,
   type AnalysisOptionValues,
 } from "../designOptions.js";
 import {
@@ -28,9 +30,10 @@ import {
 } from "../outputOptions.js";
 import { _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
 import { _loadProgress, _startProgress } from "../progress.js";
+import { _temperatureSymbol, _toCelsius, type TemperatureUnit } from "../temperatureUnits.js";
 import type { CommandContext } from "../commandContext.js";
 
-type SweepOptions = OutputOptionValues & AnalysisOptionValues & { from: number; to: number; step: number };
+type SweepOptions = OutputOptionValues & AnalysisOptionValues & { from: number; to: number; step: number; unit?: TemperatureUnit };
 
 /** Most temperatures one sweep evaluates. */
 const maxSweepPoints = 2001;
@@ -68,13 +71,19 @@ export function registerSweepCommand(program: Command, context: CommandContext):
     .command("sweep")
     .description("sweep the measurement chain's reading error over temperature")
     .argument("<design>", "design file (JSON)")
-    .requiredOption("--from <C>", "first true temperature, °C", _parseNumber)
-    .requiredOption("--to <C>", "last true temperature, °C", _parseNumber)
-    .option("--step <C>", "step, °C", _parsePositiveNumber, 10)
-    .addHelpText("after", "\nExample:\n  hotjunction sweep examples/heated-enclosure-adc.json --from 20 --to 120 --step 5 --svg enclosure-error.svg\n");
+    .requiredOption("--from <t>", "first true temperature, in --unit (default °C)", _parseNumber)
+    .requiredOption("--to <t>", "last true temperature, in --unit", _parseNumber)
+    .option("--step <t>", "step, in --unit", _parsePositiveNumber, 10)
+    .addHelpText(
+      "after",
+      "\nExamples:\n  hotjunction sweep examples/heated-enclosure-adc.json --from 20 --to 120 --step 5 --svg enclosure-error.svg\n  hotjunction sweep examples/reflow-oven-trip.json --from 400 --to 560 --step 20 --unit F\n",
+    );
   _addAnalysisOptions(command, "the error bands");
+  _addDisplayUnitOption(command, " and of --from, --to, --step");
   _addOutputOptions(command, ["json", "markdown", "csv"], true);
   command.action(async (path: string, options: SweepOptions) => {
+    const unit = options.unit ?? "C";
+    const symbol = _temperatureSymbol(unit);
     if (options.to < options.from) throw new CliError(`--to (${options.to}) is below --from (${options.from})`);
     // (to − from) / step carries the rounding of to − from, relative to the larger magnitude: a step that lands on
     // --to within that rounding still reaches it.
@@ -85,7 +94,7 @@ export function registerSweepCommand(program: Command, context: CommandContext):
     const smallest = _smallestSweepStepC(options.from, options.to, format);
     if (count > 1 && options.step < smallest) {
       throw new CliError(
-        `--step ${options.step} °C is finer than the ${format} output shows from ${options.from} to ${options.to} °C; the smallest step is ${Number(smallest.toPrecision(1))} °C`,
+        `--step ${options.step} ${symbol} is finer than the ${format} output shows from ${options.from} to ${options.to} ${symbol}; the smallest step is ${Number(smallest.toPrecision(1))} ${symbol}`,
       );
     }
     if (options.svg !== undefined && count < 2) throw new CliError("the chart needs at least two temperatures (widen --from/--to)");
@@ -94,14 +103,14 @@ export function registerSweepCommand(program: Command, context: CommandContext):
     const settings = _analysisSettings(design, options);
     const methods = _methodInfo(settings);
     const chain = sweepChainOfDesign(design);
-    const temperatures = Array.from({ length: count }, (_, i) =>
-      Number((options.from + i * options.step).toPrecision(sweepSignificantDigits)),
-    );
-    for (let i = 1; i < temperatures.length; i++) {
-      if (!((temperatures[i] as number) > (temperatures[i - 1] as number))) {
-        throw new CliError(`--step ${options.step} °C repeats the temperature ${temperatures[i]} °C; the smallest step is ${Number(smallest.toPrecision(1))} °C`);
+    // The points are spaced in the display unit (as typed), then converted to °C for the chain.
+    const shown = Array.from({ length: count }, (_, i) => Number((options.from + i * options.step).toPrecision(sweepSignificantDigits)));
+    for (let i = 1; i < shown.length; i++) {
+      if (!((shown[i] as number) > (shown[i - 1] as number))) {
+        throw new CliError(`--step ${options.step} ${symbol} repeats the temperature ${shown[i]} ${symbol}; the smallest step is ${Number(smallest.toPrecision(1))} ${symbol}`);
       }
     }
+    const temperatures = shown.map((t) => _toCelsius(t, unit));
     await _loadProgress(context.io);
     const progress = _startProgress(context.io, "sweep");
     const rows: ErrorSweep["rows"][number][] = [];
@@ -132,6 +141,7 @@ export function registerSweepCommand(program: Command, context: CommandContext):
       title: "Reading error sweep",
       ...(design.name !== undefined ? { designName: design.name } : {}),
       rows,
+      setpoints: _setpointLimitsOfDesign(design),
       notes: [
         design.comparator !== undefined
           ? "Comparator design: the error is that of the signal at the comparator input read as a temperature (no threshold)."
@@ -140,8 +150,9 @@ export function registerSweepCommand(program: Command, context: CommandContext):
       methods: methodsWithoutAcceptance,
     };
     // The chart code (and its d3 scales and shapes) loads only when a chart is asked for.
-    const extras = plan.extras.length > 0 ? [(await import("../../report/errorBandChart.js")).errorBandChartSvg(sweep)] : [];
-    _emitOutputs(context.io, plan, options, formatSweepReport(sweep, format), extras, [input]);
+    const display = { temperatureUnit: unit } as const;
+    const extras = plan.extras.length > 0 ? [(await import("../../report/errorBandChart.js")).errorBandChartSvg(sweep, display)] : [];
+    _emitOutputs(context.io, plan, options, formatSweepReport(sweep, format, display), extras, [input]);
   });
   return command;
 }

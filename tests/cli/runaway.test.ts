@@ -87,9 +87,19 @@ describe("hotjunction runaway", () => {
     expect(svg).toContain("slowest unit");
     expect(svg).toMatch(/hazard/i);
     expect(svg).toContain("do not certify a safety function");
-    const chosen = await run(["runaway", kiln, "--svg", "b.svg", "--setpoint", "bisque firing", "--unit", "nominal", "--report-only"], dir);
+    const chosen = await run(["runaway", kiln, "--svg", "b.svg", "--setpoint", "bisque firing", "--case", "nominal", "--report-only"], dir);
     expect(chosen.code).toBe(0);
     expect(readFileSync(join(dir, "b.svg"), "utf8")).toContain("bisque firing&quot;: nominal unit");
+    // `--unit` was the case option's name before 0.2 (every other design command's `--unit` is the display unit).
+    const old = await run(["runaway", kiln, "--svg", "u.svg", "--setpoint", "bisque firing", "--unit", "nominal", "--report-only"], dir);
+    expect(old.code).toBe(0);
+    expect(readFileSync(join(dir, "u.svg"), "utf8")).toBe(readFileSync(join(dir, "b.svg"), "utf8"));
+    const badCase = await run(["runaway", kiln, "--svg", "x.svg", "--case", "F"], dir);
+    expect(badCase.code).toBe(2);
+    expect(oneLine(badCase.stderr)).toContain('--case "F" is not a case; valid: slowest, nominal');
+    const both = await run(["runaway", kiln, "--svg", "y.svg", "--case", "nominal", "--unit", "slowest"], dir);
+    expect(both.code).toBe(2);
+    expect(oneLine(both.stderr)).toContain("--case and the deprecated --unit both given");
     const bad = await run(["runaway", kiln, "--setpoint", "glaze"], dir);
     expect(bad.code).toBe(2);
     expect(oneLine(bad.stderr)).toContain('--setpoint "glaze" is not a setpoint');

@@ -5,7 +5,7 @@
  * figures; `--svg` writes the runaway chart (true and indicated temperature against time).
  * @module
  */
-import type { Command } from "commander";
+import { Option, type Command } from "commander";
 import { runawayChartSvg } from "../../dynamics/runawayChartSvg.js";
 import { formatRunawayReport } from "../../report/runawayReport.js";
 import { CliError, marginFailExitCode } from "../cliError.js";
@@ -24,7 +24,7 @@ import { _tripReportOfDesign } from "./check.js";
 import { _loadProgress } from "../progress.js";
 
 type RunawayOptions = OutputOptionValues &
-  AnalysisOptionValues & { readonly reportOnly?: boolean; readonly setpoint?: string; readonly unit?: "slowest" | "nominal" };
+  AnalysisOptionValues & { readonly reportOnly?: boolean; readonly setpoint?: string; readonly case?: string; readonly unit?: string };
 
 /** Registers the `runaway` command. @internal */
 export function registerRunawayCommand(program: Command, context: CommandContext): Command {
@@ -34,18 +34,24 @@ export function registerRunawayCommand(program: Command, context: CommandContext
     .argument("<design>", "design file (JSON) with a dynamics section")
     .addHelpText(
       "after",
-      "\nThe chart (--svg) shows the setpoint and case with the smallest dynamic margin unless --setpoint/--unit choose.\n" +
+      "\nThe chart (--svg) shows the setpoint and case with the smallest dynamic margin unless --setpoint/--case choose.\n" +
         "\nExamples:\n  hotjunction runaway examples/ceramic-kiln-cutout.json\n  hotjunction runaway kiln.json --markdown --out kiln-runaway.md --svg kiln-runaway.svg --setpoint bisque\n",
     );
   _addAnalysisOptions(command, "the runaway (true and indicated temperature against time)");
   command.option("--setpoint <name>", "setpoint whose runaway the chart shows");
-  command.option("--unit <unit>", "case the chart shows: slowest (band high edge) or nominal");
+  command.option("--case <case>", "case the chart shows: slowest (the unit at the band's high edge) or nominal");
+  // Until 0.2 `--unit` named the case; it stays accepted for those two words (deprecated), since every other design
+  // command's `--unit` is the display unit of temperatures.
+  command.addOption(new Option("--unit <case>", "deprecated: use --case").hideHelp());
   _addOutputOptions(command, ["json", "markdown", "csv"], true);
   _addReportOnlyOption(command);
   command.action(async (path: string, options: RunawayOptions) => {
     const svg = (options as { svg?: string }).svg;
-    if (options.unit !== undefined && options.unit !== "slowest" && options.unit !== "nominal") {
-      throw new CliError(`--unit ${JSON.stringify(options.unit)} is not a case; valid: slowest, nominal`);
+    if (options.case !== undefined && options.unit !== undefined) throw new CliError("--case and the deprecated --unit both given; give --case only");
+    const chartCase = options.case ?? options.unit;
+    const caseOption = options.case !== undefined ? "--case" : "--unit";
+    if (chartCase !== undefined && chartCase !== "slowest" && chartCase !== "nominal") {
+      throw new CliError(`${caseOption} ${JSON.stringify(chartCase)} is not a case; valid: slowest, nominal${caseOption === "--unit" ? " (runaway has no display unit yet; --unit here is the deprecated name of --case)" : ""}`);
     }
     const plan = _planCommandOutputs(context.io, options, [path], svg !== undefined ? [svg] : []);
     const { design, input } = await _loadDesign(context.io, path);
@@ -74,7 +80,7 @@ export function registerRunawayCommand(program: Command, context: CommandContext
       result.setpoints.forEach((s, i) => {
         if (options.setpoint !== undefined && s.name !== options.setpoint) return;
         s.cases.forEach((c, k) => {
-          if (options.unit !== undefined && (options.unit === "slowest") !== (k === 0)) return;
+          if (chartCase !== undefined && (chartCase === "slowest") !== (k === 0)) return;
           if (c.dynamicMarginC < smallest) {
             smallest = c.dynamicMarginC;
             chosen = { setpoint: i, unit: k };

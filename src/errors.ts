@@ -66,10 +66,12 @@ function formatValue(value: unknown): string {
  */
 export function _formatErrorMessage({ context, quantity, value, unit, problem, min, max, allowed }: ErrorDetails): string {
   const unitText = unit === undefined ? "" : ` ${unit}`;
-  let text = `${context === undefined ? "" : `${context}: `}${quantity} ${formatValue(value)}`;
-  text += `${typeof value === "number" ? unitText : ""} ${problem ?? "is out of range"}`;
-  if (min !== undefined || max !== undefined) text += `; valid range ${min ?? -Infinity} to ${max ?? Infinity}${unitText}`;
-  return allowed === undefined ? text : `${text}; valid: ${allowed.join(", ")}`;
+  // One template: the optional parts are empty strings when their field is absent.
+  return `${context === undefined ? "" : `${context}: `}${quantity} ${formatValue(value)}${typeof value === "number" ? unitText : ""} ${
+    problem ?? "is out of range"
+  }${min === undefined && max === undefined ? "" : `; valid range ${min ?? -Infinity} to ${max ?? Infinity}${unitText}`}${
+    allowed === undefined ? "" : `; valid: ${allowed.join(", ")}`
+  }`;
 }
 
 /** A value outside what its quantity allows (out of range, unknown choice, ambiguous inverse...). */
@@ -86,7 +88,7 @@ export class HotjunctionRangeError extends RangeError implements ErrorDetails {
   declare readonly allowed: readonly string[] | undefined;
   constructor(details: ErrorDetails) {
     super(_formatErrorMessage(details));
-    _assignDetails(this, details);
+    Object.assign(this, details);
   }
 }
 
@@ -104,13 +106,8 @@ export class HotjunctionTypeError extends TypeError implements ErrorDetails {
   declare readonly allowed: readonly string[] | undefined;
   constructor(details: ErrorDetails) {
     super(_formatErrorMessage(details));
-    _assignDetails(this, details);
+    Object.assign(this, details);
   }
-}
-
-/** Copies the structured fields onto an error. @internal */
-function _assignDetails(target: object, details: ErrorDetails): void {
-  Object.assign(target, details);
 }
 
 /** Either error of the family. */

@@ -232,7 +232,8 @@ function validate(data: ThermocoupleData): void {
     });
   }
   const e = data.exponential;
-  let end: number = subs[0]?.minC as number;
+  const first: number = subs[0]?.minC as number;
+  let end = first;
   let ok = data.minC >= end && data.maxC > data.minC && (!e || [e.a0, e.a1, e.a2].every(Number.isFinite));
   for (const f of subs) {
     const c = f?.coefficients;
@@ -245,7 +246,7 @@ function validate(data: ThermocoupleData): void {
       code: "INVALID_OPTION",
       quantity: "thermocouple data range",
       value: [data.minC, data.maxC],
-      min: subs[0]?.minC,
+      min: first,
       max: end,
       unit: "°C",
       problem: "is not valid reference data",
@@ -280,10 +281,10 @@ function build(data: ThermocoupleData): CompiledType {
   ct.emfAtMaxC = _emf(ct, ct.maxC);
   // A type whose E starts by falling (type B) is ambiguous until E climbs back to E(minC).
   // Find where the slope turns positive in the first sub-range, then the upper root of E(t) = E(minC).
-  let lo = minC;
-  let hi = ct.subranges[0]?.maxC as number;
-  if (_slopeInSubrange(ct, 0, lo) <= 0) {
-    const top = hi;
+  if (_slopeInSubrange(ct, 0, minC) <= 0) {
+    const top = ct.subranges[0]?.maxC as number;
+    let lo = minC;
+    let hi = top;
     for (let i = 0; i < 200; i++) {
       const mid = 0.5 * (lo + hi);
       if (_slopeInSubrange(ct, 0, mid) <= 0) lo = mid;

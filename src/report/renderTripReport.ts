@@ -257,16 +257,19 @@ export function formatPartsCsv(sheet: TripBuildSheet): string {
   return `# ${_cautionLine()}\n${_csv(rows)}`;
 }
 
-function coverageLines(report: TripReport): string[] {
+function coverageLines(report: TripReport, d: _TemperatureDisplay): string[] {
   // Coverage factors are pure numbers: no unit.
   const out: string[] = [];
   for (const s of report.setpoints) {
     const w = s.bands.find((b) => b.method === "worst-case");
     if (w?.enclosureLowC !== undefined && w.enclosureHighC !== undefined) {
-      const gap = (g: number | undefined): string => (g === undefined ? "?" : g === 0 ? "0" : g.toExponential(1));
+      // Attained and enclosure keep every digit (the gap is ~1e-10 °C); gaps and the tolerance are differences.
+      const at = (t: number): number => (d.unit === "C" ? t : d.unit === "K" ? t + 273.15 : t * 1.8 + 32);
+      const gap = (g: number | undefined): string => (g === undefined ? "not stated" : g === 0 ? "0" : d.diff(g).toExponential(1));
+      const u = d.symbol;
       out.push(
-        `Worst case at "${s.name}": attained ${w.lowC} to ${w.highC} °C (points of the source box reach them), enclosure ${w.enclosureLowC} to ${w.enclosureHighC} °C (over the whole box: interval arithmetic with outward rounding), gap ${gap(w.enclosureGapLowC)} / ${gap(w.enclosureGapHighC)} °C` +
-          (w.enclosureGapToleranceC !== undefined ? ` (stated tolerance ${w.enclosureGapToleranceC} °C).` : "."),
+        `Worst case at "${s.name}": attained ${at(w.lowC)} to ${at(w.highC)} ${u} (points of the source box reach them), enclosure ${at(w.enclosureLowC)} to ${at(w.enclosureHighC)} ${u} (over the whole box: interval arithmetic with outward rounding), gap ${gap(w.enclosureGapLowC)} / ${gap(w.enclosureGapHighC)} ${u}` +
+          (w.enclosureGapToleranceC !== undefined ? ` (stated tolerance ${d.diff(w.enclosureGapToleranceC)} ${u}).` : "."),
       );
     }
     const rss = s.bands.find((b) => b.method === "rss");
@@ -295,7 +298,7 @@ function renderText(report: TripReport, d: _TemperatureDisplay): string {
   const heading = `${report.title}${report.designName !== undefined ? `: ${report.designName}` : ""} — ${report.pass ? "PASS" : "FAIL"}`;
   const out = [heading, "=".repeat([...heading].length), "", ...report.details.map((l) => _sentenceInUnit(l, d)), "", _textTable(setpointRows(report, d)), ""];
   for (const s of report.setpoints) out.push(`${s.name}: ${_reasonInUnit(report, s, d)}`);
-  out.push(...coverageLines(report));
+  out.push(...coverageLines(report, d));
   if (report.buildSheet !== undefined) {
     for (const t of _buildSheetTables(report.buildSheet, d)) out.push("", `${t.title}:`, _textTable(t.rows));
     const lines = _buildSheetLines(report.buildSheet);
@@ -325,7 +328,7 @@ function renderMarkdown(report: TripReport, d: _TemperatureDisplay): string {
     _markdownTable(setpointRows(report, d)),
     "",
     ...report.setpoints.map((s) => `- **${s.name}**: ${_reasonInUnit(report, s, d)}`),
-    ...coverageLines(report).map((l) => `- ${l}`),
+    ...coverageLines(report, d).map((l) => `- ${l}`),
     ...serviceLines(report, d).map((l) => `- ${l}`),
   ];
   if (report.buildSheet !== undefined) {

@@ -88,8 +88,9 @@ export function _expm(matrix: Float64Array, m: number): Float64Array {
     norm = Math.max(norm, row);
   }
   if (!Number.isFinite(norm)) {
+    // NaN comes from an infinite step times a zero rate: the same overflow
     // a time step so long (or rates so large) that rate × step overflows: squaring would never end
-    throw new HotjunctionRangeError({ code: "OVERFLOW", quantity: "time step × system rate (matrix norm)", value: norm, context: "dynamics", problem: "is beyond the float64 range; give a shorter time" });
+    throw new HotjunctionRangeError({ code: "OVERFLOW", quantity: "time step × system rate (matrix norm)", value: Number.isNaN(norm) ? Number.POSITIVE_INFINITY : norm, context: "dynamics", problem: "is beyond the float64 range; give a shorter time" });
   }
   const squarings = norm > 0.5 ? Math.ceil(Math.log2(norm / 0.5)) : 0;
   const scale = 2 ** -squarings;

@@ -455,6 +455,7 @@ export function _requireWorkWithin(factors: Readonly<Record<string, number>>, li
       code: "OUT_OF_RANGE",
       quantity: names.join(" × "),
       value: product,
+      min: 0,
       max: limit,
       context,
       problem: `is more work than one call may do (${names.map((n) => `${factors[n]} ${n}`).join(" × ")}); use fewer`,

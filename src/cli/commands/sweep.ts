@@ -29,6 +29,7 @@ import {
 } from "../outputOptions.js";
 import { _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
 import { _startProgress } from "../progress.js";
+import { _maxModelEvaluations } from "../../uncertainty/_propagateMonteCarlo.js";
 import type { CommandContext } from "../runCli.js";
 
 type SweepOptions = OutputOptionValues & AnalysisOptionValues & { from: number; to: number; step: number };
@@ -94,6 +95,11 @@ export function registerSweepCommand(program: Command, context: CommandContext):
     const { design, input } = await _loadDesign(context.io, path);
     const settings = _analysisSettings(design, options);
     const methods = _methodInfo(settings);
+    if (methods.methods.includes("monte-carlo") && count * settings.trials > _maxModelEvaluations) {
+      throw new CliError(
+        `the sweep's work, ${count} points × ${settings.trials} trials = ${count * settings.trials} model evaluations, is above the limit of ${_maxModelEvaluations} (use a larger --step or fewer --trials)`,
+      );
+    }
     const chain = sweepChainOfDesign(design);
     const temperatures = Array.from({ length: count }, (_, i) =>
       Number((options.from + i * options.step).toPrecision(sweepSignificantDigits)),

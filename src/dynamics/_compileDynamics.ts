@@ -5,10 +5,10 @@
  * @module
  */
 import { HotjunctionRangeError, HotjunctionTypeError, _invalidChoice, _requireFinite, _requireFiniteResult, _requireInRange } from "../errors.js";
+import type { DigitalFilter, DynamicsModel, OutputStage, RunawayScenario, SignalPath } from "./types.js";
+
 /** Fastest thermal rate of the heated process, 1/s (a time constant of 1 µs). */
 const maxThermalRatePerSecond = 1e6;
-
-import type { DigitalFilter, DynamicsModel, OutputStage, RunawayScenario, SignalPath } from "./types.js";
 
 const CONTEXT = "dynamics";
 

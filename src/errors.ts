@@ -438,3 +438,26 @@ export function _requireFiniteResult(result: number, quantity: string, input: nu
 export function _label(value: unknown): string {
   return typeof value === "string" ? value : formatValue(value);
 }
+
+/**
+ * Throws an `OUT_OF_RANGE` range error when the work a call would do — the product of `factors` (each named,
+ * e.g. `{ setpoints: 3, "reference options": 4, trials: 1e7 }`) — exceeds `limit`; the message names the product,
+ * its factors and the limit.
+ * @internal
+ */
+export function _requireWorkWithin(factors: Readonly<Record<string, number>>, limit: number, context?: string): void {
+  const names = Object.keys(factors);
+  let product = 1;
+  for (const name of names) product *= factors[name] as number;
+  if (product > limit) {
+    throw new HotjunctionRangeError({
+      code: "OUT_OF_RANGE",
+      quantity: names.join(" × "),
+      value: product,
+      min: 0,
+      max: limit,
+      context,
+      problem: `is more work than one call may do (${names.map((n) => `${factors[n]} ${n}`).join(" × ")}); use fewer`,
+    });
+  }
+}

@@ -4,7 +4,7 @@
  * Transfer function: V_out = G·(V_in + V_os), with G = 1 + R_f/R_g for a resistor-set gain.
  * @module
  */
-import { _invalidChoice } from "../errors.js";
+import { _invalidChoice, _requireFiniteResult } from "../errors.js";
 import {
   _ambientFromReferenceC,
   _optionalLimit,
@@ -35,7 +35,7 @@ export function amplifierGain(element: AmplifierElement): number {
   if (g["setBy"] === "resistors") {
     const rf = _requirePositive(g["feedbackOhms"], "feedbackOhms", "Ω", context);
     const rg = _requirePositive(g["groundOhms"], "groundOhms", "Ω", context);
-    return 1 + rf / rg;
+    return _requireFiniteResult(1 + rf / rg, "gain from feedbackOhms / groundOhms", rf / rg, undefined, context);
   }
   if (g["setBy"] === "fixed") return _requirePositive(g["gain"], "gain", "V/V", context);
   return _invalidChoice("gain setBy", g["setBy"], ["resistors", "fixed"], context);

@@ -3,11 +3,15 @@
  * the per-source contribution table in °C.
  * @module
  */
-import { _requireFinite, HotjunctionTypeError } from "../errors.js";
+import { _requireFinite, _requireWorkWithin, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
+import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
 import { _chainBounds, _checkBoundsOptions, type ChainBoundsOptions } from "./_chainBounds.js";
 import { _codeForVolts, _compileChain, _meansRecord, _signalVolts, _sourcesAt } from "./_compileChain.js";
 import { _readingModel } from "./readingFromChain.js";
 import type { ChainEvaluation, MeasurementChain } from "./types.js";
+
+/** Most temperatures one {@link evaluateChain} call evaluates (an array longer than this is refused). @internal */
+export const _maxChainTemperatures = 10_000;
 
 /** Options of {@link evaluateChain}. */
 export type EvaluateChainOptions = ChainBoundsOptions;
@@ -24,7 +28,9 @@ export type EvaluateChainOptions = ChainBoundsOptions;
  *   seed (1), normalBoundCoverage (0.9973)
  * @returns one {@link ChainEvaluation}, or one per temperature for an array
  * @throws HotjunctionRangeError / HotjunctionTypeError for a bad chain, a temperature outside the
- *   thermocouple tolerance's range, or bad options
+ *   thermocouple tolerance's range, or bad options; `OUT_OF_RANGE` for an array of more than
+ *   10,000 temperatures, or temperatures × Monte Carlo trials above 10⁹ model
+ *   evaluations
  * @example
  * ```ts
  * import { evaluateChain } from "hotjunction";
@@ -71,5 +77,9 @@ export function evaluateChain(
       problem: "is neither a number nor an array of numbers",
     });
   }
+  if (hotJunctionC.length > _maxChainTemperatures) {
+    throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "number of hot-junction temperatures", value: hotJunctionC.length, min: 0, max: _maxChainTemperatures, context: cc.context, problem: "is more than one call evaluates" });
+  }
+  if (opts.methods.includes("monte-carlo")) _requireWorkWithin({ temperatures: hotJunctionC.length, trials: opts.trials }, _maxModelEvaluations, cc.context);
   return hotJunctionC.map((t, i) => one(_requireFinite(t, `hot-junction temperature [${i}]`, "°C", cc.context)));
 }

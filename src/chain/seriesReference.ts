@@ -4,7 +4,7 @@
  * service life (linear or √t scaling) and thermal hysteresis. Every source is a ± fraction of the output.
  * @module
  */
-import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _invalidChoice, _requireFinite, _requireFiniteResult, HotjunctionRangeError } from "../errors.js";
 import {
   _ambientFromReferenceC,
   _ambientSpanC,
@@ -54,7 +54,7 @@ export function boxMethodTempcoPpmPerC(
       problem: "is not positive",
     });
   }
-  return ((hi - lo) / (vNom * (tHi - tLo))) * 1e6;
+  return _requireFiniteResult(((hi - lo) / (vNom * (tHi - tLo))) * 1e6, "box-method tempco (maxVolts − minVolts)", hi - lo, "V", context);
 }
 
 /**

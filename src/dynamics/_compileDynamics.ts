@@ -7,6 +7,9 @@
 import { HotjunctionRangeError, HotjunctionTypeError, _invalidChoice, _requireFinite, _requireFiniteResult, _requireInRange } from "../errors.js";
 import type { DigitalFilter, DynamicsModel, OutputStage, RunawayScenario, SignalPath } from "./types.js";
 
+/** Fastest thermal rate of the heated process, 1/s (a time constant of 1 µs). */
+const maxThermalRatePerSecond = 1e6;
+
 const CONTEXT = "dynamics";
 
 /** Compiled process: deviation form around the start temperature. @internal */
@@ -172,6 +175,18 @@ export function _compileDynamics(model: DynamicsModel): _CompiledDynamics {
       ambientC: _requireFinite(r.ambientC, "ambient temperature (ambientC)", "°C", CONTEXT),
       element,
     };
+    // A thermal time constant far below any real load's makes the system so stiff that its exact steps (matrix
+    // exponentials of rate × step) lose every digit and the event search never settles: refused, not simulated.
+    const rates: [string, number][] = [["loss to ambient / load capacity", process.lossWattsPerK / process.capacityJoulesPerK]];
+    if (element !== null) {
+      rates.push(["element coupling / element capacity", element.couplingWattsPerK / element.capacityJoulesPerK]);
+      rates.push(["element coupling / load capacity", element.couplingWattsPerK / process.capacityJoulesPerK]);
+    }
+    for (const [quantity, rate] of rates) {
+      if (!(rate <= maxThermalRatePerSecond)) {
+        throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity, value: rate, min: 0, max: maxThermalRatePerSecond, unit: "1/s", context: CONTEXT, problem: "is faster than any heated load (a thermal time constant below 1 µs)" });
+      }
+    }
   } else {
     return _invalidChoice("runaway kind", r.kind, ["constantRate", "heaterPower"], CONTEXT);
   }

@@ -79,6 +79,9 @@ export function _buildLinearSystem(model: _CompiledDynamics, startC: number): _L
   return { n, a, b, x0, trueIndex, indicatedIndex: trueIndex + lags.length, elementIndex };
 }
 
+/** Most squarings of one matrix exponential: a norm up to the float64 maximum needs 1,025. */
+const maxSquarings = 1100;
+
 /** e^{M} of a row-major m×m matrix by scaling and squaring with a Taylor series. @internal */
 export function _expm(matrix: Float64Array, m: number): Float64Array {
   let norm = 0;
@@ -88,10 +91,16 @@ export function _expm(matrix: Float64Array, m: number): Float64Array {
     norm = Math.max(norm, row);
   }
   if (!Number.isFinite(norm)) {
+    // NaN comes from an infinite step times a zero rate: the same overflow
     // a time step so long (or rates so large) that rate × step overflows: squaring would never end
-    throw new HotjunctionRangeError({ code: "OVERFLOW", quantity: "time step × system rate (matrix norm)", value: norm, context: "dynamics", problem: "is beyond the float64 range; give a shorter time" });
+    throw new HotjunctionRangeError({ code: "OVERFLOW", quantity: "time step × system rate (matrix norm)", value: Number.isNaN(norm) ? Number.POSITIVE_INFINITY : norm, context: "dynamics", problem: "is beyond the float64 range; give a shorter time" });
   }
-  const squarings = norm > 0.5 ? Math.ceil(Math.log2(norm / 0.5)) : 0;
+  // log2(norm / 0.5) written as log2(norm) + 1: norm / 0.5 overflows to Infinity above 9e307, and an infinite
+  // count of squarings never ended (the hang of rampLagThroughLagsC at 1e308 s)
+  const squarings = norm > 0.5 ? Math.ceil(Math.log2(norm) + 1) : 0;
+  if (!(squarings <= maxSquarings)) {
+    throw new HotjunctionRangeError({ code: "OVERFLOW", quantity: "matrix exponential squarings", value: squarings, min: 0, max: maxSquarings, context: "dynamics", problem: "exceed the limit; give a shorter time" });
+  }
   const scale = 2 ** -squarings;
   const x = new Float64Array(m * m);
   for (let i = 0; i < m * m; i++) x[i] = (matrix[i] as number) * scale;

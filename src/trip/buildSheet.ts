@@ -5,6 +5,7 @@
  * renderers in `report/` print it, the browser workbench shows it.
  * @module
  */
+import { _requireInteger } from "../errors.js";
 import { nearestStandardResistor } from "./standardResistorValues.js";
 import type { PreferredSeriesName } from "../data/preferredSeries.js";
 import type { ThermocoupleElement } from "../chain/types.js";

@@ -2,7 +2,8 @@
  * The same trip design evaluated with several reference options side by side.
  * @module
  */
-import { _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireOptionsObject, _requireWorkWithin, HotjunctionRangeError } from "../errors.js";
+import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
 import { designTrip, type DesignTripOptions } from "./designTrip.js";
 import type {
   ReferenceComparison,
@@ -40,7 +41,8 @@ function nominalVoltsOf(option: ReferenceOption): number {
  * @param options - {@link CompareReferencesOptions}
  * @returns {@link ReferenceComparison}: per option its bands (°C), extra width over an ideal reference (°C),
  *   cost and verdict, the recommendation and a summary sentence
- * @throws HotjunctionRangeError (code `INVALID_DESIGN`) for no options or repeated names; as {@link designTrip}
+ * @throws HotjunctionRangeError (code `INVALID_DESIGN`) for no options or repeated names; `OUT_OF_RANGE` when
+ *   setpoints × reference options × 2 × Monte Carlo trials exceed 10⁹ model evaluations; as {@link designTrip}
  * @example
  * ```ts
  * import { compareReferences } from "hotjunction";
@@ -66,6 +68,15 @@ export function compareReferences(
   options: CompareReferencesOptions = {},
 ): ReferenceComparison {
   const context = "compareReferences";
+  _requireOptionsObject(options, context, true);
+  if (Array.isArray(referenceOptions) && typeof design === "object" && design !== null && Array.isArray(design.setpoints)) {
+    // each option is designed twice (with the option, and with an ideal reference on the same resistors)
+    _requireWorkWithin(
+      { setpoints: design.setpoints.length, "reference options × 2": referenceOptions.length * 2, trials: options.monteCarloTrials ?? 100_000 },
+      _maxModelEvaluations,
+      context,
+    );
+  }
   if (!Array.isArray(referenceOptions) || referenceOptions.length === 0) {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "reference options", value: referenceOptions, context, problem: "must be a non-empty array" });
   }

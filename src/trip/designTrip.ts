@@ -5,7 +5,8 @@
  */
 import { CAUTION_TEXT } from "../caution.js";
 import { midRailDivider } from "./midRailDivider.js";
-import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _invalidChoice, _requireFinite, _requireOptionsObject, _requireWorkWithin, HotjunctionRangeError } from "../errors.js";
+import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
 import type { DividerElement, MeasurementChain, ReferenceElement } from "../chain/types.js";
 import { propagate } from "../uncertainty/propagate.js";
 import { rectangular } from "../uncertainty/rectangular.js";
@@ -486,10 +487,15 @@ export function _realizedTripReference(design: TripDesign): ReferenceElement {
  * @param design - the trip design (setpoints, chain elements, reference, resistors, ambient)
  * @param options - propagation options (trials, seed, acceptance method, progress)
  * @returns the per-setpoint results, networks, reference realization, build sheet and notes
- * @throws HotjunctionRangeError / HotjunctionTypeError for an invalid design
+ * @throws HotjunctionRangeError / HotjunctionTypeError for an invalid design; `OUT_OF_RANGE` when setpoints ×
+ *   Monte Carlo trials exceed 10⁹ model evaluations
  */
 export function designTrip(design: TripDesign, options: DesignTripOptions = {}): TripDesignResult {
   if (typeof design !== "object" || design === null) designError("design", design, "is not an object");
+  _requireOptionsObject(options, "designTrip", true);
+  if (Array.isArray(design.setpoints) && typeof options.monteCarloTrials === "number") {
+    _requireWorkWithin({ setpoints: design.setpoints.length, trials: options.monteCarloTrials }, _maxModelEvaluations, "designTrip");
+  }
   const acceptanceMethod = options.acceptanceMethod ?? "worst-case";
   if (!methods.includes(acceptanceMethod)) _invalidChoice("acceptanceMethod", acceptanceMethod, methods, "designTrip");
   const coverage = options.coverage ?? 0.95;

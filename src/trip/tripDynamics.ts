@@ -6,7 +6,7 @@
  * the comparator's own hysteresis). The verdict of a setpoint then uses the dynamic peak on the hazard side.
  * @module
  */
-import { HotjunctionTypeError, _requireNonNegative, _requirePositive } from "../errors.js";
+import { HotjunctionTypeError, _requireFiniteResult, _requireNonNegative, _requireObject, _requirePositive } from "../errors.js";
 import { _runawayFigures, checkDynamics, DYNAMICS_ASSUMPTIONS, type DynamicsCheck, type RunawayFigures } from "../dynamics/checkDynamics.js";
 import type { TripNoiseFigures } from "../dynamics/levelCrossing.js";
 import type { RunawayResponse } from "../dynamics/simulateRunaway.js";
@@ -293,7 +293,12 @@ export function chainSignalSlope(
   chain: { readonly type: ThermocoupleType; readonly amplifier?: AmplifierElement | FixedScaleAmplifierElement | undefined },
   temperatureC: number,
 ): ChainSignalSlope {
+  _requireObject(chain, "chain", CONTEXT);
   const amplifier = chain.amplifier;
+  if (amplifier !== undefined) {
+    _requireObject(amplifier, "amplifier", CONTEXT);
+    if (amplifier.kind !== "fixedScaleAmplifier") _requireObject(amplifier.gain, "amplifier gain (gain)", CONTEXT);
+  }
   if (amplifier?.kind === "fixedScaleAmplifier") {
     const mv = _requirePositive(amplifier.millivoltsPerC, "fixed-scale amplifier scale (millivoltsPerC)", "mV/°C", CONTEXT);
     return { voltsPerC: mv / 1000, source: `fixed-scale amplifier, ${mv} mV/°C` };
@@ -305,6 +310,7 @@ export function chainSignalSlope(
       amplifier.gain.setBy === "fixed"
         ? _requirePositive(amplifier.gain.gain, "amplifier gain (gain)", "V/V", CONTEXT)
         : 1 + _requirePositive(amplifier.gain.feedbackOhms, "feedback resistor (feedbackOhms)", "Ω", CONTEXT) / _requirePositive(amplifier.gain.groundOhms, "ground resistor (groundOhms)", "Ω", CONTEXT);
+    _requireFiniteResult(gain * seebeckMicrovoltsPerC, "amplifier gain", gain, "V/V", CONTEXT);
   }
   return {
     voltsPerC: seebeckMicrovoltsPerC * 1e-6 * gain,

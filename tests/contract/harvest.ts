@@ -9,6 +9,7 @@
  */
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { join, relative } from "node:path";
+import { threadId } from "node:worker_threads";
 
 export const projectDir = join(import.meta.dirname, "..", "..");
 const srcDir = join(projectDir, "src");
@@ -87,7 +88,8 @@ export function isClass(value: unknown): boolean {
 
 /** Runs every documented example through recording entries; returns the calls they made. */
 export async function harvestExampleCalls(entries: Record<string, Record<string, unknown>>): Promise<RecordedCall[]> {
-  const scratch = join(projectDir, ".tmp", `contract-${process.pid}`);
+  // one folder per process and thread: the contract's workers harvest side by side in one process
+  const scratch = join(projectDir, ".tmp", `contract-${process.pid}-${threadId}`);
   mkdirSync(scratch, { recursive: true });
   const calls: RecordedCall[] = [];
   const globalSlot = globalThis as unknown as { __hotjunctionContract?: unknown };

@@ -23,7 +23,7 @@
  */
 import { astmExtensionWireTolerances, iecCableTolerances, type CableToleranceEntry } from "../../data/cableTolerances.js";
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
-import { _invalidChoice, _label, _requireFinite, _requireOrderedPair, HotjunctionRangeError } from "../../errors.js";
+import { _invalidChoice, _label, _requireFinite, _requireFiniteResult, _requireInRange, _requireOneOf, _requireOrderedPair, HotjunctionRangeError } from "../../errors.js";
 import { _compile, type CompiledType } from "../../its90/compiled.js";
 import { _emfFromTemperature, _seebeckCoefficient } from "../../its90/engine.js";
 import { thermocoupleData } from "../../its90/resolveType.js";
@@ -108,6 +108,7 @@ export function cableToleranceStatement(
   tolerance: CableTolerance,
 ): CableToleranceStatement {
   const context = `type ${_label(type)} cable`;
+  thermocoupleData(type); // an unknown type is refused before the tables are looked up
   if (grade !== "extension" && grade !== "compensating") {
     return _invalidChoice("cable grade", grade, ["extension", "compensating"], context);
   }
@@ -170,9 +171,30 @@ function requireRated(s: CableToleranceStatement, t: number, quantity: string, c
   }
 }
 
-/** The statement's code for a context, after checking the statement is an object. */
-function _statementCode(statement: CableToleranceStatement): string {
-  return _label(_requireObject(statement, "cable tolerance statement", "cable")["code"]);
+/** Largest tolerance a statement may state: ± µV and ± °C (far above any cable standard's). */
+const maxStatedMicrovolts = 1e5;
+const maxStatedC = 1000;
+
+/**
+ * Checks a statement passed in (it may be forged) once, at the entry of every function that takes one: an object
+ * with a string code, a rated range inside -270 … 1820 °C, and exactly one tolerance (± µV or ± °C), finite and in
+ * range. Returns the context text of its messages.
+ */
+function _checkStatement(type: unknown, statement: CableToleranceStatement): string {
+  const o = _requireObject(statement, "cable tolerance statement", "cable");
+  const context = `type ${_label(type)} ${_label(o["code"])} cable`;
+  if (typeof o["code"] !== "string") _requireObject(undefined, "cable tolerance statement code", context);
+  const [minC, maxC] = _requireOrderedPair(o["minC"], o["maxC"], "rated minC", "rated maxC", "°C", context);
+  _requireInRange(minC, "rated minC", -270, 1820, "°C", context);
+  _requireInRange(maxC, "rated maxC", -270, 1820, "°C", context);
+  const uv = o["toleranceMicrovolts"];
+  const degrees = o["toleranceC"];
+  if ((uv === undefined) === (degrees === undefined)) {
+    _requireOneOf(o, [["toleranceMicrovolts"], ["toleranceC"]], context);
+  }
+  if (uv !== undefined) _requireInRange(uv, "cable toleranceMicrovolts", 0, maxStatedMicrovolts, "µV", context);
+  else _requireInRange(degrees, "cable toleranceC", 0, maxStatedC, "°C", context);
+  return context;
 }
 
 /**
@@ -195,7 +217,7 @@ export function cableToleranceMicrovolts(
   statement: CableToleranceStatement,
   cableTemperatureC: number,
 ): number {
-  const context = `type ${_label(type)} ${_statementCode(statement)} cable`;
+  const context = _checkStatement(type, statement);
   const t = _requireFinite(cableTemperatureC, "cable temperature", "°C", context);
   requireRated(statement, t, "cable temperature", context);
   return toleranceMicrovoltsAt(_compile(thermocoupleData(type)), statement, t);
@@ -230,7 +252,7 @@ export interface CableMismatchBound {
  */
 export function cableMismatchBound(type: ThermocoupleType, statement: CableToleranceStatement): CableMismatchBound {
   const ct = _compile(thermocoupleData(type));
-  const context = `type ${_label(type)} ${_statementCode(statement)} cable`;
+  const context = _checkStatement(type, statement);
   // the search walks the rated range in 1 °C steps: a forged range wider than any type's is refused, not walked
   const [minC, maxC] = _requireOrderedPair(statement.minC, statement.maxC, "rated minC", "rated maxC", "°C", context);
   if (maxC - minC > 2100) {
@@ -254,7 +276,7 @@ export function cableMismatchBound(type: ThermocoupleType, statement: CableToler
       quantity: "cable rated range",
       value: `${statement.minC} to ${statement.maxC}`,
       unit: "°C",
-      context: `type ${type} ${_statementCode(statement)} cable`,
+      context,
       problem: "has no temperature where E ≠ 0; use the envelope model",
     });
   }
@@ -393,16 +415,18 @@ export function cableTipErrorC(
   coldJunctionC: number,
   mismatch: CableMismatchModel = "proportional",
 ): number {
-  const context = `type ${_label(type)} ${_statementCode(statement)} cable`;
+  const context = _checkStatement(type, statement);
   const ct = _compile(thermocoupleData(type));
   const tj = _requireFinite(junctionC, "cable junction temperature", "°C", context);
   const tc = _requireFinite(coldJunctionC, "cable cold-end temperature", "°C", context);
   requireRated(statement, tj, "cable junction temperature", context);
   requireRated(statement, tc, "cable cold-end temperature", context);
-  const sTip = _seebeckCoefficient(ct, tipC);
-  if (mismatch === "envelope") {
-    return (toleranceMicrovoltsAt(ct, statement, tj) + toleranceMicrovoltsAt(ct, statement, tc)) / sTip;
-  }
-  const b = cableMismatchBound(type, statement);
-  return (b.fraction * 1000 * Math.abs(_emfFromTemperature(ct, tj) - _emfFromTemperature(ct, tc))) / sTip;
+  const tip = _requireFinite(tipC, "hot-junction temperature (tipC)", "°C", context);
+  if (mismatch !== "envelope" && mismatch !== "proportional") _invalidChoice("cable mismatch model", mismatch, ["envelope", "proportional"], context);
+  const sTip = _seebeckCoefficient(ct, tip);
+  const errorMicrovolts =
+    mismatch === "envelope"
+      ? toleranceMicrovoltsAt(ct, statement, tj) + toleranceMicrovoltsAt(ct, statement, tc)
+      : cableMismatchBound(type, statement).fraction * 1000 * Math.abs(_emfFromTemperature(ct, tj) - _emfFromTemperature(ct, tc));
+  return _requireFiniteResult(errorMicrovolts / sTip, "hot-junction temperature (tipC)", tip, "°C", context);
 }

@@ -9,7 +9,7 @@
  * the temperature history; this library does not supply drift rates.
  * @module
  */
-import { _invalidChoice, _requireFinite, _requireInteger, HotjunctionRangeError } from "../../errors.js";
+import { _invalidChoice, _requireFinite, _requireInRange, _requireInteger, HotjunctionRangeError } from "../../errors.js";
 import { _optionalLimit, _requireNonNegative, _requireObject, _requirePositive, type _SourceContext } from "../_common.js";
 import type { WireErrorSource } from "../types.js";
 import type { AgeingElement, DriftDirection, InsulationLeakageElement } from "../wireTypes.js";
@@ -78,10 +78,15 @@ interface CheckedAgeing {
   readonly direction: DriftDirection;
 }
 
+/** Longest service life between recalibrations, h (over 1,000 years), and largest total drift, °C. */
+const maxServiceHours = 1e7;
+const maxTotalDriftC = 1000;
+
 function checkAgeing(element: unknown, context: string): CheckedAgeing {
   const o = _requireObject(element, "ageing", context);
   if (o["kind"] !== "ageing") return _invalidChoice("ageing kind", o["kind"], ["ageing"], context);
   const serviceHours = _requirePositive(o["serviceHours"], "serviceHours", "h", context);
+  _requireInRange(serviceHours, "serviceHours", 0, maxServiceHours, "h", context);
   const statedAtC = _requireFinite(o["statedAtC"], "statedAtC", "°C", context);
   const direction = o["direction"];
   if (direction !== "up" && direction !== "down" && direction !== "symmetric") {
@@ -101,6 +106,7 @@ function checkAgeing(element: unknown, context: string): CheckedAgeing {
   const totalC = hasRate
     ? (_optionalLimit(o["driftCPer1000Hours"], "driftCPer1000Hours", "°C", context) * serviceHours) / 1000
     : _optionalLimit(o["totalDriftC"], "totalDriftC", "°C", context);
+  _requireInRange(totalC, hasRate ? "total drift (driftCPer1000Hours × serviceHours / 1000)" : "totalDriftC", 0, maxTotalDriftC, "°C", context);
   return { totalC, serviceHours, statedAtC, direction };
 }
 

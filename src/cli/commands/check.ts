@@ -35,7 +35,7 @@ import {
   _planCommandOutputs,
   type OutputOptionValues,
 } from "../outputOptions.js";
-import { _loadProgress, _startProgress } from "../progress.js";
+import { _startProgress } from "../progress.js";
 import type { CommandContext } from "../commandContext.js";
 import { _withDesignDynamics } from "../dynamicsOfDesign.js";
 
@@ -195,7 +195,6 @@ export function registerCheckCommand(program: Command, context: CommandContext):
   command.action(async (path: string, options: CheckOptions) => {
     const plan = _planCommandOutputs(context.io, options, [path], checkExtraPaths(options));
     const { design, input } = await _loadDesign(context.io, path);
-    await _loadProgress(context.io);
     const report = _tripReportOfDesign(context.io, design, _analysisSettings(design, options));
     const named = _withDesignDynamics(design, design.name !== undefined ? { ...report, designName: design.name } : report);
     const text = formatTripReport(named, _chosenFormat(options), { temperatureUnit: options.unit ?? "C" });

@@ -9,7 +9,7 @@ import { formatComparisonReport } from "../../report/renderComparisonReport.js";
 import { comparisonChartSvg } from "../../report/comparisonChart.js";
 import type { ReportTemperatureUnit } from "../../report/displayUnit.js";
 import { compareReferences } from "../../trip/compareReferences.js";
-import { _loadProgress, _startProgress } from "../progress.js";
+import { _startProgress } from "../progress.js";
 import { CliError, marginFailExitCode } from "../cliError.js";
 import {
   _addAnalysisOptions,
@@ -121,7 +121,6 @@ export function registerCompareCommand(program: Command, context: CommandContext
     const { design, input } = await _loadDesign(context.io, path);
     const settings = _analysisSettings(design, options);
     const references = [design.reference, ...(design.referenceAlternatives ?? [])].map(referenceOptionFromDesign);
-    await _loadProgress(context.io);
     const progress = _startProgress(context.io, "Monte Carlo");
     let comparison: ReturnType<typeof compareReferences>;
     try {

@@ -21,7 +21,6 @@ import { _dynamicsFigures, _tripDynamicsOfDesign } from "../dynamicsOfDesign.js"
 import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import type { CommandContext } from "../commandContext.js";
 import { _tripReportOfDesign } from "./check.js";
-import { _loadProgress } from "../progress.js";
 
 type RunawayOptions = OutputOptionValues &
   AnalysisOptionValues & { readonly reportOnly?: boolean; readonly setpoint?: string; readonly case?: string; readonly unit?: string };
@@ -60,7 +59,6 @@ export function registerRunawayCommand(program: Command, context: CommandContext
       throw new CliError(`--setpoint ${JSON.stringify(options.setpoint)} is not a setpoint of ${path}; valid: ${design.setpoints.map((s) => JSON.stringify(s.name)).join(", ")}`);
     }
     const settings = _analysisSettings(design, options);
-    await _loadProgress(context.io);
     const report = _tripReportOfDesign(context.io, design, settings);
     const result = _tripDynamicsOfDesign(design, report);
     if (result === undefined) throw new CliError(`${path}: the design states no "dynamics" section`);

@@ -29,8 +29,9 @@ import {
   type OutputOptionValues,
 } from "../outputOptions.js";
 import { _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
-import { _loadProgress, _startProgress } from "../progress.js";
+import { _startProgress } from "../progress.js";
 import { _temperatureSymbol, _toCelsius, type TemperatureUnit } from "../temperatureUnits.js";
+import { _maxModelEvaluations } from "../../uncertainty/_propagateMonteCarlo.js";
 import type { CommandContext } from "../commandContext.js";
 
 type SweepOptions = OutputOptionValues & AnalysisOptionValues & { from: number; to: number; step: number; unit?: TemperatureUnit };
@@ -102,6 +103,11 @@ export function registerSweepCommand(program: Command, context: CommandContext):
     const { design, input } = await _loadDesign(context.io, path);
     const settings = _analysisSettings(design, options);
     const methods = _methodInfo(settings);
+    if (methods.methods.includes("monte-carlo") && count * settings.trials > _maxModelEvaluations) {
+      throw new CliError(
+        `the sweep's work, ${count} points × ${settings.trials} trials = ${count * settings.trials} model evaluations, is above the limit of ${_maxModelEvaluations} (use a larger --step or fewer --trials)`,
+      );
+    }
     const chain = sweepChainOfDesign(design);
     // The points are spaced in the display unit (as typed), then converted to °C for the chain.
     const shown = Array.from({ length: count }, (_, i) => Number((options.from + i * options.step).toPrecision(sweepSignificantDigits)));
@@ -111,7 +117,6 @@ export function registerSweepCommand(program: Command, context: CommandContext):
       }
     }
     const temperatures = shown.map((t) => _toCelsius(t, unit));
-    await _loadProgress(context.io);
     const progress = _startProgress(context.io, "sweep");
     const rows: ErrorSweep["rows"][number][] = [];
     try {

@@ -98,7 +98,7 @@ function fromKey(k: bigint, numberType: FirmwareNumberType): number {
   i64[0] = k < 0n ? -k | -0x8000000000000000n : k;
   return f64[0] as number;
 }
-/** The float `k` places after x in the input type (exact neighbours; checked against Math.fround / nextafter below). */
+/** The float `k` places after x in the input type (exact neighbours; checked in the inputs test). */
 function neighbour(x: number, k: number, numberType: FirmwareNumberType): number {
   const round = numberType === "float32" ? Math.fround : (v: number): number => v;
   return fromKey(keyOf(round(x), numberType) + BigInt(k), numberType);
@@ -299,10 +299,11 @@ describe.skipIf(!hasGcc())("C headers: every placement × input type × output t
   };
   // 53 random bits from the high halves of four LCG steps.
   const next = (): number => (((next32() * 2 ** 16 + next32()) % 2 ** 21) * 2 ** 32 + next32() * 2 ** 16 + next32()) / 2 ** 53;
-  const dir = mkdtempSync(join(tmpdir(), "hj-combos-"));
+  let dir = "";
   const totals = { tables: cases.length, points: 0, integerPoints: 0, floatInputPoints: 0, worstRatio: 0, worstRatio40: 0, decimalPoints: 0 };
 
   beforeAll(() => {
+    dir = mkdtempSync(join(tmpdir(), "hj-combos-"));
     writeFileSync(join(dir, "checker.c"), CHECKER);
     execFileSync("gcc", [...GCC, "-c", "-o", join(dir, "checker.o"), join(dir, "checker.c")], { stdio: "pipe" });
     cases.forEach((c, k) => {
@@ -323,7 +324,9 @@ describe.skipIf(!hasGcc())("C headers: every placement × input type × output t
       else totals.integerPoints += n;
     });
   }, 300_000);
-  afterAll(() => rmSync(dir, { recursive: true, force: true }));
+  afterAll(() => {
+    if (dir !== "") rmSync(dir, { recursive: true, force: true });
+  });
 
   it("builds 104 tables, each with a bound within its request", () => {
     expect(cases.length).toBe(104);
@@ -337,6 +340,20 @@ describe.skipIf(!hasGcc())("C headers: every placement × input type × output t
     expect(neighbour(1, 3, "float64")).toBe(1 + 3 * 2 ** -52);
     expect(neighbour(0, -1, "float64")).toBe(-(2 ** -1074));
     expect(neighbour(-2, 1, "float64")).toBe(-2 + 2 ** -52);
+    // IEEE 754 spacing: the next float is above x and no float of the type lies strictly between (the midpoint
+    // rounds to one of the two).
+    for (const numberType of ["float32", "float64"] as const) {
+      const round = numberType === "float32" ? Math.fround : (v: number): number => v;
+      fc.assert(
+        fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), (v) => {
+          const x = round(v);
+          const up = neighbour(x, 1, numberType);
+          const mid = round(x / 2 + up / 2);
+          return up > x && (mid === x || mid === up) && neighbour(up, -1, numberType) === (x === 0 ? 0 : x);
+        }),
+        { seed: 13, numRuns: 2000 },
+      );
+    }
     for (const c of cases) {
       const { min, max, numberType } = c.table.input;
       if (!isFloat(numberType)) expect(c.count, c.name).toBe(max - min + 1);

@@ -300,7 +300,7 @@ describe.skipIf(!hasGcc())("C headers: every placement × input type × output t
   // 53 random bits from the high halves of four LCG steps.
   const next = (): number => (((next32() * 2 ** 16 + next32()) % 2 ** 21) * 2 ** 32 + next32() * 2 ** 16 + next32()) / 2 ** 53;
   let dir = "";
-  const totals = { tables: cases.length, points: 0, integerPoints: 0, floatInputPoints: 0, worstRatio: 0, worstRatio40: 0, decimalPoints: 0 };
+  const totals = { tables: cases.length, points: 0, integerPoints: 0, floatInputPoints: 0, worstRatio: 0, worstRatio40: 0, decimalPoints: 0, worstTable: "" };
 
   beforeAll(() => {
     dir = mkdtempSync(join(tmpdir(), "hj-combos-"));
@@ -382,6 +382,7 @@ describe.skipIf(!hasGcc())("C headers: every placement × input type × output t
       expect([badStatus, differ, over, bad], c.name).toEqual([0, 0, 0, null]);
       const bound = c.table.errorBound.totalOutputUnits;
       expect(maxError + c.table.errorBound.referenceOutputUnits, c.name).toBeLessThanOrEqual(bound);
+      if (maxError / bound > totals.worstRatio) totals.worstTable = c.name;
       totals.worstRatio = Math.max(totals.worstRatio, maxError / bound);
       totals.worstRatio40 = Math.max(totals.worstRatio40, check40(c, points, bound));
     });
@@ -390,7 +391,7 @@ describe.skipIf(!hasGcc())("C headers: every placement × input type × output t
       return `${Math.min(...n)}–${Math.max(...n)} per table`;
     };
     console.log(
-      `cHeaderCombinations: ${totals.tables} tables, ${totals.points} inputs compiled and checked (${totals.integerPoints} integer inputs of ${cases.filter((c) => !isFloat(c.table.input.numberType)).length} tables, ${counts(false)}; ${totals.floatInputPoints} float inputs of ${cases.filter((c) => isFloat(c.table.input.numberType)).length} tables, ${counts(true)}), ${totals.decimalPoints} at 40 digits; worst error/bound ${totals.worstRatio.toFixed(4)} (float64 reference), ${totals.worstRatio40.toFixed(4)} (40 digits)`,
+      `cHeaderCombinations: ${totals.tables} tables, ${totals.points} inputs compiled and checked (${totals.integerPoints} integer inputs of ${cases.filter((c) => !isFloat(c.table.input.numberType)).length} tables, ${counts(false)}; ${totals.floatInputPoints} float inputs of ${cases.filter((c) => isFloat(c.table.input.numberType)).length} tables, ${counts(true)}), ${totals.decimalPoints} at 40 digits; worst error/bound ${totals.worstRatio.toFixed(4)} (float64 reference; ${totals.worstTable}), ${totals.worstRatio40.toFixed(4)} (40 digits)`,
     );
   }, 300_000);
 

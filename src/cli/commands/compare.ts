@@ -6,7 +6,6 @@
 import type { Command } from "commander";
 import { referenceOptionFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { formatComparisonReport } from "../../report/renderComparisonReport.js";
-import { comparisonChartSvg } from "../../report/comparisonChart.js";
 import type { ReportTemperatureUnit } from "../../report/displayUnit.js";
 import { compareReferences } from "../../trip/compareReferences.js";
 import { _startProgress } from "../progress.js";
@@ -136,7 +135,8 @@ export function registerCompareCommand(program: Command, context: CommandContext
     }
     const methods = _methodInfo(settings);
     const unit = { temperatureUnit: options.unit ?? "C" } as const;
-    const extras = options.svg !== undefined ? [comparisonChartSvg({ comparison, methods, setpoints: _setpointLimitsOfDesign(design), ...(design.name !== undefined ? { designName: design.name } : {}) }, unit)] : [];
+    // The chart code (and its d3 scales) loads only when a chart is asked for.
+    const extras = options.svg !== undefined ? [(await import("../../report/comparisonChart.js")).comparisonChartSvg({ comparison, methods, setpoints: _setpointLimitsOfDesign(design), ...(design.name !== undefined ? { designName: design.name } : {}) }, unit)] : [];
     _emitOutputs(context.io, plan, options, formatComparisonReport(comparison, _chosenFormat(options), methods, design.name, unit), extras, [input]);
     // The design as drawn is its own reference (the first option); the alternatives failing is what a comparison shows.
     const own = comparison.options[0];

@@ -224,6 +224,60 @@ export function _branchAndBound(
   return result;
 }
 
+/**
+ * @internal Whether the worst case may skip the corner scan and the coordinate search when the model's enclosure
+ * already meets the per-input-extreme corners (`_enclosureMetAtCorners`). On by default; benches and tests turn it
+ * off to compare with the full search in the same process.
+ */
+export const _worstCaseFastPath = { enabled: true };
+
+/**
+ * @internal The fast path of a worst case with an enclosure: for each side, the corner where every input alone is
+ * pushed to the end that raises (maximum) or lowers (minimum) the model, from the estimates (2n evaluations per
+ * side), is evaluated; one enclosure call over the whole box then bounds the model. When each attained value lies
+ * within the branch and bound's tolerance of its enclosure end (`1e-12 · (enclosure width + |attained|)`), nothing
+ * a search could attain is farther than that from it, and the attained pair [max, min] is returned (the corners are
+ * left in `corners`). Otherwise (or when the enclosure does not contain a corner value: the branch and bound then
+ * reports it) undefined, and the full search runs.
+ */
+export function _enclosureMetAtCorners(
+  enclosure: _Enclosure,
+  names: readonly string[],
+  evaluator: _ModelEvaluator,
+  lower: Float64Array,
+  upper: Float64Array,
+  means: Float64Array,
+  corners: Float64Array[],
+): readonly [number, number] | undefined {
+  const n = names.length;
+  const x = new Float64Array(n);
+  const attained = [0, 0];
+  for (let s = 0; s < 2; s++) {
+    const sign = s === 0 ? 1 : -1;
+    const corner = corners[s] as Float64Array;
+    x.set(means);
+    for (let i = 0; i < n; i++) {
+      x[i] = lower[i] as number;
+      const atLower = sign * evaluator.evaluate(x);
+      x[i] = upper[i] as number;
+      const atUpper = sign * evaluator.evaluate(x);
+      x[i] = means[i] as number;
+      corner[i] = atUpper >= atLower ? (upper[i] as number) : (lower[i] as number);
+    }
+    attained[s] = evaluator.evaluate(corner);
+  }
+  const box: Record<string, readonly [number, number]> = {};
+  for (let i = 0; i < n; i++) box[names[i] as string] = [lower[i] as number, upper[i] as number];
+  const r: unknown = enclosure(box);
+  if (!Array.isArray(r) || r.length !== 2 || typeof r[0] !== "number" || typeof r[1] !== "number" || !Number.isFinite(r[0]) || !Number.isFinite(r[1])) return undefined;
+  const high = attained[0] as number;
+  const low = attained[1] as number;
+  if (!(r[0] <= low && high <= r[1])) return undefined;
+  // the branch and bound's own tolerance per side (its "gap closed")
+  const width = Math.abs(r[1] - r[0]);
+  return r[1] - high <= 1e-12 * (width + Math.abs(high)) && low - r[0] <= 1e-12 * (width + Math.abs(low)) ? [high, low] : undefined;
+}
+
 /** @internal */
 export function _propagateWorstCase(
   prepared: _PreparedInputs,
@@ -231,6 +285,7 @@ export function _propagateWorstCase(
   correlation: Float64Array | undefined,
   normalBoundCoverage: number | undefined,
   enclosure?: _Enclosure,
+  fastPath: boolean = _worstCaseFastPath.enabled,
 ): PropagationResult {
   const { distributions, names } = prepared;
   const n = distributions.length;
@@ -258,8 +313,20 @@ export function _propagateWorstCase(
   const means = _meansOf(distributions);
   const x = new Float64Array(n);
   const bestCorner = [new Float64Array(n), new Float64Array(n)]; // [max, min]
+  const extremes = [Number.NEGATIVE_INFINITY, Number.POSITIVE_INFINITY];
+  const points = [Float64Array.from(means), Float64Array.from(means)]; // [argmax, argmin]
   let strategy: string;
-  if (n <= maxCornerInputs) {
+  const met = fastPath && enclosure !== undefined ? _enclosureMetAtCorners(enclosure, names, evaluator, lower, upper, means, bestCorner) : undefined;
+  if (met !== undefined) {
+    extremes[0] = met[0];
+    extremes[1] = met[1];
+    points[0]?.set(bestCorner[0] as Float64Array);
+    points[1]?.set(bestCorner[1] as Float64Array);
+    strategy =
+      `the corner of per-input (one-at-a-time) extremes evaluated for each side; the enclosure of the whole box met both ` +
+      `attained values within the tolerance (1e-12 of its width plus the value), so the ${n <= maxCornerInputs ? `scan of all 2^${n} corners and the ` : ""}` +
+      `coordinate-wise search were skipped (they run when the two do not meet)`;
+  } else if (n <= maxCornerInputs) {
     let maxValue = Number.NEGATIVE_INFINITY;
     let minValue = Number.POSITIVE_INFINITY;
     const count = 2 ** n;
@@ -293,9 +360,11 @@ export function _propagateWorstCase(
     }
     strategy = `${n} inputs are too many for all 2^${n} corners, so the corner of per-input (one-at-a-time) extremes was used, then`;
   }
-  const extremes = [Number.NEGATIVE_INFINITY, Number.POSITIVE_INFINITY];
-  const points = [Float64Array.from(means), Float64Array.from(means)]; // [argmax, argmin]
-  for (let s = 0; s < 2; s++) {
+  const searchNote =
+    met !== undefined
+      ? strategy
+      : `${strategy} a coordinate-wise search (17-point grid and golden-section refinement per input, up to ${maxSweeps} sweeps) from the best corner and from the estimates, so interior extremes of non-monotone models are found`;
+  for (let s = 0; met === undefined && s < 2; s++) {
     const sign = s === 0 ? 1 : -1;
     for (const start of [bestCorner[s] as Float64Array, means]) {
       x.set(start);
@@ -366,9 +435,7 @@ export function _propagateWorstCase(
       varianceShare: swingSquares > 0 ? (swings[i] as number) ** 2 / swingSquares : 0,
     })),
     note:
-      `Worst case over the box of input bounds: ${strategy} a coordinate-wise search (17-point grid and golden-section ` +
-      `refinement per input, up to ${maxSweeps} sweeps) from the best corner and from the estimates, so interior extremes of ` +
-      `non-monotone models are found` +
+      `Worst case over the box of input bounds: ${searchNote}` +
       (normalK !== undefined ? `; normal inputs bounded at ±${normalK.toPrecision(4)}·u (${normalBoundCoverage as number} coverage)` : "") +
       (correlation !== undefined ? "; correlations are not used (the box bounds any dependence)" : "") +
       bracketNote +

@@ -14,6 +14,7 @@ import { parseDesign, tripDesignFromDesign } from "../../src/design/index.js";
 import { designTrip } from "../../src/trip/designTrip.js";
 import { tripTemperatureModel } from "../../src/chain/tripTemperatureModel.js";
 import type { MeasurementChain } from "../../src/chain/types.js";
+import { chainArb } from "./_chainArbitrary.js";
 import { propagate, rectangular } from "../../src/uncertainty/index.js";
 import { formatTripReport, tripReportFromResult } from "../../src/report/index.js";
 
@@ -50,59 +51,6 @@ describe("worst-case bracket of the example designs", () => {
     expect(json.setpoints[0]?.bands.find((b) => b.method === "worst-case")?.enclosureGapHighC).toBeTypeOf("number");
   });
 });
-
-/** A generated comparator chain: type, tolerance, front end, compensation, reference, divider, comparator, ambient, wire. */
-const chainArb = fc
-  .record({
-    type: fc.constantFrom("K", "N", "J", "E", "T", "R", "S"),
-    tcTolerance: fc.double({ min: 0, max: 3, noNaN: true }),
-    front: fc.constantFrom("resistors", "fixed", "fixedScale"),
-    gain: fc.integer({ min: 20, max: 200 }),
-    gainTol: fc.double({ min: 0, max: 0.01, noNaN: true }),
-    offsetUv: fc.double({ min: 0, max: 50, noNaN: true }),
-    alphaFactor: fc.double({ min: 0.9, max: 1.1, noNaN: true }),
-    sensorC: fc.double({ min: 0, max: 2, noNaN: true }),
-    refTol: fc.double({ min: 0, max: 0.02, noNaN: true }),
-    tapFraction: fc.double({ min: 0.05, max: 0.6, noNaN: true }),
-    divTol: fc.double({ min: 0, max: 0.01, noNaN: true }),
-    cmpOffsetMv: fc.double({ min: 0, max: 5, noNaN: true }),
-    ambientLow: fc.double({ min: -10, max: 30, noNaN: true }),
-    ambientSpan: fc.double({ min: 0, max: 40, noNaN: true }),
-    connector: fc.boolean(),
-    leakage: fc.boolean(),
-  })
-  .map((p): MeasurementChain => {
-    const ambient = { minC: p.ambientLow, maxC: p.ambientLow + p.ambientSpan };
-    const seebeckNear25: Record<string, number> = { K: 40.6, N: 26.5, J: 51.7, E: 61, T: 40.7, R: 5.9, S: 5.9 };
-    const amplifier =
-      p.front === "fixedScale"
-        ? ({ kind: "fixedScaleAmplifier", type: p.type, millivoltsPerC: 5, accuracyC: p.sensorC } as const)
-        : p.front === "resistors"
-          ? ({ kind: "amplifier", gain: { setBy: "resistors", feedbackOhms: (p.gain - 1) * 1000, groundOhms: 1000, toleranceFraction: p.gainTol }, offsetMicrovolts: p.offsetUv } as const)
-          : ({ kind: "amplifier", gain: { setBy: "fixed", gain: p.gain, gainErrorFraction: p.gainTol }, offsetMicrovolts: p.offsetUv } as const);
-    const chain: Record<string, unknown> = {
-      thermocouple: { kind: "thermocouple", type: p.type, tolerance: { standard: "custom", toleranceC: p.tcTolerance } },
-      amplifier,
-      reference: { kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: p.refTol },
-      divider: { kind: "divider", resistorsOhms: [Math.round(10000 * (1 - p.tapFraction)), Math.round(10000 * p.tapFraction)], toleranceFraction: p.divTol },
-      detector: { kind: "comparator", offsetMillivolts: p.cmpOffsetMv },
-      ambient,
-    };
-    if (p.front !== "fixedScale") {
-      chain["coldJunction"] = {
-        kind: "coldJunction",
-        method: "hardware",
-        compensationMicrovoltsPerC: seebeckNear25[p.type] as number * p.alphaFactor,
-        matchedAtC: 25,
-        sensorAccuracyC: p.sensorC,
-      };
-    }
-    const wire: Record<string, unknown> = {};
-    if (p.connector) wire["connectors"] = [{ kind: "connector", arrangement: "terminates", contactMetal: "copper", aboveColdJunctionC: { minC: 0, maxC: 3 } }];
-    if (p.leakage) wire["leakage"] = { kind: "insulationLeakage", minimumShuntOhms: 50000, loopOhms: 1000 };
-    if (Object.keys(wire).length > 0) chain["wire"] = wire;
-    return chain as unknown as MeasurementChain;
-  });
 
 describe("worst-case bracket of generated comparator chains", () => {
   it("attained ≤ enclosure on both sides, the gap within the stated tolerance, and every sampled value inside", () => {

@@ -1,0 +1,110 @@
+// The worst case's fast path (src/uncertainty/_propagateWorstCase.ts, `_enclosureMetAtCorners`): when the model's
+// enclosure meets the per-input-extreme corners, the corner scan and coordinate search are skipped. Checked as
+// properties against the full search over generated chains, and the fallback where the two do not meet.
+// Sources: the bracket argument of chain/_tripEnclosure.ts (DEVELOPERS.md); x − x² on [0, 1] has its maximum 1/4
+// at 1/2 (calculus); the non-monotone chain's slopes are NIST SRD 60 type K table slopes.
+import fc from "fast-check";
+import { afterEach, describe, expect, it } from "vitest";
+import { tripTemperatureModel } from "../../src/chain/tripTemperatureModel.js";
+import type { MeasurementChain } from "../../src/chain/types.js";
+import { propagate, rectangular } from "../../src/uncertainty/index.js";
+import { _worstCaseFastPath } from "../../src/uncertainty/_propagateWorstCase.js";
+import type { PropagationResult } from "../../src/uncertainty/types.js";
+import { chainArb } from "./_chainArbitrary.js";
+
+/** The stated gap tolerance of the chain models' worst case, °C (`_enclosureGapToleranceC`). */
+const tolerance = 1e-9;
+const skipped = "coordinate-wise search were skipped";
+
+function worstCase(model: (x: Readonly<Record<string, number>>) => number, inputs: never, enclosure: unknown, fast: boolean): PropagationResult {
+  _worstCaseFastPath.enabled = fast;
+  try {
+    return propagate(model, inputs, { method: "worst-case", modelEnclosure: enclosure as never });
+  } finally {
+    _worstCaseFastPath.enabled = true;
+  }
+}
+
+afterEach(() => {
+  _worstCaseFastPath.enabled = true;
+});
+
+describe("worst-case fast path against the full search", () => {
+  it("generated chains: the same band within the stated tolerance, attained inside the enclosure, contributions unchanged", () => {
+    let fastRuns = 0;
+    let compared = 0;
+    fc.assert(
+      fc.property(chainArb, (chain) => {
+        let m: ReturnType<typeof tripTemperatureModel>;
+        try {
+          m = tripTemperatureModel(chain, 0);
+        } catch {
+          return; // a threshold outside the type's range for this draw
+        }
+        if (Object.keys(m.inputs).length === 0) return;
+        const fast = worstCase(m.model as never, m.inputs as never, m.enclosure, true);
+        const full = worstCase(m.model as never, m.inputs as never, m.enclosure, false);
+        if (fast.note?.includes(skipped)) fastRuns++;
+        expect(full.note).not.toContain(skipped);
+        expect(Math.abs(fast.interval[0] - full.interval[0])).toBeLessThanOrEqual(tolerance);
+        expect(Math.abs(fast.interval[1] - full.interval[1])).toBeLessThanOrEqual(tolerance);
+        const [lo, hi] = fast.enclosure as readonly [number, number];
+        expect(lo).toBeLessThanOrEqual(fast.interval[0]);
+        expect(hi).toBeGreaterThanOrEqual(fast.interval[1]);
+        // the attained values are model values at the points printed with them
+        expect(m.model(fast.attained?.low.at as never)).toBe(fast.attained?.low.value);
+        expect(m.model(fast.attained?.high.at as never)).toBe(fast.attained?.high.value);
+        const [gapLow, gapHigh] = fast.enclosureGap as readonly [number, number];
+        expect(Math.max(gapLow, gapHigh)).toBeLessThanOrEqual(tolerance);
+        expect(fast.contributions).toEqual(full.contributions);
+        expect(fast.estimate).toBe(full.estimate);
+        compared++;
+      }),
+      { numRuns: 60, seed: 29 },
+    );
+    expect(compared).toBeGreaterThan(40);
+    expect(fastRuns).toBeGreaterThan(30);
+  });
+});
+
+describe("worst-case fallback", () => {
+  it("without an enclosure the full search runs", () => {
+    const f = ({ a, b }: { a: number; b: number }) => a + 2 * b;
+    const inputs = { a: rectangular({ lower: 0, upper: 1 }), b: rectangular({ lower: -1, upper: 1 }) };
+    const w = propagate(f, inputs, { method: "worst-case" });
+    expect(w.note).not.toContain(skipped);
+    expect(w.note).toContain("coordinate-wise search (17-point grid");
+    expect(w.interval).toEqual([-2, 3]);
+  });
+
+  it("an enclosure that does not meet the corners (x − x², max 1/4 at 1/2 inside): the search runs and finds it", () => {
+    const f = ({ x }: { x: number }) => x - x * x;
+    const extension = (box: Readonly<Record<"x", readonly [number, number]>>): readonly [number, number] => {
+      const [a, b] = box.x;
+      return [a - Math.max(a * a, b * b) - 1e-15, b - Math.min(a * a, b * b) + 1e-15];
+    };
+    const w = propagate(f, { x: rectangular({ lower: 0, upper: 1 }) }, { method: "worst-case", modelEnclosure: extension });
+    expect(w.note).not.toContain(skipped);
+    expect(Math.abs(w.interval[1] - 0.25)).toBeLessThanOrEqual(1e-12);
+  });
+
+  it("a chain whose extreme lies inside the cold-junction range: the fast path declines, the band is the full search's", () => {
+    // Hardware compensation at 40.6 µV/°C on type K over 0 … 60 °C: S(t) − α changes sign inside (S_K(0 °C) =
+    // 39.45 µV/°C, S_K(60 °C) = 41.4 µV/°C, NIST SRD 60 type K table slopes).
+    const chain = {
+      thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "custom", toleranceC: 0 } },
+      coldJunction: { kind: "coldJunction", method: "hardware", compensationMicrovoltsPerC: 40.6, matchedAtC: 25, sensorAccuracyC: 0 },
+      amplifier: { kind: "amplifier", gain: { setBy: "fixed", gain: 100 } },
+      reference: { kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: 0.001 },
+      divider: { kind: "divider", resistorsOhms: [4990, 5110], toleranceFraction: 0.001 },
+      detector: { kind: "comparator" },
+      ambient: { minC: 0, maxC: 60 },
+    } as unknown as MeasurementChain;
+    const m = tripTemperatureModel(chain, 0);
+    const fast = worstCase(m.model as never, m.inputs as never, m.enclosure, true);
+    const full = worstCase(m.model as never, m.inputs as never, m.enclosure, false);
+    expect(fast.note).not.toContain(skipped);
+    expect(fast.interval).toEqual(full.interval);
+    expect(fast.enclosure).toEqual(full.enclosure);
+  });
+});

@@ -128,29 +128,48 @@ function cornerRange(f: Transfer, x: Values, box: Box, names: readonly string[])
 
 const point = (v: number): _Interval => [v, v];
 
-/**
- * @internal The enclosure of `_comparatorTripModel(cc, tap, edge, …)`'s model (any tolerance temperature: the
- * tolerance is a box input like the others) over any box of its inputs. See the module note.
- */
-export function _comparatorTripEnclosure(cc: _CompiledChain, tap: number, edgeMillivolts: number): _TripEnclosureOf {
+/** The wire's added EMF, piece by piece in the model's order (cable, connectors, loop). */
+type AddedPiece =
+  | { readonly over: (box: Box, tc: _Interval) => { readonly value: _Interval; readonly coldJunctionSlope: _Interval } }
+  | { readonly transfer: Transfer; readonly names: readonly string[] };
+
+/** What an enclosure of one comparator edge needs from the compiled chain, gathered once per edge. */
+interface EnclosureSetup {
+  readonly cc: _CompiledChain;
+  readonly tap: number;
+  readonly edgeMillivolts: number;
+  readonly ct: _CompiledChain["ct"];
+  readonly reference: _ReferenceStage;
+  readonly divider: _CompiledChain["divider"];
+  readonly comparator: _ComparatorStage;
+  readonly fixedScale: _CompiledChain["fixedScale"];
+  readonly amplifier: _CompiledChain["amplifier"];
+  /** The cold-junction stage when it compensates in hardware (it then acts on the comparator's input). */
+  readonly cj: _CompiledChain["coldJunction"];
+  readonly wire: _CompiledChain["wire"];
+  readonly leakage: NonNullable<_CompiledChain["wire"]>["leakage"] | undefined;
+  readonly referenceNames: readonly string[];
+  readonly dividerNames: readonly string[];
+  readonly comparatorNames: readonly string[];
+  readonly frontNames: readonly string[];
+  readonly cjNames: readonly string[];
+  readonly leakageNames: readonly string[];
+  readonly added: readonly AddedPiece[];
+  readonly wireEmfEvaluations: number;
+  /** The largest step between neighbouring sub-range polynomials, for wire temperatures that may cross a seam. */
+  readonly seamStep: number;
+  readonly seams: readonly number[];
+  readonly lowestEmf: number;
+}
+
+const namesOf = (sources: readonly { readonly name: string }[] | undefined): string[] => (sources ?? []).map((s) => s.name);
+
+function enclosureSetup(cc: _CompiledChain, tap: number, edgeMillivolts: number): EnclosureSetup {
   const ct = cc.ct;
-  const reference = cc.reference as _ReferenceStage;
-  const divider = cc.divider;
-  const comparator = cc.comparator as _ComparatorStage;
   const fixedScale = cc.fixedScale;
   const amplifier = cc.amplifier;
   const cj = cc.coldJunction?.method === "hardware" ? cc.coldJunction : undefined;
   const wire = cc.wire;
-  const names = (sources: readonly { readonly name: string }[] | undefined): string[] => (sources ?? []).map((s) => s.name);
-  const referenceNames = names(reference.sources);
-  const dividerNames = names(divider?.sources);
-  const comparatorNames = names(comparator.sources);
-  const frontNames = fixedScale !== undefined ? names(fixedScale.sources) : names(amplifier.sources);
-  const cjNames = names(cj?.sources);
-  // The wire's added EMF, piece by piece in the model's order (cable, connectors, loop).
-  type AddedPiece =
-    | { readonly over: (box: Box, tc: _Interval) => { readonly value: _Interval; readonly coldJunctionSlope: _Interval } }
-    | { readonly transfer: Transfer; readonly names: readonly string[] };
   const added: AddedPiece[] = [];
   let wireEmfEvaluations = 0;
   if (wire !== undefined) {
@@ -160,236 +179,306 @@ export function _comparatorTripEnclosure(cc: _CompiledChain, tap: number, edgeMi
       if (over !== undefined) {
         added.push({ over });
         wireEmfEvaluations += 2;
-      } else added.push({ transfer: (x) => piece.emfErrorMillivolts(x, 0), names: names(piece.sources) });
+      } else added.push({ transfer: (x) => piece.emfErrorMillivolts(x, 0), names: namesOf(piece.sources) });
     }
     if (wire.loop !== undefined) {
       const loop = wire.loop;
-      added.push({ transfer: (x) => loop.offsetMillivolts(x), names: names(loop.sources) });
+      added.push({ transfer: (x) => loop.offsetMillivolts(x), names: namesOf(loop.sources) });
     }
   }
-  const leakage = wire?.leakage;
-  const leakageNames = names(leakage?.sources);
-  // The largest step between neighbouring sub-range polynomials, for wire temperatures that may cross a seam.
   let seamStep = 0;
   for (let i = 1; i < ct.subranges.length; i++) {
     const s = (ct.subranges[i] as (typeof ct.subranges)[number]).minC;
     const d = _emfEvaluationBound(ct, i - 1, [s, s]) + _emfEvaluationBound(ct, i, [s, s]);
     seamStep = Math.max(seamStep, Math.abs(_emfInSubrange(ct, i - 1, s) - _emfInSubrange(ct, i, s)) + d);
   }
-  const seams = ct.subranges.slice(1).map((s) => s.minC);
-  const lowestEmf = Math.max(ct.lowestEmf, ct.emfAtMinC);
+  return {
+    cc,
+    tap,
+    edgeMillivolts,
+    ct,
+    reference: cc.reference as _ReferenceStage,
+    divider: cc.divider,
+    comparator: cc.comparator as _ComparatorStage,
+    fixedScale,
+    amplifier,
+    cj,
+    wire,
+    leakage: wire?.leakage,
+    referenceNames: namesOf((cc.reference as _ReferenceStage).sources),
+    dividerNames: namesOf(cc.divider?.sources),
+    comparatorNames: namesOf((cc.comparator as _ComparatorStage).sources),
+    frontNames: fixedScale !== undefined ? namesOf(fixedScale.sources) : namesOf(amplifier.sources),
+    cjNames: namesOf(cj?.sources),
+    leakageNames: namesOf(wire?.leakage?.sources),
+    added,
+    wireEmfEvaluations,
+    seamStep,
+    seams: ct.subranges.slice(1).map((s) => s.minC),
+    lowestEmf: Math.max(ct.lowestEmf, ct.emfAtMinC),
+  };
+}
+
+/** The source names an edge's enclosure accounts for (a box with any other name is not enclosed). */
+function accountedNames(s: EnclosureSetup): Set<string> {
+  const { cc, wire } = s;
   // Software compensation does not act on a comparator's input: its sources leave the trip model unchanged.
-  const accountsFor = new Set<string>([
-    ...referenceNames,
-    ...dividerNames,
-    ...comparatorNames,
-    ...frontNames,
-    ...names(cc.coldJunction?.sources),
-    ...leakageNames,
-    ...names(wire?.cable?.sources),
-    ...(wire?.connectors ?? []).flatMap((c) => names(c.sources)),
-    ...names(wire?.loop?.sources),
+  return new Set<string>([
+    ...s.referenceNames,
+    ...s.dividerNames,
+    ...s.comparatorNames,
+    ...s.frontNames,
+    ...namesOf(cc.coldJunction?.sources),
+    ...s.leakageNames,
+    ...namesOf(wire?.cable?.sources),
+    ...(wire?.connectors ?? []).flatMap((c) => namesOf(c.sources)),
+    ...namesOf(wire?.loop?.sources),
     _ambientInputName,
     "thermocouple.tolerance",
     ...(wire !== undefined ? ["probe.ageing"] : []),
   ]);
+}
 
-  const enclosure = (box: Box): readonly [number, number] => {
-    const x: Values = {};
-    for (const name of Object.keys(box)) {
-      const b = box[name] as readonly [number, number];
-      x[name] = 0.5 * (b[0] + b[1]);
-    }
-    const present = (list: readonly string[]): string[] => list.filter((n) => n in box);
-    const range = (f: Transfer, list: readonly string[]): _Interval => cornerRange(f, x, box, present(list));
-    const vRef = range((v) => reference.volts(v), referenceNames);
-    const ratio = divider === undefined ? point(1) : range((v) => divider.ratio(v, tap), dividerNames);
-    const vCmp = range((v) => comparator.switchingOffsetVolts(v, edgeMillivolts), comparatorNames);
-    const vSwitch = _addInterval(_mulInterval(vRef, ratio), vCmp);
-    const out = _mulInterval(vSwitch, point(1000));
+/**
+ * @internal The enclosure of `_comparatorTripModel(cc, tap, edge, …)`'s model (any tolerance temperature: the
+ * tolerance is a box input like the others) over any box of its inputs. See the module note.
+ */
+export function _comparatorTripEnclosure(cc: _CompiledChain, tap: number, edgeMillivolts: number): _TripEnclosureOf {
+  const setup = enclosureSetup(cc, tap, edgeMillivolts);
+  return { enclosure: (box) => enclosureOver(setup, box), accountsFor: accountedNames(setup) };
+}
 
-    // e(t_cj) for a point t_cj (the model's own order) and for an interval (affine in t_cj, slope −α).
-    let front: (tc: _Interval) => _Interval;
-    let frontSlope: number;
-    if (fixedScale !== undefined) {
-      const alpha = fixedScale.alphaMillivoltsPerC;
-      const scaled = _divInterval(out, point(fixedScale.millivoltsPerC));
-      const extra = range((v) => fixedScale.emfForOutput(v, 0, 0), frontNames); // = −x·α
-      front = (tc) => _addInterval(_mulInterval(_subInterval(scaled, tc), point(alpha)), extra);
+/** The parts of the argument that do not depend on t_cj, each enclosed over a box (module note, 1–2). */
+interface FrontOver {
+  /** e(t_cj) for a point t_cj (the model's own order) and for an interval (affine in t_cj, slope −α). */
+  readonly front: (tc: _Interval) => _Interval;
+  readonly frontSlope: number;
+  readonly scaleRange: _Interval;
+  readonly fixedAdded: readonly (_Interval | undefined)[];
+  readonly tcRange: _Interval;
+}
+
+function frontOver(s: EnclosureSetup, box: Box): FrontOver {
+  const { reference, divider, comparator, fixedScale, amplifier, cj, leakage, cc } = s;
+  const x: Values = {};
+  for (const name of Object.keys(box)) {
+    const b = box[name] as readonly [number, number];
+    x[name] = 0.5 * (b[0] + b[1]);
+  }
+  const present = (list: readonly string[]): string[] => list.filter((n) => n in box);
+  const range = (f: Transfer, list: readonly string[]): _Interval => cornerRange(f, x, box, present(list));
+  const vRef = range((v) => reference.volts(v), s.referenceNames);
+  const ratio = divider === undefined ? point(1) : range((v) => divider.ratio(v, s.tap), s.dividerNames);
+  const vCmp = range((v) => comparator.switchingOffsetVolts(v, s.edgeMillivolts), s.comparatorNames);
+  const vSwitch = _addInterval(_mulInterval(vRef, ratio), vCmp);
+  const out = _mulInterval(vSwitch, point(1000));
+
+  let front: (tc: _Interval) => _Interval;
+  let frontSlope: number;
+  if (fixedScale !== undefined) {
+    const alpha = fixedScale.alphaMillivoltsPerC;
+    const scaled = _divInterval(out, point(fixedScale.millivoltsPerC));
+    const extra = range((v) => fixedScale.emfForOutput(v, 0, 0), s.frontNames); // = −x·α
+    front = (tc) => _addInterval(_mulInterval(_subInterval(scaled, tc), point(alpha)), extra);
+    frontSlope = -alpha;
+  } else {
+    const gain = range((v) => amplifier.gain(v), s.frontNames);
+    const offset = range((v) => amplifier.inputOffsetMillivolts(v), s.frontNames);
+    const e0 = _subInterval(_divInterval(out, gain), offset);
+    if (cj !== undefined) {
+      const alpha = cj.compensationSlopeMillivoltsPerC;
+      const compAtZero = range((v) => cj.compensationMillivolts(v, 0), s.cjNames);
+      front = (tc) =>
+        tc[0] === tc[1]
+          ? _subInterval(e0, range((v) => cj.compensationMillivolts(v, tc[0]), s.cjNames))
+          : _subInterval(e0, _addInterval(compAtZero, _mulInterval(point(alpha), tc)));
       frontSlope = -alpha;
     } else {
-      const gain = range((v) => amplifier.gain(v), frontNames);
-      const offset = range((v) => amplifier.inputOffsetMillivolts(v), frontNames);
-      const e0 = _subInterval(_divInterval(out, gain), offset);
-      if (cj !== undefined) {
-        const alpha = cj.compensationSlopeMillivoltsPerC;
-        const compAtZero = range((v) => cj.compensationMillivolts(v, 0), cjNames);
-        front = (tc) =>
-          tc[0] === tc[1]
-            ? _subInterval(e0, range((v) => cj.compensationMillivolts(v, tc[0]), cjNames))
-            : _subInterval(e0, _addInterval(compAtZero, _mulInterval(point(alpha), tc)));
-        frontSlope = -alpha;
-      } else {
-        front = () => e0;
-        frontSlope = 0;
-      }
+      front = () => e0;
+      frontSlope = 0;
     }
-    const scaleRange = leakage === undefined ? point(1) : range((v) => leakage.emfScale(v), leakageNames);
-    const fixedAdded = added.map((p) => ("transfer" in p ? range(p.transfer, p.names) : undefined));
-    const tcRange: _Interval = cc.hasAmbientInput ? (box[_ambientInputName] as _Interval) : point(cc.ambient.minC);
+  }
+  return {
+    front,
+    frontSlope,
+    scaleRange: leakage === undefined ? point(1) : range((v) => leakage.emfScale(v), s.leakageNames),
+    fixedAdded: s.added.map((p) => ("transfer" in p ? range(p.transfer, p.names) : undefined)),
+    tcRange: cc.hasAmbientInput ? (box[_ambientInputName] as _Interval) : point(cc.ambient.minC),
+  };
+}
 
-    let magnitude = 0;
-    let emfEvaluations = 1 + wireEmfEvaluations;
-    /** A over a t_cj interval with the wire's sources from `wireBox` and the leakage factor `scale`. */
-    const argument = (tc: _Interval, wireBox: Box, scale: _Interval): _Interval => {
-      const e = front(tc);
-      const emfCj = _emfOver(ct, tc);
-      magnitude = Math.max(magnitude, _mag(e) + _mag(emfCj));
-      if (wire === undefined) return _addInterval(e, emfCj);
-      let w: _Interval = point(0);
-      added.forEach((p, i) => {
-        const v = "over" in p ? p.over(wireBox, tc).value : (fixedAdded[i] as _Interval);
-        w = i === 0 ? v : _addInterval(w, v);
-        magnitude = Math.max(magnitude, _mag(v));
-      });
-      return _addInterval(_divInterval(_subInterval(e, w), scale), emfCj);
-    };
-    /** An enclosure of ∂A/∂t_cj over a t_cj interval (real derivatives). */
-    const slope = (tc: _Interval, wireBox: Box, scale: _Interval): _Interval => {
-      let d: _Interval = point(frontSlope);
-      for (const p of added) if ("over" in p) d = _subInterval(d, p.over(wireBox, tc).coldJunctionSlope);
-      if (wire !== undefined) d = _divInterval(d, scale);
-      return _addInterval(d, _seebeckOver(ct, tc));
-    };
+/** The argument A and ∂A/∂t_cj over a t_cj interval, with the float-evaluation allowance (module note, 4). */
+interface ArgumentOver {
+  /** A over a t_cj interval with the wire's sources from `wireBox` and the leakage factor `scale`. */
+  readonly argument: (tc: _Interval, wireBox: Box, scale: _Interval) => _Interval;
+  /** An enclosure of ∂A/∂t_cj over a t_cj interval (real derivatives). */
+  readonly slope: (tc: _Interval, wireBox: Box, scale: _Interval) => _Interval;
+  readonly allowance: () => number;
+  /** Counters the allowance and the subdivision read and write. */
+  readonly state: { emfEvaluations: number; seamAllowance: number; pieces: number };
+}
 
-    // Allowance for the float evaluation (module note, 4): Ê's a-priori bound over every temperature used.
-    let temps: _Interval = tcRange;
+function argumentOver(s: EnclosureSetup, f: FrontOver, box: Box): ArgumentOver {
+  const { ct, wire, added, cc } = s;
+  const { front, frontSlope, fixedAdded, tcRange } = f;
+  let magnitude = 0;
+  const state = { emfEvaluations: 1 + s.wireEmfEvaluations, seamAllowance: 0, pieces: 0 };
+  const argument = (tc: _Interval, wireBox: Box, scale: _Interval): _Interval => {
+    const e = front(tc);
+    const emfCj = _emfOver(ct, tc);
+    magnitude = Math.max(magnitude, _mag(e) + _mag(emfCj));
+    if (wire === undefined) return _addInterval(e, emfCj);
+    let w: _Interval = point(0);
+    added.forEach((p, i) => {
+      const v = "over" in p ? p.over(wireBox, tc).value : (fixedAdded[i] as _Interval);
+      w = i === 0 ? v : _addInterval(w, v);
+      magnitude = Math.max(magnitude, _mag(v));
+    });
+    return _addInterval(_divInterval(_subInterval(e, w), scale), emfCj);
+  };
+  const slope = (tc: _Interval, wireBox: Box, scale: _Interval): _Interval => {
+    let d: _Interval = point(frontSlope);
+    for (const p of added) if ("over" in p) d = _subInterval(d, p.over(wireBox, tc).coldJunctionSlope);
+    if (wire !== undefined) d = _divInterval(d, scale);
+    return _addInterval(d, _seebeckOver(ct, tc));
+  };
+  // Ê's a-priori bound over every temperature used.
+  let temps: _Interval = tcRange;
+  for (const name of cc.wireRangeNames) {
+    const r = box[name];
+    if (r !== undefined) temps = _hull(_hull(temps, r), _addInterval(tcRange, r));
+  }
+  let emfBound = 0;
+  ct.subranges.forEach((sub, i) => {
+    const lo = Math.max(temps[0], sub.minC);
+    const hi = Math.min(temps[1], sub.maxC);
+    if (lo <= hi) emfBound = Math.max(emfBound, _emfEvaluationBound(ct, i, [lo, hi]));
+  });
+  const allowance = (): number => 64 * U * magnitude + 2 * state.emfEvaluations * emfBound + state.seamAllowance;
+  return { argument, slope, allowance, state };
+}
+
+/** A over t_cj ∈ [tcLow, tcHigh] (module note, 3), cut where a reference-function evaluation changes polynomial. */
+function argumentOverColdJunction(s: EnclosureSetup, f: FrontOver, a: ArgumentOver, wireBox: Box, scale: _Interval): _Interval {
+  const { cc } = s;
+  const { tcRange } = f;
+  const { argument, slope, allowance, state } = a;
+  const atPoint = (t: number): _Interval => _widen(argument(point(t), wireBox, scale), allowance());
+  const overPiece = (p: _Interval, depth: number): _Interval => {
+    if (p[0] === p[1]) return atPoint(p[0]);
+    state.pieces++;
+    const d = slope(p, wireBox, scale);
+    if (d[0] >= 0) return _widen([atPoint(p[0])[0], atPoint(p[1])[1]], allowance());
+    if (d[1] <= 0) return _widen([atPoint(p[1])[0], atPoint(p[0])[1]], allowance());
+    const m = 0.5 * (p[0] + p[1]);
+    if (depth >= maxHalvings || state.pieces > maxPieces || p[1] - p[0] <= (tcRange[1] - tcRange[0]) * minPieceFraction) {
+      state.emfEvaluations += 1;
+      return _widen(_addInterval(atPoint(m), _mulInterval(d, [_down(p[0] - m), _up(p[1] - m)])), allowance());
+    }
+    return _hull(overPiece([p[0], m], depth + 1), overPiece([m, p[1]], depth + 1));
+  };
+  // E(t_cj) changes polynomial exactly at a seam (floats below use the lower one). E(t_cj + r) of a connector
+  // above the cold junction at a fixed r changes near seam − r (to within the rounding of the sum): a few ulps
+  // around it are enclosed by plain interval evaluation (no derivative across the step). With r an interval,
+  // the step can fall anywhere: the largest seam step is allowed for (module note, 4).
+  state.seamAllowance = 0;
+  const nearCuts: number[] = [];
+  for (const name of cc.wireRangeNames) {
+    if (!name.endsWith(".aboveColdJunction")) continue;
+    const r = wireBox[name];
+    if (r === undefined) continue;
+    const tConn = _addInterval(tcRange, r);
+    for (const seam of s.seams) {
+      if (!(seam > tConn[0] && seam <= tConn[1])) continue;
+      if (r[0] === r[1]) nearCuts.push(seam - r[0]);
+      else state.seamAllowance += (2 * s.seamStep) / Math.min(1, scale[0] > 0 ? scale[0] : 1);
+    }
+  }
+  type Cut = { at: number; near: boolean };
+  const cuts: Cut[] = [...s.seams.map((at) => ({ at, near: false })), ...nearCuts.map((at) => ({ at, near: true }))].sort((x, y) => x.at - y.at);
+  let result: _Interval | undefined;
+  const add = (piece: _Interval): void => {
+    result = result === undefined ? piece : _hull(result, piece);
+  };
+  let start = tcRange[0];
+  for (const cut of cuts) {
+    if (!cut.near) {
+      if (cut.at > start && cut.at <= tcRange[1]) {
+        add(overPiece([start, previousFloat(cut.at)], 0));
+        start = cut.at;
+      }
+      continue;
+    }
+    const width = 8 * 2 * U * (Math.abs(cut.at) + Math.abs(tcRange[0]) + Math.abs(tcRange[1]) + 1);
+    const lo = Math.max(start, cut.at - width);
+    const hi = Math.min(tcRange[1], cut.at + width);
+    if (!(hi >= lo) || hi < start) continue;
+    if (lo > start) add(overPiece([start, lo], 0));
+    add(_widen(argument([lo, hi], wireBox, scale), allowance()));
+    start = hi;
+  }
+  if (start <= tcRange[1]) add(overPiece([start, tcRange[1]], 0));
+  return result as _Interval;
+}
+
+/**
+ * A with a wire: the leakage factor and a terminating connector's temperature couple with t_cj. Each takes the
+ * end that raises (or lowers) A when its direction is proven over the whole box: A falls with s when its
+ * numerator e − W is positive over the box (rises when negative), and rises with a connector's temperature
+ * where E′ > 0 over the connector's temperatures (−W holds +E(t_connector), s > 0).
+ */
+function argumentWithWire(s: EnclosureSetup, f: FrontOver, a: ArgumentOver, box: Box): _Interval {
+  const { ct, cc, added } = s;
+  const { front, fixedAdded, tcRange, scaleRange } = f;
+  const numerator = _subInterval(
+    front(tcRange),
+    added.reduce<_Interval>((w, p, i) => {
+      const v = "over" in p ? p.over(box, tcRange).value : (fixedAdded[i] as _Interval);
+      return i === 0 ? v : _addInterval(w, v);
+    }, point(0)),
+  );
+  const sideBox = (high: boolean): Box => {
+    const b: Record<string, readonly [number, number]> = { ...box };
     for (const name of cc.wireRangeNames) {
       const r = box[name];
-      if (r !== undefined) temps = _hull(_hull(temps, r), _addInterval(tcRange, r));
+      if (r === undefined || name === "cable.junctionTemperature") continue;
+      const relative = name.endsWith(".aboveColdJunction");
+      const slopeThere = _seebeckOver(ct, relative ? _addInterval(tcRange, r) : r);
+      if (slopeThere[0] > 0 && scaleRange[0] > 0) b[name] = high ? [r[1], r[1]] : [r[0], r[0]];
     }
-    let emfBound = 0;
-    ct.subranges.forEach((sub, i) => {
-      const lo = Math.max(temps[0], sub.minC);
-      const hi = Math.min(temps[1], sub.maxC);
-      if (lo <= hi) emfBound = Math.max(emfBound, _emfEvaluationBound(ct, i, [lo, hi]));
-    });
-    const allowance = (): number => 64 * U * magnitude + 2 * emfEvaluations * emfBound + seamAllowance;
-    let seamAllowance = 0;
-
-    let pieces = 0;
-    /** A over t_cj ∈ [tcLow, tcHigh] (module note, 3), cut where a reference-function evaluation changes polynomial. */
-    const overTc = (wireBox: Box, scale: _Interval): _Interval => {
-      const atPoint = (t: number): _Interval => _widen(argument(point(t), wireBox, scale), allowance());
-      const overPiece = (p: _Interval, depth: number): _Interval => {
-        if (p[0] === p[1]) return atPoint(p[0]);
-        pieces++;
-        const d = slope(p, wireBox, scale);
-        if (d[0] >= 0) return _widen([atPoint(p[0])[0], atPoint(p[1])[1]], allowance());
-        if (d[1] <= 0) return _widen([atPoint(p[1])[0], atPoint(p[0])[1]], allowance());
-        const m = 0.5 * (p[0] + p[1]);
-        if (depth >= maxHalvings || pieces > maxPieces || p[1] - p[0] <= (tcRange[1] - tcRange[0]) * minPieceFraction) {
-          emfEvaluations += 1;
-          return _widen(_addInterval(atPoint(m), _mulInterval(d, [_down(p[0] - m), _up(p[1] - m)])), allowance());
-        }
-        return _hull(overPiece([p[0], m], depth + 1), overPiece([m, p[1]], depth + 1));
-      };
-      // E(t_cj) changes polynomial exactly at a seam (floats below use the lower one). E(t_cj + r) of a connector
-      // above the cold junction at a fixed r changes near seam − r (to within the rounding of the sum): a few ulps
-      // around it are enclosed by plain interval evaluation (no derivative across the step). With r an interval,
-      // the step can fall anywhere: the largest seam step is allowed for (module note, 4).
-      seamAllowance = 0;
-      const nearCuts: number[] = [];
-      for (const name of cc.wireRangeNames) {
-        if (!name.endsWith(".aboveColdJunction")) continue;
-        const r = wireBox[name];
-        if (r === undefined) continue;
-        const tConn = _addInterval(tcRange, r);
-        for (const seam of seams) {
-          if (!(seam > tConn[0] && seam <= tConn[1])) continue;
-          if (r[0] === r[1]) nearCuts.push(seam - r[0]);
-          else seamAllowance += (2 * seamStep) / Math.min(1, scale[0] > 0 ? scale[0] : 1);
-        }
-      }
-      type Cut = { at: number; near: boolean };
-      const cuts: Cut[] = [...seams.map((at) => ({ at, near: false })), ...nearCuts.map((at) => ({ at, near: true }))].sort((a, b) => a.at - b.at);
-      let result: _Interval | undefined;
-      const add = (piece: _Interval): void => {
-        result = result === undefined ? piece : _hull(result, piece);
-      };
-      let start = tcRange[0];
-      for (const cut of cuts) {
-        if (!cut.near) {
-          if (cut.at > start && cut.at <= tcRange[1]) {
-            add(overPiece([start, previousFloat(cut.at)], 0));
-            start = cut.at;
-          }
-          continue;
-        }
-        const width = 8 * 2 * U * (Math.abs(cut.at) + Math.abs(tcRange[0]) + Math.abs(tcRange[1]) + 1);
-        const lo = Math.max(start, cut.at - width);
-        const hi = Math.min(tcRange[1], cut.at + width);
-        if (!(hi >= lo) || hi < start) continue;
-        if (lo > start) add(overPiece([start, lo], 0));
-        add(_widen(argument([lo, hi], wireBox, scale), allowance()));
-        start = hi;
-      }
-      if (start <= tcRange[1]) add(overPiece([start, tcRange[1]], 0));
-      return result as _Interval;
-    };
-
-    let arg: _Interval;
-    if (wire === undefined) arg = overTc(box, scaleRange);
-    else {
-      // With a wire, the leakage factor and a terminating connector's temperature couple with t_cj. Each takes
-      // the end that raises (or lowers) A when its direction is proven over the whole box: A falls with s when
-      // its numerator e − W is positive over the box (rises when negative), and rises with a connector's
-      // temperature where E′ > 0 over the connector's temperatures (−W holds +E(t_connector), s > 0).
-      const numerator = _subInterval(
-        front(tcRange),
-        added.reduce<_Interval>((w, p, i) => {
-          const v = "over" in p ? p.over(box, tcRange).value : (fixedAdded[i] as _Interval);
-          return i === 0 ? v : _addInterval(w, v);
-        }, point(0)),
-      );
-      const sideBox = (high: boolean): Box => {
-        const b: Record<string, readonly [number, number]> = { ...box };
-        for (const name of cc.wireRangeNames) {
-          const r = box[name];
-          if (r === undefined || name === "cable.junctionTemperature") continue;
-          const relative = name.endsWith(".aboveColdJunction");
-          const slopeThere = _seebeckOver(ct, relative ? _addInterval(tcRange, r) : r);
-          if (slopeThere[0] > 0 && scaleRange[0] > 0) b[name] = high ? [r[1], r[1]] : [r[0], r[0]];
-        }
-        return b;
-      };
-      const sideScale = (high: boolean): _Interval => {
-        if (!(scaleRange[0] > 0)) return scaleRange;
-        if (numerator[0] > 0) return high ? point(scaleRange[0]) : point(scaleRange[1]);
-        if (numerator[1] < 0) return high ? point(scaleRange[1]) : point(scaleRange[0]);
-        return scaleRange;
-      };
-      arg = [overTc(sideBox(false), sideScale(false))[0], overTc(sideBox(true), sideScale(true))[1]];
-    }
-
-    // Any argument the model can evaluate lies in the type's EMF range; E⁻¹ is non-decreasing.
-    const inverse = (emf: number): number => {
-      const clamped = Math.min(ct.emfAtMaxC, Math.max(lowestEmf, emf));
-      try {
-        return _temperatureFromEmf(ct, clamped);
-      } catch {
-        return emf < 0.5 * (lowestEmf + ct.emfAtMaxC) ? ct.minC : ct.maxC;
-      }
-    };
-    const eps = (box["thermocouple.tolerance"] ?? [0, 0]) as _Interval;
-    const ageing = (box["probe.ageing"] ?? [0, 0]) as _Interval;
-    let low = inverse(arg[0]) - eps[1];
-    let high = inverse(arg[1]) - eps[0];
-    if (wire !== undefined) {
-      low -= ageing[1];
-      high -= ageing[0];
-    }
-    return [low, high];
+    return b;
   };
-  return { enclosure, accountsFor };
+  const sideScale = (high: boolean): _Interval => {
+    if (!(scaleRange[0] > 0)) return scaleRange;
+    if (numerator[0] > 0) return high ? point(scaleRange[0]) : point(scaleRange[1]);
+    if (numerator[1] < 0) return high ? point(scaleRange[1]) : point(scaleRange[0]);
+    return scaleRange;
+  };
+  return [argumentOverColdJunction(s, f, a, sideBox(false), sideScale(false))[0], argumentOverColdJunction(s, f, a, sideBox(true), sideScale(true))[1]];
+}
+
+/** The enclosure of one edge's trip temperature over a box, °C (module note). */
+function enclosureOver(s: EnclosureSetup, box: Box): readonly [number, number] {
+  const { ct, wire } = s;
+  const f = frontOver(s, box);
+  const a = argumentOver(s, f, box);
+  const arg = wire === undefined ? argumentOverColdJunction(s, f, a, box, f.scaleRange) : argumentWithWire(s, f, a, box);
+  // Any argument the model can evaluate lies in the type's EMF range; E⁻¹ is non-decreasing.
+  const inverse = (emf: number): number => {
+    const clamped = Math.min(ct.emfAtMaxC, Math.max(s.lowestEmf, emf));
+    try {
+      return _temperatureFromEmf(ct, clamped);
+    } catch {
+      return emf < 0.5 * (s.lowestEmf + ct.emfAtMaxC) ? ct.minC : ct.maxC;
+    }
+  };
+  const eps = (box["thermocouple.tolerance"] ?? [0, 0]) as _Interval;
+  const ageing = (box["probe.ageing"] ?? [0, 0]) as _Interval;
+  let low = inverse(arg[0]) - eps[1];
+  let high = inverse(arg[1]) - eps[0];
+  if (wire !== undefined) {
+    low -= ageing[1];
+    high -= ageing[0];
+  }
+  return [low, high];
 }

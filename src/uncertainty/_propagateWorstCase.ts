@@ -278,15 +278,8 @@ export function _enclosureMetAtCorners(
   return r[1] - high <= 1e-12 * (width + Math.abs(high)) && low - r[0] <= 1e-12 * (width + Math.abs(low)) ? [high, low] : undefined;
 }
 
-/** @internal */
-export function _propagateWorstCase(
-  prepared: _PreparedInputs,
-  evaluator: _ModelEvaluator,
-  correlation: Float64Array | undefined,
-  normalBoundCoverage: number | undefined,
-  enclosure?: _Enclosure,
-  fastPath: boolean = _worstCaseFastPath.enabled,
-): PropagationResult {
+/** The box of input bounds: bounded inputs at ± their half-width, normal ones at ±k·u for `normalBoundCoverage`. */
+function inputBox(prepared: _PreparedInputs, normalBoundCoverage: number | undefined): { lower: Float64Array; upper: Float64Array; normalK: number | undefined } {
   const { distributions, names } = prepared;
   const n = distributions.length;
   const lower = new Float64Array(n);
@@ -310,6 +303,21 @@ export function _propagateWorstCase(
     lower[i] = d.mean - halfWidth;
     upper[i] = d.mean + halfWidth;
   });
+  return { lower, upper, normalK };
+}
+
+/** @internal */
+export function _propagateWorstCase(
+  prepared: _PreparedInputs,
+  evaluator: _ModelEvaluator,
+  correlation: Float64Array | undefined,
+  normalBoundCoverage: number | undefined,
+  enclosure?: _Enclosure,
+  fastPath: boolean = _worstCaseFastPath.enabled,
+): PropagationResult {
+  const { distributions, names } = prepared;
+  const n = distributions.length;
+  const { lower, upper, normalK } = inputBox(prepared, normalBoundCoverage);
   const means = _meansOf(distributions);
   const x = new Float64Array(n);
   const bestCorner = [new Float64Array(n), new Float64Array(n)]; // [max, min]

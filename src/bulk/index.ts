@@ -7,8 +7,8 @@
  * @module
  */
 import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
-import { HotjunctionTypeError, _requireFinite } from "../errors.js";
-import { _emfFromTemperatureArray, _temperatureFromEmfArray } from "../its90/bulk.js";
+import { _requireFinite } from "../errors.js";
+import { _checkBulkArrays, _emfFromTemperatureArray, _temperatureFromEmfArray } from "../its90/bulk.js";
 import { _compile, _emf, type CompiledType } from "../its90/compiled.js";
 import { _checkEmf, _checkTemperature, _EMF_END_TOLERANCE_MV } from "../its90/engine.js";
 import { _exactInverse, _exactInverseTables } from "../its90/exactInverse.js";
@@ -40,22 +40,6 @@ export type BulkBackend = "webassembly-simd" | "javascript";
  */
 export function bulkBackend(): BulkBackend {
   return _bulkKernel() === null ? "javascript" : "webassembly-simd";
-}
-
-function checkArrays(input: unknown, out: unknown, quantity: string, context: string): number {
-  if (!(input instanceof Float64Array)) {
-    throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity, value: input, problem: "is not a Float64Array", context });
-  }
-  if (out !== undefined && (!(out instanceof Float64Array) || out.length < input.length)) {
-    throw new HotjunctionTypeError({
-      code: "INVALID_OPTION",
-      quantity: "output array",
-      value: out,
-      problem: `is not a Float64Array of length at least ${input.length}`,
-      context,
-    });
-  }
-  return input.length;
 }
 
 function forwardOnKernel(k: BulkKernel, ct: CompiledType, input: Float64Array, result: Float64Array, n: number): void {
@@ -144,7 +128,7 @@ export function emfFromTemperatureArray(
   const ct = _compile(thermocoupleData(type));
   const k = _bulkKernel();
   if (k === null || !_loadForwardType(k, ct)) return _emfFromTemperatureArray(ct, temperaturesC, out);
-  const n = checkArrays(temperaturesC, out, "temperatures", ct.context);
+  const n = _checkBulkArrays(temperaturesC, out, "temperatures", ct.context);
   const result = out ?? new Float64Array(n);
   forwardOnKernel(k, ct, temperaturesC, result, n);
   return result;
@@ -177,7 +161,7 @@ export function temperatureFromEmfArray(
   const ct = _compile(thermocoupleData(type));
   const k = _bulkKernel();
   if (k === null) return _temperatureFromEmfArray(ct, emfsMillivolts, out);
-  const n = checkArrays(emfsMillivolts, out, "EMFs", ct.context);
+  const n = _checkBulkArrays(emfsMillivolts, out, "EMFs", ct.context);
   const result = out ?? new Float64Array(n);
   inverseOnKernel(k, ct, emfsMillivolts, result, n);
   return result;

@@ -42,6 +42,8 @@ export function bulkBackend(): BulkBackend {
   return _bulkKernel() === null ? "javascript" : "webassembly-simd";
 }
 
+// Deliberately alike: inverseOnKernel below walks the chunks the same way (copy in, run the kernel, fall back per
+// element); what runs on a chunk differs (forward sub-ranges here, the exact inverse's pieces there).
 function forwardOnKernel(k: BulkKernel, ct: CompiledType, input: Float64Array, result: Float64Array, n: number): void {
   const x = k.exports;
   const sub = ct.subranges;
@@ -68,6 +70,7 @@ function forwardOnKernel(k: BulkKernel, ct: CompiledType, input: Float64Array, r
   }
 }
 
+// Deliberately alike: forwardOnKernel above walks the chunks the same way; here the inverse's pieces and window.
 function inverseOnKernel(k: BulkKernel, ct: CompiledType, input: Float64Array, result: Float64Array, n: number): void {
   const x = k.exports;
   const inv = _exactInverseTables(ct);

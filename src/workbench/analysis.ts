@@ -235,6 +235,7 @@ export function analyseDesign(design: DesignFile, options: AnalyseOptions = {}):
       }
     }
     progress?.(1);
+    // Deliberately alike: the ADC analysis below assembles the same result fields for its own kind and parts.
     const result: WorkbenchAnalysis = {
       settings,
       monteCarloFinal,
@@ -278,6 +279,7 @@ export function analyseDesign(design: DesignFile, options: AnalyseOptions = {}):
     problems.push({ part: "trip", message: messageOf(error) });
   }
   progress?.(1);
+  // Deliberately alike: the comparator analysis above assembles the same result fields for its own kind and parts.
   const result: WorkbenchAnalysis = {
     settings,
     monteCarloFinal,

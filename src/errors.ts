@@ -283,6 +283,7 @@ export function _requireProbability(value: unknown, quantity: string, context?: 
  */
 export function _requireInteger(value: unknown, quantity: string, min: number, max: number, context?: string): number {
   const x = _requireFinite(value, quantity, undefined, context);
+  // Deliberately alike: chain/adc.ts `_requireAdcBits` is the same check with its own message for ADC bits.
   if (!Number.isInteger(x) || x < min || x > max) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",

@@ -7,8 +7,8 @@
  * @module
  */
 import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
-import { HotjunctionTypeError, _requireFinite } from "../errors.js";
-import { _emfFromTemperatureArray, _temperatureFromEmfArray } from "../its90/bulk.js";
+import { _requireFinite } from "../errors.js";
+import { _checkBulkArrays, _emfFromTemperatureArray, _temperatureFromEmfArray } from "../its90/bulk.js";
 import { _compile, _emf, type CompiledType } from "../its90/compiled.js";
 import { _checkEmf, _checkTemperature, _EMF_END_TOLERANCE_MV } from "../its90/engine.js";
 import { _exactInverse, _exactInverseTables } from "../its90/exactInverse.js";
@@ -42,22 +42,8 @@ export function bulkBackend(): BulkBackend {
   return _bulkKernel() === null ? "javascript" : "webassembly-simd";
 }
 
-function checkArrays(input: unknown, out: unknown, quantity: string, context: string): number {
-  if (!(input instanceof Float64Array)) {
-    throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity, value: input, problem: "is not a Float64Array", context });
-  }
-  if (out !== undefined && (!(out instanceof Float64Array) || out.length < input.length)) {
-    throw new HotjunctionTypeError({
-      code: "INVALID_OPTION",
-      quantity: "output array",
-      value: out,
-      problem: `is not a Float64Array of length at least ${input.length}`,
-      context,
-    });
-  }
-  return input.length;
-}
-
+// Deliberately alike: inverseOnKernel below walks the chunks the same way (copy in, run the kernel, fall back per
+// element); what runs on a chunk differs (forward sub-ranges here, the exact inverse's pieces there).
 function forwardOnKernel(k: BulkKernel, ct: CompiledType, input: Float64Array, result: Float64Array, n: number): void {
   const x = k.exports;
   const sub = ct.subranges;
@@ -84,6 +70,7 @@ function forwardOnKernel(k: BulkKernel, ct: CompiledType, input: Float64Array, r
   }
 }
 
+// Deliberately alike: forwardOnKernel above walks the chunks the same way; here the inverse's pieces and window.
 function inverseOnKernel(k: BulkKernel, ct: CompiledType, input: Float64Array, result: Float64Array, n: number): void {
   const x = k.exports;
   const inv = _exactInverseTables(ct);
@@ -144,7 +131,7 @@ export function emfFromTemperatureArray(
   const ct = _compile(thermocoupleData(type));
   const k = _bulkKernel();
   if (k === null || !_loadForwardType(k, ct)) return _emfFromTemperatureArray(ct, temperaturesC, out);
-  const n = checkArrays(temperaturesC, out, "temperatures", ct.context);
+  const n = _checkBulkArrays(temperaturesC, out, "temperatures", ct.context);
   const result = out ?? new Float64Array(n);
   forwardOnKernel(k, ct, temperaturesC, result, n);
   return result;
@@ -177,7 +164,7 @@ export function temperatureFromEmfArray(
   const ct = _compile(thermocoupleData(type));
   const k = _bulkKernel();
   if (k === null) return _temperatureFromEmfArray(ct, emfsMillivolts, out);
-  const n = checkArrays(emfsMillivolts, out, "EMFs", ct.context);
+  const n = _checkBulkArrays(emfsMillivolts, out, "EMFs", ct.context);
   const result = out ?? new Float64Array(n);
   inverseOnKernel(k, ct, emfsMillivolts, result, n);
   return result;

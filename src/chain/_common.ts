@@ -64,6 +64,31 @@ export function _checkTemperatureRange(value: unknown, quantity: string, minName
   return { minC, maxC };
 }
 
+/**
+ * @internal Tells whether the first of two alternative keys is given; throws (`INVALID_DESIGN`, quantity
+ * `prefix+first / prefix+second`) unless exactly one is: `bothProblem` when both are, `missingProblem` when neither.
+ */
+export function _oneOfTwoKeys(
+  o: Record<string, unknown>,
+  first: string,
+  second: string,
+  prefix: string,
+  problems: { readonly both: string; readonly missing: string },
+  context: string,
+): boolean {
+  const hasFirst = o[first] !== undefined;
+  if (hasFirst === (o[second] !== undefined)) {
+    throw new HotjunctionRangeError({
+      code: "INVALID_DESIGN",
+      quantity: `${prefix}${first} / ${prefix}${second}`,
+      value: hasFirst ? "both" : undefined,
+      context,
+      problem: hasFirst ? problems.both : problems.missing,
+    });
+  }
+  return hasFirst;
+}
+
 /** @internal Box-method span of the ambient range, °C. */
 export function _ambientSpanC(ambient: AmbientRange): number {
   return ambient.maxC - ambient.minC;

@@ -22,6 +22,7 @@ export const _adcBitsMax = 32;
 /** @internal Throws unless `bits` is an integer from 1 to 32 (the one ADC resolution range). */
 export function _requireAdcBits(bits: unknown, context: string, quantity = "bits"): number {
   const b = _requireFinite(bits, quantity, undefined, context);
+  // Deliberately alike: errors.ts `_requireInteger` is the same check; this one keeps its own message (`is not an integer from 1 to 32`).
   if (!Number.isInteger(b) || b < _adcBitsMin || b > _adcBitsMax) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",

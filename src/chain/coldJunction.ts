@@ -203,6 +203,7 @@ export function _coldJunctionStage(
   ctx: _SourceContext,
   context: string,
 ): _ColdJunctionStage {
+  // Same prologue as every element's stage builder (deliberate: object and kind checked, each its own element).
   const o = _requireObject(element, "coldJunction", context);
   if (o["kind"] !== "coldJunction") return _invalidChoice("coldJunction kind", o["kind"], ["coldJunction"], context);
   const sources: ChainErrorSource[] = [];

@@ -48,6 +48,7 @@ export function _regulatorReferenceSources(
     const total = _requireFraction(element.totalToleranceFraction, "totalToleranceFraction", context);
     return total > 0 ? [_source(ctx, "reference.totalTolerance", "reference", "total tolerance over line, load and temperature", "fraction", total)] : [];
   }
+  // Same error shape as other missing-choice checks (deliberate: this one names the regulator tolerance).
   if (givenParts.length === 0) {
     throw new HotjunctionRangeError({
       code: "INVALID_DESIGN",

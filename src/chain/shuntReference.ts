@@ -80,6 +80,7 @@ export function shuntResistorSizing(options: ShuntResistorSizingOptions): ShuntR
   const o = _requireObject(options, "options", context);
   const vRef = _requirePositive(o["referenceVolts"], "referenceVolts", "V", context);
   const [vsMin, vsMax] = _requireOrderedPair(o["supplyMinVolts"], o["supplyMaxVolts"], "supplyMinVolts", "supplyMaxVolts", "V", context);
+  // Same error shape as other ordered-value checks (deliberate: supply above reference, its own quantities).
   if (!(vsMin > vRef)) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",

@@ -28,6 +28,7 @@ export interface ConversionOptions {
 
 /** The text `hotjunction emf` prints (without the final newline). @internal */
 export function _emfText(type: ThermocoupleType, temperature: number, options: ConversionOptions): string {
+  // Deliberately alike: _tempText below is the inverse direction (EMF in, temperature out) with its own units.
   const temperatureC = _toCelsius(temperature, options.unit);
   const coldJunctionC = options.coldJunction === undefined ? 0 : _toCelsius(options.coldJunction, options.unit);
   const emfMillivolts = emfFromTemperature(type, temperatureC, { coldJunctionC });
@@ -43,6 +44,7 @@ export function _emfText(type: ThermocoupleType, temperature: number, options: C
 
 /** The text `hotjunction temp` prints (without the final newline). @internal */
 export function _tempText(type: ThermocoupleType, emf: number, options: ConversionOptions): string {
+  // Deliberately alike: _emfText above is the forward direction (temperature in, EMF out) with its own units.
   const emfMillivolts = _toMillivolts(emf, options.emfUnit);
   const coldJunctionC = options.coldJunction === undefined ? 0 : _toCelsius(options.coldJunction, options.unit);
   const temperatureC = temperatureFromEmf(type, emfMillivolts, { coldJunctionC });

@@ -6,6 +6,7 @@
  * @module
  */
 import type { DesignFile } from "../design/designSchema.js";
+import type { RunawayResponse } from "../dynamics/simulateRunaway.js";
 import { dynamicsModelFromDesign, measurementChainFromDesign } from "../design/designToObjects.js";
 import type { TripReport, TripReportDynamics } from "../report/reportTypes.js";
 import { chainSignalSlope, tripDynamics, type TripDynamicsResult } from "../trip/tripDynamics.js";
@@ -46,6 +47,34 @@ export function _tripDynamicsOfDesign(design: DesignFile, report: TripReport, ma
 export function _dynamicsFigures(result: TripDynamicsResult): TripReportDynamics {
   const { responses: _responses, ...figures } = result;
   return figures;
+}
+
+/**
+ * The runaway `runaway --svg` charts (and the workbench beside the report): of the cases left by the filters
+ * (`setpoint` name; `chartCase` "slowest" is each setpoint's first case, "nominal" its second), the one with the
+ * smallest dynamic margin, and the chart's title. @internal
+ */
+export function _runawayToChart(
+  design: DesignFile,
+  result: TripDynamicsResult,
+  filters: { readonly setpoint?: string | undefined; readonly chartCase?: string | undefined } = {},
+): { readonly response: RunawayResponse; readonly title: string } {
+  let chosen = { setpoint: 0, unit: 0 };
+  let smallest = Infinity;
+  result.setpoints.forEach((s, i) => {
+    if (filters.setpoint !== undefined && s.name !== filters.setpoint) return;
+    s.cases.forEach((c, k) => {
+      if (filters.chartCase !== undefined && (filters.chartCase === "slowest") !== (k === 0)) return;
+      if (c.dynamicMarginC < smallest) {
+        smallest = c.dynamicMarginC;
+        chosen = { setpoint: i, unit: k };
+      }
+    });
+  });
+  const response = result.responses[chosen.setpoint]?.[chosen.unit];
+  const s = result.setpoints[chosen.setpoint];
+  if (response === undefined || s === undefined) throw new Error("internal: no runaway to chart");
+  return { response, title: `Runaway at "${s.name}": ${s.cases[chosen.unit]?.name ?? ""}${design.name !== undefined ? ` (${design.name})` : ""}` };
 }
 
 /**

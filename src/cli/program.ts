@@ -18,6 +18,7 @@ type Registration = (program: Command, context: CommandContext) => Command;
  * what it imports: the design schema library, the trip and fault code, the chart code) is loaded only when that
  * command runs, so `hotjunction emf K 500` loads the conversion code and the argument parser and nothing else.
  */
+// Deliberately alike: one line per command; each import() names its own file literally so the build splits it.
 const commandLoaders: readonly (readonly [string, () => Promise<Registration>])[] = [
   ["emf", async () => (await import("./commands/emf.js")).registerEmfCommand],
   ["temp", async () => (await import("./commands/temp.js")).registerTempCommand],

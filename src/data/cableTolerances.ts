@@ -86,6 +86,7 @@ export const iecCableTolerances: CableToleranceTable<1 | 2> = {
 export const astmExtensionWireTolerances: CableToleranceTable<"standard" | "special"> = {
   source: "ASTM E230 (tolerances of extension wires), values from memory",
   grades: {
+    // Deliberately alike: standard and special limits are two tables of one shape with their own values (data).
     standard: {
       T: [{ code: "TX", grade: "extension", minC: -60, maxC: 100, toleranceC: 1.0 }],
       J: [{ code: "JX", grade: "extension", minC: 0, maxC: 200, toleranceC: 2.2 }],
@@ -96,6 +97,7 @@ export const astmExtensionWireTolerances: CableToleranceTable<"standard" | "spec
       S: [{ code: "SX", grade: "compensating", minC: 0, maxC: 200, toleranceC: 5.0 }],
       B: [{ code: "BX", grade: "compensating", minC: 0, maxC: 100, toleranceC: 3.7 }],
     },
+    // Deliberately alike: the special limits repeat the standard table's shape with their own values (data).
     special: {
       T: [{ code: "TX", grade: "extension", minC: -60, maxC: 100, toleranceC: 0.5 }],
       J: [{ code: "JX", grade: "extension", minC: 0, maxC: 200, toleranceC: 1.1 }],

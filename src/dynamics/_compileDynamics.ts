@@ -86,6 +86,7 @@ export function _checkScenario(scenario: RunawayScenario): RunawayScenario {
   const startC = _requireFinite(s.startC, "start temperature (startC)", "°C", CONTEXT);
   const tripTemperatureC = _requireFinite(s.tripTemperatureC, "trip temperature (tripTemperatureC)", "°C", CONTEXT);
   const hazardLimitC = _requireFinite(s.hazardLimitC, "hazard limit (hazardLimitC)", "°C", CONTEXT);
+  // Same error shape as other ordered-value checks (deliberate: trip above start, its own quantities).
   if (!(tripTemperatureC > startC)) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",

@@ -6,9 +6,18 @@
 import { _invalidChoice, _requireFinite, _requireFiniteResult, _requireInRange, _requireOptionsObject } from "../errors.js";
 import { _amplifierTimeConstantSeconds, _compileDynamics, _isLag } from "./_compileDynamics.js";
 import { _buildLinearSystem, _propagator, _step } from "./_linearSystem.js";
-import type { HeaterPowerRunaway } from "./types.js";
+import type { DigitalFilter, HeaterPowerRunaway } from "./types.js";
 
 const CONTEXT = "dynamics";
+
+/** The sample period and filter checked as the dynamics check checks them (a firmware-only signal path). */
+function checkedSamplePeriod(samplePeriodSeconds: number, digitalFilter: DigitalFilter): number {
+  const compiled = _compileDynamics({
+    runaway: { kind: "constantRate", rateCPerSecond: 1 },
+    signalPath: { kind: "firmware", samplePeriodSeconds, digitalFilter },
+  });
+  return (compiled.firmware as NonNullable<typeof compiled.firmware>).samplePeriodSeconds;
+}
 
 /**
  * Lag of a first-order stage behind a ramp that starts at t = 0 from steady state: R·τ·(1 − e^(−t/τ)), tending to
@@ -84,12 +93,8 @@ export function rampLagThroughLagsC(options: { readonly rateCPerSecond: number; 
  */
 export function movingAverageRampDelaySeconds(options: { readonly samples: number; readonly samplePeriodSeconds: number }): number {
   _requireOptionsObject(options, CONTEXT, false);
-  const compiled = _compileDynamics({
-    runaway: { kind: "constantRate", rateCPerSecond: 1 },
-    signalPath: { kind: "firmware", samplePeriodSeconds: options.samplePeriodSeconds, digitalFilter: { kind: "movingAverage", samples: options.samples } },
-  });
-  const fw = compiled.firmware as NonNullable<typeof compiled.firmware>;
-  return ((options.samples - 1) * fw.samplePeriodSeconds) / 2;
+  const samplePeriodSeconds = checkedSamplePeriod(options.samplePeriodSeconds, { kind: "movingAverage", samples: options.samples });
+  return ((options.samples - 1) * samplePeriodSeconds) / 2;
 }
 
 /**
@@ -107,12 +112,8 @@ export function movingAverageRampDelaySeconds(options: { readonly samples: numbe
  */
 export function iirRampDelaySeconds(options: { readonly coefficient: number; readonly samplePeriodSeconds: number }): number {
   _requireOptionsObject(options, CONTEXT, false);
-  const compiled = _compileDynamics({
-    runaway: { kind: "constantRate", rateCPerSecond: 1 },
-    signalPath: { kind: "firmware", samplePeriodSeconds: options.samplePeriodSeconds, digitalFilter: { kind: "firstOrderIir", coefficient: options.coefficient } },
-  });
-  const fw = compiled.firmware as NonNullable<typeof compiled.firmware>;
-  return (fw.samplePeriodSeconds * (1 - options.coefficient)) / options.coefficient;
+  const samplePeriodSeconds = checkedSamplePeriod(options.samplePeriodSeconds, { kind: "firstOrderIir", coefficient: options.coefficient });
+  return (samplePeriodSeconds * (1 - options.coefficient)) / options.coefficient;
 }
 
 /**

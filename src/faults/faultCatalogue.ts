@@ -115,6 +115,7 @@ function thermocoupleFaults(offsetMv: number, wireShortC: number | undefined): F
  * centre temperatures).
  */
 function wireFaults(chain: MeasurementChain): Fault[] {
+  // Same list prologue as every element's faults (deliberate, see the note at thermocoupleFaults).
   const faults: Fault[] = [];
   const add = (f: Fault): void => {
     faults.push(f);
@@ -215,6 +216,7 @@ function coldJunctionFaults(chain: MeasurementChain): Fault[] {
 
 /** Amplifier (either kind): output stuck, supply lost, gain resistors open or shorted. */
 function amplifierFaults(chain: MeasurementChain): Fault[] {
+  // Same list prologue as every element's faults (deliberate, see the note at thermocoupleFaults).
   const faults: Fault[] = [];
   const add = (f: Fault): void => {
     faults.push(f);

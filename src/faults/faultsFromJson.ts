@@ -51,6 +51,7 @@ function rejectCustom(value: unknown, context: string): void {
 export function faultsFromJson(json: unknown): Fault[] {
   const context = "faults from JSON";
   let value = json;
+  // Same error shape as other failed-parse checks (deliberate: this one names the JSON text).
   if (typeof json === "string") {
     try {
       value = JSON.parse(json) as unknown;

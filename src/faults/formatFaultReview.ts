@@ -30,6 +30,7 @@ const formats: readonly FaultReviewFormat[] = ["text", "markdown", "json", "csv"
  * ```
  */
 export function formatFaultReview(report: FaultReviewReport, format: FaultReviewFormat, options?: FaultReviewDisplayOptions): string {
+  // Deliberately alike: every format… entry switches on the format to its own renderers (formatTripReport too).
   switch (format) {
     case "text":
       return formatFaultReviewText(report, options);

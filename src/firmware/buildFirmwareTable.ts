@@ -204,6 +204,7 @@ function acceptedRange(r: Request): { lo: number; hi: number } {
   const chain = fn.chain;
   if (chain !== undefined && chain.coldJunctionC !== undefined && fn.inputUnit === "code") {
     for (const code of [toNatural(lo), toNatural(hi)]) {
+      // Same error shape as the probe ageing's hours check (deliberate: each names its own quantity and range).
       if (code < 0 || code > chain.maxCode) {
         throw new HotjunctionRangeError({
           code: "OUT_OF_RANGE",

@@ -56,6 +56,7 @@ export interface FirmwareTableSpec extends BuildFirmwareTableOptions {
  * ```
  */
 export function firmwareTableFromSpec(spec: FirmwareTableSpec): string {
+  // Same error shape as other object checks (deliberate: this one names the firmware table spec).
   if (typeof spec !== "object" || spec === null) {
     throw new HotjunctionTypeError({
       code: "INVALID_OPTION",

@@ -9,7 +9,8 @@ import { _subrangeIndex, type CompiledSubrange, type CompiledType } from "./comp
 import { _checkEmf, _checkTemperature, _EMF_END_TOLERANCE_MV } from "./engine.js";
 import { _exactInverse, _exactInverseTables } from "./exactInverse.js";
 
-function checkArrays(input: unknown, out: unknown, quantity: string, context: string): number {
+/** @internal Checks a bulk call's arrays (the root entry's loops and `hotjunction/bulk` both); returns the length. */
+export function _checkBulkArrays(input: unknown, out: unknown, quantity: string, context: string): number {
   if (!(input instanceof Float64Array)) {
     throw new HotjunctionTypeError({
       code: "INVALID_OPTION",
@@ -131,7 +132,7 @@ export function _emfFromTemperatureArray(
   temperaturesC: Float64Array,
   out?: Float64Array,
 ): Float64Array {
-  const n = checkArrays(temperaturesC, out, "temperatures", ct.context);
+  const n = _checkBulkArrays(temperaturesC, out, "temperatures", ct.context);
   const result = out ?? new Float64Array(n);
   const minC = ct.minC;
   const maxC = ct.maxC;
@@ -168,7 +169,7 @@ export function _temperatureFromEmfArray(
   emfsMillivolts: Float64Array,
   out?: Float64Array,
 ): Float64Array {
-  const n = checkArrays(emfsMillivolts, out, "EMFs", ct.context);
+  const n = _checkBulkArrays(emfsMillivolts, out, "EMFs", ct.context);
   const result = out ?? new Float64Array(n);
   const inv = _exactInverseTables(ct);
   // Fast acceptance test: inside (E at the unambiguous start, E(maxC)]; anything else is checked in full.

@@ -223,6 +223,7 @@ export function _compile(data: ThermocoupleData): CompiledType {
  */
 function validate(data: ThermocoupleData): void {
   const subs = data?.forward;
+  // Same error shape as other object checks (deliberate: this one names the type data and its own code).
   if (!Array.isArray(subs)) {
     throw new HotjunctionTypeError({
       code: "UNKNOWN_TYPE",

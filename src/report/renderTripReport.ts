@@ -397,6 +397,7 @@ function renderCsv(report: TripReport, d: _TemperatureDisplay): string {
  * ```
  */
 export function formatTripReport(report: TripReport, format: ReportFormat, options?: ReportDisplayOptions): string {
+  // Deliberately alike: every format… entry switches on the format to its own renderers (formatFaultReview too).
   const d = _displayOf(options);
   switch (format) {
     case "markdown":

@@ -73,6 +73,19 @@ export function _checkProofTest(value: ProofTestParameters, context: string): Pr
   return { proofTestIntervalHours: t1, meanTimeToRestorationHours: mttr, meanRepairTimeHours: mrt, proofTestCoverage: ptc, missionTimeHours: mission };
 }
 
+/** @internal The checked inputs of a 1oo2 figure (PFDavg and PFH): rates, common-cause factors, proof test, λ per hour. */
+export function _check1oo2Inputs(
+  rates: DangerousRates,
+  commonCause: CommonCauseFactors,
+  proofTest: ProofTestParameters,
+  context: string,
+): { r: DangerousRates; beta: number; betaD: number; p: ProofTestUsed; du: number; dd: number } {
+  const r = _checkRates(rates, context);
+  const { beta, betaD } = _checkCommonCause(commonCause, context);
+  const p = _checkProofTest(proofTest, context);
+  return { r, beta, betaD, p, du: _perHour(r.lambdaDuFit), dd: _perHour(r.lambdaDdFit) };
+}
+
 /**
  * @internal Mean time an undetected dangerous failure stays hidden plus its repair, weighted over the revealed
  * (share PTC, found at T1) and unrevealed (found at T_M) parts: PTC·(T1/`divisor` + MRT) + (1 − PTC)·(T_M/`divisor` + MRT).

@@ -3,7 +3,7 @@
  * equations (B.3.2.2.3, `from memory`).
  * @module
  */
-import { _checkCommonCause, _checkProofTest, _checkRates, _downTimeHours, _perHour, _simplifiedValid, _undetectedDownTimeHours } from "./_safetyChecks.js";
+import { _check1oo2Inputs, _downTimeHours, _simplifiedValid, _undetectedDownTimeHours } from "./_safetyChecks.js";
 import type { CommonCauseFactors, DangerousRates, PfdAvg1oo2Result, ProofTestParameters } from "./types.js";
 
 /**
@@ -35,11 +35,7 @@ import type { CommonCauseFactors, DangerousRates, PfdAvg1oo2Result, ProofTestPar
  */
 export function pfdAvg1oo2(rates: DangerousRates, commonCause: CommonCauseFactors, proofTest: ProofTestParameters): PfdAvg1oo2Result {
   const context = "pfdAvg1oo2";
-  const r = _checkRates(rates, context);
-  const { beta, betaD } = _checkCommonCause(commonCause, context);
-  const p = _checkProofTest(proofTest, context);
-  const du = _perHour(r.lambdaDuFit);
-  const dd = _perHour(r.lambdaDdFit);
+  const { r, beta, betaD, p, du, dd } = _check1oo2Inputs(rates, commonCause, proofTest, context);
   const tCe = _downTimeHours(r, p, 2);
   const tGe = _downTimeHours(r, p, 3);
   const independentRate = (1 - betaD) * dd + (1 - beta) * du;

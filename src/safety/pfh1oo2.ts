@@ -2,7 +2,7 @@
  * PFH of two identical channels (1oo2), IEC 61508-6:2010 Annex B (B.3.3.2.2, `from memory`).
  * @module
  */
-import { _checkCommonCause, _checkProofTest, _checkRates, _downTimeHours, _perHour } from "./_safetyChecks.js";
+import { _check1oo2Inputs, _downTimeHours } from "./_safetyChecks.js";
 import type { CommonCauseFactors, DangerousRates, PfhResult, ProofTestParameters } from "./types.js";
 
 /**
@@ -23,11 +23,7 @@ import type { CommonCauseFactors, DangerousRates, PfhResult, ProofTestParameters
  */
 export function pfh1oo2(rates: DangerousRates, commonCause: CommonCauseFactors, proofTest: ProofTestParameters): PfhResult {
   const context = "pfh1oo2";
-  const r = _checkRates(rates, context);
-  const { beta, betaD } = _checkCommonCause(commonCause, context);
-  const p = _checkProofTest(proofTest, context);
-  const du = _perHour(r.lambdaDuFit);
-  const dd = _perHour(r.lambdaDdFit);
+  const { r, beta, betaD, p, du, dd } = _check1oo2Inputs(rates, commonCause, proofTest, context);
   const tCe = _downTimeHours(r, p, 2) ?? 0;
   const common = betaD * dd + beta * du;
   const pfhPerHour = 2 * ((1 - betaD) * dd + (1 - beta) * du) * (1 - beta) * du * tCe + common;

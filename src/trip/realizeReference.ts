@@ -188,6 +188,7 @@ function sizeShunt(
   if (tol >= 0.5) {
     throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "seriesResistorToleranceFraction", value: tol, min: 0, max: 0.5, context });
   }
+  // Same error shape as other ordered-value checks (deliberate: a design's shunt option, code INVALID_DESIGN).
   if (!(vsMin > vRef)) {
     throw new HotjunctionRangeError({
       code: "INVALID_DESIGN",

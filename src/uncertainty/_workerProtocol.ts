@@ -55,6 +55,7 @@ export function _deserializeError(e: _SerializedError): Error {
 
 /** @internal Loads a model export from a module. */
 export async function _loadModel(module: string, exportName: string, context: string): Promise<Model> {
+  // Same error shape as other failed-load checks (deliberate: this one names the model module).
   let namespace: Record<string, unknown>;
   try {
     namespace = (await import(/* @vite-ignore */ module)) as Record<string, unknown>;

@@ -21,7 +21,7 @@ import { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDe
 import { firmwareTripReport, runawayChartSvg, tripBandChartSvg, tripReportFromResult, type ReportMethodInfo, type TripReport } from "../report/index.js";
 // The CLI's own design-file steps, so the page shows what `check` and `runaway` print (one source): the dynamics
 // fold-in (runaway against each setpoint's static band, verdict from the dynamic peak) and the ADC build sheet.
-import { _foldDynamics, _tripDynamicsOfDesign } from "../cli/dynamicsOfDesign.js";
+import { _foldDynamics, _runawayToChart, _tripDynamicsOfDesign } from "../cli/dynamicsOfDesign.js";
 import { _adcBuildSheet } from "../cli/commands/check.js";
 import { _designFailureDataProblems, _designFaultIds } from "../cli/faultSafety.js";
 
@@ -159,22 +159,10 @@ export interface AnalyseOptions {
   readonly skipDynamics?: boolean;
 }
 
-/** The chart `runaway --svg` writes with no `--setpoint`/`--unit`: the case with the smallest dynamic margin. */
+/** The chart `runaway --svg` writes with no `--setpoint`/`--case`: the case with the smallest dynamic margin. */
 function runawayChartOf(design: DesignFile, result: NonNullable<ReturnType<typeof _tripDynamicsOfDesign>>): string {
-  let chosen = { setpoint: 0, unit: 0 };
-  let smallest = Infinity;
-  result.setpoints.forEach((s, i) => {
-    s.cases.forEach((c, k) => {
-      if (c.dynamicMarginC < smallest) {
-        smallest = c.dynamicMarginC;
-        chosen = { setpoint: i, unit: k };
-      }
-    });
-  });
-  const response = result.responses[chosen.setpoint]?.[chosen.unit];
-  const s = result.setpoints[chosen.setpoint];
-  if (response === undefined || s === undefined) throw new Error("workbench: no runaway to chart");
-  return runawayChartSvg(response, { title: `Runaway at "${s.name}": ${s.cases[chosen.unit]?.name ?? ""}${design.name !== undefined ? ` (${design.name})` : ""}` });
+  const { response, title } = _runawayToChart(design, result);
+  return runawayChartSvg(response, { title });
 }
 
 /**
@@ -247,6 +235,7 @@ export function analyseDesign(design: DesignFile, options: AnalyseOptions = {}):
       }
     }
     progress?.(1);
+    // Deliberately alike: the ADC analysis below assembles the same result fields for its own kind and parts.
     const result: WorkbenchAnalysis = {
       settings,
       monteCarloFinal,
@@ -290,6 +279,7 @@ export function analyseDesign(design: DesignFile, options: AnalyseOptions = {}):
     problems.push({ part: "trip", message: messageOf(error) });
   }
   progress?.(1);
+  // Deliberately alike: the comparator analysis above assembles the same result fields for its own kind and parts.
   const result: WorkbenchAnalysis = {
     settings,
     monteCarloFinal,

@@ -237,6 +237,7 @@ function field<T extends HTMLElement>(node: T, name: string): T {
 function buildSheetSection(sheet: TripBuildSheet, a: WorkbenchAnalysis): HTMLElement {
   const parts: HTMLElement[] = [];
   if (sheet.setpoints.length > 0) {
+    // Deliberately alike: the ADC sheet's codes table below is built the same way (field-tagged cells per setpoint), its own columns.
     parts.push(
       table(
         "Thresholds, resistors and release per setpoint",
@@ -261,6 +262,7 @@ function buildSheetSection(sheet: TripBuildSheet, a: WorkbenchAnalysis): HTMLEle
     );
   }
   if (sheet.adcSetpoints.length > 0) {
+    // Deliberately alike: the comparator sheet's thresholds table above is built the same way, its own columns.
     parts.push(
       table(
         "Firmware codes per setpoint",

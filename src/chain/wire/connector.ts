@@ -32,7 +32,7 @@ import { _invalidChoice, _label, _requireFinite, HotjunctionRangeError } from ".
 import { _compile } from "../../its90/compiled.js";
 import { _emfFromTemperature, _seebeckCoefficient } from "../../its90/engine.js";
 import { thermocoupleData } from "../../its90/resolveType.js";
-import { _optionalLimit, _requireObject, type _SourceContext } from "../_common.js";
+import { _oneOfTwoKeys, _optionalLimit, _requireObject, type _SourceContext } from "../_common.js";
 import type { AmbientRange } from "../types.js";
 import type { WireErrorSource } from "../types.js";
 import type { ConnectorElement, ContactMetal, StatedLegSeebeck, TemperatureRangeC } from "../wireTypes.js";
@@ -170,19 +170,17 @@ export function _connectorStage(
   const stated = o["legSeebeck"] === undefined ? undefined : statedLegs(o["legSeebeck"] as StatedLegSeebeck, context);
 
   if (o["arrangement"] === "terminates") {
-    const hasAbs = o["temperatureC"] !== undefined;
-    const hasRel = o["aboveColdJunctionC"] !== undefined;
-    if (hasAbs === hasRel) {
-      throw new HotjunctionRangeError({
-        code: "INVALID_DESIGN",
-        quantity: `${name}.temperatureC / ${name}.aboveColdJunctionC`,
-        value: hasAbs ? "both" : undefined,
-        context,
-        problem: hasAbs
-          ? "are both given; give the connector's temperature one way"
-          : "is missing: a terminating connector is the de facto reference junction, its temperature is required",
-      });
-    }
+    const hasAbs = _oneOfTwoKeys(
+      o,
+      "temperatureC",
+      "aboveColdJunctionC",
+      `${name}.`,
+      {
+        both: "are both given; give the connector's temperature one way",
+        missing: "is missing: a terminating connector is the de facto reference junction, its temperature is required",
+      },
+      context,
+    );
     const range = hasAbs
       ? _checkRange(o["temperatureC"], "temperatureC", context)
       : _checkRange(o["aboveColdJunctionC"], "aboveColdJunctionC", context);

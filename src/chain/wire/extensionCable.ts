@@ -64,6 +64,7 @@ function pick(
   context: string,
 ): CableToleranceEntry {
   const ofGrade = (entries ?? []).filter((e) => e.grade === grade);
+  // Same error shape as other missing-choice checks (deliberate: this one names the cable grade).
   if (ofGrade.length === 0) {
     throw new HotjunctionRangeError({
       code: "INVALID_OPTION",
@@ -117,6 +118,7 @@ export function cableToleranceStatement(
     case "IEC 60584-3": {
       const cls = t["class"];
       if (cls !== 1 && cls !== 2) return _invalidChoice("IEC 60584-3 class", cls, ["1", "2"], context);
+      // Deliberately alike: the ASTM E230 case below returns the same fields; IEC states the tolerance in µV, ASTM in °C.
       const e = pick(iecCableTolerances.grades[cls][type], grade, t["variant"], `IEC 60584-3 class ${cls}`, type, context);
       return {
         code: e.code,
@@ -132,6 +134,7 @@ export function cableToleranceStatement(
       if (limits !== "standard" && limits !== "special") {
         return _invalidChoice("ASTM E230 limits", limits, ["standard", "special"], context);
       }
+      // Deliberately alike: the IEC 60584-3 case above returns the same fields, its tolerance in µV.
       const e = pick(astmExtensionWireTolerances.grades[limits][type], grade, undefined, `ASTM E230 ${limits} limits`, type, context);
       return {
         code: e.code,
@@ -309,6 +312,7 @@ export function _extensionCableStage(
   ctx: _SourceContext,
   context: string,
 ): _ExtensionCableStage {
+  // Same prologue as every element's stage builder (deliberate: object and kind checked, each its own element).
   const o = _requireObject(element, "extensionCable", context);
   if (o["kind"] !== "extensionCable") return _invalidChoice("extensionCable kind", o["kind"], ["extensionCable"], context);
   const statement = cableToleranceStatement(type, o["grade"] as "extension", o["tolerance"] as CableTolerance);

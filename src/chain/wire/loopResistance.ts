@@ -12,7 +12,7 @@
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
 import { thermocoupleLegs } from "../../data/wireAlloys.js";
 import { _invalidChoice, _label, _requireFinite, HotjunctionRangeError } from "../../errors.js";
-import { _optionalLimit, _requireFraction, _requireObject, _requirePositive, type _SourceContext } from "../_common.js";
+import { _oneOfTwoKeys, _optionalLimit, _requireFraction, _requireObject, _requirePositive, type _SourceContext } from "../_common.js";
 import type { WireErrorSource } from "../types.js";
 import type { DetectionDirection, LoopResistanceElement, ThermocoupleWireRun } from "../wireTypes.js";
 import { _wireSource, type _Inputs } from "./_wireCommon.js";
@@ -67,17 +67,14 @@ export function thermocoupleLoopOhmsPerMetre(type: ThermocoupleType, diameterMm:
 function wireRunOhms(type: ThermocoupleType, run: ThermocoupleWireRun, context: string, key: string): number {
   const o = _requireObject(run, key, context);
   const length = requireNonNegativeValue(o["lengthMetres"], `${key}.lengthMetres`, "m", context);
-  const hasD = o["diameterMm"] !== undefined;
-  const hasAwg = o["awg"] !== undefined;
-  if (hasD === hasAwg) {
-    throw new HotjunctionRangeError({
-      code: "INVALID_DESIGN",
-      quantity: `${key}.diameterMm / ${key}.awg`,
-      value: hasD ? "both" : undefined,
-      context,
-      problem: hasD ? "are both given; give the gauge one way" : "is missing: give the wire's diameter or AWG",
-    });
-  }
+  const hasD = _oneOfTwoKeys(
+    o,
+    "diameterMm",
+    "awg",
+    `${key}.`,
+    { both: "are both given; give the gauge one way", missing: "is missing: give the wire's diameter or AWG" },
+    context,
+  );
   const d = hasD ? _requirePositive(o["diameterMm"], `${key}.diameterMm`, "mm", context) : awgDiameterMm(o["awg"] as number);
   return thermocoupleLoopOhmsPerMetre(type, d) * length;
 }

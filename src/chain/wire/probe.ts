@@ -10,7 +10,7 @@
  * @module
  */
 import { _invalidChoice, _requireFinite, _requireInRange, _requireInteger, HotjunctionRangeError } from "../../errors.js";
-import { _optionalLimit, _requireNonNegative, _requireObject, _requirePositive, type _SourceContext } from "../_common.js";
+import { _oneOfTwoKeys, _optionalLimit, _requireNonNegative, _requireObject, _requirePositive, type _SourceContext } from "../_common.js";
 import type { WireErrorSource } from "../types.js";
 import type { AgeingElement, DriftDirection, InsulationLeakageElement } from "../wireTypes.js";
 import { _wireSource, type _Inputs } from "./_wireCommon.js";
@@ -92,17 +92,14 @@ function checkAgeing(element: unknown, context: string): CheckedAgeing {
   if (direction !== "up" && direction !== "down" && direction !== "symmetric") {
     return _invalidChoice("ageing direction", direction, ["up", "down", "symmetric"], context);
   }
-  const hasRate = o["driftCPer1000Hours"] !== undefined;
-  const hasTotal = o["totalDriftC"] !== undefined;
-  if (hasRate === hasTotal) {
-    throw new HotjunctionRangeError({
-      code: "INVALID_DESIGN",
-      quantity: "driftCPer1000Hours / totalDriftC",
-      value: hasRate ? "both" : undefined,
-      context,
-      problem: hasRate ? "are both given; state the drift one way" : "is missing: state a rate per 1,000 h or a total over the service life",
-    });
-  }
+  const hasRate = _oneOfTwoKeys(
+    o,
+    "driftCPer1000Hours",
+    "totalDriftC",
+    "",
+    { both: "are both given; state the drift one way", missing: "is missing: state a rate per 1,000 h or a total over the service life" },
+    context,
+  );
   const totalC = hasRate
     ? (_optionalLimit(o["driftCPer1000Hours"], "driftCPer1000Hours", "°C", context) * serviceHours) / 1000
     : _optionalLimit(o["totalDriftC"], "totalDriftC", "°C", context);
@@ -138,6 +135,7 @@ export function ageingBandAt(element: AgeingElement, hours: number): AgeingBandP
   const context = "ageing";
   const a = checkAgeing(element, context);
   const h = _requireFinite(hours, "hours in service", "h", context);
+  // Same error shape as the firmware table's ADC-code check (deliberate: each names its own quantity and range).
   if (h < 0 || h > a.serviceHours) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",

@@ -17,7 +17,7 @@ import {
   _methodInfo,
   type AnalysisOptionValues,
 } from "../designOptions.js";
-import { _dynamicsFigures, _tripDynamicsOfDesign } from "../dynamicsOfDesign.js";
+import { _dynamicsFigures, _runawayToChart, _tripDynamicsOfDesign } from "../dynamicsOfDesign.js";
 import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import type { CommandContext } from "../commandContext.js";
 import { _tripReportOfDesign } from "./check.js";
@@ -73,22 +73,8 @@ export function registerRunawayCommand(program: Command, context: CommandContext
     );
     const extras: string[] = [];
     if (plan.extras.length > 0) {
-      let chosen = { setpoint: 0, unit: 0 };
-      let smallest = Infinity;
-      result.setpoints.forEach((s, i) => {
-        if (options.setpoint !== undefined && s.name !== options.setpoint) return;
-        s.cases.forEach((c, k) => {
-          if (chartCase !== undefined && (chartCase === "slowest") !== (k === 0)) return;
-          if (c.dynamicMarginC < smallest) {
-            smallest = c.dynamicMarginC;
-            chosen = { setpoint: i, unit: k };
-          }
-        });
-      });
-      const response = result.responses[chosen.setpoint]?.[chosen.unit];
-      const s = result.setpoints[chosen.setpoint];
-      if (response === undefined || s === undefined) throw new Error("internal: no runaway to chart");
-      extras.push(runawayChartSvg(response, { title: `Runaway at "${s.name}": ${s.cases[chosen.unit]?.name ?? ""}${design.name !== undefined ? ` (${design.name})` : ""}` }));
+      const { response, title } = _runawayToChart(design, result, { setpoint: options.setpoint, chartCase });
+      extras.push(runawayChartSvg(response, { title }));
     }
     _emitOutputs(context.io, plan, options, text, extras, [input]);
     if (!result.pass && options.reportOnly !== true) {

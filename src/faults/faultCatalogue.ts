@@ -321,7 +321,8 @@ function detectorFaults(chain: MeasurementChain, level: "high" | "low"): Fault[]
     const ohms = chain.divider?.resistorsOhms ?? [];
     // Named by position as every report names them (top, ladder 1 … from the reference, bottom); the id keeps the
     // index from the reference (0 = top) as its stable key, which failure data maps onto.
-    const positions = resistorPositionNames(ohms.length);
+    // A comparator straight on the reference (no divider) has no threshold resistor to name.
+    const positions = ohms.length > 0 ? resistorPositionNames(ohms.length) : [];
     ohms.forEach((r, index) => {
       for (const state of ["open", "short"] as const) {
         add({

@@ -70,7 +70,8 @@ function forwardRun(
   return i;
 }
 
-// Deliberately alike: the unrolled twin of forwardRun above (same arithmetic, same bits).
+// Deliberately alike: the unrolled twin of forwardRun above (same arithmetic, same bits). Alike in shape only
+// with the golden-section step's end in uncertainty/_propagateWorstCase.ts (another job).
 /**
  * {@link forwardRun} for sub-ranges of at most 10 coefficients (most of them), zero-padded to 10: the Horner
  * scheme unrolled over coefficients held in locals runs faster than a loop over the array. Leading zero

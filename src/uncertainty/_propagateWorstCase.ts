@@ -76,6 +76,7 @@ function optimiseCoordinate(
       fd = sign * evaluator.evaluate(x);
     }
   }
+  // Alike in shape only with its90/bulk.ts (the end of forwardRun beside forwardRun10's opening): other jobs.
   if (fc > bestValue) {
     bestValue = fc;
     bestX = c;
@@ -232,6 +233,27 @@ export function _branchAndBound(
 export const _worstCaseFastPath = { enabled: true };
 
 /**
+ * Per-input extremes: each input alone pushed, from the estimates, to the end that raises (corners[0]) or lowers
+ * (corners[1]) the output (2n evaluations per side). `x` is scratch.
+ */
+function perInputCorners(evaluator: _ModelEvaluator, x: Float64Array, lower: Float64Array, upper: Float64Array, means: Float64Array, corners: Float64Array[]): void {
+  const n = lower.length;
+  for (let s = 0; s < 2; s++) {
+    const sign = s === 0 ? 1 : -1;
+    const corner = corners[s] as Float64Array;
+    x.set(means);
+    for (let i = 0; i < n; i++) {
+      x[i] = lower[i] as number;
+      const atLower = sign * evaluator.evaluate(x);
+      x[i] = upper[i] as number;
+      const atUpper = sign * evaluator.evaluate(x);
+      x[i] = means[i] as number;
+      corner[i] = atUpper >= atLower ? (upper[i] as number) : (lower[i] as number);
+    }
+  }
+}
+
+/**
  * @internal The fast path of a worst case with an enclosure: for each side, the corner where every input alone is
  * pushed to the end that raises (maximum) or lowers (minimum) the model, from the estimates (2n evaluations per
  * side), is evaluated; one enclosure call over the whole box then bounds the model. When each attained value lies
@@ -252,20 +274,8 @@ export function _enclosureMetAtCorners(
   const n = names.length;
   const x = new Float64Array(n);
   const attained = [0, 0];
-  for (let s = 0; s < 2; s++) {
-    const sign = s === 0 ? 1 : -1;
-    const corner = corners[s] as Float64Array;
-    x.set(means);
-    for (let i = 0; i < n; i++) {
-      x[i] = lower[i] as number;
-      const atLower = sign * evaluator.evaluate(x);
-      x[i] = upper[i] as number;
-      const atUpper = sign * evaluator.evaluate(x);
-      x[i] = means[i] as number;
-      corner[i] = atUpper >= atLower ? (upper[i] as number) : (lower[i] as number);
-    }
-    attained[s] = evaluator.evaluate(corner);
-  }
+  perInputCorners(evaluator, x, lower, upper, means, corners);
+  for (let s = 0; s < 2; s++) attained[s] = evaluator.evaluate(corners[s] as Float64Array);
   const box: Record<string, readonly [number, number]> = {};
   for (let i = 0; i < n; i++) box[names[i] as string] = [lower[i] as number, upper[i] as number];
   const r: unknown = enclosure(box);
@@ -352,20 +362,7 @@ export function _propagateWorstCase(
     }
     strategy = `all ${count} corners of the input box evaluated, then`;
   } else {
-    // Per-input extremes: each input alone pushed to the end that raises (or lowers) the output.
-    for (let s = 0; s < 2; s++) {
-      const sign = s === 0 ? 1 : -1;
-      const corner = bestCorner[s] as Float64Array;
-      x.set(means);
-      for (let i = 0; i < n; i++) {
-        x[i] = lower[i] as number;
-        const atLower = sign * evaluator.evaluate(x);
-        x[i] = upper[i] as number;
-        const atUpper = sign * evaluator.evaluate(x);
-        x[i] = means[i] as number;
-        corner[i] = atUpper >= atLower ? (upper[i] as number) : (lower[i] as number);
-      }
-    }
+    perInputCorners(evaluator, x, lower, upper, means, bestCorner);
     strategy = `${n} inputs are too many for all 2^${n} corners, so the corner of per-input (one-at-a-time) extremes was used, then`;
   }
   const searchNote =

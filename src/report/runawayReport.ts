@@ -8,7 +8,7 @@ import type { TripDynamicsSetpoint } from "../trip/tripDynamics.js";
 import { CAUTION_TEXT } from "./caution.js";
 import { _cautionLine, _csv, _fixed, _markdownTable, _signed, _textTable } from "./formatting.js";
 import type { ReportFormat, TripReportDynamics } from "./reportTypes.js";
-import { _displayOf, type _TemperatureDisplay } from "./displayUnit.js";
+import { _csvUnitLine, _displayOf, _jsonUnitField, type ReportDisplayOptions, type _TemperatureDisplay } from "./displayUnit.js";
 
 const celsius = /* @__PURE__ */ _displayOf(undefined);
 
@@ -142,6 +142,8 @@ export function _dynamicsCsv(dyn: TripReportDynamics, d: _TemperatureDisplay = c
  * caution.
  * @param report - the report data (`dynamics` from `tripDynamics` without its `responses`)
  * @param format - `"text"`, `"markdown"`, `"csv"` (caution as a leading `#` line) or `"json"`
+ * @param options - `temperatureUnit` (`"C"`, `"F"`, `"K"`; default `"C"`) the text, Markdown and CSV show
+ *   temperatures in; the JSON keeps its °C fields and records the unit
  * @returns the report text
  * @example
  * ```ts
@@ -151,13 +153,14 @@ export function _dynamicsCsv(dyn: TripReportDynamics, d: _TemperatureDisplay = c
  * console.log(text.includes("do not certify a safety function")); // true
  * ```
  */
-export function formatRunawayReport(report: RunawayReport, format: ReportFormat): string {
+export function formatRunawayReport(report: RunawayReport, format: ReportFormat, options?: ReportDisplayOptions): string {
   const name = report.designName !== undefined ? `: ${report.designName}` : "";
+  const d = _displayOf(options);
   switch (format) {
     case "json":
-      return `${JSON.stringify({ report: "runaway", caution: CAUTION_TEXT, title: report.title, ...(report.designName !== undefined ? { designName: report.designName } : {}), verdictUses: "dynamic peak", details: report.details, ...report.dynamics }, null, 2)}\n`;
+      return `${JSON.stringify({ report: "runaway", caution: CAUTION_TEXT, title: report.title, ...(report.designName !== undefined ? { designName: report.designName } : {}), verdictUses: "dynamic peak", details: report.details, ...report.dynamics, ..._jsonUnitField(d) }, null, 2)}\n`;
     case "csv":
-      return `# ${_cautionLine()}\n${report.details.map((d) => `# ${d}\n`).join("")}${_dynamicsCsv(report.dynamics)}`;
+      return `# ${_cautionLine()}\n${_csvUnitLine(d)}${report.details.map((l) => `# ${l}\n`).join("")}${_dynamicsCsv(report.dynamics, d)}`;
     case "markdown":
       return [
         `# ${report.title}${name}`,
@@ -166,13 +169,13 @@ export function formatRunawayReport(report: RunawayReport, format: ReportFormat)
         "",
         `> **Caution.** ${CAUTION_TEXT}`,
         "",
-        ...report.details.map((d) => `- ${d}`),
-        ..._dynamicsMarkdownLines(report.dynamics).slice(1),
+        ...report.details.map((l) => `- ${l}`),
+        ..._dynamicsMarkdownLines(report.dynamics, "##", d).slice(1),
         "",
       ].join("\n");
     default: {
       const heading = `${report.title}${name} — ${report.dynamics.pass ? "PASS" : "FAIL"}`;
-      return [heading, "=".repeat([...heading].length), "", ...report.details, ..._dynamicsTextLines(report.dynamics).slice(1), "", _cautionLine(), ""].join("\n");
+      return [heading, "=".repeat([...heading].length), "", ...report.details, ..._dynamicsTextLines(report.dynamics, d).slice(1), "", _cautionLine(), ""].join("\n");
     }
   }
 }

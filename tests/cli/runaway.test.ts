@@ -99,10 +99,31 @@ describe("hotjunction runaway", () => {
     expect(oneLine(badCase.stderr)).toContain('--case "F" is not a case; valid: slowest, nominal');
     const both = await run(["runaway", kiln, "--svg", "y.svg", "--case", "nominal", "--unit", "slowest"], dir);
     expect(both.code).toBe(2);
-    expect(oneLine(both.stderr)).toContain("--case and the deprecated --unit both given");
+    expect(oneLine(both.stderr)).toContain("--case and the deprecated --unit slowest|nominal both given");
     const bad = await run(["runaway", kiln, "--setpoint", "glaze"], dir);
     expect(bad.code).toBe(2);
     expect(oneLine(bad.stderr)).toContain('--setpoint "glaze" is not a setpoint');
+  });
+
+  it("--unit F shows the runaway's temperatures in °F (peaks with the offset, margins ×1.8); JSON stays in °C and records the unit", async () => {
+    const dir = tempDir();
+    const json = JSON.parse((await run(["runaway", kiln, "--json", "--unit", "F", "--report-only"], dir)).stdout);
+    const plain = JSON.parse((await run(["runaway", kiln, "--json", "--report-only"], dir)).stdout);
+    expect(json.temperatureUnit).toBe("°F");
+    expect(plain.temperatureUnit).toBe("°C");
+    // JSON fields stay in °C whatever the display unit
+    expect(json.setpoints).toEqual(plain.setpoints);
+    const csv = (await run(["runaway", kiln, "--csv", "--unit", "F", "--report-only"], dir)).stdout;
+    const lines = csv.split("\n").filter((l) => l !== "" && !l.startsWith("#"));
+    const head = (lines[0] as string).split(",");
+    const first = (lines[1] as string).split(",");
+    const c = plain.setpoints[0].cases[0];
+    // t_F = 1.8·t_C + 32 for temperatures, Δt_F = 1.8·Δt_C for differences (NIST SP 811 B.8, from memory)
+    expect(Number(first[head.indexOf("peak_true_F")])).toBeCloseTo(c.peakTrueC * 1.8 + 32, 9);
+    expect(Number(first[head.indexOf("dynamic_margin_F")])).toBeCloseTo(c.dynamicMarginC * 1.8, 9);
+    const text = (await run(["runaway", kiln, "--unit", "K", "--report-only"], dir)).stdout;
+    expect(text).not.toMatch(/\d °C/);
+    expect(text).toMatch(/\d K/);
   });
 
   it("a design without dynamics is a one-line usage error", async () => {

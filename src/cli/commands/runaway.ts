@@ -39,18 +39,22 @@ export function registerRunawayCommand(program: Command, context: CommandContext
   _addAnalysisOptions(command, "the runaway (true and indicated temperature against time)");
   command.option("--setpoint <name>", "setpoint whose runaway the chart shows");
   command.option("--case <case>", "case the chart shows: slowest (the unit at the band's high edge) or nominal");
-  // Until 0.2 `--unit` named the case; it stays accepted for those two words (deprecated), since every other design
-  // command's `--unit` is the display unit of temperatures.
-  command.addOption(new Option("--unit <case>", "deprecated: use --case").hideHelp());
+  // `--unit` is the display unit of temperatures, as on every design command. Until 0.2 it named the chart's case:
+  // `slowest` and `nominal` stay accepted there (deprecated; use --case).
+  command.addOption(
+    new Option("--unit <unit>", "temperature unit of the report: C, F or K, for text, Markdown and CSV (design files and JSON fields stay in °C; JSON records the unit)")
+      .choices(["C", "F", "K", "slowest", "nominal"]),
+  );
   _addOutputOptions(command, ["json", "markdown", "csv"], true);
   _addReportOnlyOption(command);
   command.action(async (path: string, options: RunawayOptions) => {
     const svg = (options as { svg?: string }).svg;
-    if (options.case !== undefined && options.unit !== undefined) throw new CliError("--case and the deprecated --unit both given; give --case only");
-    const chartCase = options.case ?? options.unit;
-    const caseOption = options.case !== undefined ? "--case" : "--unit";
+    const unitIsCase = options.unit === "slowest" || options.unit === "nominal";
+    if (options.case !== undefined && unitIsCase) throw new CliError("--case and the deprecated --unit slowest|nominal both given; give --case only");
+    const chartCase = options.case ?? (unitIsCase ? options.unit : undefined);
+    const temperatureUnit = unitIsCase || options.unit === undefined ? "C" : (options.unit as "C" | "F" | "K");
     if (chartCase !== undefined && chartCase !== "slowest" && chartCase !== "nominal") {
-      throw new CliError(`${caseOption} ${JSON.stringify(chartCase)} is not a case; valid: slowest, nominal${caseOption === "--unit" ? " (runaway has no display unit yet; --unit here is the deprecated name of --case)" : ""}`);
+      throw new CliError(`--case ${JSON.stringify(chartCase)} is not a case; valid: slowest, nominal`);
     }
     const plan = _planCommandOutputs(context.io, options, [path], svg !== undefined ? [svg] : []);
     const { design, input } = await _loadDesign(context.io, path);
@@ -70,6 +74,7 @@ export function registerRunawayCommand(program: Command, context: CommandContext
     const text = formatRunawayReport(
       { title: "Runaway response", ...(design.name !== undefined ? { designName: design.name } : {}), dynamics: _dynamicsFigures(result), details },
       _chosenFormat(options),
+      { temperatureUnit },
     );
     const extras: string[] = [];
     if (plan.extras.length > 0) {

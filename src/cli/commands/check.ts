@@ -82,8 +82,8 @@ export function _tripReportOfDesign(io: CliIo, design: DesignFile, settings: Ana
     name: s.name,
     tripTemperatureC: s.tripTemperatureC,
     // Presence was checked when the design was validated.
-    maxNormalOperatingC: s.maxNormalOperatingC ?? design.processLimits?.maxNormalOperatingC ?? Number.NaN,
-    hazardLimitC: s.hazardLimitC ?? design.processLimits?.hazardLimitC ?? Number.NaN,
+    maxNormalOperatingC: limitOf(s.maxNormalOperatingC ?? design.processLimits?.maxNormalOperatingC, "maxNormalOperatingC", s.name),
+    hazardLimitC: limitOf(s.hazardLimitC ?? design.processLimits?.hazardLimitC, "hazardLimitC", s.name),
   }));
   const progress = _startProgress(io, "chain at setpoints");
   try {
@@ -136,6 +136,18 @@ export function _withAdcFullScale(report: TripReport, bits: number, fullScaleVol
   return changed ? { ...report, setpoints, pass: false } : report;
 }
 
+/** A setpoint's limit (validated present: a missing one here is a bug, said so rather than carried as NaN). */
+function limitOf(value: number | undefined, name: string, setpoint: string): number {
+  if (value === undefined) throw new Error(`internal: setpoint "${setpoint}" has no ${name} after validation`);
+  return value;
+}
+
+/** An ADC chain's reading always carries its code; a reading without one is a bug, said so (never a NaN code). */
+function adcCode(code: number | undefined, setpoint: string): number {
+  if (code === undefined) throw new Error(`internal: the ADC chain gave no code at setpoint "${setpoint}"`);
+  return code;
+}
+
 /**
  * The build sheet of an ADC design: per setpoint the nominal code at the setpoint, the integer code firmware
  * compares against (the smallest integer at or above the nominal unrounded code, so the trip comes no earlier),
@@ -148,10 +160,10 @@ export function _adcBuildSheet(design: DesignFile, chain: MeasurementChain, repo
     const evaluation = evaluations[i] as ChainEvaluation;
     const t = s.tripTemperatureC;
     const stepC = 0.05;
-    const up = readingFromChain(chain, t + stepC).code ?? Number.NaN;
-    const down = readingFromChain(chain, t - stepC).code ?? Number.NaN;
+    const up = adcCode(readingFromChain(chain, t + stepC).code, s.name);
+    const down = adcCode(readingFromChain(chain, t - stepC).code, s.name);
     const codesPerC = (up - down) / (2 * stepC);
-    const nominalCode = evaluation.reading.code ?? Number.NaN;
+    const nominalCode = adcCode(evaluation.reading.code, s.name);
     const bound = evaluation.bounds.find((b) => b.method === acceptance) ?? evaluation.bounds[0];
     const errLow = bound?.errorLowC ?? 0;
     const errHigh = bound?.errorHighC ?? 0;

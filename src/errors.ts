@@ -466,7 +466,7 @@ export function _requireWorkWithin(factors: Readonly<Record<string, number>>, li
  * The shape a formatter expects of a result object it is given (a report, a review, a curve): `"number"` a finite
  * number, `"positive"` a finite number > 0, `"string"`, `"boolean"`, `"any"` (not checked), `["array", shape]`
  * an array of that shape, `["optional", shape]` undefined or that shape, `["nullable", shape]` null or that shape,
- * or an object literal: a plain object whose listed keys have those shapes (other keys are not checked).
+ * `["oneOf", [choices]]` one of those strings, or an object literal: a plain object whose listed keys have those shapes (other keys are not checked).
  * @internal
  */
 export type _Shape =
@@ -476,10 +476,12 @@ export type _Shape =
   | "boolean"
   | "any"
   | readonly ["array" | "optional" | "nullable", _Shape]
+  | readonly ["oneOf", readonly string[]]
   | { readonly [key: string]: _Shape };
 
 function shapeWords(shape: _Shape): string {
   if (typeof shape === "string") return shape === "number" ? "a finite number" : shape === "positive" ? "a finite number > 0" : `a ${shape}`;
+  if (Array.isArray(shape) && shape[0] === "oneOf") return `one of ${(shape[1] as string[]).join(", ")}`;
   if (Array.isArray(shape)) return shape[0] === "array" ? "an array" : `${shapeWords(shape[1] as _Shape)}${shape[0] === "optional" ? " or undefined" : " or null"}`;
   return "an object";
 }
@@ -503,6 +505,10 @@ export function _requireShape(value: unknown, shape: _Shape, quantity: string, c
   }
   if (Array.isArray(shape)) {
     const [kind, inner] = shape as readonly [string, _Shape];
+    if (kind === "oneOf") {
+      if (!(inner as readonly unknown[]).includes(value)) fail();
+      return;
+    }
     if (kind === "optional" && value === undefined) return;
     if (kind === "nullable" && value === null) return;
     if (kind !== "array") {

@@ -464,7 +464,7 @@ export function _requireWorkWithin(factors: Readonly<Record<string, number>>, li
 
 /**
  * The shape a formatter expects of a result object it is given (a report, a review, a curve): `"number"` a finite
- * number, `"positive"` a finite number > 0, `"string"`, `"boolean"`, `"any"` (not checked), `["array", shape]`
+ * number, `"positive"` a finite number > 0, `"fraction"` a number in [0, 1], `"string"`, `"boolean"`, `"any"` (not checked), `["array", shape]`
  * an array of that shape, `["optional", shape]` undefined or that shape, `["nullable", shape]` null or that shape,
  * `["oneOf", [choices]]` one of those strings, or an object literal: a plain object whose listed keys have those shapes (other keys are not checked).
  * @internal
@@ -472,6 +472,7 @@ export function _requireWorkWithin(factors: Readonly<Record<string, number>>, li
 export type _Shape =
   | "number"
   | "positive"
+  | "fraction"
   | "string"
   | "boolean"
   | "any"
@@ -480,7 +481,7 @@ export type _Shape =
   | { readonly [key: string]: _Shape };
 
 function shapeWords(shape: _Shape): string {
-  if (typeof shape === "string") return shape === "number" ? "a finite number" : shape === "positive" ? "a finite number > 0" : `a ${shape}`;
+  if (typeof shape === "string") return shape === "number" ? "a finite number" : shape === "positive" ? "a finite number > 0" : shape === "fraction" ? "a number from 0 to 1" : `a ${shape}`;
   if (Array.isArray(shape) && shape[0] === "oneOf") return `one of ${(shape[1] as string[]).join(", ")}`;
   if (Array.isArray(shape)) return shape[0] === "array" ? "an array" : `${shapeWords(shape[1] as _Shape)}${shape[0] === "optional" ? " or undefined" : " or null"}`;
   return "an object";
@@ -498,8 +499,8 @@ export function _requireShape(value: unknown, shape: _Shape, quantity: string, c
   };
   if (typeof shape === "string") {
     if (shape === "any") return;
-    if (shape === "number" || shape === "positive") {
-      if (typeof value !== "number" || !Number.isFinite(value) || (shape === "positive" && !(value > 0))) fail();
+    if (shape === "number" || shape === "positive" || shape === "fraction") {
+      if (typeof value !== "number" || !Number.isFinite(value) || (shape === "positive" && !(value > 0)) || (shape === "fraction" && !(value >= 0 && value <= 1))) fail();
     } else if (typeof value !== shape) fail();
     return;
   }

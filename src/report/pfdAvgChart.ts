@@ -26,7 +26,7 @@ const pfdAvgChartInputShape: _Shape = {
   title: "string",
   scope: "string",
   statedIntervalHours: ["optional", "number"],
-  curves: ["array", { channelName: "string", pairName: ["nullable", "string"], beta: ["nullable", "number"], points: ["array", { proofTestIntervalHours: "positive", pfdAvg1oo1: "number", pfdAvg1oo2: ["nullable", "number"] }] }],
+  curves: ["array", { channelName: "string", pairName: ["nullable", "string"], beta: ["nullable", "fraction"], points: ["array", { proofTestIntervalHours: "positive", pfdAvg1oo1: "number", pfdAvg1oo2: ["nullable", "number"] }] }],
 };
 
 function decadeTicks(scale: ScaleLogarithmic<number, number>): number[] {

@@ -77,7 +77,9 @@ export function _pairEntries(t: TwoChannelCutout): [string, string][] {
 const n: _Shape = "number";
 const nullableNumber: _Shape = ["nullable", "number"];
 const strings: _Shape = ["array", "string"];
-const proofTestShape: _Shape = { proofTestIntervalHours: n, meanTimeToRestorationHours: n, meanRepairTimeHours: n, proofTestCoverage: n, missionTimeHours: nullableNumber };
+const f: _Shape = "fraction";
+const nullableFraction: _Shape = ["nullable", "fraction"];
+const proofTestShape: _Shape = { proofTestIntervalHours: n, meanTimeToRestorationHours: n, meanRepairTimeHours: n, proofTestCoverage: f, missionTimeHours: nullableNumber };
 const channelShape: _Shape = { name: "string", lambdaDuFit: n, lambdaDdFit: n, pfdAvg1oo1: n, pfh1oo1PerHour: n };
 
 /** What the renderers read of a safety-figures report (checked at their entry, {@link _checkSafetyReport}). */
@@ -99,11 +101,11 @@ const safetyReportShape: _Shape = {
       lambdaDegradedFit: n,
       lambdaNoEffectFit: n,
       lambdaTotalFit: n,
-      safeFailureFraction: nullableNumber,
-      diagnosticCoverage: nullableNumber,
-      proofTestCoverage: nullableNumber,
+      safeFailureFraction: nullableFraction,
+      diagnosticCoverage: nullableFraction,
+      proofTestCoverage: nullableFraction,
       noEffectThresholdC: nullableNumber,
-      modes: ["array", { element: "string", mode: "string", faultId: ["nullable", "string"], share: n, rateFit: n, counted: "string" }],
+      modes: ["array", { element: "string", mode: "string", faultId: ["nullable", "string"], share: f, rateFit: n, counted: "string" }],
       unratedFaultIds: strings,
       pfdAvg1oo1: ["nullable", { pfdAvg: n, channelDownTimeHours: nullableNumber, lambdaDuFit: n, lambdaDdFit: n, proofTest: proofTestShape }],
       pfh1oo1: ["nullable", { pfhPerHour: n, pfhFit: n, commonCausePfhPerHour: n }],
@@ -115,17 +117,17 @@ const safetyReportShape: _Shape = {
     {
       channelA: channelShape,
       channelB: channelShape,
-      beta: n,
-      betaD: n,
+      beta: f,
+      betaD: f,
       pfdAvg1oo2: n,
       independentPfd: n,
       commonCausePfd: n,
-      commonCauseShare: nullableNumber,
+      commonCauseShare: nullableFraction,
       pfh1oo2PerHour: n,
       commonCausePfhPerHour: n,
       improvementFactor: nullableNumber,
       improvementFactorWithoutCommonCause: nullableNumber,
-      betaSensitivity: ["array", { beta: n, betaD: n, pfdAvg1oo2: n, pfh1oo2PerHour: n, improvementFactor: nullableNumber }],
+      betaSensitivity: ["array", { beta: f, betaD: f, pfdAvg1oo2: n, pfh1oo2PerHour: n, improvementFactor: nullableNumber }],
       proofTest: proofTestShape,
       notes: strings,
     },
@@ -135,8 +137,8 @@ const safetyReportShape: _Shape = {
     {
       channelName: "string",
       pairName: ["nullable", "string"],
-      beta: nullableNumber,
-      betaD: nullableNumber,
+      beta: nullableFraction,
+      betaD: nullableFraction,
       points: ["array", { proofTestIntervalHours: "positive", pfdAvg1oo1: n, pfdAvg1oo2: nullableNumber }],
     },
   ],

@@ -19,7 +19,7 @@ describe("entry guards (typed errors, never a hang)", () => {
     expect(call).toThrow(HotjunctionTypeError);
     expect(call).toThrow("pfdAvgChartSvg: input.curves[0].points[1].proofTestIntervalHours null is not a finite number > 0");
     expect(() => pfdAvgChartSvg({ ...chart, curves: [] })).toThrow("input.curves an array of length 0 is empty");
-    expect(() => pfdAvgChartSvg({ ...chart, curves: [{ ...curve, beta: {} }] } as never)).toThrow("input.curves[0].beta a value of type object is not a finite number or null");
+    expect(() => pfdAvgChartSvg({ ...chart, curves: [{ ...curve, beta: {} }] } as never)).toThrow("input.curves[0].beta a value of type object is not a number from 0 to 1 or null");
   });
 
   it("pfdAvgChartSvg draws intervals near the float64 limit without a hang or NaN", () => {

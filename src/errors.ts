@@ -462,3 +462,73 @@ export function _requireWorkWithin(factors: Readonly<Record<string, number>>, li
     });
   }
 }
+
+/**
+ * The shape a formatter expects of a result object it is given (a report, a review, a curve): `"number"` a finite
+ * number, `"positive"` a finite number > 0, `"fraction"` a number in [0, 1], `"string"`, `"boolean"`, `"any"` (not checked), `["array", shape]`
+ * an array of that shape, `["optional", shape]` undefined or that shape, `["nullable", shape]` null or that shape,
+ * `["oneOf", [choices]]` one of those strings, or an object literal: a plain object whose listed keys have those shapes (other keys are not checked).
+ * @internal
+ */
+export type _Shape =
+  | "number"
+  | "positive"
+  | "fraction"
+  | "string"
+  | "boolean"
+  | "any"
+  | readonly ["array" | "optional" | "nullable", _Shape]
+  | readonly ["oneOf", readonly string[]]
+  | { readonly [key: string]: _Shape };
+
+function shapeWords(shape: _Shape): string {
+  if (typeof shape === "string") return shape === "number" ? "a finite number" : shape === "positive" ? "a finite number > 0" : shape === "fraction" ? "a number from 0 to 1" : `a ${shape}`;
+  if (Array.isArray(shape) && shape[0] === "oneOf") return `one of ${(shape[1] as string[]).join(", ")}`;
+  if (Array.isArray(shape)) return shape[0] === "array" ? "an array" : `${shapeWords(shape[1] as _Shape)}${shape[0] === "optional" ? " or undefined" : " or null"}`;
+  return "an object";
+}
+
+/**
+ * Throws a {@link HotjunctionTypeError} (`INVALID_OPTION`) naming the field (`quantity.path[0].key`), the expected
+ * kind and the value found, unless `value` has `shape`: the one guard at the entry of every formatter, so a forged
+ * or truncated result object is refused before it reaches a loop, a log scale or a string (no NaN, no hang).
+ * @internal
+ */
+export function _requireShape(value: unknown, shape: _Shape, quantity: string, context?: string): void {
+  const fail = (): never => {
+    throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity, value, context, problem: `is not ${shapeWords(shape)}` });
+  };
+  if (typeof shape === "string") {
+    if (shape === "any") return;
+    if (shape === "number" || shape === "positive" || shape === "fraction") {
+      if (typeof value !== "number" || !Number.isFinite(value) || (shape === "positive" && !(value > 0)) || (shape === "fraction" && !(value >= 0 && value <= 1))) fail();
+    } else if (typeof value !== shape) fail();
+    return;
+  }
+  if (Array.isArray(shape)) {
+    const [kind, inner] = shape as readonly [string, _Shape];
+    if (kind === "oneOf") {
+      if (!(inner as readonly unknown[]).includes(value)) fail();
+      return;
+    }
+    if (kind === "optional" && value === undefined) return;
+    if (kind === "nullable" && value === null) return;
+    if (kind !== "array") {
+      // a leaf names the whole expectation ("a finite number or null"); a nested shape names the field that fails
+      if (typeof inner === "string" && inner !== "any") {
+        try {
+          _requireShape(value, inner, quantity, context);
+        } catch {
+          fail();
+        }
+        return;
+      }
+      return _requireShape(value, inner, quantity, context);
+    }
+    if (!Array.isArray(value)) return fail();
+    for (let i = 0; i < value.length; i++) _requireShape(value[i], inner, `${quantity}[${i}]`, context);
+    return;
+  }
+  if (typeof value !== "object" || value === null || Array.isArray(value)) return fail();
+  for (const key of Object.keys(shape)) _requireShape((value as Record<string, unknown>)[key], (shape as Record<string, _Shape>)[key]!, `${quantity}.${key}`, context);
+}

@@ -4,7 +4,7 @@
  * @module
  * @internal
  */
-import { _invalidChoice } from "../errors.js";
+import { _invalidChoice, _requireShape, type _Shape } from "../errors.js";
 import type { _AlternativeResult, _Classification } from "./_faultClassification.js";
 import type { Fault, FaultCategory, FaultCategoryCounts, FaultDetectionMethod, FaultReview, FaultReviewReport } from "./types.js";
 
@@ -47,10 +47,58 @@ export function _bandLine(review: FaultReview): string {
   return `${judged}; a shift above ${review.noEffectThresholdC ?? 3} °C inside the limits is degraded, below it no effect.`;
 }
 
-/** @internal Checks that a value looks like a report (has a reviews array). */
+const countsShape: _Shape = {
+  safeDetected: "number",
+  safeUndetected: "number",
+  dangerousDetected: "number",
+  dangerousUndetected: "number",
+  degraded: "number",
+  noEffect: "number",
+  total: "number",
+};
+const strings: _Shape = ["array", "string"];
+
+/** What the renderers read of a fault review report (checked at their entry, {@link _checkReport}). */
+const reportShape: _Shape = {
+  name: ["optional", "string"],
+  scope: "string",
+  caution: "string",
+  counts: countsShape,
+  reviews: [
+    "array",
+    {
+      name: "string",
+      healthyTripC: "number",
+      maxNormalOperatingC: "number",
+      hazardLimitC: "number",
+      healthyBandC: ["optional", { lowC: "number", highC: "number" }],
+      noEffectThresholdC: ["optional", "number"],
+      counts: countsShape,
+      notes: strings,
+      rows: [
+        "array",
+        {
+          faultId: "string",
+          element: "string",
+          description: "string",
+          effectText: "string",
+          detectionText: "string",
+          category: ["oneOf", ["safe-detected", "safe-undetected", "dangerous-detected", "dangerous-undetected", "degraded", "no-effect"]],
+          tripC: ["nullable", "number"],
+          shiftC: ["nullable", "number"],
+          marginC: ["nullable", "number"],
+          mitigations: strings,
+        },
+      ],
+    },
+  ],
+};
+
+/** @internal Checks that a value is a fault review report, field by field (the shared shape guard). */
 export function _checkReport(report: unknown, context: string): FaultReviewReport {
   const ok = typeof report === "object" && report !== null && Array.isArray((report as { reviews?: unknown }).reviews);
   if (!ok) _invalidChoice("report", report, ["a fault review report"], context);
+  _requireShape(report, reportShape, "report", context);
   return report as FaultReviewReport;
 }
 

@@ -6,6 +6,7 @@ import { HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 import type { FirmwareTable } from "./types.js";
 import { firmwareTableCaution } from "./firmwareCaution.js";
 import { _numberTypeInfo, type FirmwareNumberType } from "./firmwareNumberType.js";
+import { _checkFirmwareTable } from "./_firmwareTableShape.js";
 
 /** Options of {@link formatFirmwareTableC}. */
 export interface FormatFirmwareTableCOptions {
@@ -274,6 +275,7 @@ function lookupRoutine(
  * ```
  */
 export function formatFirmwareTableC(table: FirmwareTable, options?: FormatFirmwareTableCOptions): string {
+  _checkFirmwareTable(table, "formatFirmwareTableC");
   const prefix = _checkPrefix(options?.prefix ?? "tc_table");
   const macro = prefix.toUpperCase();
   const inInfo = _numberTypeInfo(table.input.numberType, "input number type");

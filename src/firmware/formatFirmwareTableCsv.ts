@@ -3,6 +3,8 @@
  * @module
  */
 import type { FirmwareTable } from "./types.js";
+import { _requireFiniteResult } from "../errors.js";
+import { _checkFirmwareTable } from "./_firmwareTableShape.js";
 
 const UNIT_WORD: Record<string, string> = { "µV": "microvolts", "°C": "celsius", code: "codes" };
 
@@ -21,13 +23,17 @@ const UNIT_WORD: Record<string, string> = { "µV": "microvolts", "°C": "celsius
  * ```
  */
 export function formatFirmwareTableCsv(table: FirmwareTable): string {
+  const context = "formatFirmwareTableCsv";
+  _checkFirmwareTable(table, context);
   const inWord = UNIT_WORD[table.input.unit] ?? "value";
   const outWord = UNIT_WORD[table.output.unit] ?? "value";
   const rows = [`index,input_stored,output_stored,input_${inWord},output_${outWord}`];
   for (let i = 0; i < table.inputs.length; i++) {
     const x = table.inputs[i] as number;
     const y = table.outputs[i] as number;
-    rows.push(`${i},${x},${y},${x / table.input.scale},${y / table.output.scale}`);
+    const xValue = _requireFiniteResult(x / table.input.scale, `table.inputs[${i}] / table.input.scale`, x, undefined, context);
+    const yValue = _requireFiniteResult(y / table.output.scale, `table.outputs[${i}] / table.output.scale`, y, undefined, context);
+    rows.push(`${i},${x},${y},${xValue},${yValue}`);
   }
   return rows.join("\n") + "\n";
 }

@@ -4,6 +4,7 @@
  */
 import type { FirmwareTable } from "./types.js";
 import { firmwareTableCaution } from "./firmwareCaution.js";
+import { _checkFirmwareTable } from "./_firmwareTableShape.js";
 
 /** Value of the `format` key of emitted JSON tables. */
 export const firmwareTableJsonFormat = "hotjunction-firmware-table";
@@ -26,6 +27,7 @@ export const firmwareTableJsonFormat = "hotjunction-firmware-table";
  * ```
  */
 export function formatFirmwareTableJson(table: FirmwareTable): string {
+  _checkFirmwareTable(table, "formatFirmwareTableJson");
   const entries: [string, unknown][] = [
     ["format", firmwareTableJsonFormat],
     ["formatVersion", 1],

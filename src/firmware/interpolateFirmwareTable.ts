@@ -5,6 +5,7 @@
 import { _requireFinite, HotjunctionRangeError } from "../errors.js";
 import { _numberTypeInfo, type _NumberTypeInfo } from "./firmwareNumberType.js";
 import type { _InterpolationData, FirmwareTable } from "./types.js";
+import { _checkFirmwareTable } from "./_firmwareTableShape.js";
 
 export type { _InterpolationData } from "./types.js";
 
@@ -82,6 +83,7 @@ export function _interpolateStored(data: _InterpolationData, outInfo: _NumberTyp
 export function interpolateFirmwareTable(table: FirmwareTable, inputStored: number): number {
   let prepared = PREPARED.get(table);
   if (prepared === undefined) {
+    _checkFirmwareTable(table, "interpolateFirmwareTable");
     prepared = prepare(table);
     PREPARED.set(table, prepared);
   }

@@ -4,7 +4,7 @@
  * @module
  */
 import { Decimal } from "decimal.js";
-import { _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireShape, HotjunctionRangeError, type _Shape } from "../errors.js";
 import type { ThermocoupleTypeInput } from "./convert.js";
 import { _decimalContext, _emfDecimal } from "./exactDecimal.js";
 import { thermocoupleData } from "./resolveType.js";
@@ -41,6 +41,9 @@ export interface ReferenceTable {
 
 /** Most rows one table may hold. */
 export const referenceTableMaxRows = 200_000;
+
+/** What the formatters read of a table (checked at their entry with the shared shape guard). */
+const referenceTableShape: _Shape = { type: "string", source: "string", rows: ["array", { temperatureC: "number", emfText: "string" }] };
 
 /**
  * Generates a reference table of E(t) for any type, range and step, rounded half away from zero to
@@ -130,6 +133,7 @@ export function referenceTable(type: ThermocoupleTypeInput, options: ReferenceTa
  * ```
  */
 export function formatReferenceTableCsv(table: ReferenceTable): string {
+  _requireShape(table, referenceTableShape, "table", "formatReferenceTableCsv");
   let text = "temperature_C,emf_mV\n";
   for (const row of table.rows) text += `${row.temperatureC},${row.emfText}\n`;
   return text;
@@ -147,6 +151,7 @@ export function formatReferenceTableCsv(table: ReferenceTable): string {
  * ```
  */
 export function formatReferenceTableMarkdown(table: ReferenceTable): string {
+  _requireShape(table, referenceTableShape, "table", "formatReferenceTableMarkdown");
   const lines = [
     `Type ${table.type} thermocouple, EMF with the reference junction at 0 °C (ITS-90)`,
     "",

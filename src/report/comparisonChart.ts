@@ -6,12 +6,13 @@
  * the one band-panel drawing the trip chart uses.
  * @module
  */
-import { _invalidChoice } from "../errors.js";
 import type { ReferenceComparison } from "../trip/types.js";
 import { _bandPanelChartSvg } from "./bandPanelChart.js";
 import { _displayOf, type ReportDisplayOptions } from "./displayUnit.js";
 import { _describeMethods, _fixed, _methodShortName } from "./formatting.js";
 import type { ReportMethodInfo } from "./reportTypes.js";
+import { _invalidChoice, _requireShape } from "../errors.js";
+import { _comparisonShape, _methodInfoShape } from "./_reportShapes.js";
 
 /** The input of {@link comparisonChartSvg}: what `compare` computed and how. */
 export interface ComparisonChartInput {
@@ -52,6 +53,7 @@ const failFill = "url(#hj-cross)";
  * ```
  */
 export function comparisonChartSvg(input: ComparisonChartInput, options?: ReportDisplayOptions): string {
+  _requireShape(input, { comparison: _comparisonShape, methods: _methodInfoShape, designName: ["optional", "string"], setpoints: ["array", { name: "string", tripTemperatureC: "number", maxNormalOperatingC: "number", hazardLimitC: "number" }] }, "input", "comparisonChartSvg");
   const display = _displayOf(options);
   const { comparison } = input;
   const names = comparison.options[0]?.setpoints.map((s) => s.name) ?? input.setpoints.map((s) => s.name);

@@ -13,6 +13,8 @@ import type { ErrorSweep } from "./reportTypes.js";
 import { _bottomAxis, _element, _escapeXml, _leftAxis, _methodFill, _splitCaution, _svgDocument, _text } from "./svg.js";
 import { _wrapWords } from "../textWrap.js";
 import { _propagationMethods } from "../uncertainty/types.js";
+import { _requireShape } from "../errors.js";
+import { _errorSweepShape } from "./_reportShapes.js";
 
 /**
  * Draws an error sweep as an SVG document (text).
@@ -29,6 +31,7 @@ import { _propagationMethods } from "../uncertainty/types.js";
  * ```
  */
 export function errorBandChartSvg(sweep: ErrorSweep, options?: ReportDisplayOptions): string {
+  _requireShape(sweep, _errorSweepShape, "sweep", "errorBandChartSvg");
   const display = _displayOf(options);
   const width = 900;
   const height = 560;

@@ -8,6 +8,16 @@
 import type { ChainEvaluation } from "../chain/types.js";
 import type { TripBand } from "../trip/types.js";
 import type { ReportMethodInfo, TripReport, TripReportSetpoint } from "./reportTypes.js";
+import { _requireFiniteResult, _requireShape, HotjunctionRangeError, type _Shape } from "../errors.js";
+import { _methodInfoShape } from "./_reportShapes.js";
+
+/** What {@link firmwareTripReport} reads of a chain evaluation (checked at its entry). */
+const evaluationShape: _Shape = {
+  hotJunctionC: "number",
+  indicatedC: "number",
+  bounds: ["array", { method: ["oneOf", ["worst-case", "rss", "monte-carlo"]], errorLowC: "number", errorHighC: "number", coverage: "number", standardUncertaintyC: "number" }],
+  contributions: ["array", { source: "string", description: "string", worstCaseSwingC: "number", standardUncertaintyC: "number" }],
+};
 
 /** A setpoint of a firmware-trip design. */
 export interface FirmwareTripSetpoint {
@@ -42,10 +52,23 @@ export function firmwareTripReport(
   methods: ReportMethodInfo,
   details: readonly string[] = [],
 ): TripReport {
+  const context = "firmwareTripReport";
+  _requireShape(setpoints, ["array", { name: "string", tripTemperatureC: "number", maxNormalOperatingC: "number", hazardLimitC: "number" }], "setpoints", context);
+  _requireShape(evaluations, ["array", evaluationShape], "evaluations", context);
+  _requireShape(methods, _methodInfoShape, "methods", context);
+  _requireShape(details, ["array", "string"], "details", context);
   const acceptance = methods.acceptanceMethod ?? "worst-case";
   const rows: TripReportSetpoint[] = setpoints.map((s, i) => {
     const evaluation = evaluations[i];
-    if (evaluation === undefined) throw new Error(`no chain evaluation for setpoint ${s.name}`);
+    if (evaluation === undefined || evaluation.bounds.length === 0) {
+      throw new HotjunctionRangeError({
+        code: "INVALID_OPTION",
+        quantity: `evaluations[${i}]`,
+        value: evaluation,
+        context,
+        problem: `is missing or has no bounds: setpoint ${JSON.stringify(s.name)} needs a chain evaluation with at least one band`,
+      });
+    }
     const bands: TripBand[] = evaluation.bounds.map((b) => ({
       method: b.method,
       lowC: s.tripTemperatureC - b.errorHighC,
@@ -55,9 +78,13 @@ export function firmwareTripReport(
       ...(b.method === "monte-carlo" && methods.trials !== undefined ? { trials: methods.trials } : {}),
       ...(b.method === "monte-carlo" && methods.seed !== undefined ? { seed: methods.seed } : {}),
     }));
-    const judged = bands.find((b) => b.method === acceptance) ?? bands[0];
-    const marginToNormalC = judged === undefined ? Number.NaN : judged.lowC - s.maxNormalOperatingC;
-    const marginToHazardC = judged === undefined ? Number.NaN : s.hazardLimitC - judged.highC;
+    for (const [k, b] of bands.entries()) {
+      _requireFiniteResult(b.lowC, `evaluations[${i}].bounds[${k}].errorHighC`, evaluation.bounds[k]!.errorHighC, "°C", context);
+      _requireFiniteResult(b.highC, `evaluations[${i}].bounds[${k}].errorLowC`, evaluation.bounds[k]!.errorLowC, "°C", context);
+    }
+    const judged = bands.find((b) => b.method === acceptance) ?? bands[0]!;
+    const marginToNormalC = _requireFiniteResult(judged.lowC - s.maxNormalOperatingC, `setpoints[${i}].maxNormalOperatingC`, s.maxNormalOperatingC, "°C", context);
+    const marginToHazardC = _requireFiniteResult(s.hazardLimitC - judged.highC, `setpoints[${i}].hazardLimitC`, s.hazardLimitC, "°C", context);
     const pass = marginToNormalC > 0 && marginToHazardC > 0;
     const reason = pass
       ? `the ${acceptance} band lies above the highest normal operating temperature and below the hazard limit`
@@ -67,7 +94,7 @@ export function firmwareTripReport(
     return {
       name: s.name,
       tripTemperatureC: s.tripTemperatureC,
-      nominalTripC: s.tripTemperatureC - (evaluation.indicatedC - evaluation.hotJunctionC),
+      nominalTripC: _requireFiniteResult(s.tripTemperatureC - (evaluation.indicatedC - evaluation.hotJunctionC), `evaluations[${i}].indicatedC`, evaluation.indicatedC, "°C", context),
       bands,
       maxNormalOperatingC: s.maxNormalOperatingC,
       hazardLimitC: s.hazardLimitC,

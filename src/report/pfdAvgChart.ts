@@ -8,6 +8,7 @@ import { line } from "d3-shape";
 import type { PfdAvgCurve } from "../safety/types.js";
 import { _element, _splitCaution, _svgDocument, _text } from "./svg.js";
 import { _wrapWords } from "../textWrap.js";
+import { _requireShape, HotjunctionRangeError, type _Shape } from "../errors.js";
 
 /** Input of {@link pfdAvgChartSvg}. */
 export interface PfdAvgChartInput {
@@ -20,10 +21,21 @@ export interface PfdAvgChartInput {
   readonly scope: string;
 }
 
+/** What {@link pfdAvgChartSvg} reads of its input (checked at its entry; a log axis needs intervals > 0). */
+const pfdAvgChartInputShape: _Shape = {
+  title: "string",
+  scope: "string",
+  statedIntervalHours: ["optional", "number"],
+  curves: ["array", { channelName: "string", pairName: ["nullable", "string"], beta: ["nullable", "fraction"], points: ["array", { proofTestIntervalHours: "positive", pfdAvg1oo1: "number", pfdAvg1oo2: ["nullable", "number"] }] }],
+};
+
 function decadeTicks(scale: ScaleLogarithmic<number, number>): number[] {
   const [a, b] = scale.domain() as [number, number];
   const ticks: number[] = [];
-  for (let e = Math.floor(Math.log10(a)); e <= Math.ceil(Math.log10(b)); e++) {
+  const last = Math.ceil(Math.log10(b));
+  // a domain past the float64 range (an interval near 1e308 widened tenfold) has no decades to draw
+  if (!Number.isFinite(last) || !Number.isFinite(Math.log10(a))) return ticks;
+  for (let e = Math.floor(Math.log10(a)); e <= last; e++) {
     const t = 10 ** e;
     if (t >= a * (1 - 1e-12) && t <= b * (1 + 1e-12)) ticks.push(t);
   }
@@ -53,6 +65,15 @@ function powerLabel(t: number): string {
  * ```
  */
 export function pfdAvgChartSvg(input: PfdAvgChartInput): string {
+  _requireShape(input, pfdAvgChartInputShape, "input", "pfdAvgChartSvg");
+  input.curves.forEach((c, i) => {
+    if (c.points.length < 2) {
+      throw new HotjunctionRangeError({ code: "INVALID_OPTION", quantity: `input.curves[${i}].points`, value: c.points, context: "pfdAvgChartSvg", problem: "has fewer than two points" });
+    }
+  });
+  if (input.curves.length === 0) {
+    throw new HotjunctionRangeError({ code: "INVALID_OPTION", quantity: "input.curves", value: input.curves, context: "pfdAvgChartSvg", problem: "is empty" });
+  }
   const width = 980;
   const height = 600;
   const margin = { left: 90, right: 300, top: 50, bottom: 170 };

@@ -9,6 +9,8 @@ import { _cautionLine, _csv, _describeMethods, _fixed, _markdownTable, _signed, 
 import type { ReportFormat, ReportMethodInfo } from "./reportTypes.js";
 import { _sentenceInUnit } from "../faults/_faultReviewWords.js";
 import { _csvUnitLine, _displayOf, _jsonUnitField, type ReportDisplayOptions, type _TemperatureDisplay } from "./displayUnit.js";
+import { _requireShape } from "../errors.js";
+import { _comparisonShape, _methodInfoShape } from "./_reportShapes.js";
 
 function rows(comparison: ReferenceComparison, d: _TemperatureDisplay): string[][] {
   const u = d.symbol;
@@ -61,6 +63,9 @@ export function formatComparisonReport(
   designName?: string,
   options?: ReportDisplayOptions,
 ): string {
+  _requireShape(comparison, _comparisonShape, "comparison", "formatComparisonReport");
+  _requireShape(methods, _methodInfoShape, "methods", "formatComparisonReport");
+  _requireShape(designName, ["optional", "string"], "designName", "formatComparisonReport");
   const d = _displayOf(options);
   const x = d.csvSuffix;
   const info: ReportMethodInfo = { ...methods, acceptanceMethod: comparison.acceptanceMethod };

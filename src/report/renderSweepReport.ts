@@ -7,6 +7,8 @@ import { _cautionLine, _csv, _describeMethods, _fixed, _markdownTable, _methodSh
 import type { ErrorSweep, ReportFormat } from "./reportTypes.js";
 import { _sentenceInUnit } from "../faults/_faultReviewWords.js";
 import { _csvUnitLine, _displayOf, _jsonUnitField, type ReportDisplayOptions, type _TemperatureDisplay } from "./displayUnit.js";
+import { _requireShape } from "../errors.js";
+import { _errorSweepShape } from "./_reportShapes.js";
 
 function rows(sweep: ErrorSweep, d: _TemperatureDisplay): string[][] {
   const methods = sweep.rows[0]?.bands.map((b) => b.method) ?? [];
@@ -49,6 +51,7 @@ function setpointLines(sweep: ErrorSweep, d: _TemperatureDisplay): string[] {
  * ```
  */
 export function formatSweepReport(sweep: ErrorSweep, format: ReportFormat, options?: ReportDisplayOptions): string {
+  _requireShape(sweep, _errorSweepShape, "sweep", "formatSweepReport");
   const d = _displayOf(options);
   const x = d.csvSuffix;
   const heading = `${sweep.title}${sweep.designName !== undefined ? `: ${sweep.designName}` : ""}`;

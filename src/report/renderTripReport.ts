@@ -20,6 +20,8 @@ import type { ReportFormat, ReportMethodInfo, TripReport, TripReportSetpoint } f
 import { _sentenceInUnit } from "../faults/_faultReviewWords.js";
 import { _csvUnitLine, _displayOf, _jsonUnitField, type ReportDisplayOptions, type _TemperatureDisplay } from "./displayUnit.js";
 import { _dynamicsCsv, _dynamicsMarkdownLines, _dynamicsTextLines } from "./runawayReport.js";
+import { _requireShape } from "../errors.js";
+import { _tripReportShape } from "./_reportShapes.js";
 
 function formatOhms(ohms: number): string {
   if (ohms >= 1e6) return `${+(ohms / 1e6).toPrecision(4)} MΩ`;
@@ -398,6 +400,7 @@ function renderCsv(report: TripReport, d: _TemperatureDisplay): string {
  */
 export function formatTripReport(report: TripReport, format: ReportFormat, options?: ReportDisplayOptions): string {
   // Deliberately alike: every format… entry switches on the format to its own renderers (formatFaultReview too).
+  _requireShape(report, _tripReportShape, "report", "formatTripReport");
   const d = _displayOf(options);
   switch (format) {
     case "markdown":

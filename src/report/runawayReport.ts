@@ -9,6 +9,7 @@ import { CAUTION_TEXT } from "./caution.js";
 import { _cautionLine, _csv, _fixed, _markdownTable, _signed, _textTable } from "./formatting.js";
 import type { ReportFormat, TripReportDynamics } from "./reportTypes.js";
 import { _csvUnitLine, _displayOf, _jsonUnitField, type ReportDisplayOptions, type _TemperatureDisplay } from "./displayUnit.js";
+import { _requireShape } from "../errors.js";
 
 const celsius = /* @__PURE__ */ _displayOf(undefined);
 
@@ -154,6 +155,13 @@ export function _dynamicsCsv(dyn: TripReportDynamics, d: _TemperatureDisplay = c
  * ```
  */
 export function formatRunawayReport(report: RunawayReport, format: ReportFormat, options?: ReportDisplayOptions): string {
+  // the top level of the report (the per-setpoint cases are not shape-checked yet)
+  _requireShape(
+    report,
+    { title: "string", designName: ["optional", "string"], details: ["array", "string"], dynamics: { pass: "boolean", assumptions: ["array", "string"], setpoints: ["array", { cases: ["array", {}] }] } },
+    "report",
+    "formatRunawayReport",
+  );
   const name = report.designName !== undefined ? `: ${report.designName}` : "";
   const d = _displayOf(options);
   switch (format) {

@@ -10,6 +10,8 @@ import { _displayOf, type ReportDisplayOptions } from "./displayUnit.js";
 import { _describeMethods, _fixed, _methodShortName } from "./formatting.js";
 import type { TripReport } from "./reportTypes.js";
 import { _methodFill } from "./svg.js";
+import { _requireShape } from "../errors.js";
+import { _tripReportShape } from "./_reportShapes.js";
 
 /**
  * Draws the trip bands of a trip report as an SVG document (text).
@@ -28,6 +30,7 @@ import { _methodFill } from "./svg.js";
  * ```
  */
 export function tripBandChartSvg(report: TripReport, options?: ReportDisplayOptions): string {
+  _requireShape(report, _tripReportShape, "report", "tripBandChartSvg");
   const display = _displayOf(options);
   const methods = report.setpoints[0]?.bands.map((b) => b.method) ?? [];
   return _bandPanelChartSvg({

@@ -3,7 +3,7 @@
  * @module
  * @internal
  */
-import { _invalidChoice } from "../errors.js";
+import { _invalidChoice, _requireShape, type _Shape } from "../errors.js";
 import type { SafetyFiguresReport, SetpointSafetyFigures, TwoChannelCutout } from "./types.js";
 
 /** @internal A rate in FIT, 4 significant digits. */
@@ -74,10 +74,81 @@ export function _pairEntries(t: TwoChannelCutout): [string, string][] {
   ];
 }
 
-/** @internal Checks that a value looks like a safety-figures report. */
+const n: _Shape = "number";
+const nullableNumber: _Shape = ["nullable", "number"];
+const strings: _Shape = ["array", "string"];
+const f: _Shape = "fraction";
+const nullableFraction: _Shape = ["nullable", "fraction"];
+const proofTestShape: _Shape = { proofTestIntervalHours: n, meanTimeToRestorationHours: n, meanRepairTimeHours: n, proofTestCoverage: f, missionTimeHours: nullableNumber };
+const channelShape: _Shape = { name: "string", lambdaDuFit: n, lambdaDdFit: n, pfdAvg1oo1: n, pfh1oo1PerHour: n };
+
+/** What the renderers read of a safety-figures report (checked at their entry, {@link _checkSafetyReport}). */
+const safetyReportShape: _Shape = {
+  name: ["optional", "string"],
+  scope: "string",
+  certification: "string",
+  caution: "string",
+  setpoints: [
+    "array",
+    {
+      name: "string",
+      lambdaSdFit: n,
+      lambdaSuFit: n,
+      lambdaDdFit: n,
+      lambdaDuFit: n,
+      lambdaSafeFit: n,
+      lambdaDangerousFit: n,
+      lambdaDegradedFit: n,
+      lambdaNoEffectFit: n,
+      lambdaTotalFit: n,
+      safeFailureFraction: nullableFraction,
+      diagnosticCoverage: nullableFraction,
+      proofTestCoverage: nullableFraction,
+      noEffectThresholdC: nullableNumber,
+      modes: ["array", { element: "string", mode: "string", faultId: ["nullable", "string"], share: f, rateFit: n, counted: "string" }],
+      unratedFaultIds: strings,
+      pfdAvg1oo1: ["nullable", { pfdAvg: n, channelDownTimeHours: nullableNumber, lambdaDuFit: n, lambdaDdFit: n, proofTest: proofTestShape }],
+      pfh1oo1: ["nullable", { pfhPerHour: n, pfhFit: n, commonCausePfhPerHour: n }],
+      notes: strings,
+    },
+  ],
+  twoChannel: [
+    "array",
+    {
+      channelA: channelShape,
+      channelB: channelShape,
+      beta: f,
+      betaD: f,
+      pfdAvg1oo2: n,
+      independentPfd: n,
+      commonCausePfd: n,
+      commonCauseShare: nullableFraction,
+      pfh1oo2PerHour: n,
+      commonCausePfhPerHour: n,
+      improvementFactor: nullableNumber,
+      improvementFactorWithoutCommonCause: nullableNumber,
+      betaSensitivity: ["array", { beta: f, betaD: f, pfdAvg1oo2: n, pfh1oo2PerHour: n, improvementFactor: nullableNumber }],
+      proofTest: proofTestShape,
+      notes: strings,
+    },
+  ],
+  curves: [
+    "array",
+    {
+      channelName: "string",
+      pairName: ["nullable", "string"],
+      beta: nullableFraction,
+      betaD: nullableFraction,
+      points: ["array", { proofTestIntervalHours: "positive", pfdAvg1oo1: n, pfdAvg1oo2: nullableNumber }],
+    },
+  ],
+};
+
+/** @internal Checks that a value is a safety-figures report, field by field (the shared shape guard). */
 export function _checkSafetyReport(report: unknown, context: string): SafetyFiguresReport {
   const r = report as Partial<SafetyFiguresReport> | null;
   const ok = typeof r === "object" && r !== null && Array.isArray(r.setpoints) && Array.isArray(r.twoChannel) && Array.isArray(r.curves);
   if (!ok) _invalidChoice("report", report, ["a safety-figures report"], context);
+  _requireShape(report, safetyReportShape, "report", context);
   return report as SafetyFiguresReport;
 }

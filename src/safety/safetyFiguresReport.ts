@@ -3,7 +3,8 @@
  * no-certification statement and the safety caution.
  * @module
  */
-import { _invalidChoice } from "../errors.js";
+import { _invalidChoice, _requireOptionsObject } from "../errors.js";
+import { _checkSafetyReport } from "./_safetyWords.js";
 import { CAUTION_TEXT } from "../caution.js";
 import type { PfdAvgCurve, SafetyFiguresReport, SetpointSafetyFigures, TwoChannelCutout } from "./types.js";
 
@@ -57,11 +58,13 @@ export interface SafetyFiguresReportInput {
  */
 export function safetyFiguresReport(input: SafetyFiguresReportInput = {}): SafetyFiguresReport {
   const context = "safetyFiguresReport";
+  _requireOptionsObject(input, context, false);
   for (const key of ["setpoints", "twoChannel", "curves"] as const) {
     const v = input[key];
     if (v !== undefined && !Array.isArray(v)) _invalidChoice(key, v, ["an array"], context);
   }
-  return {
+  // the parts are checked as the renderers will read them (one shape guard), so a forged part is refused here
+  return _checkSafetyReport({
     ...(input.name !== undefined ? { name: input.name } : {}),
     setpoints: input.setpoints ?? [],
     twoChannel: input.twoChannel ?? [],
@@ -69,5 +72,5 @@ export function safetyFiguresReport(input: SafetyFiguresReportInput = {}): Safet
     scope: safetyFiguresScope,
     certification: safetyFiguresCertification,
     caution: CAUTION_TEXT,
-  };
+  }, context);
 }

@@ -3,7 +3,7 @@
  * naming the path.
  * @module
  */
-import { HotjunctionRangeError, HotjunctionTypeError, isHotjunctionError, type HotjunctionError } from "../errors.js";
+import { _requireOptionsObject, _requireShape, HotjunctionRangeError, HotjunctionTypeError, isHotjunctionError, type HotjunctionError } from "../errors.js";
 import { _checkNumber, _maxRateFit } from "./_safetyChecks.js";
 import type { FailureData } from "./types.js";
 
@@ -34,6 +34,8 @@ function typeError(path: string, value: unknown, problem: string): HotjunctionTy
 }
 
 function collect(data: unknown, options: ValidateFailureDataOptions): HotjunctionError[] {
+  _requireOptionsObject(options, "failure data", false);
+  _requireShape(options, { path: ["optional", "string"], faultIds: ["optional", ["array", "string"]] }, "options", "failure data");
   const root = options.path ?? "failureData";
   const known = options.faultIds === undefined ? undefined : new Set(options.faultIds);
   const problems: HotjunctionError[] = [];

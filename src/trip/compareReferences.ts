@@ -2,7 +2,7 @@
  * The same trip design evaluated with several reference options side by side.
  * @module
  */
-import { _requireFinite, _requireOptionsObject, _requireWorkWithin, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireObject, _requireOptionsObject, _requireWorkWithin, HotjunctionRangeError } from "../errors.js";
 import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
 import { designTrip, type DesignTripOptions } from "./designTrip.js";
 import type {
@@ -81,7 +81,8 @@ export function compareReferences(
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "reference options", value: referenceOptions, context, problem: "must be a non-empty array" });
   }
   const names = new Set<string>();
-  for (const option of referenceOptions) {
+  for (const [k, option] of referenceOptions.entries()) {
+    _requireObject(option, `reference options[${k}]`, context);
     if (names.has(option?.name)) {
       throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "reference option name", value: option.name, context, problem: "appears twice" });
     }

@@ -25,8 +25,10 @@ export interface ContractSettings {
   readonly seed: number;
   /** Generated tuples of hostile values per export. */
   readonly tuplesPerExport: number;
-  /** Time budget of the perturbed calls of one export, ms (heavier exports get a seeded subset). */
+  /** Time budget of the generated and perturbed calls of one export, ms (heavier exports get a seeded subset). */
   readonly budgetPerExportMs: number;
+  /** Calls run in each part (generated tuples; perturbations of one example call) whatever the budget. */
+  readonly minCallsPerPart: number;
   /** Documented example calls of one export that are perturbed. */
   readonly basesPerExport: number;
   /** A call that returns (or throws) after more than this is a failure ("slow"). */
@@ -285,10 +287,19 @@ export async function runExport(u: ExportUnderTest, index: number, settings: Con
     const problem = await check(u.fn, args, settings.slowCallMs);
     if (problem !== undefined) failures.push({ target: u.target, where: where(), problem });
   };
+  // One time budget per export, spent cheapest-first: the raw hostile calls always run (they are refused at the
+  // entry), then generated tuples and perturbed example calls while the budget lasts. A cheap export gets many
+  // calls, an expensive one (a trip design, a Monte Carlo run) its example and a few perturbations of it.
+  const deadline = performance.now() + settings.budgetPerExportMs;
   const singles: unknown[][] = [[], ...hostileValues.map((h) => [h.make()])];
   for (const args of singles) await run(args, () => `(${args.map(describeValue).join(", ")})`);
   const tuples = fc.sample(fc.array(hostileArbitrary, { minLength: 1, maxLength: 4 }), { seed: settings.seed + index, numRuns: settings.tuplesPerExport });
-  for (const args of tuples) await run(args, () => `generated tuple ${describeValue(args)}`);
+  // half the budget at most for the tuples, so the perturbed example calls always get their share
+  const tupleDeadline = performance.now() + settings.budgetPerExportMs / 2;
+  for (const [k, args] of tuples.entries()) {
+    if (k >= settings.minCallsPerPart && performance.now() > tupleDeadline) break;
+    await run(args, () => `generated tuple ${describeValue(args)}`);
+  }
 
   const distinct = new Map<string, RecordedCall>();
   for (const c of u.valid) {
@@ -301,11 +312,11 @@ export async function runExport(u: ExportUnderTest, index: number, settings: Con
     if (!distinct.has(key)) distinct.set(key, c);
   }
   const bases = [...distinct.values()].slice(0, settings.basesPerExport);
-  for (const base of bases) {
+  for (const [b, base] of bases.entries()) {
+    // an expensive export stops after the first base that ran out of its budget
+    if (b > 0 && performance.now() > deadline) break;
     const baseArgs = [...base.args];
-    const start = performance.now();
     await run(baseArgs, () => "documented example call");
-    const baseMs = performance.now() - start;
     const candidates: { path: Path; hostile: Hostile | undefined }[] = [];
     for (const path of nodePaths(baseArgs)) {
       for (const hostile of hostileValues) candidates.push({ path, hostile });
@@ -313,9 +324,9 @@ export async function runExport(u: ExportUnderTest, index: number, settings: Con
     }
     // a fixed order (seeded shuffle), truncated by the export's time budget: the same seed tries the same calls first
     const order = fc.sample(fc.shuffledSubarray(candidates, { minLength: candidates.length, maxLength: candidates.length }), { seed: settings.seed + index, numRuns: 1 })[0]!;
-    const deadline = performance.now() + Math.max(settings.budgetPerExportMs / bases.length, baseMs * 40);
+    const baseDeadline = Math.min(deadline, performance.now() + (deadline - performance.now()) / (bases.length - b));
     for (const [k, { path, hostile }] of order.entries()) {
-      if (k >= 40 && performance.now() > deadline) break;
+      if (k >= settings.minCallsPerPart && performance.now() > baseDeadline) break;
       const args = replaceAt(baseArgs, path, hostile === undefined ? deleted : hostile.make());
       await run(args, () => `${pathText(path)} = ${hostile?.label ?? "(deleted)"}`);
     }

@@ -100,8 +100,11 @@ function checkAgeing(element: unknown, context: string): CheckedAgeing {
     { both: "are both given; state the drift one way", missing: "is missing: state a rate per 1,000 h or a total over the service life" },
     context,
   );
+  // the rate is bounded before it is multiplied, so a huge rate is refused by its own name and value
   const totalC = hasRate
-    ? (_optionalLimit(o["driftCPer1000Hours"], "driftCPer1000Hours", "°C", context) * serviceHours) / 1000
+    ? (_requireInRange(_optionalLimit(o["driftCPer1000Hours"], "driftCPer1000Hours", "°C", context), "driftCPer1000Hours", 0, (maxTotalDriftC * 1000) / serviceHours, "°C", context) *
+        serviceHours) /
+      1000
     : _optionalLimit(o["totalDriftC"], "totalDriftC", "°C", context);
   _requireInRange(totalC, hasRate ? "total drift (driftCPer1000Hours × serviceHours / 1000)" : "totalDriftC", 0, maxTotalDriftC, "°C", context);
   return { totalC, serviceHours, statedAtC, direction };

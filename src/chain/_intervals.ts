@@ -4,7 +4,7 @@
  * float64.
  *
  * - Outward rounding: each operation widens the round-to-nearest result by two ulps (`_down`, `_up` of
- *   `firmware/curvatureEnclosure.ts`), so it holds the exact result of the operation on any points of its
+ *   `its90/curvatureEnclosure.ts`), so it holds the exact result of the operation on any points of its
  *   operands and also the float64 result of the same operation on any float64 points of them (rounding to
  *   nearest is monotone). Applied in the order the model computes, the enclosure holds the model as computed.
  * - `_emfOver(ct, t)`: the float64 value Ê(t) = `_emf(ct, t)` for every t in the interval. A point interval
@@ -16,7 +16,7 @@
  * @module
  * @internal
  */
-import { _addInterval as addOutward, _down, _emfEvaluationBound, _encloseEmfDerivative, _mulInterval, _up, type _Interval } from "../firmware/curvatureEnclosure.js";
+import { _addInterval as addOutward, _down, _emfEvaluationBound, _encloseEmfDerivative, _mulInterval, _up, type _Interval } from "../its90/curvatureEnclosure.js";
 import { _emf, _emfInSubrange, type CompiledType } from "../its90/compiled.js";
 
 export type { _Interval };

@@ -43,7 +43,7 @@
  */
 import { _temperatureFromEmf } from "../its90/engine.js";
 import { _emfInSubrange } from "../its90/compiled.js";
-import { _emfEvaluationBound } from "../firmware/curvatureEnclosure.js";
+import { _emfEvaluationBound } from "../its90/curvatureEnclosure.js";
 import {
   _addInterval,
   _divInterval,

@@ -3,7 +3,7 @@
  * function f errs by at most max|f''|·(x−a)(b−x)/2 ≤ max|f''|·h²/8 (the linear interpolation error theorem;
  * any numerical analysis text, from memory); for an integer input only whole x occur, so the factor is
  * ⌊h/2⌋·⌈h/2⌉/2. max|f''| is an interval enclosure with outward rounding over the segment
- * (`curvatureEnclosure.ts`): E''(t) for temperature inputs, t'' = −E''/E'³ for EMF or code inputs.
+ * (`its90/curvatureEnclosure.ts`): E''(t) for temperature inputs, t'' = −E''/E'³ for EMF or code inputs.
  * Where a segment contains a seam between sub-ranges, the jump J of f' there (type N: S jumps by
  * 0.23 µV/°C at 0 °C) adds |J|·(s−a)(b−s)/(b−a), and any jump D of f adds |D|. The float64 error of the
  * reference values at the breakpoints is a separate term of the segment (`referenceError`).

@@ -17,7 +17,7 @@ import {
 } from "../its90/compiled.js";
 import { _exactInverse, _exactInverseTables } from "../its90/exactInverse.js";
 import { thermocoupleData } from "../its90/resolveType.js";
-import { _emfEvaluationBound, _encloseEmfDerivative, _magnitude, type _Interval } from "./curvatureEnclosure.js";
+import { _emfEvaluationBound, _encloseEmfDerivative, _magnitude, type _Interval } from "../its90/curvatureEnclosure.js";
 import { _checkAdcChain, type _CheckedAdcChain } from "./firmwareAdcChain.js";
 
 /**

@@ -1,5 +1,5 @@
 /**
- * The curvature enclosure (interval arithmetic with outward rounding, src/firmware/curvatureEnclosure.ts) is at
+ * The curvature enclosure (interval arithmetic with outward rounding, src/its90/curvatureEnclosure.ts) is at
  * least every sampled value of |f''| (a property over random segments of every type and kind, fast-check,
  * seeded), and tight float64 tables either meet their request or are refused with a typed error: never
  * returned with a bound above the request; every stated bound holds at 40 digits (decimal.js) at the worst points

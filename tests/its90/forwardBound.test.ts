@@ -5,7 +5,7 @@
  * (−270…0 °C), where it is 4.62e-10 and 4.18e-9 mV (stated as 4.7e-10 and 4.2e-9) and the 1e-10 mV is measured only (tests/its90/precision).
  */
 import { describe, expect, it } from "vitest";
-import { _emfEvaluationBound } from "../../src/firmware/curvatureEnclosure.js";
+import { _emfEvaluationBound } from "../../src/its90/curvatureEnclosure.js";
 import { _compile } from "../../src/its90/compiled.js";
 import { thermocoupleData, thermocoupleTypes } from "../../src/its90/resolveType.js";
 

@@ -16,7 +16,7 @@
  * @internal
  * @module
  */
-import type { CompiledSubrange, CompiledType } from "../its90/compiled.js";
+import type { CompiledSubrange, CompiledType } from "./compiled.js";
 
 /** A closed interval [lo, hi]. @internal */
 export type _Interval = readonly [number, number];

@@ -9,9 +9,9 @@ import { build } from "esbuild";
 import { mkdirSync, readFileSync, readdirSync, writeFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { initialDesignMarker } from "../src/workbench/pageFile.js";
+import { initialDesignMarker } from "../src/cli/workbenchPageFile.js";
 
-export { withInitialDesign } from "../src/workbench/pageFile.js";
+export { withInitialDesign } from "../src/cli/workbenchPageFile.js";
 
 const projectDir = join(dirname(fileURLToPath(import.meta.url)), "..");
 

@@ -4,7 +4,7 @@ import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { buildWorkbenchPage } from "../../scripts/buildWorkbench.js";
-import { withInitialDesign } from "../../src/workbench/pageFile.js";
+import { withInitialDesign } from "../../src/cli/workbenchPageFile.js";
 import { projectRoot, run, tempDir } from "../cli/helpers.js";
 
 const builtPage = join(projectRoot, "dist", "workbench.html");

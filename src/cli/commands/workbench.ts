@@ -6,7 +6,7 @@
 import { existsSync, readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import type { Command } from "commander";
-import { withInitialDesign } from "../../workbench/pageFile.js";
+import { withInitialDesign } from "../workbenchPageFile.js";
 import { CliError } from "../cliError.js";
 import { _emitOutputs, _planCommandOutputs } from "../outputOptions.js";
 import { _readInputFile } from "../readInput.js";

@@ -7,7 +7,7 @@
 import { Option, type Command } from "commander";
 import type { CliIo } from "./io.js";
 import type { InputIdentity } from "./readInput.js";
-import { markdownToHtmlDocument } from "../report/markdownHtml.js";
+import { markdownToHtmlDocument } from "./markdownHtml.js";
 import { _planOutputs, _writeOutputs, type PlannedOutput } from "./writeOutput.js";
 
 /** Output formats of a report. `text` is the terminal table (default). */

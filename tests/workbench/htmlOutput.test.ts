@@ -5,7 +5,7 @@ import { readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { CAUTION_TEXT } from "../../src/design/index.js";
-import { markdownToHtml, markdownToHtmlDocument } from "../../src/report/markdownHtml.js";
+import { markdownToHtml, markdownToHtmlDocument } from "../../src/cli/markdownHtml.js";
 import { projectRoot, run, tempDir } from "../cli/helpers.js";
 
 const example = join(projectRoot, "examples", "reflow-oven-trip.json");

@@ -56,3 +56,18 @@ export const chainArb = fc
     return chain as unknown as MeasurementChain;
   });
 
+
+/**
+ * A chain whose trip has an interior extreme in the cold-junction range: hardware compensation at 40.6 µV/°C on
+ * type K over 0 … 60 °C, where S(t) − α changes sign (S_K(0 °C) = 39.45 µV/°C, S_K(60 °C) = 41.4 µV/°C, NIST
+ * SRD 60 type K table slopes).
+ */
+export const interiorExtremeChain = {
+  thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "custom", toleranceC: 0 } },
+  coldJunction: { kind: "coldJunction", method: "hardware", compensationMicrovoltsPerC: 40.6, matchedAtC: 25, sensorAccuracyC: 0 },
+  amplifier: { kind: "amplifier", gain: { setBy: "fixed", gain: 100 } },
+  reference: { kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: 0.001 },
+  divider: { kind: "divider", resistorsOhms: [4990, 5110], toleranceFraction: 0.001 },
+  detector: { kind: "comparator" },
+  ambient: { minC: 0, maxC: 60 },
+} as unknown as MeasurementChain;

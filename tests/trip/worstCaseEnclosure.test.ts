@@ -14,7 +14,7 @@ import { parseDesign, tripDesignFromDesign } from "../../src/design/index.js";
 import { designTrip } from "../../src/trip/designTrip.js";
 import { tripTemperatureModel } from "../../src/chain/tripTemperatureModel.js";
 import type { MeasurementChain } from "../../src/chain/types.js";
-import { chainArb } from "./_chainArbitrary.js";
+import { chainArb, interiorExtremeChain } from "./_chainArbitrary.js";
 import { propagate, rectangular } from "../../src/uncertainty/index.js";
 import { formatTripReport, tripReportFromResult } from "../../src/report/index.js";
 
@@ -96,15 +96,7 @@ describe("worst-case bracket of generated comparator chains", () => {
   it("a non-monotone chain: the extreme lies inside the cold-junction range and the bracket still closes", () => {
     // Hardware compensation at 40.6 µV/°C on type K over 0 … 60 °C: S(t) − α changes sign inside (S_K(0 °C) =
     // 39.45 µV/°C, S_K(60 °C) = 41.4 µV/°C, NIST SRD 60 type K table slopes), so t(t_cj) has an interior extreme.
-    const chain = {
-      thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "custom", toleranceC: 0 } },
-      coldJunction: { kind: "coldJunction", method: "hardware", compensationMicrovoltsPerC: 40.6, matchedAtC: 25, sensorAccuracyC: 0 },
-      amplifier: { kind: "amplifier", gain: { setBy: "fixed", gain: 100 } },
-      reference: { kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: 0.001 },
-      divider: { kind: "divider", resistorsOhms: [4990, 5110], toleranceFraction: 0.001 },
-      detector: { kind: "comparator" },
-      ambient: { minC: 0, maxC: 60 },
-    } as unknown as MeasurementChain;
+    const chain = interiorExtremeChain;
     const m = tripTemperatureModel(chain, 0);
     const w = propagate(m.model, m.inputs, { method: "worst-case", modelEnclosure: m.enclosure });
     const tcAt = [w.attained?.low.at["ambient.coldJunctionC"], w.attained?.high.at["ambient.coldJunctionC"]] as number[];

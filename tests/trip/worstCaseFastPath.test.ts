@@ -10,7 +10,7 @@ import type { MeasurementChain } from "../../src/chain/types.js";
 import { propagate, rectangular } from "../../src/uncertainty/index.js";
 import { _worstCaseFastPath } from "../../src/uncertainty/_propagateWorstCase.js";
 import type { PropagationResult } from "../../src/uncertainty/types.js";
-import { chainArb } from "./_chainArbitrary.js";
+import { chainArb, interiorExtremeChain } from "./_chainArbitrary.js";
 
 /** The stated gap tolerance of the chain models' worst case, °C (`_enclosureGapToleranceC`). */
 const tolerance = 1e-9;
@@ -91,15 +91,7 @@ describe("worst-case fallback", () => {
   it("a chain whose extreme lies inside the cold-junction range: the fast path declines, the band is the full search's", () => {
     // Hardware compensation at 40.6 µV/°C on type K over 0 … 60 °C: S(t) − α changes sign inside (S_K(0 °C) =
     // 39.45 µV/°C, S_K(60 °C) = 41.4 µV/°C, NIST SRD 60 type K table slopes).
-    const chain = {
-      thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "custom", toleranceC: 0 } },
-      coldJunction: { kind: "coldJunction", method: "hardware", compensationMicrovoltsPerC: 40.6, matchedAtC: 25, sensorAccuracyC: 0 },
-      amplifier: { kind: "amplifier", gain: { setBy: "fixed", gain: 100 } },
-      reference: { kind: "reference", variant: "series", nominalVolts: 2.5, initialAccuracyFraction: 0.001 },
-      divider: { kind: "divider", resistorsOhms: [4990, 5110], toleranceFraction: 0.001 },
-      detector: { kind: "comparator" },
-      ambient: { minC: 0, maxC: 60 },
-    } as unknown as MeasurementChain;
+    const chain = interiorExtremeChain;
     const m = tripTemperatureModel(chain, 0);
     const fast = worstCase(m.model as never, m.inputs as never, m.enclosure, true);
     const full = worstCase(m.model as never, m.inputs as never, m.enclosure, false);

@@ -41,8 +41,11 @@ export function _addInterval(a: _Interval, b: _Interval): _Interval {
 
 /** Outward-rounded interval product. @internal */
 export function _mulInterval(a: _Interval, b: _Interval): _Interval {
-  const p = [a[0] * b[0], a[0] * b[1], a[1] * b[0], a[1] * b[1]];
-  return [_down(Math.min(...p)), _up(Math.max(...p))];
+  const p0 = a[0] * b[0];
+  const p1 = a[0] * b[1];
+  const p2 = a[1] * b[0];
+  const p3 = a[1] * b[1];
+  return [_down(Math.min(p0, p1, p2, p3)), _up(Math.max(p0, p1, p2, p3))];
 }
 
 function square(a: _Interval): _Interval {
@@ -51,8 +54,17 @@ function square(a: _Interval): _Interval {
   return [0, _up(Math.max(a[0] * a[0], a[1] * a[1]))];
 }
 
+/** The derivative coefficient intervals computed so far, per coefficient array and order (they are the same each time). */
+const derivativeCache = new WeakMap<Float64Array, _Interval[][]>();
+
 /** Coefficient intervals of the k-th derivative of Σ cᵢ·tⁱ, each widened to hold the decimal coefficient. */
-function derivativeCoefficients(c: Float64Array, k: number): _Interval[] {
+function derivativeCoefficients(c: Float64Array, k: number): readonly _Interval[] {
+  let orders = derivativeCache.get(c);
+  if (orders === undefined) derivativeCache.set(c, (orders = []));
+  return (orders[k] ??= computeDerivativeCoefficients(c, k));
+}
+
+function computeDerivativeCoefficients(c: Float64Array, k: number): _Interval[] {
   const out: _Interval[] = [];
   for (let i = k; i < c.length; i++) {
     let factor = 1;

@@ -8,9 +8,9 @@ import { midRailDivider } from "./midRailDivider.js";
 import { _invalidChoice, _requireFinite, _requireOptionsObject, _requireWorkWithin, HotjunctionRangeError } from "../errors.js";
 import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
 import type { DividerElement, MeasurementChain, ReferenceElement } from "../chain/types.js";
-import { propagate } from "../uncertainty/propagate.js";
+import { _worstCaseBracketFrom, propagate } from "../uncertainty/propagate.js";
 import { rectangular } from "../uncertainty/rectangular.js";
-import { _propagationMethods, type Distribution } from "../uncertainty/types.js";
+import { _propagationMethods, type Distribution, type Model } from "../uncertainty/types.js";
 import { ageingBandAt } from "../chain/wire/probe.js";
 import type { PropagationMethod, PropagationResult } from "../uncertainty/types.js";
 import { _realizeReference } from "./realizeReference.js";
@@ -190,11 +190,17 @@ function inputsKey(inputs: Readonly<Record<string, Distribution>>): string {
   return JSON.stringify(parts);
 }
 
+/** What a self-consistent edge reads of a worst case: the band and its enclosure. */
+type EdgeBracket = Pick<PropagationResult, "interval" | "enclosure">;
+
 /**
  * The worst case of a comparator edge with the thermocouple tolerance taken at a temperature, remembered by
  * the inputs it gives: the self-consistent edges call it again and again (both edges start at the setpoint, and
  * where the tolerance does not change with temperature every step gives the same inputs), and the model depends
- * on the temperature only through the inputs, so an equal record gives the same result bit for bit.
+ * on the temperature only through the inputs, so an equal record gives the same result bit for bit. `full(t)` is
+ * the whole worst case (contributions included); `bracket(t)` after it is warm-started from the first full result's
+ * attained points (only the tolerance's bounds move between steps) and proven by the enclosure, or else the whole
+ * worst case again.
  */
 function worstCaseAtTolerance(
   tc: TripChain,
@@ -203,19 +209,35 @@ function worstCaseAtTolerance(
   seed: number,
   coverage: number,
   normalBoundCoverage: number,
-): (toleranceAtC: number) => PropagationResult {
-  const known = new Map<string, PropagationResult>();
-  return (toleranceAtC) => {
+): { full: (toleranceAtC: number) => PropagationResult; bracket: (toleranceAtC: number) => EdgeBracket } {
+  const known = new Map<string, EdgeBracket>();
+  const fullKnown = new Map<string, PropagationResult>();
+  let first: { inputs: Readonly<Record<string, Distribution>>; result: PropagationResult } | undefined;
+  const full = (toleranceAtC: number): PropagationResult => {
     const m = _comparatorTripModel(tc.compiled, tap, edge, toleranceAtC);
     if (Object.keys(m.inputs).length === 0) return worstCaseOf(m, seed, coverage, normalBoundCoverage);
     const key = inputsKey(m.inputs);
-    let result = known.get(key);
+    let result = fullKnown.get(key);
     if (result === undefined) {
       result = worstCaseOf(m, seed, coverage, normalBoundCoverage);
+      fullKnown.set(key, result);
+      known.set(key, result);
+    }
+    first ??= { inputs: m.inputs, result };
+    return result;
+  };
+  const bracket = (toleranceAtC: number): EdgeBracket => {
+    const m = _comparatorTripModel(tc.compiled, tap, edge, toleranceAtC);
+    if (first === undefined || m.enclosure === undefined || Object.keys(m.inputs).length === 0) return full(toleranceAtC);
+    const key = inputsKey(m.inputs);
+    let result = known.get(key);
+    if (result === undefined) {
+      result = _worstCaseBracketFrom(m.model as Model, m.inputs, normalBoundCoverage, m.enclosure, first) ?? full(toleranceAtC);
       known.set(key, result);
     }
     return result;
   };
+  return { full, bracket };
 }
 
 /** Worst case of a trip model, with its interval enclosure (a bracket whose gap closes, see chain/_tripEnclosure.ts). */
@@ -231,7 +253,7 @@ function worstCaseOf(m: _TripModel, seed: number, coverage: number, normalBoundC
 export const _enclosureGapToleranceC = 1e-9;
 
 /** The bracket fields of a worst-case band from the results its low and high edges were read from. */
-function bracketOf(low: PropagationResult, high: PropagationResult): Partial<TripBand> {
+function bracketOf(low: EdgeBracket, high: EdgeBracket): Partial<TripBand> {
   if (low.enclosure === undefined || high.enclosure === undefined) return {};
   return {
     enclosureLowC: low.enclosure[0],
@@ -284,13 +306,15 @@ function reasonFor(name: string, b: TripBand, limits: ProcessLimits, label: stri
 /**
  * The worst-case trip band at five times in service (0, ¼, ½, ¾ and the whole service life): the probe's
  * ageing source is replaced by its band at that time (linear accumulation, `ageingBandAt`); undefined
- * without an ageing drift.
+ * without an ageing drift. The setpoint model's enclosure serves every time (a source left out is enclosed at 0,
+ * as the model reads it).
  */
 function serviceBands(
   design: TripDesign,
   model: (x: Readonly<Record<string, number>>) => number,
   inputs: Readonly<Record<string, Distribution>>,
   normalBoundCoverage: number,
+  enclosure: _TripModel["enclosure"],
 ): TripServicePoint[] | undefined {
   const ageing = design.wire?.ageing;
   if (ageing === undefined || inputs["probe.ageing"] === undefined) return undefined;
@@ -303,7 +327,7 @@ function serviceBands(
     const r =
       Object.keys(rest).length === 0
         ? { interval: [model({}), model({})] as const }
-        : propagate(model, rest, { method: "worst-case", normalBoundCoverage });
+        : propagate(model, rest, { method: "worst-case", normalBoundCoverage, ...(enclosure !== undefined ? { modelEnclosure: enclosure } : {}) });
     out.push({ hours: at.hours, lowC: r.interval[0], highC: r.interval[1] });
   }
   return out;
@@ -515,18 +539,18 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     const nominalReleaseC = _nominalSwitchingC(tc.compiled, tap, "release", tc.designColdJunctionC);
     // RSS and Monte Carlo take the thermocouple tolerance at the setpoint; the worst case at the temperature each
     // band edge lands on (self-consistent, see _selfConsistentEdge).
-    const { model, inputs, sources } = _comparatorTripModel(tc.compiled, tap, "trip", plan.tripC);
+    const { model, inputs, sources, enclosure } = _comparatorTripModel(tc.compiled, tap, "trip", plan.tripC);
     const onProgress = options.onProgress;
     // A chain with every error source at zero (an ideal design) has nothing to propagate: its band is the
     // nominal trip itself, by every method.
     const exact = Object.keys(inputs).length === 0 ? pointResult(model, seed, coverage) : undefined;
     const worstAt = worstCaseAtTolerance(tc, tap, "trip", seed, coverage, normalBoundCoverage);
-    const worstAtSetpoint = exact?.("worst-case") ?? worstAt(plan.tripC);
+    const worstAtSetpoint = exact?.("worst-case") ?? worstAt.full(plan.tripC);
     // Each edge keeps the result it was read from: its bracket (attained, enclosure, gap) is that edge's.
-    let atHigh = worstAtSetpoint;
-    let atLow = worstAtSetpoint;
-    const highEdge = _selfConsistentEdge((t) => (atHigh = worstAt(t)).interval[1], plan.tripC);
-    const lowEdge = _selfConsistentEdge((t) => (atLow = worstAt(t)).interval[0], plan.tripC);
+    let atHigh: EdgeBracket = worstAtSetpoint;
+    let atLow: EdgeBracket = worstAtSetpoint;
+    const highEdge = _selfConsistentEdge((t) => (atHigh = worstAt.bracket(t)).interval[1], plan.tripC);
+    const lowEdge = _selfConsistentEdge((t) => (atLow = worstAt.bracket(t)).interval[0], plan.tripC);
     const worst: PropagationResult = {
       ...worstAtSetpoint,
       interval: [lowEdge.edgeC, highEdge.edgeC],
@@ -568,8 +592,9 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     const bands = { "worst-case": worstBand, rss: rssBand, "monte-carlo": band("monte-carlo", mc) };
     // Release: the worst case of the falling edge, also self-consistent.
     const releaseAt = worstCaseAtTolerance(tc, tap, "release", seed, coverage, normalBoundCoverage);
-    const releaseLow = _selfConsistentEdge((t) => releaseAt(t).interval[0], nominalReleaseC).edgeC;
-    const releaseHigh = _selfConsistentEdge((t) => releaseAt(t).interval[1], nominalReleaseC).edgeC;
+    releaseAt.full(nominalReleaseC);
+    const releaseLow = _selfConsistentEdge((t) => releaseAt.bracket(t).interval[0], nominalReleaseC).edgeC;
+    const releaseHigh = _selfConsistentEdge((t) => releaseAt.bracket(t).interval[1], nominalReleaseC).edgeC;
     const accepted = bands[acceptanceMethod];
     const label = acceptanceMethod === "worst-case" ? "worst case" : `${acceptanceMethod === "rss" ? "RSS" : "Monte Carlo"}, ${coverage * 100} % coverage`;
     const verdict = reasonFor(plan.name, accepted, plan.limits, label);
@@ -582,7 +607,7 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
         standardUncertaintyC: rss.contributions[s.name]?.contribution ?? 0,
       }))
       .sort((a, b) => b.worstCaseC - a.worstCaseC);
-    const bandOverService = serviceBands(design, model, inputs, normalBoundCoverage);
+    const bandOverService = serviceBands(design, model, inputs, normalBoundCoverage, enclosure);
     return {
       name: plan.name,
       tripTemperatureC: plan.tripC,

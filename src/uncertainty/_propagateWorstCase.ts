@@ -254,13 +254,16 @@ function perInputCorners(evaluator: _ModelEvaluator, x: Float64Array, lower: Flo
 }
 
 /**
- * @internal The fast path of a worst case with an enclosure: for each side, the corner where every input alone is
- * pushed to the end that raises (maximum) or lowers (minimum) the model, from the estimates (2n evaluations per
- * side), is evaluated; one enclosure call over the whole box then bounds the model. When each attained value lies
- * within the branch and bound's tolerance of its enclosure end (`1e-12 · (enclosure width + |attained|)`), nothing
- * a search could attain is farther than that from it, and the attained pair [max, min] is returned (the corners are
- * left in `corners`). Otherwise (or when the enclosure does not contain a corner value: the branch and bound then
- * reports it) undefined, and the full search runs.
+ * @internal The fast path of a worst case with an enclosure. For each side, the start is the point of one-at-a-time
+ * extremes (`corners[s]`: each input at the value that alone, the others at their estimates, raises (maximum) or
+ * lowers (minimum) the model most — an end of its range for a monotone input, an interior value for one with an
+ * interior extreme); the inputs whose value there lies inside their range are then refined by the coordinate-wise
+ * search (the others' ends move their interior extreme), the rest kept. One enclosure call over the whole box then
+ * bounds the model. When each attained value lies within the branch and bound's tolerance of its enclosure end
+ * (`1e-12 · (enclosure width + |attained|)`), nothing a search could attain is farther than that from it, and the
+ * attained pair [max, min] is returned with the enclosure [low, high] (the points are left in `corners`). Otherwise
+ * (or when the enclosure does not contain an attained value: the branch and bound then reports it) undefined, and the
+ * full search runs.
  */
 export function _enclosureMetAtCorners(
   enclosure: _Enclosure,
@@ -268,14 +271,24 @@ export function _enclosureMetAtCorners(
   evaluator: _ModelEvaluator,
   lower: Float64Array,
   upper: Float64Array,
-  means: Float64Array,
   corners: Float64Array[],
-): readonly [number, number] | undefined {
+): readonly [high: number, low: number, enclosureLow: number, enclosureHigh: number] | undefined {
   const n = names.length;
-  const x = new Float64Array(n);
   const attained = [0, 0];
-  perInputCorners(evaluator, x, lower, upper, means, corners);
-  for (let s = 0; s < 2; s++) attained[s] = evaluator.evaluate(corners[s] as Float64Array);
+  for (let s = 0; s < 2; s++) {
+    const sign = s === 0 ? 1 : -1;
+    const x = corners[s] as Float64Array;
+    let value = sign * evaluator.evaluate(x);
+    const inside: number[] = [];
+    for (let i = 0; i < n; i++) if ((x[i] as number) > (lower[i] as number) && (x[i] as number) < (upper[i] as number)) inside.push(i);
+    for (let sweep = 0; inside.length > 0 && sweep < maxSweeps; sweep++) {
+      const before = value;
+      for (const i of inside) value = optimiseCoordinate(evaluator, x, i, lower[i] as number, upper[i] as number, sign, value);
+      if (!(value > before + 1e-15 * Math.abs(before))) break;
+    }
+    // the value at the point itself (the search returns its best sign·f; the point is where it was found)
+    attained[s] = evaluator.evaluate(x);
+  }
   const box: Record<string, readonly [number, number]> = {};
   for (let i = 0; i < n; i++) box[names[i] as string] = [lower[i] as number, upper[i] as number];
   const r: unknown = enclosure(box);
@@ -285,7 +298,70 @@ export function _enclosureMetAtCorners(
   if (!(r[0] <= low && high <= r[1])) return undefined;
   // the branch and bound's own tolerance per side (its "gap closed")
   const width = Math.abs(r[1] - r[0]);
-  return r[1] - high <= 1e-12 * (width + Math.abs(high)) && low - r[0] <= 1e-12 * (width + Math.abs(low)) ? [high, low] : undefined;
+  return r[1] - high <= 1e-12 * (width + Math.abs(high)) && low - r[0] <= 1e-12 * (width + Math.abs(low)) ? [high, low, r[0], r[1]] : undefined;
+}
+
+/**
+ * One-at-a-time: each input alone over its range, the others at their estimates. The output swings (high − low)
+ * are the worst case's contributions; the values reached are the fast path's start (`best[0]` raises the model,
+ * `best[1]` lowers it). With an enclosure, an input whose two end values meet the enclosure of its one-input box
+ * (within the branch and bound's tolerance) is monotone there to that tolerance, and its swing is read off the
+ * ends (2 evaluations and an enclosure call); otherwise, and without an enclosure, a 17-point grid and a
+ * golden-section refinement per side find it.
+ */
+function oneAtATime(
+  evaluator: _ModelEvaluator,
+  lower: Float64Array,
+  upper: Float64Array,
+  means: Float64Array,
+  enclosure: _Enclosure | undefined,
+  names: readonly string[],
+): { swings: Float64Array; swingSquares: number; best: Float64Array[] } {
+  const n = lower.length;
+  const x = new Float64Array(n);
+  const swings = new Float64Array(n);
+  const best = [new Float64Array(means), new Float64Array(means)];
+  let swingSquares = 0;
+  const base = evaluator.evaluate(means);
+  const box: Record<string, readonly [number, number]> = {};
+  if (enclosure !== undefined) for (let i = 0; i < n; i++) box[names[i] as string] = [means[i] as number, means[i] as number];
+  for (let i = 0; i < n; i++) {
+    const lo = lower[i] as number;
+    const hi = upper[i] as number;
+    let high: number | undefined;
+    let low: number | undefined;
+    if (enclosure !== undefined && hi > lo) {
+      x.set(means);
+      x[i] = lo;
+      const atLo = evaluator.evaluate(x);
+      x[i] = hi;
+      const atHi = evaluator.evaluate(x);
+      const name = names[i] as string;
+      box[name] = [lo, hi];
+      const r = enclosure(box);
+      box[name] = [means[i] as number, means[i] as number];
+      const top = Math.max(atLo, atHi, base);
+      const bottom = Math.min(atLo, atHi, base);
+      const width = Math.abs((r[1] as number) - (r[0] as number));
+      if (r[0] <= bottom && top <= r[1] && r[1] - top <= 1e-12 * (width + Math.abs(top)) && bottom - r[0] <= 1e-12 * (width + Math.abs(bottom))) {
+        high = top;
+        low = bottom;
+        (best[0] as Float64Array)[i] = top === base ? (means[i] as number) : top === atHi ? hi : lo;
+        (best[1] as Float64Array)[i] = bottom === base ? (means[i] as number) : bottom === atLo ? lo : hi;
+      }
+    }
+    if (high === undefined || low === undefined) {
+      x.set(means);
+      high = optimiseCoordinate(evaluator, x, i, lo, hi, 1, base);
+      (best[0] as Float64Array)[i] = x[i] as number;
+      x.set(means);
+      low = -optimiseCoordinate(evaluator, x, i, lo, hi, -1, -base);
+      (best[1] as Float64Array)[i] = x[i] as number;
+    }
+    swings[i] = high - low;
+    swingSquares += (high - low) ** 2;
+  }
+  return { swings, swingSquares, best };
 }
 
 /** The box of input bounds: bounded inputs at ± their half-width, normal ones at ±k·u for `normalBoundCoverage`. */
@@ -334,14 +410,20 @@ export function _propagateWorstCase(
   const extremes = [Number.NEGATIVE_INFINITY, Number.POSITIVE_INFINITY];
   const points = [Float64Array.from(means), Float64Array.from(means)]; // [argmax, argmin]
   let strategy: string;
-  const met = fastPath && enclosure !== undefined ? _enclosureMetAtCorners(enclosure, names, evaluator, lower, upper, means, bestCorner) : undefined;
+  const oat = oneAtATime(evaluator, lower, upper, means, enclosure, names);
+  if (fastPath && enclosure !== undefined) {
+    bestCorner[0]?.set(oat.best[0] as Float64Array);
+    bestCorner[1]?.set(oat.best[1] as Float64Array);
+  }
+  const met = fastPath && enclosure !== undefined ? _enclosureMetAtCorners(enclosure, names, evaluator, lower, upper, bestCorner) : undefined;
   if (met !== undefined) {
     extremes[0] = met[0];
     extremes[1] = met[1];
     points[0]?.set(bestCorner[0] as Float64Array);
     points[1]?.set(bestCorner[1] as Float64Array);
     strategy =
-      `the corner of per-input (one-at-a-time) extremes evaluated for each side; the enclosure of the whole box met both ` +
+      `the point of one-at-a-time extremes for each side (each input alone at its most raising or lowering value, ` +
+      `inputs with an interior extreme refined by a coordinate-wise search); the enclosure of the whole box met both ` +
       `attained values within the tolerance (1e-12 of its width plus the value), so the ${n <= maxCornerInputs ? `scan of all 2^${n} corners and the ` : ""}` +
       `coordinate-wise search were skipped (they run when the two do not meet)`;
   } else if (n <= maxCornerInputs) {
@@ -381,17 +463,7 @@ export function _propagateWorstCase(
     }
   }
   // One-at-a-time swings for the contributions.
-  const swings = new Float64Array(n);
-  let swingSquares = 0;
-  const base = evaluator.evaluate(means);
-  for (let i = 0; i < n; i++) {
-    x.set(means);
-    const high = optimiseCoordinate(evaluator, x, i, lower[i] as number, upper[i] as number, 1, base);
-    x.set(means);
-    const low = -optimiseCoordinate(evaluator, x, i, lower[i] as number, upper[i] as number, -1, -base);
-    swings[i] = high - low;
-    swingSquares += (high - low) ** 2;
-  }
+  const { swings, swingSquares } = oat;
   const lin = _linearise(prepared, evaluator, correlation);
   let low = extremes[1] as number;
   let high = extremes[0] as number;
@@ -416,7 +488,11 @@ export function _propagateWorstCase(
   let bracketNote = "; no enclosure was computed (the model is a black box: give modelEnclosure for a proven bracket)";
   let enclosureFields: { enclosure: readonly [number, number]; enclosureGap: readonly [number, number] } | undefined;
   if (enclosure !== undefined) {
-    const bound = _branchAndBound(enclosure, names, lower, upper, evaluator, attained, points);
+    // the fast path's enclosure met the attained values: it is the branch and bound's root, with nothing to split
+    const bound =
+      met !== undefined && low === met[1] && high === met[0]
+        ? { low: met[2], high: met[3], calls: 1, complete: true }
+        : _branchAndBound(enclosure, names, lower, upper, evaluator, attained, points);
     low = attained.low.value;
     high = attained.high.value;
     attained.low.at = pointRecord(points[1] as Float64Array);
@@ -446,4 +522,60 @@ export function _propagateWorstCase(
       bracketNote +
       `; contributions are one-at-a-time output swings, varianceShare their squared shares; standardUncertainty is the GUM (RSS) value.`,
   };
+}
+
+/** @internal The bracket of a worst case from start points (`_worstCaseFrom`): interval, attained points, enclosure. */
+export interface _WorstCaseBracket {
+  readonly interval: readonly [number, number];
+  readonly attained: { readonly low: { readonly value: number; readonly at: Record<string, number> }; readonly high: { readonly value: number; readonly at: Record<string, number> } };
+  readonly enclosure: readonly [number, number];
+  readonly enclosureGap: readonly [number, number];
+}
+
+/**
+ * @internal The worst-case bracket of a model over a box, started from points of an earlier box of the same inputs
+ * (`from`: the earlier inputs' box and its attained points, canonical order): each start is moved to the same
+ * relative place in the new box, the inputs that lie inside their range there are refined by the coordinate-wise
+ * search, and one enclosure call over the new box must meet both attained values within the branch and bound's
+ * tolerance (as `_enclosureMetAtCorners`). Undefined when it does not (the caller runs the full worst case). No
+ * contributions: for the fixed-point iterations of a self-consistent edge, whose contributions are the first box's.
+ */
+export function _worstCaseFrom(
+  prepared: _PreparedInputs,
+  evaluator: _ModelEvaluator,
+  normalBoundCoverage: number | undefined,
+  enclosure: _Enclosure,
+  from: { readonly lower: Float64Array; readonly upper: Float64Array; readonly high: Float64Array; readonly low: Float64Array },
+): _WorstCaseBracket | undefined {
+  const { names } = prepared;
+  const n = names.length;
+  const { lower, upper } = inputBox(prepared, normalBoundCoverage);
+  const starts = [from.high, from.low].map((point) => {
+    const x = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      const span = (from.upper[i] as number) - (from.lower[i] as number);
+      const fraction = span > 0 ? ((point[i] as number) - (from.lower[i] as number)) / span : 0.5;
+      x[i] = fraction === 0 ? (lower[i] as number) : fraction === 1 ? (upper[i] as number) : (lower[i] as number) + fraction * ((upper[i] as number) - (lower[i] as number));
+    }
+    return x;
+  });
+  const met = _enclosureMetAtCorners(enclosure, names, evaluator, lower, upper, starts);
+  if (met === undefined) return undefined;
+  const record = (values: Float64Array): Record<string, number> => {
+    const out: Record<string, number> = {};
+    prepared.callerOrder.forEach((name) => (out[name] = values[names.indexOf(name)] as number));
+    return out;
+  };
+  return {
+    interval: [met[1], met[0]],
+    attained: { low: { value: met[1], at: record(starts[1] as Float64Array) }, high: { value: met[0], at: record(starts[0] as Float64Array) } },
+    enclosure: [met[2], met[3]],
+    enclosureGap: [met[1] - met[2], met[3] - met[0]],
+  };
+}
+
+/** @internal The box of a worst case's inputs (bounded inputs at ± half-width, normal ones at ±k·u). */
+export function _worstCaseBox(prepared: _PreparedInputs, normalBoundCoverage: number | undefined): { lower: Float64Array; upper: Float64Array } {
+  const { lower, upper } = inputBox(prepared, normalBoundCoverage);
+  return { lower, upper };
 }

@@ -3,7 +3,7 @@ import { _requireInteger, _requireOptionsObject, _requireProbability } from "./_
 import { _minimumTrials } from "./_coverageIntervalSorted.js";
 import { _adaptiveBatch, _maxModelEvaluations, _propagateMonteCarlo, type _MonteCarloSettings } from "./_propagateMonteCarlo.js";
 import { _propagateRss } from "./_propagateRss.js";
-import { _propagateWorstCase, type _Enclosure } from "./_propagateWorstCase.js";
+import { _propagateWorstCase, _worstCaseBox, _worstCaseFrom, type _Enclosure, type _WorstCaseBracket } from "./_propagateWorstCase.js";
 import { _choleskyFactor, _correlationMatrix, _meansOf, _ModelEvaluator, _prepareInputs } from "./_prepare.js";
 import type { Distribution, Model, PropagateOptions, PropagationMethod, PropagationResult } from "./types.js";
 
@@ -187,4 +187,27 @@ export function _monteCarloSettings(o: PropagateOptions, coverage: number, model
     throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "onProgress", value: o.onProgress, context, problem: "is not a function" });
   }
   return { coverage, trials, seed, shortest: interval === "shortest", adaptive, onProgress: o.onProgress };
+}
+
+/**
+ * @internal The worst-case bracket of `model` over `inputs`, warm-started from an earlier worst case of the same
+ * model over other bounds of the same input names (`_worstCaseFrom`): undefined when the names differ or when the
+ * enclosure does not meet the attained values there (the caller then runs `propagate`). For the fixed-point
+ * iterations of a self-consistent edge, where one input's bounds move a little from step to step.
+ */
+export function _worstCaseBracketFrom(
+  model: Model,
+  inputs: Readonly<Record<string, Distribution>>,
+  normalBoundCoverage: number,
+  enclosure: _Enclosure,
+  earlier: { readonly inputs: Readonly<Record<string, Distribution>>; readonly result: PropagationResult },
+): _WorstCaseBracket | undefined {
+  const prepared = _prepareInputs(inputs);
+  const before = _prepareInputs(earlier.inputs);
+  const attained = earlier.result.attained;
+  if (attained === undefined || before.names.length !== prepared.names.length || before.names.some((name, i) => name !== prepared.names[i])) return undefined;
+  const { lower, upper } = _worstCaseBox(before, normalBoundCoverage);
+  const point = (at: Readonly<Record<string, number>>) => Float64Array.from(prepared.names, (name) => at[name] as number);
+  const evaluator = new _ModelEvaluator(model, prepared.names);
+  return _worstCaseFrom(prepared, evaluator, normalBoundCoverage, enclosure, { lower, upper, high: point(attained.high.at), low: point(attained.low.at) });
 }

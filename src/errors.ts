@@ -532,3 +532,25 @@ export function _requireShape(value: unknown, shape: _Shape, quantity: string, c
   if (typeof value !== "object" || value === null || Array.isArray(value)) return fail();
   for (const key of Object.keys(shape)) _requireShape((value as Record<string, unknown>)[key], (shape as Record<string, _Shape>)[key]!, `${quantity}.${key}`, context);
 }
+
+/**
+ * Throws a {@link HotjunctionTypeError} (`NOT_A_FINITE_NUMBER`) naming the path (`quantity.rows[3].shiftC`) of the
+ * first number that is not finite anywhere in `value` (plain objects and arrays at any depth; an object seen twice
+ * is walked once; deeper than 64 levels is refused): the guard of a function that returns data it was given as it
+ * is (a review, a part of a report), so NaN or ±Infinity in a forged field, whatever its expected kind, is refused
+ * by name instead of returned.
+ * @internal
+ */
+export function _requireFiniteData(value: unknown, quantity: string, context?: string, seen: Set<object> = new Set(), depth = 0): void {
+  if (typeof value === "number") {
+    _requireFinite(value, quantity, undefined, context);
+    return;
+  }
+  if (typeof value !== "object" || value === null || seen.has(value)) return;
+  if (depth > 64) throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity, value, context, problem: "is nested more than 64 levels deep" });
+  seen.add(value);
+  const list = Array.isArray(value);
+  for (const key of Object.keys(value)) {
+    _requireFiniteData((value as Record<string, unknown>)[key], list ? `${quantity}[${key}]` : `${quantity}.${key}`, context, seen, depth + 1);
+  }
+}

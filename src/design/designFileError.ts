@@ -17,6 +17,13 @@ export interface DesignFileErrorDetails {
   readonly moreProblems?: number;
   /** Every problem found (the first one included), each with its path and what was expected and found. */
   readonly problems?: readonly DesignFileProblem[];
+  /** The quantity that failed (`"design.reference.nominalVolts"`); default `"design file"`. */
+  readonly quantity?: string;
+  /** The value found at `path` (default the file name, for a problem of the whole file). */
+  readonly value?: unknown;
+  /** The valid range of the value at `path`, where the schema states one. */
+  readonly min?: number | undefined;
+  readonly max?: number | undefined;
 }
 
 /** One problem of a design file. */
@@ -60,7 +67,14 @@ export class DesignFileError extends HotjunctionRangeError {
   /** Every problem found, the first one included (one entry when only one is known). */
   readonly problems: readonly DesignFileProblem[];
   constructor(details: DesignFileErrorDetails) {
-    super({ code: "INVALID_DESIGN", quantity: "design file", value: details.fileName, problem: details.problem });
+    super({
+      code: "INVALID_DESIGN",
+      quantity: details.quantity ?? "design file",
+      value: "value" in details ? details.value : details.fileName,
+      problem: details.problem,
+      min: details.min,
+      max: details.max,
+    });
     this.fileName = details.fileName;
     this.path = details.path;
     this.problem = details.problem;

@@ -62,6 +62,16 @@ function checkReference(reference: DesignReference, path: string, out: DesignRul
   }
 }
 
+/**
+ * The cross-field rules of one reference entry at `path` (as the design's `reference` is checked).
+ * @internal
+ */
+export function _checkReferenceRules(reference: DesignReference, path: string): DesignRuleProblem[] {
+  const out: DesignRuleProblem[] = [];
+  checkReference(reference, path, out);
+  return out;
+}
+
 /** The `dynamics` section's signal path matches the detector: analog for a comparator, firmware for an ADC. */
 function checkDynamicsRules(design: DesignFile, out: DesignRuleProblem[]): void {
   const path = design.dynamics?.signalPath;

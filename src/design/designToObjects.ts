@@ -16,7 +16,8 @@ import type {
 import type { WireDescription } from "../chain/wire/wireStage.js";
 import type { ReferenceOption, TripDesign, TripResistors, TripSetpoint } from "../trip/types.js";
 import type { DesignFile, DesignReference } from "./designSchema.js";
-import { HotjunctionRangeError, _requireObject } from "../errors.js";
+import { HotjunctionRangeError, _requireChoice } from "../errors.js";
+import { _requireDesign, _requireDesignReference } from "./parseDesign.js";
 import type { TripDynamicsModel } from "../trip/tripDynamics.js";
 import type { ElementFailureData, FailureData, FailureModeShare } from "../safety/types.js";
 
@@ -101,7 +102,11 @@ export function _referenceElementOf(reference: DesignReference): ReferenceElemen
  * ```
  */
 export function referenceOptionFromDesign(reference: DesignReference): ReferenceOption {
-  _requireObject(reference, "reference", "referenceOptionFromDesign");
+  return optionOf(_requireDesignReference(reference, "referenceOptionFromDesign"));
+}
+
+/** The option of a validated reference entry. */
+function optionOf(reference: DesignReference): ReferenceOption {
   const cost = reference.cost;
   if (reference.kind === "ideal") {
     return compact<ReferenceOption>({ kind: "ideal", name: reference.name, nominalVolts: reference.nominalVolts, cost });
@@ -125,8 +130,9 @@ export function referenceOptionFromDesign(reference: DesignReference): Reference
  * The trip-engine input of a comparator design file.
  * @param design - a validated design with a `comparator`
  * @returns the `TripDesign`
- * @throws DesignFileError-free: call only on a design that `parseDesign` accepted; throws HotjunctionRangeError
- *   (code `INVALID_DESIGN`) when the design has no comparator (an ADC design has no divider to design)
+ * @throws DesignFileError (code `INVALID_DESIGN`, `quantity` the path of the first problem) for a value that
+ *   `validateDesign` refuses; HotjunctionRangeError (code `INVALID_DESIGN`) when the design has no comparator (an
+ *   ADC design has no divider to design)
  * @example
  * ```ts
  * import { tripDesignFromDesign, parseDesign } from "hotjunction/design";
@@ -136,7 +142,7 @@ export function referenceOptionFromDesign(reference: DesignReference): Reference
  * ```
  */
 export function tripDesignFromDesign(design: DesignFile): TripDesign {
-  _requireObject(design, "design", "tripDesignFromDesign");
+  design = _requireDesign(design, "tripDesignFromDesign");
   if (design.comparator === undefined || design.resistors === undefined) {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "comparator", value: undefined, context: "tripDesignFromDesign", problem: "is missing: an ADC design has no comparator thresholds to design; use the chain instead" });
   }
@@ -148,7 +154,7 @@ export function tripDesignFromDesign(design: DesignFile): TripDesign {
     coldJunction: coldJunctionOf(design),
     amplifier: amplifierOf(design),
     comparator: compact<ComparatorElement>({ kind: "comparator", ...design.comparator }),
-    reference: referenceOptionFromDesign(design.reference),
+    reference: optionOf(design.reference),
     resistors: compact<TripResistors>({
       ...design.resistors,
       matched: design.resistors.matched === undefined ? undefined : compact(design.resistors.matched),
@@ -177,13 +183,13 @@ export function tripDesignFromDesign(design: DesignFile): TripDesign {
  * console.log(measurementChainFromDesign(design).detector.kind); // "adc"
  * ```
  */
-export function measurementChainFromDesign(design: DesignFile, reference: DesignReference = _requireObject(design, "design", "measurementChainFromDesign")["reference"] as DesignReference): MeasurementChain {
-  _requireObject(design, "design", "measurementChainFromDesign");
-  _requireObject(reference, "reference", "measurementChainFromDesign");
-  const referenceElement = _referenceElementOf(reference);
+export function measurementChainFromDesign(design: DesignFile, reference?: DesignReference): MeasurementChain {
+  design = _requireDesign(design, "measurementChainFromDesign");
+  const chosen = reference === undefined ? design.reference : _requireDesignReference(reference, "measurementChainFromDesign");
+  const referenceElement = _referenceElementOf(chosen);
   let detector: ComparatorElement | AdcElement;
   if (design.adc !== undefined) {
-    const fullScaleVolts = design.adc.fullScaleVolts ?? (referenceElement === undefined ? reference.nominalVolts : undefined);
+    const fullScaleVolts = design.adc.fullScaleVolts ?? (referenceElement === undefined ? chosen.nominalVolts : undefined);
     detector = compact<AdcElement>({ kind: "adc", ...design.adc, fullScaleVolts });
   } else {
     detector = compact<ComparatorElement>({ kind: "comparator", ...design.comparator });
@@ -226,6 +232,7 @@ function compactDeep(value: unknown): unknown {
  * ```
  */
 export function dynamicsModelFromDesign(design: DesignFile): TripDynamicsModel | undefined {
+  design = _requireDesign(design, "dynamicsModelFromDesign");
   return design.dynamics === undefined ? undefined : (compactDeep(design.dynamics) as TripDynamicsModel);
 }
 
@@ -244,6 +251,8 @@ export function dynamicsModelFromDesign(design: DesignFile): TripDynamicsModel |
  * ```
  */
 export function failureDataFromDesign(design: DesignFile, channel: "first" | "second" = "first"): FailureData | undefined {
+  design = _requireDesign(design, "failureDataFromDesign");
+  _requireChoice(channel, "channel", ["first", "second"], "failureDataFromDesign");
   const section = design.failureData;
   const elements = channel === "first" ? section?.elements : section?.secondChannel?.elements;
   if (elements === undefined) return undefined;
@@ -276,6 +285,7 @@ export function failureDataFromDesign(design: DesignFile, channel: "first" | "se
  * ```
  */
 export function secondChannelDesign(design: DesignFile): DesignFile {
+  design = _requireDesign(design, "secondChannelDesign");
   const second = design.failureData?.secondChannel;
   if (second === undefined) {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "failureData.secondChannel", value: undefined, context: "secondChannelDesign", problem: "is missing" });

@@ -6,8 +6,9 @@
  */
 import type { z } from "zod";
 import { DesignFileError } from "./designFileError.js";
-import { designFileSchema, type DesignFile } from "./designSchema.js";
-import { _checkDesignRules } from "./designRules.js";
+import { designFileSchema, referenceSchema, type DesignFile, type DesignReference } from "./designSchema.js";
+import { _checkDesignRules, _checkReferenceRules, type DesignRuleProblem } from "./designRules.js";
+import { HotjunctionTypeError, _requireObject, _requireOptionsObject } from "../errors.js";
 import { _formatPath, _scanJson } from "./scanJson.js";
 
 /** Largest design file accepted, bytes (1 MiB). */
@@ -162,32 +163,110 @@ function findForbiddenKey(value: unknown): { key: string; path: (string | number
  * ```
  */
 export function validateDesign(value: unknown, options: ParseDesignOptions = {}): DesignFile {
-  const fileName = options.fileName ?? "design";
+  const fileName = fileNameOf(options, "validateDesign");
   const forbidden = findForbiddenKey(value);
   if (forbidden !== undefined) {
-    throw new DesignFileError({ fileName, path: _formatPath(forbidden.path), problem: `key "${forbidden.key}" is not allowed` });
+    const path = _formatPath(forbidden.path);
+    throw new DesignFileError({ fileName, path, problem: `key "${forbidden.key}" is not allowed`, quantity: quantityAt(path), value: forbidden.key });
   }
   const result = designFileSchema.safeParse(value);
-  if (!result.success) {
-    const issues = [...result.error.issues];
-    // A misspelt key explains the "missing" issue it causes: show unknown keys first.
-    issues.sort((a, b) => Number(b.code === "unrecognized_keys") - Number(a.code === "unrecognized_keys"));
-    const first = issues[0];
-    const described = first === undefined ? { path: "", problem: "is not a valid design" } : _describeIssue(first, value);
-    const all = issues.map((issue) => _describeIssue(issue, value));
-    throw new DesignFileError({ fileName, path: described.path, problem: described.problem, moreProblems: issues.length - 1, problems: all.length > 0 ? all : [described] });
-  }
+  if (!result.success) throw schemaFailure(result.error.issues, value, fileName);
   const problems = _checkDesignRules(result.data);
-  const firstProblem = problems[0];
-  if (firstProblem !== undefined) {
-    throw new DesignFileError({
-      fileName,
-      path: firstProblem.path,
-      problem: firstProblem.problem,
-      moreProblems: problems.length - 1,
-      problems: problems.map((p) => ({ path: p.path, problem: p.problem })),
-    });
+  if (problems.length > 0) throw rulesFailure(problems, value, fileName);
+  return result.data;
+}
+
+/** The quantity an error names for a problem at `path` (`"design.reference.nominalVolts"`). */
+function quantityAt(path: string, root = "design"): string {
+  if (root === "") return path;
+  return path === "" ? root : path.startsWith("[") ? `design${path}` : `design.${path}`;
+}
+
+/** The keys of a path as `_formatPath` writes it (`a.b[1]["c d"]`). */
+function pathKeys(path: string): (string | number)[] {
+  const keys: (string | number)[] = [];
+  for (const m of path.matchAll(/([A-Za-z_$][\w$]*)|\[(\d+)\]|\[("(?:[^"\\]|\\.)*")\]/g)) {
+    keys.push(m[1] ?? (m[2] !== undefined ? Number(m[2]) : (JSON.parse(m[3]!) as string)));
   }
+  return keys;
+}
+
+/** The error of the first schema issue (unknown keys first: a misspelt key explains the "missing" issue it causes). */
+function schemaFailure(found: readonly z.core.$ZodIssue[], value: unknown, fileName: string, root?: string): DesignFileError {
+  const issues = [...found];
+  issues.sort((a, b) => Number(b.code === "unrecognized_keys") - Number(a.code === "unrecognized_keys"));
+  const first = issues[0];
+  const described = first === undefined ? { path: "", problem: "is not a valid design" } : _describeIssue(first, value);
+  const all = issues.map((issue) => _describeIssue(issue, value));
+  const range = first?.code === "too_small" || first?.code === "too_big" ? first : undefined;
+  const limit = (x: unknown): number | undefined => (typeof x === "number" && range?.origin === "number" ? x : undefined);
+  return new DesignFileError({
+    fileName,
+    path: described.path,
+    problem: described.problem,
+    moreProblems: issues.length - 1,
+    problems: all.length > 0 ? all : [described],
+    quantity: quantityAt(described.path, root),
+    value: first === undefined ? value : valueAt(value, first.path),
+    min: limit(range?.code === "too_small" ? range.minimum : undefined),
+    max: limit(range?.code === "too_big" ? range.maximum : undefined),
+  });
+}
+
+/** The error of the first broken cross-field rule. */
+function rulesFailure(problems: readonly DesignRuleProblem[], value: unknown, fileName: string, root?: string): DesignFileError {
+  const first = problems[0]!;
+  return new DesignFileError({
+    fileName,
+    path: first.path,
+    problem: first.problem,
+    moreProblems: problems.length - 1,
+    problems: problems.map((p) => ({ path: p.path, problem: p.problem })),
+    quantity: quantityAt(first.path, root),
+    value: valueAt(value, pathKeys(first.path)),
+  });
+}
+
+/** `options.fileName`, checked (a string; default `"design"`). */
+function fileNameOf(options: unknown, context: string): string {
+  _requireOptionsObject(options, context, true);
+  const fileName = (options as ParseDesignOptions | undefined)?.fileName;
+  if (fileName !== undefined && typeof fileName !== "string") {
+    throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "options.fileName", value: fileName, context, problem: "is not a string" });
+  }
+  return fileName ?? "design";
+}
+
+/**
+ * The entry guard of the design converters (`tripDesignFromDesign`, …): the design as {@link validateDesign}
+ * accepts it, or a {@link DesignFileError} (a `HotjunctionRangeError`, code `INVALID_DESIGN`) whose `quantity` is
+ * the path of the first problem (`design.reference.nominalVolts`), whose `value` is the value found there and whose
+ * message names the function, the path, what was expected (the valid range) and what was found.
+ * @internal
+ */
+export function _requireDesign(design: unknown, context: string): DesignFile {
+  _requireObject(design, "design", context);
+  return validateDesign(design, { fileName: context });
+}
+
+/**
+ * The entry guard of a converter given one reference entry: the schema of a design's `reference` and its rules.
+ * @internal
+ */
+export function _requireDesignReference(reference: unknown, context: string): DesignReference {
+  _requireObject(reference, "reference", context);
+  const forbidden = findForbiddenKey(reference);
+  if (forbidden !== undefined) {
+    const path = _formatPath(["reference", ...forbidden.path]);
+    throw new DesignFileError({ fileName: context, path, problem: `key "${forbidden.key}" is not allowed`, quantity: path, value: forbidden.key });
+  }
+  const result = referenceSchema.safeParse(reference);
+  if (!result.success) {
+    const prefixed = result.error.issues.map((issue) => ({ ...issue, path: ["reference", ...issue.path] }) as z.core.$ZodIssue);
+    throw schemaFailure(prefixed, { reference }, context, "");
+  }
+  const problems = _checkReferenceRules(result.data, "reference");
+  if (problems.length > 0) throw rulesFailure(problems, { reference }, context, "");
   return result.data;
 }
 
@@ -206,9 +285,11 @@ export function validateDesign(value: unknown, options: ParseDesignOptions = {})
  * ```
  */
 export function parseDesign(text: string, options: ParseDesignOptions = {}): DesignFile {
-  const fileName = options.fileName ?? "design";
+  const fileName = fileNameOf(options, "parseDesign");
   if (typeof text !== "string") {
-    throw new DesignFileError({ fileName, path: "", problem: `expected the file's text, found ${describeFound(text)}` });
+    // "a number", not the number: safeParseDesign returns this error, and its text must not read NaN or Infinity
+    const found = typeof text === "number" ? "a number" : describeFound(text);
+    throw new DesignFileError({ fileName, path: "", problem: `expected the file's text, found ${found}` });
   }
   if (text.length > designFileMaxBytes || (text.length * 3 > designFileMaxBytes && utf8Length(text) > designFileMaxBytes)) {
     throw new DesignFileError({ fileName, path: "", problem: `file is larger than ${designFileMaxBytes} bytes (1 MiB)` });

@@ -58,40 +58,40 @@ const countsShape: _Shape = {
 };
 const strings: _Shape = ["array", "string"];
 
+/** @internal What the renderers read of one fault review (and `faultReviewReport` checks of the reviews it is given). */
+export const _reviewShape: _Shape = {
+  name: "string",
+  healthyTripC: "number",
+  maxNormalOperatingC: "number",
+  hazardLimitC: "number",
+  healthyBandC: ["optional", { lowC: "number", highC: "number" }],
+  noEffectThresholdC: ["optional", "number"],
+  counts: countsShape,
+  notes: strings,
+  rows: [
+    "array",
+    {
+      faultId: "string",
+      element: "string",
+      description: "string",
+      effectText: "string",
+      detectionText: "string",
+      category: ["oneOf", ["safe-detected", "safe-undetected", "dangerous-detected", "dangerous-undetected", "degraded", "no-effect"]],
+      tripC: ["nullable", "number"],
+      shiftC: ["nullable", "number"],
+      marginC: ["nullable", "number"],
+      mitigations: strings,
+    },
+  ],
+};
+
 /** What the renderers read of a fault review report (checked at their entry, {@link _checkReport}). */
 const reportShape: _Shape = {
   name: ["optional", "string"],
   scope: "string",
   caution: "string",
   counts: countsShape,
-  reviews: [
-    "array",
-    {
-      name: "string",
-      healthyTripC: "number",
-      maxNormalOperatingC: "number",
-      hazardLimitC: "number",
-      healthyBandC: ["optional", { lowC: "number", highC: "number" }],
-      noEffectThresholdC: ["optional", "number"],
-      counts: countsShape,
-      notes: strings,
-      rows: [
-        "array",
-        {
-          faultId: "string",
-          element: "string",
-          description: "string",
-          effectText: "string",
-          detectionText: "string",
-          category: ["oneOf", ["safe-detected", "safe-undetected", "dangerous-detected", "dangerous-undetected", "degraded", "no-effect"]],
-          tripC: ["nullable", "number"],
-          shiftC: ["nullable", "number"],
-          marginC: ["nullable", "number"],
-          mitigations: strings,
-        },
-      ],
-    },
-  ],
+  reviews: ["array", _reviewShape],
 };
 
 /** @internal Checks that a value is a fault review report, field by field (the shared shape guard). */

@@ -3,7 +3,8 @@
  * @module
  */
 import type { MeasurementChain } from "../chain/types.js";
-import { _invalidChoice } from "../errors.js";
+import { _invalidChoice, _requireFiniteData, _requireShape } from "../errors.js";
+import { _reviewShape } from "./_faultReviewWords.js";
 import { CAUTION_TEXT } from "../caution.js";
 import { _countCategories } from "./_faultClassification.js";
 import { reviewFaults } from "./reviewFaults.js";
@@ -38,6 +39,10 @@ export const faultReviewScope: string =
  */
 export function faultReviewReport(reviews: readonly FaultReview[], name?: string): FaultReviewReport {
   if (!Array.isArray(reviews)) _invalidChoice("reviews", reviews, ["an array of fault reviews"], "fault review report");
+  // the reviews are returned as they are: checked as the renderers read them, and free of NaN and ±Infinity
+  _requireShape(reviews, ["array", _reviewShape], "reviews", "faultReviewReport");
+  _requireFiniteData(reviews, "reviews", "faultReviewReport");
+  _requireShape(name, ["optional", "string"], "name", "faultReviewReport");
   const rows = reviews.flatMap((r) => r.rows);
   return {
     ...(name !== undefined ? { name } : {}),

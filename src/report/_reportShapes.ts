@@ -31,6 +31,106 @@ export const _errorSweepShape: _Shape = {
   methods: _methodInfoShape,
 };
 
+const optionalNumber: _Shape = ["optional", n];
+
+/** @internal One trip band of a `designTrip` setpoint (every field a trip report copies). */
+const tripBandShape: _Shape = {
+  method,
+  lowC: n,
+  highC: n,
+  coverage: n,
+  standardUncertaintyC: n,
+  trials: optionalNumber,
+  seed: optionalNumber,
+  coverageFactor: optionalNumber,
+  coverageFactorRule: ["optional", ["oneOf", ["normal", "rectangular-dominant", "none"]]],
+  limitedToWorstCase: ["optional", "boolean"],
+  toleranceAtLowC: optionalNumber,
+  toleranceAtHighC: optionalNumber,
+  iterations: optionalNumber,
+  enclosureLowC: optionalNumber,
+  enclosureHighC: optionalNumber,
+  enclosureGapLowC: optionalNumber,
+  enclosureGapHighC: optionalNumber,
+  enclosureGapToleranceC: optionalNumber,
+};
+
+const resistorShape: _Shape = { designator: "string", ohms: n };
+
+/** @internal The build sheet of a trip design (`TripBuildSheet`), every field (a report copies it whole). */
+export const _buildSheetShape: _Shape = {
+  sheetVersion: n,
+  setpoints: [
+    "array",
+    {
+      name: "string",
+      idealThresholdVolts: n,
+      realizedThresholdVolts: n,
+      thresholdErrorVolts: n,
+      thresholdLowVolts: n,
+      thresholdHighVolts: n,
+      networkIndex: n,
+      resistorsAbove: ["array", resistorShape],
+      resistorsBelow: ["array", resistorShape],
+      dividerCurrentMilliamps: n,
+      nominalTripC: n,
+      nominalReleaseC: n,
+      hysteresisC: n,
+      releaseLowC: n,
+      releaseHighC: n,
+      releaseMarginToNormalC: n,
+    },
+  ],
+  adcSetpoints: ["array", { name: "string", signalVolts: n, nominalCode: n, thresholdCode: n, codesPerC: n, codeLow: n, codeHigh: n }],
+  networks: ["array", { topology: ["oneOf", ["two-resistor", "ladder"]], resistors: ["array", resistorShape], totalOhms: n, currentMilliamps: n }],
+  shuntSeriesResistor: ["optional", { ohms: n, series: "string", toleranceFraction: n, powerWatts: n, ratingWatts: n }],
+  midRail: ["optional", { topOhms: n, bottomOhms: n, nominalVolts: n, worstCaseLowVolts: n, worstCaseHighVolts: n }],
+  parts: ["array", { designators: "string", part: "string", value: "any" /* a number (finite: checked by tripReportFromResult) or a type letter */, unit: "string", tolerance: n, toleranceUnit: ["oneOf", ["fraction", "°C"]], tempcoPpmPerC: n, count: n }],
+};
+
+/**
+ * @internal What `tripReportFromResult` reads of a `designTrip` result (`TripDesignResult`): every field it copies
+ * or prints.
+ */
+export const _tripResultShape: _Shape = {
+  name: ["optional", "string"],
+  networks: ["array", { topology: ["oneOf", ["two-resistor", "ladder"]], resistorsOhms: ["array", n], currentMilliamps: n }],
+  reference: {
+    name: "string",
+    kind: ["oneOf", ["ideal", "element", "sized-shunt"]],
+    nominalVolts: n,
+    toleranceFraction: n,
+    shuntCurrentMinMilliamps: optionalNumber,
+    shuntCurrentMaxMilliamps: optionalNumber,
+    seriesResistorPowerWatts: optionalNumber,
+    problems: strings,
+  },
+  setpoints: [
+    "array",
+    {
+      name: "string",
+      tripTemperatureC: n,
+      nominalTripC: n,
+      worstCase: tripBandShape,
+      rss: tripBandShape,
+      monteCarlo: tripBandShape,
+      maxNormalOperatingC: n,
+      hazardLimitC: n,
+      marginToNormalC: n,
+      marginToHazardC: n,
+      pass: "boolean",
+      reason: "string",
+      errorSources: ["array", { name: "string", description: "string", worstCaseC: n, standardUncertaintyC: n }],
+      bandOverService: ["optional", ["array", { hours: n, lowC: n, highC: n }]],
+    },
+  ],
+  acceptanceMethod: method,
+  midRail: { nominalVolts: n, worstCaseLowVolts: n, worstCaseHighVolts: n, worstCaseFraction: n, relativeStandardUncertainty: n },
+  buildSheet: ["optional", _buildSheetShape],
+  pass: "boolean",
+  notes: strings,
+};
+
 /** @internal A trip report (formatTripReport, tripBandChartSvg); the build sheet and dynamics sections are checked by their own readers. */
 export const _tripReportShape: _Shape = {
   title: "string",

@@ -20,8 +20,8 @@ import type { ReportFormat, ReportMethodInfo, TripReport, TripReportSetpoint } f
 import { _sentenceInUnit } from "../faults/_faultReviewWords.js";
 import { _csvUnitLine, _displayOf, _jsonUnitField, type ReportDisplayOptions, type _TemperatureDisplay } from "./displayUnit.js";
 import { _dynamicsCsv, _dynamicsMarkdownLines, _dynamicsTextLines } from "./runawayReport.js";
-import { _requireShape } from "../errors.js";
-import { _tripReportShape } from "./_reportShapes.js";
+import { _requireFiniteData, _requireShape } from "../errors.js";
+import { _methodInfoShape, _tripReportShape, _tripResultShape } from "./_reportShapes.js";
 
 function formatOhms(ohms: number): string {
   if (ohms >= 1e6) return `${+(ohms / 1e6).toPrecision(4)} MΩ`;
@@ -54,6 +54,11 @@ function formatOhms(ohms: number): string {
  * ```
  */
 export function tripReportFromResult(result: TripDesignResult, methods: ReportMethodInfo): TripReport {
+  _requireShape(result, _tripResultShape, "result", "tripReportFromResult");
+  _requireShape(methods, _methodInfoShape, "methods", "tripReportFromResult");
+  // the report copies the bands, the error sources and the build sheet as they are: no NaN or ±Infinity anywhere
+  _requireFiniteData(result, "result", "tripReportFromResult");
+  _requireFiniteData(methods, "methods", "tripReportFromResult");
   const reference = result.reference;
   const details = [
     `Reference: ${reference.name} (${reference.kind}), ${_fixed(reference.nominalVolts, 3)} V, ±${_fixed(reference.toleranceFraction * 100, 3)} % total.`,

@@ -46,8 +46,9 @@ export function _checkRates(rates: unknown, context: string, path = ""): Dangero
   };
 }
 
-/** @internal Checked β and β_D. */
-export function _checkCommonCause(f: CommonCauseFactors, context: string): CommonCauseFactors {
+/** @internal Checked β and β_D (of an object: `path` names it when it is none). */
+export function _checkCommonCause(f: CommonCauseFactors, context: string, path = "commonCause"): CommonCauseFactors {
+  _checkObject(f, path, context);
   return { beta: _checkNumber(f.beta, "beta", 0, 1, undefined, context), betaD: _checkNumber(f.betaD, "betaD", 0, 1, undefined, context) };
 }
 

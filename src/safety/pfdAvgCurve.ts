@@ -2,8 +2,8 @@
  * PFDavg against the proof-test interval, for 1oo1 and 1oo2 (the data of a chart).
  * @module
  */
-import { _invalidChoice, HotjunctionRangeError } from "../errors.js";
-import { _checkCommonCause, _checkNumber, _checkPositive, _checkProofTest, _checkRates } from "./_safetyChecks.js";
+import { _invalidChoice, _requireShape, HotjunctionRangeError } from "../errors.js";
+import { _checkCommonCause, _checkNumber, _checkObject, _checkPositive, _checkProofTest, _checkRates } from "./_safetyChecks.js";
 import { pfdAvg1oo1 } from "./pfdAvg1oo1.js";
 import { _pairTerms } from "./twoChannelCutout.js";
 import type { ChannelRates, CommonCauseBasis, PfdAvgCurve, PfdAvgCurvePoint, ProofTestParameters } from "./types.js";
@@ -46,8 +46,11 @@ export function logSpacedHours(fromHours: number, toHours: number, count: number
   const to = _checkNumber(toHours, "toHours", from, 1e9, "h", context);
   const n = _checkNumber(count, "count", 2, 10000, undefined, context);
   if (!Number.isInteger(n)) throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "count", value: n, context, problem: "is not an integer" });
-  const step = Math.log(to / from) / (n - 1);
-  return Array.from({ length: n }, (_, i) => (i === 0 ? from : i === n - 1 ? to : from * Math.exp(step * i)));
+  // to / from overflows for a subnormal fromHours (1e-320 h): then the spacing is taken from the logarithms
+  const ratio = to / from;
+  const wide = !Number.isFinite(ratio);
+  const step = (wide ? Math.log(to) - Math.log(from) : Math.log(ratio)) / (n - 1);
+  return Array.from({ length: n }, (_, i) => (i === 0 ? from : i === n - 1 ? to : wide ? Math.exp(Math.log(from) + step * i) : from * Math.exp(step * i)));
 }
 
 /**
@@ -75,12 +78,15 @@ export function pfdAvgCurve(channel: ChannelRates, options: PfdAvgCurveOptions):
   if (typeof options !== "object" || options === null || !Array.isArray(options.proofTestIntervalsHours)) {
     _invalidChoice("proofTestIntervalsHours", options?.proofTestIntervalsHours, ["an array of intervals in hours"], context);
   }
+  _checkObject(options.proofTest, "proofTest", context);
+  _requireShape(channel.name, ["optional", "string"], "channel.name", context);
   const pair = options.pair;
   let second = a;
   let cc = { beta: 0, betaD: 0 };
   const basis = pair?.commonCauseBasis ?? "larger";
   if (pair !== undefined) {
-    cc = _checkCommonCause(pair, context);
+    cc = _checkCommonCause(pair, context, "pair");
+    _requireShape(pair.name, ["optional", "string"], "pair.name", context);
     if (pair.secondChannel !== undefined) second = _checkRates(pair.secondChannel, context, "pair.secondChannel");
     if (basis !== "larger" && basis !== "smaller" && basis !== "geometric-mean") _invalidChoice("pair.commonCauseBasis", basis, ["larger", "smaller", "geometric-mean"], context);
   }

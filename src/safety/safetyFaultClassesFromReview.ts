@@ -3,7 +3,7 @@
  * fault with the healthy worst-case band.
  * @module
  */
-import { _invalidChoice } from "../errors.js";
+import { _invalidChoice, _requireOptionsObject, _requireShape, type _Shape } from "../errors.js";
 import type { FaultReview, FaultReviewRow } from "../faults/types.js";
 import { classifyFaultShift, defaultNoEffectThresholdC } from "../faults/classifyFaultShift.js";
 import type { SetpointFaultClasses } from "./types.js";
@@ -20,6 +20,19 @@ export interface FaultReviewForSafety {
   readonly noEffectThresholdC?: number;
   readonly rows: readonly Pick<FaultReviewRow, "faultId" | "effect" | "shiftC" | "detected">[];
 }
+
+const band: _Shape = ["optional", { lowC: "number", highC: "number" }];
+/** What the classes read of a review: its name and limits, and per row the id, effect, shift and detection. */
+const reviewShape: _Shape = {
+  name: "string",
+  healthyTripC: "number",
+  maxNormalOperatingC: "number",
+  hazardLimitC: "number",
+  healthyBandC: band,
+  noEffectThresholdC: ["optional", "number"],
+  rows: ["array", { faultId: "string", effect: ["oneOf", ["trips-immediately", "trips-early", "trips-late", "never-trips", "no-change"]], shiftC: ["nullable", "number"], detected: "boolean" }],
+};
+const optionsShape: _Shape = { healthyBandC: band, noEffectThresholdC: ["optional", "number"] };
 
 /** Options of {@link safetyFaultClassesFromReview}. */
 export interface SafetyFaultClassesFromReviewOptions {
@@ -58,6 +71,9 @@ export function safetyFaultClassesFromReview(review: FaultReviewForSafety | Faul
   if (typeof review !== "object" || review === null || !Array.isArray(review.rows)) {
     _invalidChoice("review", review, ["a fault review with rows"], "safetyFaultClassesFromReview");
   }
+  _requireShape(review, reviewShape, "review", "safetyFaultClassesFromReview");
+  _requireOptionsObject(options, "safetyFaultClassesFromReview", true);
+  _requireShape(options, optionsShape, "options", "safetyFaultClassesFromReview");
   const band = options.healthyBandC ?? review.healthyBandC ?? { lowC: review.healthyTripC, highC: review.healthyTripC };
   const thresholdOption = options.noEffectThresholdC ?? review.noEffectThresholdC;
   let threshold = thresholdOption ?? defaultNoEffectThresholdC;

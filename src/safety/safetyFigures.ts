@@ -3,7 +3,7 @@
  * λ_SD, λ_SU, λ_DD, λ_DU, SFF, DC, and (with a proof test) PFDavg and PFH for 1oo1.
  * @module
  */
-import { _invalidChoice, HotjunctionRangeError } from "../errors.js";
+import { _invalidChoice, _requireOptionsObject, _requireShape, HotjunctionRangeError } from "../errors.js";
 import { _checkProofTest } from "./_safetyChecks.js";
 import { pfdAvg1oo1 } from "./pfdAvg1oo1.js";
 import { pfh1oo1 } from "./pfh1oo1.js";
@@ -65,6 +65,9 @@ export function safetyFigures(failureData: FailureData, setpoint: SetpointFaultC
   if (typeof setpoint !== "object" || setpoint === null || !Array.isArray(setpoint.faults)) {
     _invalidChoice("setpoint", setpoint, ["classified faults of a setpoint ({ name, faults })"], context);
   }
+  _requireShape(setpoint.name, "string", "setpoint.name", context);
+  _requireShape(setpoint.noEffectThresholdC, ["optional", "number"], "setpoint.noEffectThresholdC", context);
+  _requireOptionsObject(options, context, true);
   const classes = new Map<string, SafetyFaultClass>();
   setpoint.faults.forEach((f: SafetyFaultClass, i) => {
     const path = `setpoint.faults[${i}]`;

@@ -2,7 +2,7 @@
  * The safety figures of every setpoint of a design from its fault reviews in one call.
  * @module
  */
-import { _invalidChoice } from "../errors.js";
+import { _invalidChoice, _requireOptionsObject, _requireShape } from "../errors.js";
 import type { FaultReview } from "../faults/types.js";
 import { safetyFaultClassesFromReview, type FaultReviewForSafety } from "./safetyFaultClassesFromReview.js";
 import { safetyFigures } from "./safetyFigures.js";
@@ -44,6 +44,8 @@ export function safetyFiguresFromReviews(
   options: SafetyFiguresFromReviewsOptions = {},
 ): SetpointSafetyFigures[] {
   if (!Array.isArray(reviews)) _invalidChoice("reviews", reviews, ["an array of fault reviews"], "safetyFiguresFromReviews");
+  _requireOptionsObject(options, "safetyFiguresFromReviews", true);
+  _requireShape(options.healthyBandsC, ["optional", ["array", ["optional", { lowC: "number", highC: "number" }]]], "options.healthyBandsC", "safetyFiguresFromReviews");
   const { healthyBandsC, noEffectThresholdC, ...figureOptions } = options;
   return reviews.map((review, i) => {
     const band = healthyBandsC?.[i];

@@ -3,7 +3,7 @@
  * no-certification statement and the safety caution.
  * @module
  */
-import { _invalidChoice, _requireOptionsObject } from "../errors.js";
+import { _invalidChoice, _requireFiniteData, _requireOptionsObject } from "../errors.js";
 import { _checkSafetyReport } from "./_safetyWords.js";
 import { CAUTION_TEXT } from "../caution.js";
 import type { PfdAvgCurve, SafetyFiguresReport, SetpointSafetyFigures, TwoChannelCutout } from "./types.js";
@@ -63,7 +63,9 @@ export function safetyFiguresReport(input: SafetyFiguresReportInput = {}): Safet
     const v = input[key];
     if (v !== undefined && !Array.isArray(v)) _invalidChoice(key, v, ["an array"], context);
   }
-  // the parts are checked as the renderers will read them (one shape guard), so a forged part is refused here
+  // the parts are checked as the renderers will read them (one shape guard), so a forged part is refused here;
+  // they are returned as they are: no NaN or ±Infinity in any field, whatever its kind
+  _requireFiniteData(input, "input", context);
   return _checkSafetyReport({
     ...(input.name !== undefined ? { name: input.name } : {}),
     setpoints: input.setpoints ?? [],

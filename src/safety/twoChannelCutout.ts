@@ -3,7 +3,7 @@
  * common-cause factors β and β_D.
  * @module
  */
-import { _invalidChoice } from "../errors.js";
+import { _invalidChoice, _requireShape } from "../errors.js";
 import { _checkCommonCause, _checkNumber, _checkProofTest, _checkRates, _downTimeHours, _perHour, _simplifiedValid, _undetectedDownTimeHours } from "./_safetyChecks.js";
 import type { BetaSensitivityRow, ChannelRates, CommonCauseBasis, DangerousRates, ProofTestUsed, TwoChannelCutout, TwoChannelCutoutOptions } from "./types.js";
 
@@ -99,6 +99,8 @@ export function twoChannelCutout(channelA: ChannelRates, channelB: ChannelRates,
   const context = "twoChannelCutout";
   const a = _checkRates(channelA, context, "channelA");
   const b = _checkRates(channelB, context, "channelB");
+  _requireShape(channelA.name, ["optional", "string"], "channelA.name", context);
+  _requireShape(channelB.name, ["optional", "string"], "channelB.name", context);
   if (typeof options !== "object" || options === null) _invalidChoice("options", options, ["an object with beta, betaD and proofTest"], context);
   const { beta, betaD } = _checkCommonCause(options, context);
   const p = _checkProofTest(options.proofTest, context);
@@ -125,7 +127,8 @@ export function twoChannelCutout(channelA: ChannelRates, channelB: ChannelRates,
   const betaDRatio = beta === 0 ? null : betaD / beta;
   const betaSensitivity: BetaSensitivityRow[] = betas.map((value, i) => {
     const rowBeta = _checkNumber(value, `betaSensitivity[${i}]`, 0, 1, undefined, context);
-    const rowBetaD = betaDRatio === null ? betaD : Math.min(1, rowBeta * betaDRatio);
+    // β_D/β is Infinity for a subnormal β (1e-320): a row at β = 0 then keeps β_D = 0, not 0·Infinity = NaN
+    const rowBetaD = betaDRatio === null ? betaD : rowBeta === 0 ? 0 : Math.min(1, rowBeta * betaDRatio);
     const t = _pairTerms(a, b, rowBeta, rowBetaD, p, basis, covA, covB);
     const pfd = t.independentPfd + t.commonCausePfd;
     return { beta: rowBeta, betaD: rowBetaD, pfdAvg1oo2: pfd, pfh1oo2PerHour: t.pfhPerHour, improvementFactor: ratio(better, pfd) };

@@ -140,12 +140,20 @@ function collect(data: unknown, options: ValidateFailureDataOptions): Hotjunctio
   return problems;
 }
 
+/** True when no number in `value` (at any depth of plain objects and arrays) is NaN or ±Infinity. */
+function isFiniteData(value: unknown, depth = 0): boolean {
+  if (typeof value === "number") return Number.isFinite(value);
+  if (typeof value !== "object" || value === null || depth > 8) return true;
+  return Object.values(value).every((v) => isFiniteData(v, depth + 1));
+}
+
 /**
  * Every problem of a failure-data object at once (for a `validate` listing), each a typed error with a one-line
  * message naming the path (`failureData.elements[2].modes[1].share`), the value and the valid range.
  * @param data - the failure data (any value)
  * @param options - known fault ids, path prefix
- * @returns the problems, empty when the data is valid
+ * @returns the problems, empty when the data is valid (a value holding NaN or ±Infinity is a non-enumerable `value`)
+ * @throws HotjunctionTypeError (code `INVALID_DESIGN`) when `data` is not an object with an `elements` array
  * @example
  * ```ts
  * import { failureDataProblems } from "hotjunction";
@@ -155,7 +163,17 @@ function collect(data: unknown, options: ValidateFailureDataOptions): Hotjunctio
  * ```
  */
 export function failureDataProblems(data: unknown, options: ValidateFailureDataOptions = {}): HotjunctionError[] {
-  return collect(data, options);
+  const problems = collect(data, options);
+  // a value that is not failure data at all (no object, no elements array) is a wrong argument: thrown, not listed
+  const elements = typeof data === "object" && data !== null && !Array.isArray(data) ? (data as { elements?: unknown }).elements : undefined;
+  if (!Array.isArray(elements)) throw problems[0]!;
+  // A listed problem keeps the value as given, but one holding NaN or ±Infinity keeps it as a non-enumerable field
+  // (as `message` is): the listing is data that is spread and serialized (JSON would print NaN as null), and a
+  // listing must carry no non-finite number; `value` and the message still show it.
+  for (const problem of problems) {
+    if (!isFiniteData(problem.value)) Object.defineProperty(problem, "value", { enumerable: false });
+  }
+  return problems;
 }
 
 /**

@@ -54,9 +54,11 @@ function statedToleranceFraction(reference: DesignReference): number {
  */
 export function _adcComparison(io: CliIo, design: DesignFile, settings: AnalysisSettings): ReferenceComparison {
   const all = [design.reference, ...(design.referenceAlternatives ?? [])];
+  // each option as the design's one reference (a valid design of its own: its name may be an alternative's)
+  const { referenceAlternatives: _alternatives, ...single } = design;
   const options: ReferenceComparisonEntry[] = all.map((reference) => {
-    const report = _tripReportOfDesign(io, { ...design, reference }, settings);
-    const ideal = _tripReportOfDesign(io, { ...design, reference: { kind: "ideal", name: `ideal ${reference.nominalVolts} V`, nominalVolts: reference.nominalVolts } }, settings);
+    const report = _tripReportOfDesign(io, { ...single, reference }, settings);
+    const ideal = _tripReportOfDesign(io, { ...single, reference: { kind: "ideal", name: `ideal ${reference.nominalVolts} V`, nominalVolts: reference.nominalVolts } }, settings);
     const acceptance = settings.acceptanceMethod;
     const setpoints = report.setpoints.map((s, i) => {
       const b = s.bands.find((x) => x.method === acceptance) ?? (s.bands[0] as TripBand);

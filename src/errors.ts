@@ -130,7 +130,8 @@ export function isHotjunctionError(error: unknown): error is HotjunctionError {
  * @internal
  */
 export function _requireFinite(value: unknown, quantity: string, unit?: string, context?: string): number {
-  if (typeof value !== "number" || !Number.isFinite(value)) {
+  // Number.isFinite is false for every non-number (no coercion), so this one test refuses both.
+  if (!Number.isFinite(value)) {
     throw new HotjunctionTypeError({
       code: "NOT_A_FINITE_NUMBER",
       quantity,
@@ -140,7 +141,7 @@ export function _requireFinite(value: unknown, quantity: string, unit?: string, 
       problem: "is not a finite number",
     });
   }
-  return value;
+  return value as number;
 }
 
 /**

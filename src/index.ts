@@ -54,6 +54,7 @@ export { typeT, typeTApproximateInverse } from "./data/typeT.js";
 // ITS-90 conversion
 export {
   createThermocouple,
+  defineThermocoupleData,
   type ApproximateInverseRange,
   type ColdJunctionOptions,
   type Thermocouple,

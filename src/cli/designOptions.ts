@@ -5,6 +5,7 @@
  */
 import { Option, type Command } from "commander";
 import type { DesignFile } from "../design/designSchema.js";
+import { _defaultDesignTrials, _designAnalysisSettings, type AnalysisSettings } from "../designAnalysis/designSettings.js";
 import type { ReportMethodInfo } from "../report/reportTypes.js";
 import type { CliIo } from "./io.js";
 import { marginFailExitCode } from "./cliError.js";
@@ -20,16 +21,10 @@ export interface AnalysisOptionValues {
   readonly svg?: string;
 }
 
-/** Resolved analysis settings (command line over design file over defaults). */
-export interface AnalysisSettings {
-  readonly acceptanceMethod: PropagationMethod;
-  readonly trials: number;
-  readonly seed: number;
-  readonly coverage: number;
-}
+export type { AnalysisSettings } from "../designAnalysis/designSettings.js";
 
-/** Default Monte Carlo trials of the CLI (modest; raise with --trials). */
-export const defaultCliTrials = 20_000;
+/** Default Monte Carlo trials of the CLI (the design-file tools' default; raise with --trials). */
+export const defaultCliTrials = _defaultDesignTrials;
 
 /** Adds --method, --trials, --seed and, when `svgWhat` is given, --svg. @internal */
 export function _addAnalysisOptions(command: Command, svgWhat: string | undefined): Command {
@@ -65,11 +60,12 @@ export function _addReportOnlyOption(command: Command): Command {
 
 /** Command line over design file over defaults. @internal */
 export function _analysisSettings(design: DesignFile, values: AnalysisOptionValues): AnalysisSettings {
+  const base = _designAnalysisSettings(design);
   return {
-    acceptanceMethod: values.method ?? design.analysis?.acceptanceMethod ?? "worst-case",
-    trials: values.trials ?? design.analysis?.monteCarloTrials ?? defaultCliTrials,
-    seed: values.seed ?? design.analysis?.seed ?? 1,
-    coverage: 0.95,
+    acceptanceMethod: values.method ?? base.acceptanceMethod,
+    trials: values.trials ?? base.trials,
+    seed: values.seed ?? base.seed,
+    coverage: base.coverage,
   };
 }
 

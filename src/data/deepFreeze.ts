@@ -8,6 +8,6 @@
 
 /** Freezes `value` and every object or array reachable from it; returns `value`. @internal */
 export function _deepFreeze<T>(value: T): T {
-  if (typeof value === "object" && value !== null) Object.values(Object.freeze(value)).forEach(_deepFreeze);
+  if (typeof value === "object" && value) Object.values(Object.freeze(value)).forEach(_deepFreeze);
   return value;
 }

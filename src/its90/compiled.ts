@@ -4,6 +4,7 @@
  * @internal
  * @module
  */
+import { _checkedData, type _DataStart } from "../data/checkedData.js";
 import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
 import { HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 
@@ -29,13 +30,14 @@ export interface InversePiece {
   readonly width: number;
   readonly perMillivolt: number;
   readonly count: number;
-  readonly lowC: number;
-  readonly highC: number;
   /** count × 8 monomial coefficients in the local variable s ∈ [−1, 1] (zero until the segment is built). */
   readonly coefficients: Float64Array;
   /** Per segment: 0 not built yet, 1 solved by Newton instead of the interpolant, 2 interpolant. */
   readonly state: Uint8Array;
-  /** Temperatures of the count + 1 segment boundaries, °C (NaN until a segment next to it is built). */
+  /**
+   * Temperatures of the count + 1 segment boundaries, °C (NaN until a segment next to it is built); the first and
+   * the last, the piece's ends, are set when the piece is made.
+   */
   readonly edgesC: Float64Array;
 }
 
@@ -69,6 +71,11 @@ export interface CompiledType {
    * the upper root of E(t) = E(minC) (about 42.13 °C).
    */
   readonly monotonicFromC: number;
+  /**
+   * Only where E starts by falling (type B): the problem sentence of an EMF at or below E(minC), which belongs
+   * to two temperatures (`AMBIGUOUS_EMF`).
+   */
+  readonly ambiguity: string | undefined;
   /** Exact-inverse tables, built on first use by `_exactInverseTables`. */
   inverse?: ExactInverse;
 }
@@ -203,23 +210,43 @@ export function _solveInSubrange(ct: CompiledType, index: number, target: number
   return t;
 }
 
-const cache = new WeakMap<ThermocoupleData, CompiledType>();
-
-/** Returns the numeric form of a data object, building it on first use. @internal */
-export function _compile(data: ThermocoupleData): CompiledType {
-  let ct = cache.get(data);
-  if (ct === undefined) {
-    ct = build(data);
-    cache.set(data, ct);
+/**
+ * The numeric form of a checked data object (a generated data module's export or a `defineThermocoupleData`
+ * result), built on first use and kept beside its mark; any other object is refused (`UNKNOWN_TYPE`). Neither
+ * checks nor searches: the one-type path (`createThermocouple`) reaches only this. @internal
+ */
+export function _compileChecked(data: ThermocoupleData): CompiledType {
+  const start = _checkedData.get(data);
+  if (start === undefined) {
+    throw new HotjunctionTypeError({
+      code: "UNKNOWN_TYPE",
+      quantity: "thermocouple data",
+      value: data,
+      problem: "is not a type's data (typeB … typeT, defineThermocoupleData)",
+    });
   }
+  return (start.compiled ??= build(data, start)) as CompiledType;
+}
+
+const foreign = new WeakMap<ThermocoupleData, CompiledType>();
+
+/**
+ * Returns the numeric form of any data object, building it on first use: a checked one as `_compileChecked` does,
+ * any other after the full check and the start search (`_compileForeign`; kept per object, so a later change of
+ * the object is not seen; the letter-based functions accept such objects). @internal
+ */
+export function _compile(data: ThermocoupleData): CompiledType {
+  if (_checkedData.has(data)) return _compileChecked(data);
+  let ct = foreign.get(data);
+  if (ct === undefined) foreign.set(data, (ct = _compileForeign(data)));
   return ct;
 }
 
 /**
- * Checks a data object once, when it is compiled: an object with a list of sub-ranges (else
- * `UNKNOWN_TYPE`), contiguous increasing sub-ranges with finite ends and at least one coefficient each, all
- * finite, a range within the sub-ranges (a widened range would extrapolate a polynomial far outside its
- * sub-range) and a finite exponential term (else `INVALID_OPTION`). Kept compact: it is in every bundle.
+ * Checks a data object: an object with a list of sub-ranges (else `UNKNOWN_TYPE`), contiguous increasing
+ * sub-ranges with finite ends and at least one coefficient each, all finite, a range within the sub-ranges (a
+ * widened range would extrapolate a polynomial far outside its sub-range) and a finite exponential term (else
+ * `INVALID_OPTION`). Only for data the generator did not write (the generated modules are checked by their tests).
  */
 function validate(data: ThermocoupleData): void {
   const subs = data?.forward;
@@ -255,14 +282,49 @@ function validate(data: ThermocoupleData): void {
   }
 }
 
-function build(data: ThermocoupleData): CompiledType {
+/**
+ * Where the EMF of a compiled type becomes unique: empty when E rises from minC; for a type whose E starts by
+ * falling (type B) the slope's sign change in the first sub-range (bisection), E there (the lowest EMF) and the
+ * upper root of E(t) = E(minC). scripts/generateTypeData.py repeats these operations for the generated modules.
+ */
+function monotoneStart(ct: CompiledType): _DataStart {
+  if (_slopeInSubrange(ct, 0, ct.minC) > 0) return {};
+  const top = ct.subranges[0]?.maxC as number;
+  let lo = ct.minC;
+  let hi = top;
+  for (let i = 0; i < 200; i++) {
+    const mid = 0.5 * (lo + hi);
+    if (_slopeInSubrange(ct, 0, mid) <= 0) lo = mid;
+    else hi = mid;
+  }
+  const turnC = 0.5 * (lo + hi);
+  const fromC = _solveInSubrange(ct, 0, ct.emfAtMinC, turnC, top);
+  return {
+    lowestEmf: _emfInSubrange(ct, 0, turnC),
+    monotonicFromC: fromC,
+    ambiguity: `is ambiguous (E dips below ${ct.emfAtMinC} mV up to ${fromC.toFixed(2)} °C: two temperatures); use an EMF above ${ct.emfAtMinC} mV`,
+  };
+}
+
+/** The full check and the start search of a data object the generator did not write. @internal */
+export function _compileForeign(data: ThermocoupleData): CompiledType {
   validate(data);
+  return build(data, monotoneStart(build(data, {})));
+}
+
+/** Start data of a checked copy (`defineThermocoupleData`): the start search's result. @internal */
+export function _startOf(ct: CompiledType): _DataStart {
+  // A fresh object: its `compiled` slot is the copy's own.
+  return ct.ambiguity === undefined ? {} : { lowestEmf: ct.lowestEmf, monotonicFromC: ct.monotonicFromC, ambiguity: ct.ambiguity };
+}
+
+function build(data: ThermocoupleData, start: _DataStart): CompiledType {
   const x = data.exponential;
-  const minC = data.minC;
+  // The EMF fields are set below, once the evaluation has what it reads (sub-ranges and the exponential term).
   const ct = {
     type: data.type,
     context: `type ${data.type}`,
-    minC,
+    minC: data.minC,
     maxC: data.maxC,
     subranges: data.forward.map((f) => ({
       minC: f.minC,
@@ -270,30 +332,15 @@ function build(data: ThermocoupleData): CompiledType {
       c: Float64Array.from(f.coefficients),
       hasExp: x !== undefined && f.minC >= 0,
     })),
-    a0: x?.a0 ?? 0,
-    a1: x?.a1 ?? 0,
-    a2: x?.a2 ?? 0,
-    emfAtMinC: 0,
-    emfAtMaxC: 0,
-    lowestEmf: 0,
-    monotonicFromC: minC,
-  };
-  ct.lowestEmf = ct.emfAtMinC = _emf(ct, minC);
+    a0: 0,
+    a1: 0,
+    a2: 0,
+    ...x,
+    monotonicFromC: start.monotonicFromC ?? data.minC,
+    ambiguity: start.ambiguity,
+  } as Partial<CompiledType> as { -readonly [K in keyof CompiledType]: CompiledType[K] };
+  ct.emfAtMinC = _emf(ct, ct.minC);
+  ct.lowestEmf = start.lowestEmf ?? ct.emfAtMinC;
   ct.emfAtMaxC = _emf(ct, ct.maxC);
-  // A type whose E starts by falling (type B) is ambiguous until E climbs back to E(minC).
-  // Find where the slope turns positive in the first sub-range, then the upper root of E(t) = E(minC).
-  if (_slopeInSubrange(ct, 0, minC) <= 0) {
-    const top = ct.subranges[0]?.maxC as number;
-    let lo = minC;
-    let hi = top;
-    for (let i = 0; i < 200; i++) {
-      const mid = 0.5 * (lo + hi);
-      if (_slopeInSubrange(ct, 0, mid) <= 0) lo = mid;
-      else hi = mid;
-    }
-    const turnC = 0.5 * (lo + hi);
-    ct.lowestEmf = _emfInSubrange(ct, 0, turnC);
-    ct.monotonicFromC = _solveInSubrange(ct, 0, ct.emfAtMinC, turnC, top);
-  }
   return ct;
 }

@@ -4,9 +4,11 @@
  * no type's data, so a bundle that uses {@link createThermocouple} with one data module carries that type alone.
  * @module
  */
+import { _checkedData } from "../data/checkedData.js";
+import { _deepFreeze } from "../data/deepFreeze.js";
 import type { ThermocoupleData, ThermocoupleType } from "../data/thermocoupleData.js";
 import { _requireFinite, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
-import { _compile, _emf, _slope, type CompiledType } from "./compiled.js";
+import { _compileChecked, _compileForeign, _emf, _slope, _startOf, type CompiledType } from "./compiled.js";
 import { _exactInverse, _exactInverseTables } from "./exactInverse.js";
 
 export type { ApproximateInverseRange } from "../data/thermocoupleData.js";
@@ -67,7 +69,8 @@ export const _EMF_END_TOLERANCE_MV = 1e-10;
 export function _checkEmf(ct: CompiledType, emfMillivolts: number, quantity: string, context: string): void {
   if (
     emfMillivolts > ct.emfAtMaxC + _EMF_END_TOLERANCE_MV ||
-    emfMillivolts < ct.lowestEmf - (ct.lowestEmf === ct.emfAtMinC ? _EMF_END_TOLERANCE_MV : 0)
+    // The end tolerance applies at a range end only, not below type B's dip.
+    emfMillivolts < ct.lowestEmf - (ct.ambiguity === undefined ? _EMF_END_TOLERANCE_MV : 0)
   ) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",
@@ -79,14 +82,14 @@ export function _checkEmf(ct: CompiledType, emfMillivolts: number, quantity: str
       context,
     });
   }
-  if (ct.monotonicFromC > ct.minC && emfMillivolts <= ct.emfAtMinC) {
+  if (ct.ambiguity !== undefined && emfMillivolts <= ct.emfAtMinC) {
     throw new HotjunctionRangeError({
       code: "AMBIGUOUS_EMF",
       quantity,
       value: emfMillivolts,
       unit: "mV",
       context,
-      problem: `is ambiguous (E dips below ${ct.emfAtMinC} mV up to ${ct.monotonicFromC.toFixed(2)} °C: two temperatures); use an EMF above ${ct.emfAtMinC} mV`,
+      problem: ct.ambiguity,
     });
   }
 }
@@ -112,26 +115,19 @@ export function _emfFromTemperature(ct: CompiledType, temperatureC: number, opti
   if (options === undefined && typeof temperatureC === "number" && temperatureC >= ct.minC && temperatureC <= ct.maxC) {
     return _emf(ct, temperatureC);
   }
-  const t = _checkTemperature(ct, temperatureC, "temperature");
-  const emf = _emf(ct, t);
-  return options === undefined ? emf : emf - coldJunctionEmf(ct, options);
+  // coldJunctionEmf is 0 without options, and x − 0 is x (−0 included).
+  return _emf(ct, _checkTemperature(ct, temperatureC, "temperature")) - coldJunctionEmf(ct, options);
 }
 
 /** @internal */
 export function _temperatureFromEmf(ct: CompiledType, emfMillivolts: number, options?: ColdJunctionOptions): number {
-  if (
-    options === undefined &&
-    typeof emfMillivolts === "number" &&
-    emfMillivolts > ct.emfAtMinC &&
-    emfMillivolts <= ct.emfAtMaxC
-  ) {
-    // Fast path: a plain EMF inside the unambiguous range (NaN fails the comparisons and goes the long way).
-    return _exactInverse(ct, _exactInverseTables(ct), emfMillivolts);
+  let total = emfMillivolts;
+  // Fast path: a plain EMF inside the unambiguous range (NaN fails the comparisons and goes the long way).
+  if (!(options === undefined && typeof total === "number" && total > ct.emfAtMinC && total <= ct.emfAtMaxC)) {
+    _requireFinite(emfMillivolts, "EMF", "mV", ct.context);
+    total += coldJunctionEmf(ct, options);
+    _checkEmf(ct, total, options?.coldJunctionC === undefined ? "EMF" : "cold-junction-compensated EMF", ct.context);
   }
-  _requireFinite(emfMillivolts, "EMF", "mV", ct.context);
-  const coldEmf = coldJunctionEmf(ct, options);
-  const total = emfMillivolts + coldEmf;
-  _checkEmf(ct, total, options?.coldJunctionC === undefined ? "EMF" : "cold-junction-compensated EMF", ct.context);
   return _exactInverse(ct, _exactInverseTables(ct), total);
 }
 
@@ -156,7 +152,7 @@ export function _temperatureRange(ct: CompiledType): ThermocoupleRange {
 
 /**
  * A converter bound to one type's data: the scalar conversions of the letter-based functions, with no lookup
- * per call, and a bundle that carries only this type's coefficients (under 3 kB min+gzip). For bulk work and
+ * per call, and a bundle that carries only this type's coefficients (about 3.1 kB min+gzip). For bulk work and
  * ranges use {@link emfFromTemperatureArray}, {@link temperatureFromEmfArray} and {@link temperatureRange},
  * which accept the same data object.
  */
@@ -174,9 +170,13 @@ export interface Thermocouple {
 /**
  * Binds the conversions to one type's data object. Use it when a bundle must carry one type only:
  * `import { createThermocouple, typeK } from "hotjunction"` pulls type K's coefficients and no other's.
- * @param data - a type's data module export (`typeB` … `typeT`)
+ * It takes checked data only: a data module's export (`typeB` … `typeT`) or a {@link defineThermocoupleData}
+ * result. Any other object, a copy of a type's data included, is refused; pass it through
+ * {@link defineThermocoupleData} first (which checks it once), or give it to the letter-based functions (which
+ * check it on first use).
+ * @param data - a type's data module export (`typeB` … `typeT`) or a {@link defineThermocoupleData} result
  * @returns a {@link Thermocouple} converter
- * @throws HotjunctionTypeError if `data` is not a thermocouple data object
+ * @throws HotjunctionTypeError (code `UNKNOWN_TYPE`) if `data` is not checked data
  * @example
  * ```ts
  * import { createThermocouple, typeK } from "hotjunction";
@@ -186,8 +186,7 @@ export interface Thermocouple {
  * ```
  */
 export function createThermocouple(data: ThermocoupleData): Thermocouple {
-  // _compile checks the data object (UNKNOWN_TYPE when it is not one, INVALID_OPTION when it is malformed).
-  const ct = _compile(data);
+  const ct = _compileChecked(data);
   return {
     type: ct.type,
     data,
@@ -195,4 +194,45 @@ export function createThermocouple(data: ThermocoupleData): Thermocouple {
     temperatureFromEmf: (emfMillivolts, options) => _temperatureFromEmf(ct, emfMillivolts, options),
     seebeckCoefficient: (temperatureC) => _seebeckCoefficient(ct, temperatureC),
   };
+}
+
+/**
+ * Checks a data object the package did not generate (a copy of a type's data, a user's own reference function) and
+ * returns a checked, deeply frozen copy of it that {@link createThermocouple} accepts. The check: a list of
+ * contiguous increasing sub-ranges with finite ends and 1 or more finite coefficients each, a range inside the
+ * sub-ranges and a finite exponential term; where the EMF starts by falling (as type B's does), where it becomes
+ * unique is found once here. The copy holds `type`, `source`, `minC`, `maxC`, `forward` and `exponential` only.
+ * @param data - an object of the {@link ThermocoupleData} shape
+ * @returns the checked copy (a data module's export is returned as it is)
+ * @throws HotjunctionTypeError (code `UNKNOWN_TYPE`) if `data` has no list of sub-ranges
+ * @throws HotjunctionRangeError (code `INVALID_OPTION`) naming the range and the sub-ranges' span if the data is malformed
+ * @example
+ * ```ts
+ * import { createThermocouple, defineThermocoupleData, typeK } from "hotjunction";
+ * const copy = defineThermocoupleData(JSON.parse(JSON.stringify(typeK)));
+ * console.log(createThermocouple(copy).emfFromTemperature(500).toFixed(3)); // "20.644"
+ * ```
+ */
+export function defineThermocoupleData(data: ThermocoupleData): ThermocoupleData {
+  if (_checkedData.has(data)) return data;
+  // Copied field by field first (no getter is read twice), then the copy is checked and frozen.
+  const d = data as Partial<ThermocoupleData> | null | undefined;
+  const forward = d?.forward;
+  const e = d?.exponential;
+  const copy = {
+    type: d?.type,
+    source: d?.source,
+    minC: d?.minC,
+    maxC: d?.maxC,
+    forward: Array.isArray(forward)
+      ? forward.map((f) => ({
+          minC: f?.minC,
+          maxC: f?.maxC,
+          coefficients: Array.isArray(f?.coefficients) ? [...f.coefficients] : f?.coefficients,
+        }))
+      : forward,
+    ...(e == null ? {} : { exponential: { a0: e?.a0, a1: e?.a1, a2: e?.a2 } }),
+  } as ThermocoupleData;
+  _checkedData.set(_deepFreeze(copy), _startOf(_compileForeign(copy)));
+  return copy;
 }

@@ -42,7 +42,7 @@ function buildSegment(ct: CompiledType, p: InversePiece, k: number): number {
   const width = p.width;
   const edges = p.edgesC;
   for (let j = k; j <= k + 1; j++) {
-    if (edges[j] !== edges[j]) edges[j] = _solveInSubrange(ct, range, p.emfStart + j * width, p.lowC, p.highC);
+    if (edges[j] !== edges[j]) edges[j] = _solveInSubrange(ct, range, p.emfStart + j * width, edges[0] as number, edges[p.count] as number);
   }
   const segLo = edges[k] as number;
   const segHi = edges[k + 1] as number;
@@ -97,8 +97,6 @@ function build(ct: CompiledType): ExactInverse {
         width,
         perMillivolt: 1 / width,
         count,
-        lowC,
-        highC,
         coefficients: new Float64Array(count * 8),
         state: new Uint8Array(count),
         edgesC,

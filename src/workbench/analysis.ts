@@ -19,11 +19,12 @@ import {
 } from "../index.js";
 import { measurementChainFromDesign, referenceOptionFromDesign, tripDesignFromDesign, type DesignFile } from "../design/index.js";
 import { firmwareTripReport, runawayChartSvg, tripBandChartSvg, tripReportFromResult, type ReportMethodInfo, type TripReport } from "../report/index.js";
-// The CLI's own design-file steps, so the page shows what `check` and `runaway` print (one source): the dynamics
-// fold-in (runaway against each setpoint's static band, verdict from the dynamic peak) and the ADC build sheet.
-import { _foldDynamics, _runawayToChart, _tripDynamicsOfDesign } from "../cli/dynamicsOfDesign.js";
-import { _adcBuildSheet } from "../cli/commands/check.js";
-import { _designFailureDataProblems, _designFaultIds } from "../cli/faultSafety.js";
+// The design-file steps the CLI takes too (library modules, one source), so the page shows what `check`, `runaway`
+// and `validate` print: the dynamics fold-in (runaway against each setpoint's static band, verdict from the dynamic
+// peak), the ADC build sheet and the failure-data checks.
+import { _adcBuildSheet } from "../designAnalysis/adcBuildSheet.js";
+import { _designFailureDataProblems, _designFaultIds } from "../designAnalysis/designSafety.js";
+import { _foldDynamics, _runawayToChart, _tripDynamicsOfDesign } from "../designAnalysis/dynamicsOfDesign.js";
 
 /** How hard to work. */
 export interface AnalysisSettings {

@@ -1,6 +1,7 @@
 /**
  * The CLI's exit codes (one table in cliError.ts, printed by --help and in the README) and the regressions of
- * the CLI bugs found by a new user: `table` with half an ADC chain printed "NaN V", `table` advised options that
+ * the CLI bugs found by a new user: `table` with half an ADC chain printed "NaN V" (and its ADC full scale is
+ * `--full-scale-volts`, the library's name, with `--reference-volts` kept as a deprecated alias), `table` advised options that
  * do not exist, `compare`/`faults` offered `--svg` and then refused it (both draw a chart now), `sweep` accepted steps its output
  * cannot show; and `check`/`compare` exit 3 when the design fails its margins (for CI gates) unless
  * `--report-only`.
@@ -93,12 +94,12 @@ describe("exit codes", () => {
 });
 
 describe("regressions of the CLI bugs", () => {
-  it("table with --gain but no --reference-volts: one line naming what is missing, never NaN", async () => {
+  it("table with --gain but no --full-scale-volts: one line naming what is missing, never NaN", async () => {
     const base = ["table", "K", "--kind", "adcCodeToTemperature", "--from", "0", "--to", "400", "--max-error", "0.1"];
     const cases: [string[], string][] = [
-      [["--gain", "100"], "hotjunction: --kind adcCodeToTemperature needs --gain, --reference-volts and --bits; missing --reference-volts, --bits"],
-      [["--gain", "100", "--bits", "16"], "hotjunction: --kind adcCodeToTemperature needs --gain, --reference-volts and --bits; missing --reference-volts"],
-      [[], "hotjunction: --kind adcCodeToTemperature needs --gain, --reference-volts and --bits; missing --gain, --reference-volts, --bits"],
+      [["--gain", "100"], "hotjunction: --kind adcCodeToTemperature needs --gain, --full-scale-volts and --bits; missing --full-scale-volts, --bits"],
+      [["--gain", "100", "--bits", "16"], "hotjunction: --kind adcCodeToTemperature needs --gain, --full-scale-volts and --bits; missing --full-scale-volts"],
+      [[], "hotjunction: --kind adcCodeToTemperature needs --gain, --full-scale-volts and --bits; missing --gain, --full-scale-volts, --bits"],
     ];
     for (const [extra, message] of cases) {
       const result = await run([...base, ...extra]);
@@ -110,8 +111,28 @@ describe("regressions of the CLI bugs", () => {
     expect(wrongKind.code).toBe(2);
     expect(oneLine(wrongKind.stderr)).toMatch(/apply to the ADC kinds only/);
     // The complete chain builds (the example of `table --help`; from 25 °C, since the ADC reads no negative EMF).
-    const ok = await run(["table", "K", "--kind", "adcCodeToTemperature", "--from", "25", "--to", "400", "--max-error", "0.1", "--gain", "100", "--reference-volts", "2.5", "--bits", "16", "--cold-junction", "25", "--format", "csv"]);
+    const ok = await run(["table", "K", "--kind", "adcCodeToTemperature", "--from", "25", "--to", "400", "--max-error", "0.1", "--gain", "100", "--full-scale-volts", "2.5", "--bits", "16", "--cold-junction", "25", "--format", "csv"]);
     expect(ok.code).toBe(0);
+  });
+
+  it("table --reference-volts, the deprecated name of --full-scale-volts, gives the same table until 0.2; both given must agree", async () => {
+    const base = ["table", "K", "--kind", "adcCodeToTemperature", "--from", "25", "--to", "400", "--max-error", "0.1", "--gain", "100", "--bits", "16", "--cold-junction", "25", "--format", "csv"];
+    const current = await run([...base, "--full-scale-volts", "2.5"]);
+    const former = await run([...base, "--reference-volts", "2.5"]);
+    const both = await run([...base, "--reference-volts", "2.5", "--full-scale-volts", "2.5"]);
+    expect(current.code).toBe(0);
+    expect(former.code).toBe(0);
+    expect(former.stdout).toBe(current.stdout);
+    expect(both.stdout).toBe(current.stdout);
+    // A different full scale gives a different table (the option is read, not ignored).
+    expect((await run([...base, "--reference-volts", "3.3"])).stdout).not.toBe(current.stdout);
+    const conflict = await run([...base, "--reference-volts", "2.5", "--full-scale-volts", "3.3"]);
+    expect(conflict.code).toBe(2);
+    expect(oneLine(conflict.stderr)).toBe("hotjunction: --full-scale-volts 3.3 and the deprecated --reference-volts 2.5 differ; give --full-scale-volts only");
+    const help = await run(["table", "--help"]);
+    expect(help.stdout).toMatch(/--full-scale-volts <V>\s+ADC kinds: ADC full-scale \(reference\) voltage/);
+    expect(help.stdout).not.toMatch(/^ +--reference-volts/m);
+    expect(help.stdout).toContain("--reference-volts, the former name of --full-scale-volts, is accepted until 0.2.");
   });
 
   it("table's advice names only options the command has", async () => {

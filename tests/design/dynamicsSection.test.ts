@@ -4,7 +4,7 @@
 import { readFileSync } from "node:fs";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { _tripDynamicsOfDesign } from "../../src/cli/dynamicsOfDesign.js";
+import { _tripDynamicsOfDesign } from "../../src/designAnalysis/dynamicsOfDesign.js";
 import { _tripReportOfDesign } from "../../src/cli/commands/check.js";
 import { DesignFileError, dynamicsModelFromDesign, parseDesign, type DesignFile } from "../../src/design/index.js";
 

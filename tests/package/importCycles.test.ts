@@ -122,4 +122,19 @@ describe("import circles", () => {
     expect([...graph.values()].flat().length).toBeGreaterThan(300);
     expect(importCircles(graph)).toEqual([]);
   });
+
+  it("only the CLI imports the CLI, and nothing imports the workbench: the workbench and the library take the design-file steps from src/designAnalysis/", () => {
+    const graph = srcGraph();
+    const upward = [...graph].flatMap(([from, targets]) =>
+      targets
+        .filter((to) => (to.startsWith("src/cli/") && !from.startsWith("src/cli/")) || (to.startsWith("src/workbench/") && !from.startsWith("src/workbench/")))
+        .map((to) => `${from} -> ${to}`),
+    );
+    expect(upward).toEqual([]);
+    // The check sees the workbench's imports of the shared steps (so the filter above looks at real edges).
+    expect(graph.get("src/workbench/analysis.ts")).toContain("src/designAnalysis/dynamicsOfDesign.ts");
+    for (const [from, targets] of graph) {
+      if (from.startsWith("src/designAnalysis/")) expect(targets.filter((t) => !/^src\/(design|report|trip|chain|dynamics|faults|safety|uncertainty|designAnalysis)\/|^src\/errors\.ts$/.test(t)), from).toEqual([]);
+    }
+  });
 });

@@ -22,7 +22,8 @@ import { formatSafetyFiguresMarkdown } from "../../safety/formatSafetyFiguresMar
 import { formatSafetyFiguresText } from "../../safety/formatSafetyFiguresText.js";
 import { CliError } from "../cliError.js";
 import { _addDisplayUnitOption, _loadDesign } from "../designOptions.js";
-import { _designSafety, _reviewDesignFaults, type _DesignSafety } from "../faultSafety.js";
+import { _designSafety, _reviewDesignFaults, type _DesignSafety } from "../../designAnalysis/designSafety.js";
+import { _failureDataError } from "../faultSafety.js";
 import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _parseNumber } from "../parseArgs.js";
 import { _readInputFile } from "../readInput.js";
@@ -164,7 +165,7 @@ export function registerFaultsCommand(program: Command, context: CommandContext)
         { ...(options.step !== undefined ? { step: options.step } : {}), ...(options.noEffectThreshold !== undefined ? { noEffectThreshold: options.noEffectThreshold } : {}) },
         second?.protection,
       );
-      safety = _designSafety(path, design, report, secondOptions);
+      safety = _designSafety(design, report, secondOptions, (problem) => _failureDataError(path, problem));
     }
     const text = _faultsText(_chosenFormat(options), report, safety, options.unit ?? "C");
     const extras =

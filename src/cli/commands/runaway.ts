@@ -17,7 +17,7 @@ import {
   _methodInfo,
   type AnalysisOptionValues,
 } from "../designOptions.js";
-import { _dynamicsFigures, _runawayToChart, _tripDynamicsOfDesign } from "../dynamicsOfDesign.js";
+import { _dynamicsFigures, _runawayToChart, _tripDynamicsOfDesign } from "../../designAnalysis/dynamicsOfDesign.js";
 import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import type { CommandContext } from "../commandContext.js";
 import { _tripReportOfDesign } from "./check.js";

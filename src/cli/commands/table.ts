@@ -24,6 +24,8 @@ interface TableOptions {
   readonly placement?: "adaptive" | "uniform";
   readonly prefix?: string;
   readonly gain?: number;
+  readonly fullScaleVolts?: number;
+  /** @deprecated The former name of `--full-scale-volts` (accepted until 0.2). */
   readonly referenceVolts?: number;
   readonly bits?: number;
   readonly offsetMv?: number;
@@ -34,7 +36,7 @@ interface TableOptions {
 }
 
 /** The options of an ADC chain, by the spec's key. */
-const adcOptionNames = { gain: "--gain", referenceVolts: "--reference-volts", bits: "--bits" } as const;
+const adcOptionNames = { gain: "--gain", fullScaleVolts: "--full-scale-volts", bits: "--bits" } as const;
 
 /**
  * Words of the firmware module's messages that name its API, and what the `table` command calls them; advice
@@ -48,8 +50,8 @@ export const _tableVocabulary: readonly (readonly [RegExp, string])[] = [
   [/\bmaxBreakpoints\b/g, "--max-breakpoints"],
   [/\bminC\b/g, "--from"],
   [/\bmaxC\b/g, "--to"],
-  [/\bfullScaleVolts\b/g, "--reference-volts"],
-  [/\breferenceVolts\b/g, "--reference-volts"],
+  [/\bfullScaleVolts\b/g, "--full-scale-volts"],
+  [/\breferenceVolts\b/g, "--full-scale-volts"],
   [/\boffsetMillivolts\b/g, "--offset-mv"],
   [/\bcoldJunctionC\b/g, "--cold-junction"],
 ];
@@ -57,6 +59,19 @@ export const _tableVocabulary: readonly (readonly [RegExp, string])[] = [
 /** A firmware-module message in the command's own vocabulary. @internal */
 export function _inTableVocabulary(message: string): string {
   return _tableVocabulary.reduce((text, [pattern, replacement]) => text.replace(pattern, replacement), message);
+}
+
+/**
+ * The options with the deprecated `--reference-volts` read as `--full-scale-volts`; both given must agree (else a
+ * usage error naming both values).
+ */
+function withFullScale(options: TableOptions): TableOptions {
+  const former = options.referenceVolts;
+  if (former === undefined) return options;
+  if (options.fullScaleVolts !== undefined && options.fullScaleVolts !== former) {
+    throw new CliError(`--full-scale-volts ${options.fullScaleVolts} and the deprecated --reference-volts ${former} differ; give --full-scale-volts only`);
+  }
+  return { ...options, fullScaleVolts: former };
 }
 
 /** Registers the `table` command. @internal */
@@ -73,7 +88,9 @@ export function registerTableCommand(program: Command, context: CommandContext):
     .addOption(new Option("--placement <placement>", "breakpoint placement").choices(["adaptive", "uniform"]))
     .option("--prefix <name>", "identifier prefix in the C header")
     .option("--gain <V/V>", "ADC kinds: amplifier gain", _parsePositiveNumber)
-    .option("--reference-volts <V>", "ADC kinds: ADC full-scale (reference) voltage", _parsePositiveNumber)
+    .option("--full-scale-volts <V>", "ADC kinds: ADC full-scale (reference) voltage", _parsePositiveNumber)
+    // The former name (one name per quantity: the library, the design file and the firmware chain say fullScaleVolts).
+    .addOption(new Option("--reference-volts <V>", "deprecated: --full-scale-volts (until 0.2)").argParser(_parsePositiveNumber).hideHelp())
     .option("--bits <n>", "ADC kinds: resolution", _integerParser(_adcBitsMin, _adcBitsMax))
     .option("--offset-mv <mV>", "ADC kinds: offset added at the ADC input, mV", _parseNumber)
     .option("--cold-junction <C>", "ADC kinds: fixed cold-junction temperature, °C", _parseNumber)
@@ -83,14 +100,16 @@ export function registerTableCommand(program: Command, context: CommandContext):
     .addHelpText(
       "after",
       "\nExamples:\n  hotjunction table K --kind emfToTemperature --from 0 --to 1200 --max-error 0.05 --out tc_k.h\n" +
-        "  hotjunction table K --kind adcCodeToTemperature --from 25 --to 400 --max-error 0.1 --gain 100 --reference-volts 2.5 --bits 16 --cold-junction 25 --format csv\n",
+        "  hotjunction table K --kind adcCodeToTemperature --from 25 --to 400 --max-error 0.1 --gain 100 --full-scale-volts 2.5 --bits 16 --cold-junction 25 --format csv\n" +
+        "\n--reference-volts, the former name of --full-scale-volts, is accepted until 0.2.\n",
     )
-    .action(async (type: ThermocoupleType, options: TableOptions) => {
+    .action(async (type: ThermocoupleType, given: TableOptions) => {
+      const options = withFullScale(given);
       const adcKind = options.kind === "adcCodeToTemperature" || options.kind === "temperatureToAdcCode";
-      const adcGiven = [options.gain, options.referenceVolts, options.bits].some((v) => v !== undefined);
+      const adcGiven = [options.gain, options.fullScaleVolts, options.bits].some((v) => v !== undefined);
       if (!adcKind && (adcGiven || options.offsetMv !== undefined || options.coldJunction !== undefined)) {
         throw new CliError(
-          `--gain, --reference-volts, --bits, --offset-mv and --cold-junction apply to the ADC kinds only (adcCodeToTemperature, temperatureToAdcCode), not to --kind ${options.kind}`,
+          `--gain, --full-scale-volts, --bits, --offset-mv and --cold-junction apply to the ADC kinds only (adcCodeToTemperature, temperatureToAdcCode), not to --kind ${options.kind}`,
         );
       }
       if (adcKind) {
@@ -98,7 +117,7 @@ export function registerTableCommand(program: Command, context: CommandContext):
           .filter((key) => options[key] === undefined)
           .map((key) => adcOptionNames[key]);
         if (missing.length > 0) {
-          throw new CliError(`--kind ${options.kind} needs --gain, --reference-volts and --bits; missing ${missing.join(", ")}`);
+          throw new CliError(`--kind ${options.kind} needs --gain, --full-scale-volts and --bits; missing ${missing.join(", ")}`);
         }
       }
       const plan = _planCommandOutputs(context.io, options, []);
@@ -116,7 +135,7 @@ export function registerTableCommand(program: Command, context: CommandContext):
           ? {
               chain: {
                 gain: options.gain as number,
-                fullScaleVolts: options.referenceVolts as number,
+                fullScaleVolts: options.fullScaleVolts as number,
                 bits: options.bits as number,
                 ...(options.offsetMv !== undefined ? { offsetMillivolts: options.offsetMv } : {}),
                 ...(options.coldJunction !== undefined ? { coldJunctionC: options.coldJunction } : {}),

@@ -9,7 +9,8 @@ import { faultsFromJson } from "../../faults/faultsFromJson.js";
 import type { CommandContext } from "../commandContext.js";
 import { _loadDesign } from "../designOptions.js";
 import { CliError } from "../cliError.js";
-import { _designFailureDataProblems, _designFaultIds, _failureDataError } from "../faultSafety.js";
+import { _designFailureDataProblems, _designFaultIds } from "../../designAnalysis/designSafety.js";
+import { _failureDataError } from "../faultSafety.js";
 import { _readInputFile } from "../readInput.js";
 
 /**

@@ -2,7 +2,8 @@
  * The response-time fold-in of a design file, shared by `check` and `runaway`: the design's `dynamics` section run
  * against each setpoint's static band (slowest unit at the worst-case band's high edge, nominal unit at the
  * nominal trip), noise slopes from the chain, the comparator's hysteresis; and the trip report with the verdict
- * taken from the dynamic peak.
+ * taken from the dynamic peak. Library code (the workbench uses it too).
+ * @internal
  * @module
  */
 import type { DesignFile } from "../design/designSchema.js";

@@ -6,7 +6,8 @@ import type { MeasurementChain } from "../chain/types.js";
 import { _compile } from "../its90/compiled.js";
 import { _emfFromTemperature, _seebeckCoefficient } from "../its90/engine.js";
 import { thermocoupleData } from "../its90/resolveType.js";
-import { _invalidChoice, _requireFinite, _requireInRange, HotjunctionRangeError } from "../errors.js";
+import { _invalidChoice, _requireChoice, _requireFinite, _requireFiniteResult, _requireInRange, _requireObject, _requirePositive, HotjunctionRangeError } from "../errors.js";
+import { _requireAdcBits } from "../chain/adc.js";
 import { detectionOffsetMicrovolts, loopResistanceOhms } from "../chain/wire/loopResistance.js";
 import type { Fault, FaultContext } from "./types.js";
 import { resistorPositionNames } from "../chain/resistorPositions.js";
@@ -383,6 +384,36 @@ function boardFaults(): Fault[] {
 }
 
 /**
+ * Checks the parts of a chain that go into the catalogue's ids, words and effects (an element's kind, the
+ * reference's voltage, the divider's resistances, the ADC's bits), so that no id or description can carry a
+ * forged value ("NaN Ω", "-Infinity.outputStuckLow") and no effect a non-finite number.
+ */
+function checkCataloguedParts(chain: MeasurementChain): void {
+  const c = chain as unknown as Record<string, unknown>;
+  if (c["amplifier"] !== undefined) {
+    const amp = _requireObject(c["amplifier"], "amplifier", context);
+    _requireChoice(amp["kind"], "amplifier kind", ["amplifier", "fixedScaleAmplifier"], context);
+    if (amp["kind"] === "amplifier") _requireObject(amp["gain"], "amplifier gain", context);
+  }
+  if (c["reference"] !== undefined) {
+    const ref = _requireObject(c["reference"], "reference", context);
+    const volts = _requirePositive(ref["nominalVolts"], "reference nominalVolts", "V", context);
+    // the drifted-high fault's voltage (at most twice the nominal) must stay finite
+    _requireFiniteResult(volts * 2, "reference nominalVolts", volts, "V", context);
+  }
+  if (c["divider"] !== undefined) {
+    const ohms = _requireObject(c["divider"], "divider", context)["resistorsOhms"];
+    if (!Array.isArray(ohms)) {
+      throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "divider resistorsOhms", value: ohms, context, problem: "is not an array of resistances" });
+    }
+    // an index loop: a hole is refused, not skipped
+    for (let i = 0; i < ohms.length; i++) _requirePositive(ohms[i], `divider resistorsOhms[${i}]`, "Ω", context);
+  }
+  const det = c["detector"];
+  if (typeof det === "object" && det !== null && (det as Record<string, unknown>)["kind"] === "adc") _requireAdcBits((det as Record<string, unknown>)["bits"], context, "adc bits");
+}
+
+/**
  * The built-in single-fault catalogue of a chain, as data: thermocouple open, shorted at the terminals, shorted
  * along the wire, reversed, ground offset of either sign; hardware cold-junction compensation lost; amplifier
  * output stuck at either rail, supply lost, each gain resistor open or shorted (resistor gain only); fixed-scale
@@ -415,6 +446,8 @@ export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueO
   if (typeof chain !== "object" || chain === null) {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "chain", value: chain, context, problem: "is not an object" });
   }
+  _requireObject(options, "options", context);
+  checkCataloguedParts(chain);
   const offsetMv =
     options.groundOffsetMillivolts === undefined ? 1 : _requireInRange(options.groundOffsetMillivolts, "groundOffsetMillivolts", 1e-6, 1e4, "mV", context);
   const drift =

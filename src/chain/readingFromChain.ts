@@ -94,7 +94,7 @@ export function readingFromChain(
   const sources = _sourcesAt(cc, t);
   const x = _sourceValues(cc, sources, options === undefined ? undefined : _requireObject(options, "options", cc.context)["sourceValues"]);
   // finite stage figures (a gain of 1e308 mV/°C) can still give a signal past float64
-  const volts = _requireFiniteResult(_signalVolts(cc, t, x), "signal at the detector (volts) for the hot-junction temperature", t, "°C", cc.context);
+  const volts = _requireFiniteResult(_signalVolts(cc, t, x), "hot-junction temperature", t, "°C", cc.context);
   const coldJunctionC = _coldJunctionC(cc, x);
   if (cc.adc !== undefined) {
     const code = _codeForVolts(cc, volts, x);

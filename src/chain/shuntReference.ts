@@ -97,13 +97,13 @@ export function shuntResistorSizing(options: ShuntResistorSizingOptions): ShuntR
   const shuntMin = _requirePositive(o["shuntMinMilliamps"], "shuntMinMilliamps", "mA", context);
   const [, shuntMax] = _requireOrderedPair(shuntMin, o["shuntMaxMilliamps"], "shuntMinMilliamps", "shuntMaxMilliamps", "mA", context);
   // finite inputs near 1e308 can give figures past float64: each figure is checked, naming the input that drives it
-  const fig = (x: number, figure: string, input: string, value: number, unit: string): number => _requireFiniteResult(x, `${figure} (from ${input})`, value, unit, context);
-  const maxSeriesOhms = fig(((vsMin - vRef) / (loadMax + shuntMin)) * 1000, "largest series resistance", "supplyMinVolts", vsMin, "V");
+  const fig = (x: number, input: string, value: number, unit: string): number => _requireFiniteResult(x, input, value, unit, context);
+  const maxSeriesOhms = fig(((vsMin - vRef) / (loadMax + shuntMin)) * 1000, "supplyMinVolts", vsMin, "V");
   const r = o["seriesOhms"] === undefined ? maxSeriesOhms : _requirePositive(o["seriesOhms"], "seriesOhms", "Ω", context);
-  const iMin = fig(((vsMin - vRef) / r) * 1000 - loadMax, "cathode current at low supply", "supplyMinVolts", vsMin, "V");
-  const iMax = fig(((vsMax - vRef) / r) * 1000 - loadMin, "cathode current at high supply", "supplyMaxVolts", vsMax, "V");
-  const resistorPowerWatts = fig((vsMax - vRef) ** 2 / r, "resistor dissipation", "supplyMaxVolts", vsMax, "V");
-  const shuntPowerWatts = fig((vRef * iMax) / 1000, "shunt dissipation", "loadMaxMilliamps", loadMax, "mA");
+  const iMin = fig(((vsMin - vRef) / r) * 1000 - loadMax, "supplyMinVolts", vsMin, "V");
+  const iMax = fig(((vsMax - vRef) / r) * 1000 - loadMin, "supplyMaxVolts", vsMax, "V");
+  const resistorPowerWatts = fig((vsMax - vRef) ** 2 / r, "supplyMaxVolts", vsMax, "V");
+  const shuntPowerWatts = fig((vRef * iMax) / 1000, "loadMaxMilliamps", loadMax, "mA");
   const problems: string[] = [];
   // Relative guard: R = maxSeriesOhms lands on I_shunt,min up to rounding.
   if (iMin < shuntMin * (1 - 1e-12)) {
@@ -147,7 +147,7 @@ export function shuntDynamicChangeMillivolts(dynamicImpedanceOhms: number, minMi
   const context = "shunt reference dynamic impedance";
   const z = _optionalLimit(dynamicImpedanceOhms, "dynamicImpedanceOhms", "Ω", context);
   const [lo, hi] = _requireOrderedPair(minMilliamps, maxMilliamps, "minMilliamps", "maxMilliamps", "mA", context);
-  return _requireFiniteResult(z * (hi - lo), "output change (dynamicImpedanceOhms × current swing)", z, "Ω", context);
+  return _requireFiniteResult(z * (hi - lo), "dynamicImpedanceOhms", z, "Ω", context);
 }
 
 /** @internal Sources of a shunt reference (± fractions of the output). */

@@ -225,5 +225,5 @@ export function requiredThresholdVolts(
   const cc = _compileComparatorChain(chain, context);
   const t = _requireFinite(hotJunctionC, "hot-junction temperature", "°C", context);
   const edge = checkEdge(options, context);
-  return _requireFiniteResult(_nominalSignalVolts(cc, t) - _edgeMillivolts(cc, edge) / 1000, "threshold (volts) for the hot-junction temperature", t, "°C", context);
+  return _requireFiniteResult(_nominalSignalVolts(cc, t) - _edgeMillivolts(cc, edge) / 1000, "hot-junction temperature", t, "°C", context);
 }

@@ -28,7 +28,6 @@ export const _runawayResponseShape: _Shape = {
   overshootC: n,
   dynamicMarginC: n,
   exceedsHazard: "boolean",
-  timeFromStartToHazardSeconds: nn,
   timeFromTripToHazardSeconds: nn,
   series: { timeSeconds: numbers, trueC: numbers, indicatedC: numbers, filteredC: ["nullable", numbers] },
 };
@@ -79,7 +78,7 @@ export function _checkRunawayResponse(value: unknown, quantity: string, context:
   const count = s.timeSeconds.length;
   for (const [key, list] of [["trueC", s.trueC], ["indicatedC", s.indicatedC], ["filteredC", s.filteredC ?? s.trueC]] as const) {
     if (list.length !== count) {
-      throw new HotjunctionRangeError({ code: "INVALID_OPTION", quantity: `${quantity}.series.${key}`, value: list, context, problem: `must hold one value per time (${count} times)` });
+      throw new HotjunctionRangeError({ code: "INVALID_OPTION", quantity: `${quantity}.series.${key}`, value: list, context, problem: `must hold ${count} values (one per time)` });
     }
   }
   let previous = 0;

@@ -41,7 +41,7 @@ export function firstOrderRampLagC(options: { readonly rateCPerSecond: number; r
   if (tau === 0) return 0;
   const lag = rate * tau * -Math.expm1(-t / tau); // t/τ = Infinity for a subnormal τ gives the limit 0 correctly
   // rate × τ can overflow where the lag (at most rate × t) does not: then τ·(1 − e^(−t/τ)) first
-  return Number.isFinite(lag) ? lag : _requireFiniteResult(rate * (tau * -Math.expm1(-t / tau)), "ramp lag (rateCPerSecond × timeConstantSeconds)", rate, "°C/s", CONTEXT);
+  return Number.isFinite(lag) ? lag : _requireFiniteResult(rate * (tau * -Math.expm1(-t / tau)), "ramp rate (rateCPerSecond)", rate, "°C/s", CONTEXT);
 }
 
 /**

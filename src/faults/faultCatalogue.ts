@@ -404,7 +404,7 @@ function checkCataloguedParts(chain: MeasurementChain): void {
   if (c["divider"] !== undefined) {
     const ohms = _requireObject(c["divider"], "divider", context)["resistorsOhms"];
     if (!Array.isArray(ohms)) {
-      throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "divider resistorsOhms", value: ohms, context, problem: "is not an array of resistances" });
+      throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "divider resistorsOhms", value: ohms, context, problem: "is not an array" });
     }
     // an index loop: a hole is refused, not skipped
     for (let i = 0; i < ohms.length; i++) _requirePositive(ohms[i], `divider resistorsOhms[${i}]`, "Ω", context);

@@ -59,16 +59,16 @@ export function _checkFirmwareTable(table: unknown, context: string): FirmwareTa
   if (n < 2) invalid("table.inputs", t.inputs, context, "must hold at least two breakpoints");
   for (let i = 1; i < n; i++) {
     const step = (t.inputs[i] as number) - (t.inputs[i - 1] as number);
-    if (!(step > 0 && step < Infinity)) invalid(`table.inputs[${i}]`, t.inputs[i], context, "is not above the input before it by a finite step");
-    if (!Number.isFinite((t.outputs[i] as number) - (t.outputs[i - 1] as number))) invalid(`table.outputs[${i}]`, t.outputs[i], context, "is so far from the output before it that their difference leaves float64");
+    if (!(step > 0 && step < Infinity)) invalid(`table.inputs[${i}]`, t.inputs[i], context, "is not above the one before by a finite step");
+    if (!Number.isFinite((t.outputs[i] as number) - (t.outputs[i - 1] as number))) invalid(`table.outputs[${i}]`, t.outputs[i], context, "is not a finite step from the one before");
   }
   if (!(t.input.min >= (t.inputs[0] as number) && t.input.max <= (t.inputs[n - 1] as number) && t.input.min <= t.input.max)) {
-    invalid("table.input", `${t.input.min} to ${t.input.max}`, context, `is not a range within the breakpoints (${t.inputs[0]} to ${t.inputs[n - 1]})`);
+    invalid("table.input", `${t.input.min} to ${t.input.max}`, context, "is not a range within the breakpoints");
   }
   if (t.spacingLog2 !== null) {
     const k = _requireInteger(t.spacingLog2, "table.spacingLog2", 0, 1023, context);
     for (let i = 1; i < n; i++) {
-      if (t.inputs[i] !== (t.inputs[0] as number) + i * 2 ** k) invalid(`table.inputs[${i}]`, t.inputs[i], context, `is not on the table's uniform grid (spacing 2^${k})`);
+      if (t.inputs[i] !== (t.inputs[0] as number) + i * 2 ** k) invalid(`table.inputs[${i}]`, t.inputs[i], context, "is not on the table's 2^spacingLog2 grid");
     }
   }
   return t;

@@ -6,7 +6,7 @@ import type { MeasurementChain } from "../chain/types.js";
 import { _compile } from "../its90/compiled.js";
 import { _emfFromTemperature, _seebeckCoefficient } from "../its90/engine.js";
 import { thermocoupleData } from "../its90/resolveType.js";
-import { _invalidChoice, _requireChoice, _requireFinite, _requireFiniteResult, _requireInRange, _requireObject, _requirePositive, HotjunctionRangeError } from "../errors.js";
+import { _invalidChoice, _requireFinite, _requireFiniteResult, _requireInRange, _requireObject, _requireShape, HotjunctionRangeError, type _Shape } from "../errors.js";
 import { _requireAdcBits } from "../chain/adc.js";
 import { detectionOffsetMicrovolts, loopResistanceOhms } from "../chain/wire/loopResistance.js";
 import type { Fault, FaultContext } from "./types.js";
@@ -388,29 +388,19 @@ function boardFaults(): Fault[] {
  * reference's voltage, the divider's resistances, the ADC's bits), so that no id or description can carry a
  * forged value ("NaN Ω", "-Infinity.outputStuckLow") and no effect a non-finite number.
  */
+const cataloguedParts: _Shape = {
+  amplifier: ["optional", { kind: ["oneOf", ["amplifier", "fixedScaleAmplifier"]] }],
+  reference: ["optional", { nominalVolts: "positive" }],
+  divider: ["optional", { resistorsOhms: ["array", "positive"] }],
+};
+
 function checkCataloguedParts(chain: MeasurementChain): void {
-  const c = chain as unknown as Record<string, unknown>;
-  if (c["amplifier"] !== undefined) {
-    const amp = _requireObject(c["amplifier"], "amplifier", context);
-    _requireChoice(amp["kind"], "amplifier kind", ["amplifier", "fixedScaleAmplifier"], context);
-    if (amp["kind"] === "amplifier") _requireObject(amp["gain"], "amplifier gain", context);
-  }
-  if (c["reference"] !== undefined) {
-    const ref = _requireObject(c["reference"], "reference", context);
-    const volts = _requirePositive(ref["nominalVolts"], "reference nominalVolts", "V", context);
-    // the drifted-high fault's voltage (at most twice the nominal) must stay finite
-    _requireFiniteResult(volts * 2, "reference nominalVolts", volts, "V", context);
-  }
-  if (c["divider"] !== undefined) {
-    const ohms = _requireObject(c["divider"], "divider", context)["resistorsOhms"];
-    if (!Array.isArray(ohms)) {
-      throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "divider resistorsOhms", value: ohms, context, problem: "is not an array" });
-    }
-    // an index loop: a hole is refused, not skipped
-    for (let i = 0; i < ohms.length; i++) _requirePositive(ohms[i], `divider resistorsOhms[${i}]`, "Ω", context);
-  }
-  const det = c["detector"];
-  if (typeof det === "object" && det !== null && (det as Record<string, unknown>)["kind"] === "adc") _requireAdcBits((det as Record<string, unknown>)["bits"], context, "adc bits");
+  _requireShape(chain, cataloguedParts, "chain", context);
+  const volts = chain.reference?.nominalVolts;
+  // the drifted-high fault's voltage (at most twice the nominal) must stay finite
+  if (volts !== undefined) _requireFiniteResult(volts * 2, "chain.reference.nominalVolts", volts, "V", context);
+  if (chain.amplifier?.kind === "amplifier") _requireObject(chain.amplifier.gain, "chain.amplifier.gain", context);
+  if (chain.detector?.kind === "adc") _requireAdcBits(chain.detector.bits, context, "chain.detector.bits");
 }
 
 /**

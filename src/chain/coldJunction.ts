@@ -6,9 +6,9 @@
  * @module
  */
 import type { ThermocoupleType } from "../data/thermocoupleData.js";
-import { _invalidChoice, _requireFinite as _finite } from "../errors.js";
+import { _invalidChoice, _requireFinite as _finite, _requireFiniteResult } from "../errors.js";
 import { _compile, type CompiledType } from "../its90/compiled.js";
-import { _emfFromTemperature, _seebeckCoefficient, _temperatureFromEmf } from "../its90/engine.js";
+import { _checkTemperature, _emfFromTemperature, _seebeckCoefficient, _temperatureFromEmf } from "../its90/engine.js";
 import { thermocoupleData } from "../its90/resolveType.js";
 import {
   _checkAmbient,
@@ -93,7 +93,13 @@ export function hardwareCompensationMillivolts(
   const ct = _compile(thermocoupleData(type));
   const checked = checkHardware(element, "hardware cold junction");
   const t = _finite(coldJunctionC, "cold-junction temperature", "°C", "hardware cold junction");
-  return _emfFromTemperature(ct, checked.matchedAtC) + (checked.alphaMicrovoltsPerC * (t - checked.matchedAtC)) / 1000;
+  return _requireFiniteResult(
+    _emfFromTemperature(ct, checked.matchedAtC) + (checked.alphaMicrovoltsPerC * (t - checked.matchedAtC)) / 1000,
+    "cold-junction temperature",
+    t,
+    "°C",
+    "hardware cold junction",
+  );
 }
 
 /** Residual of a hardware compensator over an ambient range (compensation − E(t)), µV. */
@@ -135,6 +141,9 @@ export function hardwareCompensationResidual(
   const ct = _compile(thermocoupleData(type));
   const checked = checkHardware(element, context);
   const range = _checkAmbient(ambient, context);
+  // the residual reads E(t) over the range: both ends within the type's range (this also bounds the grid's steps)
+  _checkTemperature(ct, range.minC, "ambient minC");
+  _checkTemperature(ct, range.maxC, "ambient maxC");
   const e0 = _emfFromTemperature(ct, checked.matchedAtC);
   const residual = (t: number): number =>
     (e0 + (checked.alphaMicrovoltsPerC * (t - checked.matchedAtC)) / 1000 - _emfFromTemperature(ct, t)) * 1000;
@@ -156,6 +165,8 @@ export function hardwareCompensationResidual(
     }
   }
   const s = _seebeckCoefficient(ct, (range.minC + range.maxC) / 2);
+  // α (finite, unbounded) times a span of the type's range can leave float64
+  _requireFiniteResult(minMicrovolts - maxMicrovolts, "compensationMicrovoltsPerC", checked.alphaMicrovoltsPerC, "µV/°C", context);
   return {
     minMicrovolts,
     maxMicrovolts,

@@ -4,7 +4,7 @@
  * the (i+1)-th resistor; its ratio is the resistance below it over the total.
  * @module
  */
-import { _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireFiniteResult, HotjunctionRangeError } from "../errors.js";
 import type { Distribution, Model } from "../uncertainty/types.js";
 import {
   _ambientFromReferenceC,
@@ -28,7 +28,8 @@ function checkResistors(value: unknown, context: string): readonly number[] {
       problem: "is not an array of at least two resistances",
     });
   }
-  return value.map((r, i) => _requirePositive(r, `resistorsOhms[${i}]`, "Ω", context));
+  // Array.from, not map: a hole ([1, , 3]) is checked as undefined, not kept as a hole that sums to NaN
+  return Array.from(value, (r: unknown, i) => _requirePositive(r, `resistorsOhms[${i}]`, "Ω", context));
 }
 
 function checkTap(tapIndex: unknown, count: number, context: string): number {
@@ -69,7 +70,7 @@ export function dividerTapRatio(divider: Pick<DividerElement, "resistorsOhms">, 
     total += r[i] as number;
     if (i > tap) below += r[i] as number;
   }
-  return below / total;
+  return below / _requireFiniteResult(total, "resistorsOhms (sum)", total, "Ω", context);
 }
 
 /** @internal The divider stage of a compiled chain. */

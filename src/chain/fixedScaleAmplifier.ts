@@ -5,7 +5,7 @@
  * @module
  */
 import type { ThermocoupleType } from "../data/thermocoupleData.js";
-import { _invalidChoice, _requireFinite } from "../errors.js";
+import { _invalidChoice, _requireFinite, _requireFiniteResult } from "../errors.js";
 import { _compile, type CompiledType } from "../its90/compiled.js";
 import { _emfFromTemperature } from "../its90/engine.js";
 import { thermocoupleData } from "../its90/resolveType.js";
@@ -46,7 +46,7 @@ export function fixedScaleNonlinearityC(
   const th = _requireFinite(hotJunctionC, "hot-junction temperature", "°C", context);
   const tc = _requireFinite(coldJunctionC, "cold-junction temperature", "°C", context);
   if (th === tc) return 0;
-  return (_emfFromTemperature(ct, th) - _emfFromTemperature(ct, tc)) / alpha + tc - th;
+  return _requireFiniteResult((_emfFromTemperature(ct, th) - _emfFromTemperature(ct, tc)) / alpha + tc - th, "trimmedMicrovoltsPerC", alpha * 1000, "µV/°C", context);
 }
 
 /** @internal The fixed-scale amplifier stage of a compiled chain. */

@@ -3,7 +3,7 @@
  * is the temperature the chain indicates.
  * @module
  */
-import { _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireFiniteResult, HotjunctionRangeError } from "../errors.js";
 import type { Distribution } from "../uncertainty/types.js";
 import { _requireObject } from "./_common.js";
 import {
@@ -93,7 +93,8 @@ export function readingFromChain(
   const t = _requireFinite(hotJunctionC, "hot-junction temperature", "°C", cc.context);
   const sources = _sourcesAt(cc, t);
   const x = _sourceValues(cc, sources, options === undefined ? undefined : _requireObject(options, "options", cc.context)["sourceValues"]);
-  const volts = _signalVolts(cc, t, x);
+  // finite stage figures (a gain of 1e308 mV/°C) can still give a signal past float64
+  const volts = _requireFiniteResult(_signalVolts(cc, t, x), "hot-junction temperature", t, "°C", cc.context);
   const coldJunctionC = _coldJunctionC(cc, x);
   if (cc.adc !== undefined) {
     const code = _codeForVolts(cc, volts, x);

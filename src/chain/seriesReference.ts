@@ -76,8 +76,10 @@ export function tempcoExcursionPpm(tempcoPpmPerC: number, ambient: AmbientRange,
   const context = "tempco excursion";
   const tc = _requireNonNegative(tempcoPpmPerC, "tempcoPpmPerC", "ppm/°C", context);
   const [minC, maxC] = _requireOrderedPair(ambient?.minC, ambient?.maxC, "ambient minC", "ambient maxC", "°C", context);
-  if (method === "box") return tc * _ambientSpanC({ minC, maxC });
-  if (method === "from-25C") return tc * _ambientFromReferenceC({ minC, maxC });
+  // a finite tempco times a finite span can still leave float64 (7 ppm/°C over −1e308 … 85 °C)
+  const excursion = (ppm: number): number => _requireFiniteResult(ppm, "tempcoPpmPerC", tc, "ppm/°C", context);
+  if (method === "box") return excursion(tc * _ambientSpanC({ minC, maxC }));
+  if (method === "from-25C") return excursion(tc * _ambientFromReferenceC({ minC, maxC }));
   return _invalidChoice("tempco method", method, ["box", "from-25C"], context);
 }
 
@@ -99,8 +101,9 @@ export function longTermDriftPpm(ppmPer1000h: number, serviceHours: number, scal
   const context = "long-term drift";
   const rate = _requireNonNegative(ppmPer1000h, "longTermDriftPpmPer1000h", "ppm/1000 h", context);
   const hours = _requireNonNegative(serviceHours, "serviceHours", "h", context);
-  if (scaling === "sqrt") return rate * Math.sqrt(hours / 1000);
-  if (scaling === "linear") return (rate * hours) / 1000;
+  const drift = (ppm: number): number => _requireFiniteResult(ppm, "longTermDriftPpmPer1000h", rate, "ppm/1000 h", context);
+  if (scaling === "sqrt") return drift(rate * Math.sqrt(hours / 1000));
+  if (scaling === "linear") return drift((rate * hours) / 1000);
   return _invalidChoice("drift scaling", scaling, ["sqrt", "linear"], context);
 }
 

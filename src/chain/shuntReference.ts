@@ -4,7 +4,7 @@
  * resistor with the power check.
  * @module
  */
-import { _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireFiniteResult, HotjunctionRangeError } from "../errors.js";
 import {
   _optionalLimit,
   _requireFraction,
@@ -96,12 +96,14 @@ export function shuntResistorSizing(options: ShuntResistorSizingOptions): ShuntR
   const [, loadMax] = _requireOrderedPair(loadMin, o["loadMaxMilliamps"], "loadMinMilliamps", "loadMaxMilliamps", "mA", context);
   const shuntMin = _requirePositive(o["shuntMinMilliamps"], "shuntMinMilliamps", "mA", context);
   const [, shuntMax] = _requireOrderedPair(shuntMin, o["shuntMaxMilliamps"], "shuntMinMilliamps", "shuntMaxMilliamps", "mA", context);
-  const maxSeriesOhms = ((vsMin - vRef) / (loadMax + shuntMin)) * 1000;
+  // finite inputs near 1e308 can give figures past float64: each figure is checked, naming the input that drives it
+  const fig = (x: number, input: string, value: number, unit: string): number => _requireFiniteResult(x, input, value, unit, context);
+  const maxSeriesOhms = fig(((vsMin - vRef) / (loadMax + shuntMin)) * 1000, "supplyMinVolts", vsMin, "V");
   const r = o["seriesOhms"] === undefined ? maxSeriesOhms : _requirePositive(o["seriesOhms"], "seriesOhms", "Ω", context);
-  const iMin = ((vsMin - vRef) / r) * 1000 - loadMax;
-  const iMax = ((vsMax - vRef) / r) * 1000 - loadMin;
-  const resistorPowerWatts = (vsMax - vRef) ** 2 / r;
-  const shuntPowerWatts = (vRef * iMax) / 1000;
+  const iMin = fig(((vsMin - vRef) / r) * 1000 - loadMax, "supplyMinVolts", vsMin, "V");
+  const iMax = fig(((vsMax - vRef) / r) * 1000 - loadMin, "supplyMaxVolts", vsMax, "V");
+  const resistorPowerWatts = fig((vsMax - vRef) ** 2 / r, "supplyMaxVolts", vsMax, "V");
+  const shuntPowerWatts = fig((vRef * iMax) / 1000, "loadMaxMilliamps", loadMax, "mA");
   const problems: string[] = [];
   // Relative guard: R = maxSeriesOhms lands on I_shunt,min up to rounding.
   if (iMin < shuntMin * (1 - 1e-12)) {
@@ -145,7 +147,7 @@ export function shuntDynamicChangeMillivolts(dynamicImpedanceOhms: number, minMi
   const context = "shunt reference dynamic impedance";
   const z = _optionalLimit(dynamicImpedanceOhms, "dynamicImpedanceOhms", "Ω", context);
   const [lo, hi] = _requireOrderedPair(minMilliamps, maxMilliamps, "minMilliamps", "maxMilliamps", "mA", context);
-  return z * (hi - lo);
+  return _requireFiniteResult(z * (hi - lo), "dynamicImpedanceOhms", z, "Ω", context);
 }
 
 /** @internal Sources of a shunt reference (± fractions of the output). */

@@ -20,8 +20,8 @@ export interface ToleranceRange {
 
 function describe(tolerance: ThermocoupleTolerance): string {
   if (typeof tolerance !== "object" || tolerance === null) return "tolerance";
-  if (tolerance.standard === "IEC 60584-1") return `IEC 60584-1 class ${tolerance.class}`;
-  if (tolerance.standard === "ASTM E230") return `ASTM E230 ${tolerance.grade} limits`;
+  if (tolerance.standard === "IEC 60584-1") return `IEC 60584-1 class ${_label(tolerance.class)}`;
+  if (tolerance.standard === "ASTM E230") return `ASTM E230 ${_label(tolerance.grade)} limits`;
   return "custom tolerance";
 }
 
@@ -228,5 +228,8 @@ export function thermocoupleEmfMillivolts(
   coldJunctionC: number,
   deviationC = 0,
 ): number {
-  return _emfFromTemperature(_compile(thermocoupleData(type)), hotJunctionC + deviationC, { coldJunctionC });
+  const ct = _compile(thermocoupleData(type));
+  // each term checked before the sum: undefined + 0 would reach the engine as NaN
+  const hot = _requireFinite(hotJunctionC, "hot-junction temperature", "°C", ct.context) + _requireFinite(deviationC, "deviation (deviationC)", "°C", ct.context);
+  return _emfFromTemperature(ct, hot, { coldJunctionC });
 }

@@ -4,7 +4,7 @@
  * sources, with the threshold taken from the reference × divider tap.
  * @module
  */
-import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _invalidChoice, _requireFinite, _requireFiniteResult, HotjunctionRangeError } from "../errors.js";
 import type { Distribution, Model } from "../uncertainty/types.js";
 import { _requireObject } from "./_common.js";
 import {
@@ -225,5 +225,5 @@ export function requiredThresholdVolts(
   const cc = _compileComparatorChain(chain, context);
   const t = _requireFinite(hotJunctionC, "hot-junction temperature", "°C", context);
   const edge = checkEdge(options, context);
-  return _nominalSignalVolts(cc, t) - _edgeMillivolts(cc, edge) / 1000;
+  return _requireFiniteResult(_nominalSignalVolts(cc, t) - _edgeMillivolts(cc, edge) / 1000, "hot-junction temperature", t, "°C", context);
 }

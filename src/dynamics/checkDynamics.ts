@@ -4,7 +4,8 @@
  * JSON-ready figures for reports.
  * @module
  */
-import { HotjunctionTypeError, _requireFinite, _requireInRange } from "../errors.js";
+import { HotjunctionTypeError, _requireFinite, _requireInRange, _requireOptionsObject, _requireShape } from "../errors.js";
+import { _checkRunawayResponse, _dynamicsCheckShape } from "./_dynamicsShapes.js";
 import { _checkScenario, _compileDynamics, _requireObject } from "./_compileDynamics.js";
 import { _buildLinearSystem } from "./_linearSystem.js";
 import { tripNoiseFigures, type TripNoiseFigures } from "./levelCrossing.js";
@@ -135,6 +136,8 @@ export interface DynamicsCheckJsonOptions {
  * @param check - from {@link checkDynamics}.
  * @param options - whether to include the series.
  * @returns a plain object; `JSON.stringify` of it round-trips.
+ * @throws {@link HotjunctionTypeError} / {@link HotjunctionRangeError} for a check that is not one (a field missing or
+ * not finite, series of unequal lengths, times not from 0 upward), naming the field.
  * @example
  * ```ts
  * import { checkDynamics, dynamicsCheckJson } from "hotjunction";
@@ -146,6 +149,10 @@ export interface DynamicsCheckJsonOptions {
  * ```
  */
 export function dynamicsCheckJson(check: DynamicsCheck, options: DynamicsCheckJsonOptions = {}) {
+  _requireShape(check, _dynamicsCheckShape, "check", CONTEXT);
+  check.cases.forEach((c, i) => _checkRunawayResponse(c.response, `check.cases[${i}].response`, CONTEXT));
+  _requireOptionsObject(options, CONTEXT, false);
+  _requireShape(options.includeSeries, ["optional", "boolean"], "includeSeries", CONTEXT);
   return {
     passes: check.passes,
     verdictUses: "dynamic peak" as const,

@@ -38,7 +38,10 @@ export function firstOrderRampLagC(options: { readonly rateCPerSecond: number; r
   const rate = _requireFinite(options.rateCPerSecond, "ramp rate (rateCPerSecond)", "°C/s", CONTEXT);
   const tau = _requireInRange(options.timeConstantSeconds, "time constant (timeConstantSeconds)", 0, Number.MAX_VALUE, "s", CONTEXT);
   const t = _requireInRange(options.timeSeconds, "time (timeSeconds)", 0, Number.MAX_VALUE, "s", CONTEXT);
-  return tau === 0 ? 0 : rate * tau * -Math.expm1(-t / tau); // t/τ = Infinity for a subnormal τ gives the limit 0 correctly
+  if (tau === 0) return 0;
+  const lag = rate * tau * -Math.expm1(-t / tau); // t/τ = Infinity for a subnormal τ gives the limit 0 correctly
+  // rate × τ can overflow where the lag (at most rate × t) does not: then τ·(1 − e^(−t/τ)) first
+  return Number.isFinite(lag) ? lag : _requireFiniteResult(rate * (tau * -Math.expm1(-t / tau)), "ramp rate (rateCPerSecond)", rate, "°C/s", CONTEXT);
 }
 
 /**
@@ -94,7 +97,7 @@ export function rampLagThroughLagsC(options: { readonly rateCPerSecond: number; 
 export function movingAverageRampDelaySeconds(options: { readonly samples: number; readonly samplePeriodSeconds: number }): number {
   _requireOptionsObject(options, CONTEXT, false);
   const samplePeriodSeconds = checkedSamplePeriod(options.samplePeriodSeconds, { kind: "movingAverage", samples: options.samples });
-  return ((options.samples - 1) * samplePeriodSeconds) / 2;
+  return _requireFiniteResult(((options.samples - 1) * samplePeriodSeconds) / 2, "sample period (samplePeriodSeconds)", samplePeriodSeconds, "s", CONTEXT);
 }
 
 /**
@@ -113,7 +116,7 @@ export function movingAverageRampDelaySeconds(options: { readonly samples: numbe
 export function iirRampDelaySeconds(options: { readonly coefficient: number; readonly samplePeriodSeconds: number }): number {
   _requireOptionsObject(options, CONTEXT, false);
   const samplePeriodSeconds = checkedSamplePeriod(options.samplePeriodSeconds, { kind: "firstOrderIir", coefficient: options.coefficient });
-  return (samplePeriodSeconds * (1 - options.coefficient)) / options.coefficient;
+  return _requireFiniteResult((samplePeriodSeconds * (1 - options.coefficient)) / options.coefficient, "filter coefficient (coefficient)", options.coefficient, undefined, CONTEXT);
 }
 
 /**
@@ -149,5 +152,8 @@ export function heatedLoadEquilibrium(runaway: HeaterPowerRunaway): { readonly e
   const p = compiled.process;
   if (p.kind !== "heaterPower") return _invalidChoice("runaway kind", p.kind, ["heaterPower"], CONTEXT);
   const g = _requireInRange(p.lossWattsPerK, "loss to ambient (lossWattsPerK)", Number.MIN_VALUE, Number.MAX_VALUE, "W/K", CONTEXT);
-  return { equilibriumC: p.ambientC + p.heaterWatts / g, timeConstantSeconds: p.capacityJoulesPerK / g };
+  return {
+    equilibriumC: _requireFiniteResult(p.ambientC + p.heaterWatts / g, "loss to ambient (lossWattsPerK)", g, "W/K", CONTEXT),
+    timeConstantSeconds: _requireFiniteResult(p.capacityJoulesPerK / g, "loss to ambient (lossWattsPerK)", g, "W/K", CONTEXT),
+  };
 }

@@ -12,7 +12,7 @@
  * the stage that limits the noise at the decision point.
  * @module
  */
-import { HotjunctionRangeError, _requireInRange, _requireOptionsObject } from "../errors.js";
+import { HotjunctionRangeError, _requireFiniteResult, _requireInRange, _requireOptionsObject, _requireShape } from "../errors.js";
 import { _compileDynamics, _requireObject } from "./_compileDynamics.js";
 import type { DynamicsModel, NoiseSpec, WhiteNoiseDensity, WhiteNoiseRms } from "./types.js";
 
@@ -69,7 +69,8 @@ export function whiteNoiseRmsVolts(white: WhiteNoiseDensity | WhiteNoiseRms): nu
   const w = _requireObject(white, "white noise (white)");
   positive(w.bandwidthHz, "noise bandwidth (bandwidthHz)", "Hz");
   if (w.kind === "density") {
-    return _requireInRange(w.densityVoltsPerRootHertz, "noise density (densityVoltsPerRootHertz)", 0, NONNEG, "V/√Hz", CONTEXT) * Math.sqrt(w.bandwidthHz as number);
+    const density = _requireInRange(w.densityVoltsPerRootHertz, "noise density (densityVoltsPerRootHertz)", 0, NONNEG, "V/√Hz", CONTEXT);
+    return _requireFiniteResult(density * Math.sqrt(w.bandwidthHz as number), "noise density (densityVoltsPerRootHertz)", density, "V/√Hz", CONTEXT);
   }
   if (w.kind === "rms") return _requireInRange(w.rmsVolts, "noise rms (rmsVolts)", 0, NONNEG, "V", CONTEXT);
   throw new HotjunctionRangeError({ code: "INVALID_OPTION", quantity: "white noise kind", value: w.kind, allowed: ["density", "rms"], context: CONTEXT, problem: "is not a valid choice" });
@@ -93,12 +94,14 @@ export function mainsPickupPeakVolts(options: { readonly amplitudeVolts: number;
   _requireOptionsObject(options, CONTEXT, false);
   const a = _requireInRange(options.amplitudeVolts, "mains pickup amplitude (amplitudeVolts)", 0, NONNEG, "V", CONTEXT);
   const f = positive(options.frequencyHz, "mains frequency (frequencyHz)", "Hz");
+  _requireShape(options.timeConstantsSeconds, ["array", "any"], "time constants (timeConstantsSeconds)", CONTEXT);
   let gain = 1;
-  options.timeConstantsSeconds.forEach((tau, i) => {
-    const t = _requireInRange(tau, `time constant ${i} (timeConstantsSeconds)`, 0, NONNEG, "s", CONTEXT);
+  // an index loop, not forEach: a hole in the array is refused, not skipped
+  for (let i = 0; i < options.timeConstantsSeconds.length; i++) {
+    const t = _requireInRange(options.timeConstantsSeconds[i], `time constant ${i} (timeConstantsSeconds)`, 0, NONNEG, "s", CONTEXT);
     const w = 2 * Math.PI * f * t;
-    gain /= Math.sqrt(1 + w * w);
-  });
+    gain /= Math.sqrt(1 + w * w); // w² = Infinity gives the limit 0
+  }
   return a * gain;
 }
 
@@ -163,7 +166,11 @@ export function hysteresisForChatterVolts(options: { readonly rmsVolts: number; 
   const target = positive(options.targetPerHour, "chatter target (targetPerHour)", "1/h") / 3600;
   const am = options.mainsPeakVolts === undefined ? 0 : _requireInRange(options.mainsPeakVolts, "mains peak (mainsPeakVolts)", 0, NONNEG, "V", CONTEXT);
   const zeroRate = b / Math.sqrt(3);
-  return zeroRate > target ? am + sigma * Math.sqrt(2 * Math.log(zeroRate / target)) : am;
+  if (!(zeroRate > target)) return am;
+  const ratio = zeroRate / target;
+  // a ratio beyond float64 (a subnormal target, a bandwidth near 1e308): its logarithm from the logarithms
+  const lnRatio = Number.isFinite(ratio) ? Math.log(ratio) : Math.log(zeroRate) - Math.log(options.targetPerHour) + Math.log(3600);
+  return _requireFiniteResult(am + sigma * Math.sqrt(2 * lnRatio), "noise rms (rmsVolts)", sigma, "V", CONTEXT);
 }
 
 /** Noise figures of a trip channel. */
@@ -217,6 +224,7 @@ export interface TripNoiseFigures {
  */
 export function tripNoiseFigures(model: DynamicsModel, options: { readonly maxNormalOperatingC: number; readonly bandLowEdgeC: number }): TripNoiseFigures {
   const compiled = _compileDynamics(model);
+  _requireOptionsObject(options, CONTEXT, false);
   const noise = _requireObject(model.noise, "noise") as unknown as NoiseSpec;
   const s = positive(noise.sensitivityVoltsPerC, "sensitivity (sensitivityVoltsPerC)", "V/°C");
   const target = positive(noise.chatterTargetPerHour, "chatter target (chatterTargetPerHour)", "1/h");
@@ -237,20 +245,22 @@ export function tripNoiseFigures(model: DynamicsModel, options: { readonly maxNo
   const distance = (low - normal) * s - mainsPeak;
   const deterministic = distance <= 0;
   const b = bandwidth ?? 1;
-  const falseTrips = deterministic ? null : 3600 * riceUpCrossingRatePerSecond({ levelVolts: distance, rmsVolts: sigma, bandwidthHz: b });
+  const falseTrips = deterministic ? null : _requireFiniteResult(3600 * riceUpCrossingRatePerSecond({ levelVolts: distance, rmsVolts: sigma, bandwidthHz: b }), "noise bandwidth (bandwidthHz)", b, "Hz", CONTEXT);
+  // a figure in °C is a figure in V over the sensitivity: a subnormal sensitivity overflows it
+  const inC = (volts: number): number => _requireFiniteResult(volts / s, "sensitivity (sensitivityVoltsPerC)", s, "V/°C", CONTEXT);
   const hyst = sigma === 0 ? mainsPeak : hysteresisForChatterVolts({ rmsVolts: sigma, bandwidthHz: b, targetPerHour: target, mainsPeakVolts: mainsPeak });
   return {
     spectrumAssumption: NOISE_SPECTRUM_ASSUMPTION,
     rmsVolts: sigma,
-    rmsC: sigma / s,
+    rmsC: inC(sigma),
     bandwidthHz: bandwidth,
     mainsPeakVolts: mainsPeak,
-    mainsPeakC: mainsPeak / s,
+    mainsPeakC: inC(mainsPeak),
     falseTripDistanceVolts: distance,
     falseTripsPerHour: falseTrips,
     deterministicFalseTrip: deterministic,
     chatterTargetPerHour: target,
     hysteresisNeededVolts: hyst,
-    hysteresisNeededC: hyst / s,
+    hysteresisNeededC: inC(hyst),
   };
 }

@@ -5,7 +5,8 @@
  * @module
  */
 import { _wrapWords } from "../textWrap.js";
-import { _requireInRange } from "../errors.js";
+import { _requireInRange, _requireOptionsObject, _requireShape } from "../errors.js";
+import { _CHART_MAX_ABS_C, _checkRunawayResponse } from "./_dynamicsShapes.js";
 import { CAUTION_TEXT } from "../caution.js";
 import type { RunawayResponse } from "./simulateRunaway.js";
 
@@ -24,8 +25,9 @@ function escapeXml(text: string): string {
 }
 
 
+/** A pixel coordinate as text; a point far off the canvas (a marker time far past the series) is drawn at ±1e7 px. */
 function px(v: number): string {
-  return String(Math.round(v * 100) / 100);
+  return String(Math.round(Math.min(Math.max(v, -1e7), 1e7) * 100) / 100);
 }
 
 /** Round tick step (1, 2 or 5 × 10^k) giving about `count` ticks over `span`. */
@@ -53,7 +55,9 @@ function tickLabel(v: number, step: number): string {
  * @param response - from {@link simulateRunaway} (or a case of {@link checkDynamics}).
  * @param options - title and size.
  * @returns the SVG document as a string.
- * @throws {@link HotjunctionRangeError} for a size out of range.
+ * @throws {@link HotjunctionRangeError} for a size out of range; {@link HotjunctionTypeError} /
+ * {@link HotjunctionRangeError} for a response that is not one (a field missing or not finite, series of unequal
+ * lengths, times not from 0 upward, a temperature beyond ±1e6 °C, the drawable bound).
  * @example
  * ```ts
  * import { runawayChartSvg, simulateRunaway } from "hotjunction";
@@ -64,6 +68,9 @@ function tickLabel(v: number, step: number): string {
  * ```
  */
 export function runawayChartSvg(response: RunawayResponse, options: RunawayChartOptions = {}): string {
+  _checkRunawayResponse(response, "response", "dynamics chart", _CHART_MAX_ABS_C);
+  _requireOptionsObject(options, "dynamics chart", false);
+  _requireShape(options.title, ["optional", "string"], "title", "dynamics chart");
   const width = options.widthPixels === undefined ? 760 : _requireInRange(options.widthPixels, "chart width (widthPixels)", 320, 4000, "px", "dynamics chart");
   const height = options.heightPixels === undefined ? 440 : _requireInRange(options.heightPixels, "chart height (heightPixels)", 240, 3000, "px", "dynamics chart");
   const title = options.title ?? "Runaway response";

@@ -6,7 +6,8 @@ import type { MeasurementChain } from "../chain/types.js";
 import { _compile } from "../its90/compiled.js";
 import { _emfFromTemperature, _seebeckCoefficient } from "../its90/engine.js";
 import { thermocoupleData } from "../its90/resolveType.js";
-import { _invalidChoice, _requireFinite, _requireInRange, HotjunctionRangeError } from "../errors.js";
+import { _invalidChoice, _requireFinite, _requireFiniteResult, _requireInRange, _requireObject, _requireShape, HotjunctionRangeError, type _Shape } from "../errors.js";
+import { _requireAdcBits } from "../chain/adc.js";
 import { detectionOffsetMicrovolts, loopResistanceOhms } from "../chain/wire/loopResistance.js";
 import type { Fault, FaultContext } from "./types.js";
 import { resistorPositionNames } from "../chain/resistorPositions.js";
@@ -383,6 +384,26 @@ function boardFaults(): Fault[] {
 }
 
 /**
+ * Checks the parts of a chain that go into the catalogue's ids, words and effects (an element's kind, the
+ * reference's voltage, the divider's resistances, the ADC's bits), so that no id or description can carry a
+ * forged value ("NaN Ω", "-Infinity.outputStuckLow") and no effect a non-finite number.
+ */
+const cataloguedParts: _Shape = {
+  amplifier: ["optional", { kind: ["oneOf", ["amplifier", "fixedScaleAmplifier"]] }],
+  reference: ["optional", { nominalVolts: "positive" }],
+  divider: ["optional", { resistorsOhms: ["array", "positive"] }],
+};
+
+function checkCataloguedParts(chain: MeasurementChain): void {
+  _requireShape(chain, cataloguedParts, "chain", context);
+  const volts = chain.reference?.nominalVolts;
+  // the drifted-high fault's voltage (at most twice the nominal) must stay finite
+  if (volts !== undefined) _requireFiniteResult(volts * 2, "chain.reference.nominalVolts", volts, "V", context);
+  if (chain.amplifier?.kind === "amplifier") _requireObject(chain.amplifier.gain, "chain.amplifier.gain", context);
+  if (chain.detector?.kind === "adc") _requireAdcBits(chain.detector.bits, context, "chain.detector.bits");
+}
+
+/**
  * The built-in single-fault catalogue of a chain, as data: thermocouple open, shorted at the terminals, shorted
  * along the wire, reversed, ground offset of either sign; hardware cold-junction compensation lost; amplifier
  * output stuck at either rail, supply lost, each gain resistor open or shorted (resistor gain only); fixed-scale
@@ -415,6 +436,8 @@ export function faultCatalogue(chain: MeasurementChain, options: FaultCatalogueO
   if (typeof chain !== "object" || chain === null) {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "chain", value: chain, context, problem: "is not an object" });
   }
+  _requireObject(options, "options", context);
+  checkCataloguedParts(chain);
   const offsetMv =
     options.groundOffsetMillivolts === undefined ? 1 : _requireInRange(options.groundOffsetMillivolts, "groundOffsetMillivolts", 1e-6, 1e4, "mV", context);
   const drift =

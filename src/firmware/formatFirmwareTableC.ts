@@ -2,11 +2,11 @@
  * C header emitter for firmware tables.
  * @module
  */
-import { HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
+import { _requireShape, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 import type { FirmwareTable } from "./types.js";
 import { firmwareTableCaution } from "./firmwareCaution.js";
 import { _numberTypeInfo, type FirmwareNumberType } from "./firmwareNumberType.js";
-import { _checkFirmwareTable } from "./_firmwareTableShape.js";
+import { _checkFirmwareTable, _firmwareReportShape } from "./_firmwareTableShape.js";
 
 /** Options of {@link formatFirmwareTableC}. */
 export interface FormatFirmwareTableCOptions {
@@ -276,6 +276,7 @@ function lookupRoutine(
  */
 export function formatFirmwareTableC(table: FirmwareTable, options?: FormatFirmwareTableCOptions): string {
   _checkFirmwareTable(table, "formatFirmwareTableC");
+  _requireShape(table, _firmwareReportShape, "table", "formatFirmwareTableC");
   const prefix = _checkPrefix(options?.prefix ?? "tc_table");
   const macro = prefix.toUpperCase();
   const inInfo = _numberTypeInfo(table.input.numberType, "input number type");

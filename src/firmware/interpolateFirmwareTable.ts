@@ -2,7 +2,7 @@
  * Evaluation of a firmware table in TypeScript, with exactly the arithmetic of the emitted C routine.
  * @module
  */
-import { _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireFiniteResult, HotjunctionRangeError } from "../errors.js";
 import { _numberTypeInfo, type _NumberTypeInfo } from "./firmwareNumberType.js";
 import type { _InterpolationData, FirmwareTable } from "./types.js";
 import { _checkFirmwareTable } from "./_firmwareTableShape.js";
@@ -89,7 +89,7 @@ export function interpolateFirmwareTable(table: FirmwareTable, inputStored: numb
   }
   const x = inputStored;
   // One comparison pair accepts the common case; NaN, ±Infinity and out-of-range inputs take the slow path.
-  if (!(x >= table.input.min && x <= table.input.max)) {
+  if (typeof x !== "number" || !(x >= table.input.min && x <= table.input.max)) {
     const context = `firmware table (${table.kind}, type ${table.thermocoupleType})`;
     _requireFinite(x, "table input", "stored units", context);
     throw new HotjunctionRangeError({
@@ -112,7 +112,9 @@ export function interpolateFirmwareTable(table: FirmwareTable, inputStored: numb
       problem: `is not a whole number (the input type is ${table.input.numberType})`,
     });
   }
-  return _interpolateStored(prepared.data, prepared.outInfo, x);
+  const y = _interpolateStored(prepared.data, prepared.outInfo, x);
+  // finite steps can still give a product past float64 (an output step of 1e308 over a 10-unit input step)
+  return Number.isFinite(y) ? y : _requireFiniteResult(y, "table output step", x, "stored units", `firmware table (${table.kind}, type ${table.thermocoupleType})`);
 }
 
 interface Prepared {

@@ -243,15 +243,17 @@ export function _compile(data: ThermocoupleData): CompiledType {
 }
 
 /**
- * Checks a data object: an object with a list of sub-ranges (else `UNKNOWN_TYPE`), contiguous increasing
- * sub-ranges with finite ends and at least one coefficient each, all finite, a range within the sub-ranges (a
- * widened range would extrapolate a polynomial far outside its sub-range) and a finite exponential term (else
- * `INVALID_OPTION`). Only for data the generator did not write (the generated modules are checked by their tests).
+ * Checks a data object: an object with a list of sub-ranges (else `UNKNOWN_TYPE`; so is one whose type or
+ * source is not a string), contiguous increasing sub-ranges with finite ends and at least one coefficient each,
+ * all finite, a range within the sub-ranges (a widened range would extrapolate a polynomial far outside its
+ * sub-range) and a finite exponential term (else `INVALID_OPTION`). Only for data the generator did not write
+ * (the generated modules are checked by their tests).
  */
 function validate(data: ThermocoupleData): void {
   const subs = data?.forward;
   // Same error shape as other object checks (deliberate: this one names the type data and its own code).
-  if (!Array.isArray(subs)) {
+  // A type and source that are not strings (they are the result's `type` and its context's words) are no type's data.
+  if (!Array.isArray(subs) || typeof data.type != "string" || typeof data.source != "string") {
     throw new HotjunctionTypeError({
       code: "UNKNOWN_TYPE",
       quantity: "thermocouple data",
@@ -262,11 +264,12 @@ function validate(data: ThermocoupleData): void {
   const e = data.exponential;
   const first: number = subs[0]?.minC as number;
   let end = first;
-  let ok = data.minC >= end && data.maxC > data.minC && (!e || [e.a0, e.a1, e.a2].every(Number.isFinite));
+  // e?.a0: an exponential term that is given must be an object of finite numbers (NaN, 0 or null is not one)
+  let ok = [first, data.minC, data.maxC].every(Number.isFinite) && data.minC >= end && data.maxC > data.minC && (e === undefined || [e?.a0, e?.a1, e?.a2].every(Number.isFinite));
   for (const f of subs) {
     const c = f?.coefficients;
-    // c[0] makes an empty list fail; every() rejects non-numbers and non-finite values.
-    ok &&= f?.minC === end && f.maxC > end && Array.isArray(c) && [f.maxC, c[0], ...c].every(Number.isFinite);
+    // c[0] makes an empty list fail; every() rejects non-numbers and non-finite values (before any comparison).
+    ok &&= f?.minC === end && Array.isArray(c) && [f.maxC, c[0], ...c].every(Number.isFinite) && f.maxC > end;
     end = f?.maxC;
   }
   if (!(ok && data.maxC <= end)) {
@@ -274,8 +277,9 @@ function validate(data: ThermocoupleData): void {
       code: "INVALID_OPTION",
       quantity: "thermocouple data range",
       value: [data.minC, data.maxC],
-      min: first,
-      max: end,
+      // the sub-ranges' span only when it is made of numbers (a forged end has no string form to print)
+      min: ok ? first : undefined,
+      max: ok ? end : undefined,
       unit: "°C",
       problem: "is not valid reference data",
     });

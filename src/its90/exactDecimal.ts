@@ -54,7 +54,7 @@ export function _emfDecimal(data: ThermocoupleData, temperatureC: number | strin
   }
   const D = _decimalContext(digits);
   let t: Decimal;
-  if (typeof temperatureC === "number") {
+  if (typeof temperatureC !== "string") {
     t = new D(_requireFinite(temperatureC, "temperature", "°C", `type ${data.type}`));
   } else {
     let parsed: Decimal | undefined;
@@ -64,7 +64,7 @@ export function _emfDecimal(data: ThermocoupleData, temperatureC: number | strin
       parsed = undefined;
     }
     if (parsed === undefined || !parsed.isFinite()) {
-      _requireFinite(Number.NaN, "temperature", "°C", `type ${data.type}`);
+      _requireFinite(temperatureC, "temperature", "°C", `type ${data.type}`);
       throw new Error("unreachable");
     }
     t = parsed;

@@ -2,7 +2,7 @@
  * Turns a reference option into a chain reference element (sizing a shunt reference's series resistor).
  * @module
  */
-import { _invalidChoice, _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _invalidChoice, _requireFinite, _requireOptionsObject, HotjunctionRangeError } from "../errors.js";
 import type { PreferredSeriesName } from "../data/preferredSeries.js";
 import type { AmbientRange, ReferenceElement, SeriesReference, ShuntReference } from "../chain/types.js";
 import type { _SourceContext } from "../chain/_common.js";
@@ -122,6 +122,7 @@ export function _realizeReference(
   if (typeof option !== "object" || option === null) {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "reference option", value: option, context, problem: "is not an object" });
   }
+  _requireOptionsObject(options, context, false);
   const dividerMilliamps = nonNegative(options.dividerCurrentMilliamps ?? 0, "dividerCurrentMilliamps", "mA", context);
   if (typeof option.name !== "string") {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "reference option name", value: option.name, context, problem: "is not a string" });

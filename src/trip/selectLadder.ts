@@ -2,7 +2,7 @@
  * Multi-tap resistor ladder for several selectable thresholds from one reference.
  * @module
  */
-import { _requireFinite, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireOptionsObject, HotjunctionRangeError } from "../errors.js";
 import type { PreferredSeriesName } from "../data/preferredSeries.js";
 import { _noNetworkInBounds, _totalBounds } from "./selectDividerPair.js";
 import { _indexAtOrBelow, _requireSeries, standardResistorValues } from "./standardResistorValues.js";
@@ -74,7 +74,9 @@ export function selectLadder(targetRatios: readonly number[], options: SelectLad
   if (!Array.isArray(targetRatios) || targetRatios.length === 0) {
     throw new HotjunctionRangeError({ code: "INVALID_DESIGN", quantity: "target ratios", value: targetRatios, context, problem: "must be a non-empty array" });
   }
-  const targets = targetRatios.map((k, i) => {
+  _requireOptionsObject(options, context, false);
+  // Array.from, not map: a hole ([0.5, , 0.25]) is checked as undefined, not kept as a hole
+  const targets = Array.from(targetRatios, (k: unknown, i) => {
     const value = _requireFinite(k, `target ratio ${i}`, undefined, context);
     if (!(value > 0 && value < 1)) {
       throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: `target ratio ${i}`, value, min: 0, max: 1, context, problem: "is not strictly between 0 and 1" });

@@ -6,7 +6,7 @@
  * the comparator's own hysteresis). The verdict of a setpoint then uses the dynamic peak on the hazard side.
  * @module
  */
-import { HotjunctionTypeError, _requireFiniteResult, _requireNonNegative, _requireObject, _requirePositive } from "../errors.js";
+import { HotjunctionTypeError, _requireFiniteResult, _requireNonNegative, _requireObject, _requirePositive, _requireShape, type _Shape } from "../errors.js";
 import { _runawayFigures, checkDynamics, DYNAMICS_ASSUMPTIONS, type DynamicsCheck, type RunawayFigures } from "../dynamics/checkDynamics.js";
 import type { TripNoiseFigures } from "../dynamics/levelCrossing.js";
 import type { RunawayResponse } from "../dynamics/simulateRunaway.js";
@@ -149,6 +149,19 @@ function reasonOf(s: TripDynamicsSetpointInput, check: DynamicsCheck): string {
   return `Verdict from the dynamic peak: ${parts.join("; ")}.`;
 }
 
+/** What tripDynamics reads of each setpoint (its figures are copied into the result, so each must be finite). */
+const setpointShape: _Shape = {
+  name: "string",
+  maxNormalOperatingC: "number",
+  hazardLimitC: "number",
+  nominalTripC: "number",
+  bandLowC: "number",
+  bandHighC: "number",
+  lowSidePass: "boolean",
+  staticPass: "boolean",
+  sensitivitySource: ["optional", "string"],
+};
+
 /**
  * The dynamic check of every setpoint of a trip design. Per setpoint the runaway starts at the highest normal
  * operating temperature and runs against two trip points: the slowest unit (the static worst-case band's high
@@ -177,6 +190,8 @@ export function tripDynamics(input: TripDynamicsInput): TripDynamicsResult {
   if (!Array.isArray(input.setpoints) || input.setpoints.length === 0) {
     throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "setpoints", value: input.setpoints, context: CONTEXT, problem: "is not a non-empty array" });
   }
+  _requireObject(input.model, "model", CONTEXT);
+  input.setpoints.forEach((s, i) => _requireShape(s, setpointShape, `setpoints[${i}]`, CONTEXT));
   const hysteresis =
     input.comparatorHysteresisVolts === undefined
       ? null

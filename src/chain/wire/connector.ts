@@ -52,7 +52,8 @@ export interface LegSeebeck {
 function metalVsPlatinum(metal: ContactMetal, context: string): number | "matching" {
   if (metal === "matching") return "matching";
   if (typeof metal === "string") {
-    const m = (contactMetals as Record<string, { seebeckVsPlatinumMicrovoltsPerC: number }>)[metal];
+    // own keys only: "__proto__" or "toString" is not a metal
+    const m = Object.hasOwn(contactMetals, metal) ? (contactMetals as Record<string, { seebeckVsPlatinumMicrovoltsPerC: number }>)[metal] : undefined;
     if (m === undefined) return _invalidChoice("contactMetal", metal, ["matching", ...Object.keys(contactMetals), "{ name, seebeckVsPlatinumMicrovoltsPerC }"], context);
     return m.seebeckVsPlatinumMicrovoltsPerC;
   }
@@ -78,7 +79,8 @@ function metalVsPlatinum(metal: ContactMetal, context: string): number | "matchi
  */
 export function legSeebeckVsContact(type: ThermocoupleType, metal: ContactMetal, temperatureC: number): LegSeebeck {
   const context = `type ${_label(type)} connector`;
-  const legs = thermocoupleLegs[type];
+  // a string and an own key first: an object without a string form, or "__proto__", is not a type
+  const legs = typeof type === "string" && Object.hasOwn(thermocoupleLegs, type) ? thermocoupleLegs[type] : undefined;
   if (legs === undefined) return _invalidChoice("thermocouple type", type, Object.keys(thermocoupleLegs), context);
   const m = metalVsPlatinum(metal, context);
   if (m === "matching") return { positiveMicrovoltsPerC: 0, negativeMicrovoltsPerC: 0, source: "matching alloy" };

@@ -11,7 +11,7 @@
  */
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
 import { thermocoupleLegs } from "../../data/wireAlloys.js";
-import { _invalidChoice, _label, _requireFinite, HotjunctionRangeError } from "../../errors.js";
+import { _invalidChoice, _label, _requireFinite, _requireFiniteResult, HotjunctionRangeError } from "../../errors.js";
 import { _oneOfTwoKeys, _optionalLimit, _requireFraction, _requireObject, _requirePositive, type _SourceContext } from "../_common.js";
 import type { WireErrorSource } from "../types.js";
 import type { DetectionDirection, LoopResistanceElement, ThermocoupleWireRun } from "../wireTypes.js";
@@ -61,7 +61,7 @@ export function thermocoupleLoopOhmsPerMetre(type: ThermocoupleType, diameterMm:
   const legs = thermocoupleLegs[type];
   const rho = (legs.positive.resistivityMicroohmCm + legs.negative.resistivityMicroohmCm) * 1e-8; // Ω·m
   const area = (Math.PI * (d * 1e-3) ** 2) / 4; // m²
-  return rho / area;
+  return _requireFiniteResult(rho / area, "diameterMm", d, "mm", context);
 }
 
 function wireRunOhms(type: ThermocoupleType, run: ThermocoupleWireRun, context: string, key: string): number {
@@ -76,7 +76,7 @@ function wireRunOhms(type: ThermocoupleType, run: ThermocoupleWireRun, context: 
     context,
   );
   const d = hasD ? _requirePositive(o["diameterMm"], `${key}.diameterMm`, "mm", context) : awgDiameterMm(o["awg"] as number);
-  return thermocoupleLoopOhmsPerMetre(type, d) * length;
+  return _requireFiniteResult(thermocoupleLoopOhmsPerMetre(type, d) * length, `${key}.lengthMetres`, length, "m", context);
 }
 
 /** A required finite number ≥ 0 (a length or a resistance). */
@@ -150,7 +150,8 @@ export function loopResistanceOhms(element: LoopResistanceElement, type: Thermoc
       ? wireRunOhms(type, o["cableWire"] as ThermocoupleWireRun, context, "cableWire")
       : nonNegative(o["cableOhms"], "cableOhms", "Ω", context);
   const otherOhms = nonNegative(o["otherOhms"], "otherOhms", "Ω", context);
-  return { thermocoupleOhms, cableOhms, otherOhms, totalOhms: thermocoupleOhms + cableOhms + otherOhms };
+  const totalOhms = _requireFiniteResult(thermocoupleOhms + cableOhms + otherOhms, "loop resistance (sum of the parts)", thermocoupleOhms, "Ω", context);
+  return { thermocoupleOhms, cableOhms, otherOhms, totalOhms };
 }
 
 /**
@@ -170,7 +171,7 @@ export function detectionOffsetMicrovolts(detectionCurrentNanoamps: number, loop
   const i = requireNonNegativeValue(detectionCurrentNanoamps, "detectionCurrentNanoamps", "nA", context);
   const r = requireNonNegativeValue(loopOhms, "loopOhms", "Ω", context);
   if (direction !== "pullUp" && direction !== "pullDown") return _invalidChoice("detectionDirection", direction, ["pullUp", "pullDown"], context);
-  return ((direction === "pullUp" ? 1 : -1) * i * r) / 1000; // nA·Ω = nV
+  return _requireFiniteResult(((direction === "pullUp" ? 1 : -1) * i * r) / 1000, "loopOhms", r, "Ω", context); // nA·Ω = nV
 }
 
 /** @internal The loop stage: its sources and its offset at the amplifier input. */

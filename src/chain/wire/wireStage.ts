@@ -11,7 +11,7 @@
  * @module
  */
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
-import { _invalidChoice, HotjunctionTypeError } from "../../errors.js";
+import { _invalidChoice, _requireFinite, _requireOptionsObject, HotjunctionTypeError } from "../../errors.js";
 import { _compile, type CompiledType } from "../../its90/compiled.js";
 import { _emfFromTemperature } from "../../its90/engine.js";
 import { thermocoupleData } from "../../its90/resolveType.js";
@@ -179,6 +179,9 @@ export function wireEmfMillivolts(
   values: Readonly<Record<string, number>> = {},
 ): number {
   const stage = _wireStage(wire, type, ambient, { overrides: undefined }, "wire");
+  _requireFinite(hotJunctionC, "hot-junction temperature", "°C", "wire");
+  _requireFinite(coldJunctionC, "cold-junction temperature", "°C", "wire");
+  _requireOptionsObject(values, "wire", false);
   const x: Record<string, number> = {};
   for (const s of stage.sourcesAt(hotJunctionC)) x[s.name] = values[s.name] ?? s.distribution.mean;
   return _wireEmfMillivolts(stage, _compile(thermocoupleData(type)), hotJunctionC, coldJunctionC, values["thermocouple.tolerance"] ?? 0, x);

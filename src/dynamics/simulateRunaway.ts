@@ -4,7 +4,7 @@
  * hot the load gets.
  * @module
  */
-import { HotjunctionRangeError, _requireInRange } from "../errors.js";
+import { HotjunctionRangeError, _requireFiniteResult, _requireInRange } from "../errors.js";
 import { _checkScenario, _compileDynamics, type _CompiledDynamics } from "./_compileDynamics.js";
 import { _buildLinearSystem, _derivative, _locate, _propagator, _step, type _LinearSystem } from "./_linearSystem.js";
 import type { DynamicsModel, RunawayScenario } from "./types.js";
@@ -329,7 +329,9 @@ export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenar
       const g = filter.push(next[yi] as number);
       if (u === 1 && decision === null && g >= thr) {
         const crossing: number = t + (dt * (thr - gPrev)) / (g - gPrev);
-        const decided: number = crossing + (fw as NonNullable<typeof fw>).debounceSamples * (fw as NonNullable<typeof fw>).samplePeriodSeconds;
+        const ts = (fw as NonNullable<typeof fw>).samplePeriodSeconds;
+        // a sample period near 1e308 s puts the decision past float64: refused by name, never an Infinity time
+        const decided: number = _requireFiniteResult(crossing + (fw as NonNullable<typeof fw>).debounceSamples * ts, "sample period (samplePeriodSeconds)", ts, "s", "simulateRunaway");
         decision = decided;
         heatOff = decided + delay;
       }

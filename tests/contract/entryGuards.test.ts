@@ -1,6 +1,6 @@
 /**
  * Entry guards found by the contract test (contract.test.ts, issue 12), each held by a precise error here so the
- * default suite keeps them while the contract test itself stays behind CONTRACT=1. Common practice, no source:
+ * default suite keeps them beside the contract test (which runs in the default suite too). Common practice, no source:
  * the contract is the README's promise (typed error naming the quantity, the value and the valid range).
  */
 import { describe, expect, it } from "vitest";

@@ -78,6 +78,18 @@ describe("dynamics formulas refuse what they cannot compute", () => {
     // a real coupling still simulates: the heat reaches the load (true temperature rises past the trip point)
     expect(simulateRunaway(model(60), scenario).peakTrueC).toBeGreaterThan(580);
   });
+
+  it("a firmware sample period of 1e308 s is refused by name (the decision time was Infinity)", () => {
+    const model = (samplePeriodSeconds: number) =>
+      ({ runaway: { kind: "constantRate", rateCPerSecond: 2 }, signalPath: { kind: "firmware", samplePeriodSeconds, digitalFilter: { kind: "movingAverage", samples: 4 } } }) as never;
+    const scenario = { startC: 960, tripTemperatureC: 1000, hazardLimitC: 1040 };
+    // refused as OVERFLOW (by the step guard or by the decision time), never an Infinity decision
+    expect(fields(thrown(() => simulateRunaway(model(1e308), scenario))).code).toBe("OVERFLOW");
+    // a real sample period decides at a finite time after the crossing of 1000 °C at 20 s (2 °C/s from 960 °C)
+    const ok = simulateRunaway(model(0.1), scenario);
+    expect(ok.decisionSeconds).toBeGreaterThan(20);
+    expect(Number.isFinite(ok.decisionSeconds as number)).toBe(true);
+  });
 });
 
 function fields(e: unknown): { code: string; quantity: string; value: unknown; min?: number; max?: number } {

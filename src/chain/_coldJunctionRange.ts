@@ -13,6 +13,9 @@
  * @module
  * @internal
  */
+import { _emfInSubrange, type CompiledType } from "../its90/compiled.js";
+import { _emfEvaluationBound } from "../its90/curvatureEnclosure.js";
+import { _temperatureFromEmf } from "../its90/engine.js";
 import { _addInterval, _down, _hull, _mulInterval, _up, _widen, type _Interval } from "./_intervals.js";
 
 type Box = Readonly<Record<string, readonly [number, number]>>;
@@ -25,6 +28,43 @@ export const _unitRoundoff = 1.1102230246251565e-16;
 const minPieceFraction = 9.5367431640625e-7; // 2^-20
 const maxHalvings = 40;
 const maxPieces = 4096;
+
+/** @internal A type's seams and the largest step between neighbouring sub-range polynomials there (with Ê's bounds). */
+export function _seamsOf(ct: CompiledType): { readonly seams: readonly number[]; readonly seamStep: number } {
+  let seamStep = 0;
+  for (let i = 1; i < ct.subranges.length; i++) {
+    const s = (ct.subranges[i] as (typeof ct.subranges)[number]).minC;
+    const d = _emfEvaluationBound(ct, i - 1, [s, s]) + _emfEvaluationBound(ct, i, [s, s]);
+    seamStep = Math.max(seamStep, Math.abs(_emfInSubrange(ct, i - 1, s) - _emfInSubrange(ct, i, s)) + d);
+  }
+  return { seams: ct.subranges.slice(1).map((s) => s.minC), seamStep };
+}
+
+/** @internal The largest a-priori bound of |Ê − E| over the temperature intervals, mV. */
+export function _emfBoundOver(ct: CompiledType, temps: readonly _Interval[]): number {
+  let bound = 0;
+  ct.subranges.forEach((sub, i) => {
+    for (const t of temps) {
+      const lo = Math.max(t[0], sub.minC);
+      const hi = Math.min(t[1], sub.maxC);
+      if (lo <= hi) bound = Math.max(bound, _emfEvaluationBound(ct, i, [lo, hi]));
+    }
+  });
+  return bound;
+}
+
+/**
+ * @internal E⁻¹ at an end of an enclosed argument: any argument the model can evaluate lies in the type's EMF
+ * range, and the exact inverse is non-decreasing, so the clamped end bounds every value the model returns.
+ */
+export function _enclosedInverse(ct: CompiledType, emf: number): number {
+  const lowest = Math.max(ct.lowestEmf, ct.emfAtMinC);
+  try {
+    return _temperatureFromEmf(ct, Math.min(ct.emfAtMaxC, Math.max(lowest, emf)));
+  } catch {
+    return emf < 0.5 * (lowest + ct.emfAtMaxC) ? ct.minC : ct.maxC;
+  }
+}
 
 /** The largest float below x (x finite). */
 function previousFloat(x: number): number {

@@ -41,9 +41,6 @@
  * @module
  * @internal
  */
-import { _temperatureFromEmf } from "../its90/engine.js";
-import { _emfInSubrange } from "../its90/compiled.js";
-import { _emfEvaluationBound } from "../its90/curvatureEnclosure.js";
 import {
   _addInterval,
   _divInterval,
@@ -56,7 +53,7 @@ import {
   type _Interval,
 } from "./_intervals.js";
 import { _ambientInputName, type _CompiledChain } from "./_compileChain.js";
-import { _cornerRange, _overColdJunction, _unitRoundoff, type _Transfer } from "./_coldJunctionRange.js";
+import { _cornerRange, _emfBoundOver, _enclosedInverse, _overColdJunction, _seamsOf, _unitRoundoff, type _Transfer } from "./_coldJunctionRange.js";
 import type { _ComparatorStage } from "./comparator.js";
 import type { _ReferenceStage } from "./reference.js";
 
@@ -108,7 +105,6 @@ interface EnclosureSetup {
   /** The largest step between neighbouring sub-range polynomials, for wire temperatures that may cross a seam. */
   readonly seamStep: number;
   readonly seams: readonly number[];
-  readonly lowestEmf: number;
 }
 
 const namesOf = (sources: readonly { readonly name: string }[] | undefined): string[] => (sources ?? []).map((s) => s.name);
@@ -135,12 +131,6 @@ function enclosureSetup(cc: _CompiledChain, tap: number, edgeMillivolts: number)
       added.push({ transfer: (x) => loop.offsetMillivolts(x), names: namesOf(loop.sources) });
     }
   }
-  let seamStep = 0;
-  for (let i = 1; i < ct.subranges.length; i++) {
-    const s = (ct.subranges[i] as (typeof ct.subranges)[number]).minC;
-    const d = _emfEvaluationBound(ct, i - 1, [s, s]) + _emfEvaluationBound(ct, i, [s, s]);
-    seamStep = Math.max(seamStep, Math.abs(_emfInSubrange(ct, i - 1, s) - _emfInSubrange(ct, i, s)) + d);
-  }
   return {
     cc,
     tap,
@@ -162,9 +152,7 @@ function enclosureSetup(cc: _CompiledChain, tap: number, edgeMillivolts: number)
     leakageNames: namesOf(wire?.leakage?.sources),
     added,
     wireEmfEvaluations,
-    seamStep,
-    seams: ct.subranges.slice(1).map((s) => s.minC),
-    lowestEmf: Math.max(ct.lowestEmf, ct.emfAtMinC),
+    ..._seamsOf(ct),
   };
 }
 
@@ -297,12 +285,7 @@ function argumentOver(s: EnclosureSetup, f: FrontOver, box: Box): ArgumentOver {
     const r = box[name];
     if (r !== undefined) temps = _hull(_hull(temps, r), _addInterval(tcRange, r));
   }
-  let emfBound = 0;
-  ct.subranges.forEach((sub, i) => {
-    const lo = Math.max(temps[0], sub.minC);
-    const hi = Math.min(temps[1], sub.maxC);
-    if (lo <= hi) emfBound = Math.max(emfBound, _emfEvaluationBound(ct, i, [lo, hi]));
-  });
+  const emfBound = _emfBoundOver(ct, [temps]);
   const allowance = (): number => 64 * U * magnitude + 2 * state.emfEvaluations * emfBound + state.seamAllowance;
   return { argument, slope, allowance, state };
 }
@@ -365,15 +348,7 @@ function enclosureOver(s: EnclosureSetup, box: Box): readonly [number, number] {
   const f = frontOver(s, box);
   const a = argumentOver(s, f, box);
   const arg = wire === undefined ? argumentOverColdJunction(s, f, a, box, f.scaleRange) : argumentWithWire(s, f, a, box);
-  // Any argument the model can evaluate lies in the type's EMF range; E⁻¹ is non-decreasing.
-  const inverse = (emf: number): number => {
-    const clamped = Math.min(ct.emfAtMaxC, Math.max(s.lowestEmf, emf));
-    try {
-      return _temperatureFromEmf(ct, clamped);
-    } catch {
-      return emf < 0.5 * (s.lowestEmf + ct.emfAtMaxC) ? ct.minC : ct.maxC;
-    }
-  };
+  const inverse = (emf: number): number => _enclosedInverse(ct, emf);
   const eps = (box["thermocouple.tolerance"] ?? [0, 0]) as _Interval;
   const ageing = (box["probe.ageing"] ?? [0, 0]) as _Interval;
   let low = inverse(arg[0]) - eps[1];

@@ -81,6 +81,10 @@ function previousFloat(x: number): number {
  * (module note). `x` holds the box's centre on entry and on return.
  */
 export function _cornerRange(f: _Transfer, x: Values, box: Box, names: readonly string[]): _Interval {
+  if (names.length === 0) {
+    const v = f(x); // no source of the box: one float value
+    return [v, v];
+  }
   const up: boolean[] = [];
   for (const name of names) {
     const [lo, hi] = box[name] as readonly [number, number];

@@ -24,8 +24,8 @@
  * 2. M and δ by monotonicity: A is affine in M at every other point, so its extreme over M is at an end of M's
  *    range: the end the sign of M's factor (N + V_os, or N/α + t_cj + x) picks where that sign is proven over the
  *    box (M > 0), else the better of the two ends (two evaluations). A rises with δ where E′ > 0 over t_cj + δ: for
- *    the high end of A δ takes its high end (a point), for the low end its low one; elsewhere it stays an
- *    interval. Then t_cj is the only repeated input, and `_overColdJunction` cuts and subdivides it with an
+ *    the high end of A δ takes its high end (a point), for the low end its low one (plus the backward step of Ê
+ *    at a seam inside t_cj + δ, if a type's polynomials step back there); elsewhere it stays an interval. Then t_cj is the only repeated input, and `_overColdJunction` cuts and subdivides it with an
  *    interval enclosure of ∂A/∂t_cj = M·(α − E′(t_cj))/G_nom [+ E′(t_cj + δ)] (fixed scale M·(1 − E′/α)).
  * 3. The argument is widened for the difference between the float64 model and the real A: 64 unit roundoffs of
  *    the sum of its terms' magnitudes, plus twice the a-priori bound of Ê per reference-function evaluation (scaled
@@ -40,6 +40,8 @@
  * @module
  * @internal
  */
+import { _emfInSubrange } from "../its90/compiled.js";
+import { _emfEvaluationBound } from "../its90/curvatureEnclosure.js";
 import { _addInterval, _divInterval, _emfOver, _mag, _mulInterval, _seebeckOver, _subInterval, type _Interval } from "./_intervals.js";
 import { _ambientInputName, type _CompiledChain } from "./_compileChain.js";
 import { _cornerRange, _emfBoundOver, _enclosedInverse, _overColdJunction, _seamsOf, _unitRoundoff, type _Transfer } from "./_coldJunctionRange.js";
@@ -117,7 +119,16 @@ export function _readingEnclosure(cc: _CompiledChain, hotJunctionC: number): _Re
     };
     const whole = factor(tcRange);
     const wm = _mulInterval(m, point(w));
-    const raisesWithDelta = software && _seebeckOver(ct, _addInterval(tcRange, delta))[0] > 0;
+    const sensorRange = _addInterval(tcRange, delta);
+    const raisesWithDelta = software && _seebeckOver(ct, sensorRange)[0] > 0;
+    // δ at an end assumes Ê(t_cj + δ) non-decreasing in δ: across a seam inside t_cj + δ, Ê may step back by the
+    // lower polynomial's excess over the upper one there (with both evaluation bounds); that much is allowed.
+    let deltaSeam = 0;
+    seams.forEach((t, j) => {
+      if (!raisesWithDelta || !(t > sensorRange[0] && t <= sensorRange[1])) return;
+      const back = _emfInSubrange(ct, j, t) - _emfInSubrange(ct, j + 1, t) + _emfEvaluationBound(ct, j, [t, t]) + _emfEvaluationBound(ct, j + 1, [t, t]);
+      deltaSeam += Math.max(0, back);
+    });
     // Ê's a-priori bound over every temperature used, scaled by the factor on it.
     const emfBound = _emfBoundOver(ct, [hot, tcRange, _addInterval(tcRange, delta)]);
     const emfWeight = Math.max(1, _mag(wm) / alpha);
@@ -141,10 +152,17 @@ export function _readingEnclosure(cc: _CompiledChain, hotJunctionC: number): _Re
         return a;
       };
       const slope = (tc: _Interval): _Interval => {
+        if (software && dSide[0] === dSide[1]) {
+          // E′(t_cj + δ) − c·E′(t_cj) = (1 − c)·E′(t_cj) + δ·E″(ξ), ξ between t_cj and t_cj + δ (mean-value theorem):
+          // the two Seebeck terms nearly cancel, and this form keeps the cancellation out of the interval widths.
+          const shifted = _addInterval(tc, dSide);
+          const curvature = _mulInterval(dSide, _seebeckOver(ct, [Math.min(tc[0], shifted[0]), Math.max(tc[1], shifted[1])], 2));
+          return _addInterval(_mulInterval(_subInterval(point(1), mSide), _seebeckOver(ct, tc)), curvature);
+        }
         const d = _mulInterval(mSide, factorSlope(tc));
         return software ? _addInterval(d, _seebeckOver(ct, _addInterval(tc, dSide))) : d;
       };
-      const allowance = (): number => 64 * _unitRoundoff * magnitude + 2 * state.emfEvaluations * emfBound * emfWeight + state.seamAllowance;
+      const allowance = (): number => 64 * _unitRoundoff * magnitude + 2 * state.emfEvaluations * emfBound * emfWeight + state.seamAllowance + deltaSeam;
       const r = _overColdJunction(tcRange, seams, seamStep, software ? [dSide] : [], 1, { argument, slope, allowance, state });
       return high ? r[1] : r[0];
     };

@@ -9,9 +9,11 @@
  *   reference function; prints tables built and refused, points checked, the worst error/bound ratio both ways;
  * - the exact inverse: every piece edge ± 6 ulps and 2,000 adjacent floats inside each Newton-solved segment,
  *   steps backwards counted;
- * - the worst-case bracket of every comparator setpoint of `examples/`: attained, enclosure, gap.
+ * - the worst-case bracket of every setpoint of `examples/`: comparator designs (the trip model's bracket) and ADC
+ *   designs (the reading model's at the setpoint, as the check report shows it): attained, enclosure, gap.
  *
- * Usage: `npx tsx scripts/boundFigures.ts [--json]` (about a minute on a quiet 2-core machine).
+ * Usage: `npx tsx scripts/boundFigures.ts [--json] [--brackets]` (about a minute on a quiet 2-core machine;
+ * `--brackets` measures the brackets only).
  */
 import { readFileSync, readdirSync } from "node:fs";
 import { join } from "node:path";
@@ -23,6 +25,7 @@ import { _completeExactInverse, _exactInverse } from "../src/its90/exactInverse.
 import { thermocoupleData, thermocoupleTypes } from "../src/its90/resolveType.js";
 import { parseDesign, tripDesignFromDesign } from "../src/design/index.js";
 import { designTrip } from "../src/trip/designTrip.js";
+import { _tripReportOfDesign } from "../src/cli/commands/check.js";
 
 const D = _decimalContext(40);
 const asJson = process.argv.includes("--json");
@@ -157,16 +160,22 @@ function monotoneFigures() {
 
 function bracketFigures() {
   const dir = join(import.meta.dirname, "../examples");
-  const out: { design: string; setpoint: string; attained: [number, number]; enclosure: [number, number]; gap: [number, number] }[] = [];
+  const out: { design: string; setpoint: string; kind: "comparator" | "adc"; attained: [number, number]; enclosure: [number, number]; gap: [number, number] }[] = [];
+  const quietIo = { writeOut: () => undefined, writeErr: () => undefined, stderrIsTty: false, cwd: "." };
   for (const file of readdirSync(dir).filter((f) => f.endsWith(".json"))) {
     const design = parseDesign(readFileSync(join(dir, file), "utf8"));
-    if ((design as { comparator?: unknown }).comparator === undefined) continue;
-    const result = designTrip(tripDesignFromDesign(design), { monteCarloTrials: 200 });
-    for (const sp of result.setpoints) {
-      const w = sp.worstCase;
+    const comparator = (design as { comparator?: unknown }).comparator !== undefined;
+    const bands = comparator
+      ? designTrip(tripDesignFromDesign(design), { monteCarloTrials: 200 }).setpoints.map((sp) => ({ name: sp.name, w: sp.worstCase }))
+      : _tripReportOfDesign(quietIo, design, { acceptanceMethod: "worst-case", coverage: 0.95, trials: 200, seed: 1 }).setpoints.map((sp) => ({
+          name: sp.name,
+          w: sp.bands.find((b) => b.method === "worst-case") as NonNullable<(typeof sp.bands)[number]>,
+        }));
+    for (const { name, w } of bands) {
       out.push({
         design: file,
-        setpoint: sp.name,
+        setpoint: name,
+        kind: comparator ? "comparator" : "adc",
         attained: [w.lowC, w.highC],
         enclosure: [w.enclosureLowC ?? Number.NaN, w.enclosureHighC ?? Number.NaN],
         gap: [w.enclosureGapLowC ?? Number.NaN, w.enclosureGapHighC ?? Number.NaN],
@@ -176,8 +185,9 @@ function bracketFigures() {
   return out;
 }
 
-const tables = tableFigures();
-const monotone = monotoneFigures();
+const bracketsOnly = process.argv.includes("--brackets");
+const tables = bracketsOnly ? { built: 0, refused: 0, points: 0, decimalPoints: 0, worstRatio: 0, worstRatio40: 0, worstTable: "", refusedTables: [] as string[] } : tableFigures();
+const monotone = bracketsOnly ? { edges: 0, points: 0, backwards: 0 } : monotoneFigures();
 const brackets = bracketFigures();
 if (asJson) console.log(JSON.stringify({ tables, monotone, brackets }, null, 2));
 else {
@@ -186,6 +196,6 @@ else {
   for (const r of tables.refusedTables) console.log(`  refused: ${r}`);
   console.log(`exact inverse: ${monotone.edges} piece edges ± 6 ulps and the Newton segments, ${monotone.points} EMFs, ${monotone.backwards} steps backwards`);
   for (const b of brackets) {
-    console.log(`worst-case bracket ${b.design} "${b.setpoint}": attained ${b.attained.join(" to ")} °C, enclosure ${b.enclosure.join(" to ")} °C, gap ${b.gap.map((g) => g.toExponential(2)).join(" / ")} °C`);
+    console.log(`worst-case bracket (${b.kind}) ${b.design} "${b.setpoint}": attained ${b.attained.join(" to ")} °C, enclosure ${b.enclosure.join(" to ")} °C, gap ${b.gap.map((g) => g.toExponential(2)).join(" / ")} °C`);
   }
 }

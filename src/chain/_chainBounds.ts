@@ -98,7 +98,7 @@ export function _chainBounds(
       method,
       coverage: options.coverage,
       ...(method === "monte-carlo" ? { trials: options.trials, seed: options.seed } : {}),
-      ...(method === "worst-case" ? { normalBoundCoverage: options.normalBoundCoverage } : {}),
+      ...(method === "worst-case" ? { normalBoundCoverage: options.normalBoundCoverage, modelEnclosure: cm.enclosure } : {}),
     });
     bounds.push({
       method,
@@ -110,6 +110,9 @@ export function _chainBounds(
       standardUncertaintyC: r.standardUncertainty,
       coverage: r.coverage,
       note: r.note,
+      ...(r.enclosure !== undefined && r.enclosureGap !== undefined
+        ? { enclosureLowC: r.enclosure[0], enclosureHighC: r.enclosure[1], enclosureGapLowC: r.enclosureGap[0], enclosureGapHighC: r.enclosureGap[1] }
+        : {}),
     });
   }
   const rss = propagate(cm.model, cm.inputs, { method: "rss", coverage: options.coverage });

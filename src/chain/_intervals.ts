@@ -104,11 +104,11 @@ export function _emfOver(ct: CompiledType, t: _Interval): _Interval {
   return out ?? [Number.NEGATIVE_INFINITY, Number.POSITIVE_INFINITY];
 }
 
-/** @internal An enclosure of the real Seebeck coefficient E′(t) (mV/°C) for t in the interval. */
-export function _seebeckOver(ct: CompiledType, t: _Interval): _Interval {
+/** @internal An enclosure of the real Seebeck coefficient E′(t) (mV/°C), or of E″(t) (k = 2, mV/°C²), for t in the interval. */
+export function _seebeckOver(ct: CompiledType, t: _Interval, k: 1 | 2 = 1): _Interval {
   let out: _Interval | undefined;
   eachPiece(ct, t, (i, piece) => {
-    const r = _encloseEmfDerivative(ct, i, 1, piece);
+    const r = _encloseEmfDerivative(ct, i, k, piece);
     out = out === undefined ? r : _hull(out, r);
   });
   return out ?? [Number.NEGATIVE_INFINITY, Number.POSITIVE_INFINITY];

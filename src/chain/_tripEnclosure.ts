@@ -41,30 +41,25 @@
  * @module
  * @internal
  */
-import { _temperatureFromEmf } from "../its90/engine.js";
-import { _emfInSubrange } from "../its90/compiled.js";
-import { _emfEvaluationBound } from "../its90/curvatureEnclosure.js";
 import {
   _addInterval,
   _divInterval,
-  _down,
   _emfOver,
   _hull,
   _mag,
   _mulInterval,
   _seebeckOver,
   _subInterval,
-  _up,
-  _widen,
   type _Interval,
 } from "./_intervals.js";
 import { _ambientInputName, type _CompiledChain } from "./_compileChain.js";
+import { _cornerRange, _emfBoundOver, _enclosedInverse, _overColdJunction, _seamsOf, _unitRoundoff, type _Transfer } from "./_coldJunctionRange.js";
 import type { _ComparatorStage } from "./comparator.js";
 import type { _ReferenceStage } from "./reference.js";
 
 type Box = Readonly<Record<string, readonly [number, number]>>;
 type Values = Record<string, number>;
-type Transfer = (x: Readonly<Record<string, number>>) => number;
+type Transfer = _Transfer;
 
 /** @internal The box enclosure of a trip model: box → [low, high] °C. */
 export type _TripEnclosure = (box: Box) => readonly [number, number];
@@ -75,56 +70,7 @@ export interface _TripEnclosureOf {
   readonly accountsFor: ReadonlySet<string>;
 }
 
-const U = 1.1102230246251565e-16; // 2^-53, the unit roundoff
-const minPieceFraction = 9.5367431640625e-7; // 2^-20
-const maxHalvings = 40;
-const maxPieces = 4096;
-
-/** The largest float below x (x finite). */
-function previousFloat(x: number): number {
-  if (x === 0) return -Number.MIN_VALUE;
-  const buf = new DataView(new ArrayBuffer(8));
-  buf.setFloat64(0, x);
-  const bits = buf.getBigUint64(0);
-  buf.setBigUint64(0, x > 0 ? bits - 1n : bits + 1n);
-  return buf.getFloat64(0);
-}
-
-/**
- * Range of a transfer that is monotone in each of `names` (direction independent of the others) over the box:
- * its values at the two corners, widened for rounding inside the box (see the module note, 1). `x` holds the
- * box's centre on entry and on return.
- */
-function cornerRange(f: Transfer, x: Values, box: Box, names: readonly string[]): _Interval {
-  const up: boolean[] = [];
-  for (const name of names) {
-    const [lo, hi] = box[name] as readonly [number, number];
-    const mid = x[name] as number;
-    x[name] = lo;
-    const fl = f(x);
-    x[name] = hi;
-    const fh = f(x);
-    x[name] = mid;
-    up.push(fh >= fl);
-  }
-  const fMid = f(x);
-  const corner = (high: boolean): number => {
-    names.forEach((name, i) => {
-      const b = box[name] as readonly [number, number];
-      x[name] = up[i] === high ? b[1] : b[0];
-    });
-    const v = f(x);
-    for (const name of names) {
-      const b = box[name] as readonly [number, number];
-      x[name] = 0.5 * (b[0] + b[1]);
-    }
-    return v;
-  };
-  const vHigh = corner(true);
-  const vLow = corner(false);
-  const allowance = (16 + 4 * names.length) * U * (Math.abs(vHigh) + Math.abs(vLow) + Math.abs(fMid));
-  return [_down(Math.min(vLow, vHigh, fMid) - allowance), _up(Math.max(vLow, vHigh, fMid) + allowance)];
-}
+const U = _unitRoundoff;
 
 const point = (v: number): _Interval => [v, v];
 
@@ -159,7 +105,6 @@ interface EnclosureSetup {
   /** The largest step between neighbouring sub-range polynomials, for wire temperatures that may cross a seam. */
   readonly seamStep: number;
   readonly seams: readonly number[];
-  readonly lowestEmf: number;
 }
 
 const namesOf = (sources: readonly { readonly name: string }[] | undefined): string[] => (sources ?? []).map((s) => s.name);
@@ -186,12 +131,6 @@ function enclosureSetup(cc: _CompiledChain, tap: number, edgeMillivolts: number)
       added.push({ transfer: (x) => loop.offsetMillivolts(x), names: namesOf(loop.sources) });
     }
   }
-  let seamStep = 0;
-  for (let i = 1; i < ct.subranges.length; i++) {
-    const s = (ct.subranges[i] as (typeof ct.subranges)[number]).minC;
-    const d = _emfEvaluationBound(ct, i - 1, [s, s]) + _emfEvaluationBound(ct, i, [s, s]);
-    seamStep = Math.max(seamStep, Math.abs(_emfInSubrange(ct, i - 1, s) - _emfInSubrange(ct, i, s)) + d);
-  }
   return {
     cc,
     tap,
@@ -213,9 +152,7 @@ function enclosureSetup(cc: _CompiledChain, tap: number, edgeMillivolts: number)
     leakageNames: namesOf(wire?.leakage?.sources),
     added,
     wireEmfEvaluations,
-    seamStep,
-    seams: ct.subranges.slice(1).map((s) => s.minC),
-    lowestEmf: Math.max(ct.lowestEmf, ct.emfAtMinC),
+    ..._seamsOf(ct),
   };
 }
 
@@ -266,7 +203,7 @@ function frontOver(s: EnclosureSetup, box: Box): FrontOver {
     x[name] = 0.5 * (b[0] + b[1]);
   }
   const present = (list: readonly string[]): string[] => list.filter((n) => n in box);
-  const range = (f: Transfer, list: readonly string[]): _Interval => cornerRange(f, x, box, present(list));
+  const range = (f: Transfer, list: readonly string[]): _Interval => _cornerRange(f, x, box, present(list));
   const vRef = range((v) => reference.volts(v), s.referenceNames);
   const ratio = divider === undefined ? point(1) : range((v) => divider.ratio(v, s.tap), s.dividerNames);
   const vCmp = range((v) => comparator.switchingOffsetVolts(v, s.edgeMillivolts), s.comparatorNames);
@@ -348,77 +285,25 @@ function argumentOver(s: EnclosureSetup, f: FrontOver, box: Box): ArgumentOver {
     const r = box[name];
     if (r !== undefined) temps = _hull(_hull(temps, r), _addInterval(tcRange, r));
   }
-  let emfBound = 0;
-  ct.subranges.forEach((sub, i) => {
-    const lo = Math.max(temps[0], sub.minC);
-    const hi = Math.min(temps[1], sub.maxC);
-    if (lo <= hi) emfBound = Math.max(emfBound, _emfEvaluationBound(ct, i, [lo, hi]));
-  });
+  const emfBound = _emfBoundOver(ct, [temps]);
   const allowance = (): number => 64 * U * magnitude + 2 * state.emfEvaluations * emfBound + state.seamAllowance;
   return { argument, slope, allowance, state };
 }
 
-/** A over t_cj ∈ [tcLow, tcHigh] (module note, 3), cut where a reference-function evaluation changes polynomial. */
+/** A over t_cj ∈ [tcLow, tcHigh] (module note, 3; `_coldJunctionRange.ts`), cut where a reference-function evaluation changes polynomial. */
 function argumentOverColdJunction(s: EnclosureSetup, f: FrontOver, a: ArgumentOver, wireBox: Box, scale: _Interval): _Interval {
-  const { cc } = s;
-  const { tcRange } = f;
-  const { argument, slope, allowance, state } = a;
-  const atPoint = (t: number): _Interval => _widen(argument(point(t), wireBox, scale), allowance());
-  const overPiece = (p: _Interval, depth: number): _Interval => {
-    if (p[0] === p[1]) return atPoint(p[0]);
-    state.pieces++;
-    const d = slope(p, wireBox, scale);
-    if (d[0] >= 0) return _widen([atPoint(p[0])[0], atPoint(p[1])[1]], allowance());
-    if (d[1] <= 0) return _widen([atPoint(p[1])[0], atPoint(p[0])[1]], allowance());
-    const m = 0.5 * (p[0] + p[1]);
-    if (depth >= maxHalvings || state.pieces > maxPieces || p[1] - p[0] <= (tcRange[1] - tcRange[0]) * minPieceFraction) {
-      state.emfEvaluations += 1;
-      return _widen(_addInterval(atPoint(m), _mulInterval(d, [_down(p[0] - m), _up(p[1] - m)])), allowance());
-    }
-    return _hull(overPiece([p[0], m], depth + 1), overPiece([m, p[1]], depth + 1));
-  };
-  // E(t_cj) changes polynomial exactly at a seam (floats below use the lower one). E(t_cj + r) of a connector
-  // above the cold junction at a fixed r changes near seam − r (to within the rounding of the sum): a few ulps
-  // around it are enclosed by plain interval evaluation (no derivative across the step). With r an interval,
-  // the step can fall anywhere: the largest seam step is allowed for (module note, 4).
-  state.seamAllowance = 0;
-  const nearCuts: number[] = [];
-  for (const name of cc.wireRangeNames) {
-    if (!name.endsWith(".aboveColdJunction")) continue;
+  // E(t_cj + r) of a connector above the cold junction changes polynomial near seam − r.
+  const offsets: _Interval[] = [];
+  for (const name of s.cc.wireRangeNames) {
     const r = wireBox[name];
-    if (r === undefined) continue;
-    const tConn = _addInterval(tcRange, r);
-    for (const seam of s.seams) {
-      if (!(seam > tConn[0] && seam <= tConn[1])) continue;
-      if (r[0] === r[1]) nearCuts.push(seam - r[0]);
-      else state.seamAllowance += (2 * s.seamStep) / Math.min(1, scale[0] > 0 ? scale[0] : 1);
-    }
+    if (name.endsWith(".aboveColdJunction") && r !== undefined) offsets.push(r);
   }
-  type Cut = { at: number; near: boolean };
-  const cuts: Cut[] = [...s.seams.map((at) => ({ at, near: false })), ...nearCuts.map((at) => ({ at, near: true }))].sort((x, y) => x.at - y.at);
-  let result: _Interval | undefined;
-  const add = (piece: _Interval): void => {
-    result = result === undefined ? piece : _hull(result, piece);
-  };
-  let start = tcRange[0];
-  for (const cut of cuts) {
-    if (!cut.near) {
-      if (cut.at > start && cut.at <= tcRange[1]) {
-        add(overPiece([start, previousFloat(cut.at)], 0));
-        start = cut.at;
-      }
-      continue;
-    }
-    const width = 8 * 2 * U * (Math.abs(cut.at) + Math.abs(tcRange[0]) + Math.abs(tcRange[1]) + 1);
-    const lo = Math.max(start, cut.at - width);
-    const hi = Math.min(tcRange[1], cut.at + width);
-    if (!(hi >= lo) || hi < start) continue;
-    if (lo > start) add(overPiece([start, lo], 0));
-    add(_widen(argument([lo, hi], wireBox, scale), allowance()));
-    start = hi;
-  }
-  if (start <= tcRange[1]) add(overPiece([start, tcRange[1]], 0));
-  return result as _Interval;
+  return _overColdJunction(f.tcRange, s.seams, s.seamStep, offsets, 1 / Math.min(1, scale[0] > 0 ? scale[0] : 1), {
+    argument: (tc) => a.argument(tc, wireBox, scale),
+    slope: (tc) => a.slope(tc, wireBox, scale),
+    allowance: a.allowance,
+    state: a.state,
+  });
 }
 
 /**
@@ -463,15 +348,7 @@ function enclosureOver(s: EnclosureSetup, box: Box): readonly [number, number] {
   const f = frontOver(s, box);
   const a = argumentOver(s, f, box);
   const arg = wire === undefined ? argumentOverColdJunction(s, f, a, box, f.scaleRange) : argumentWithWire(s, f, a, box);
-  // Any argument the model can evaluate lies in the type's EMF range; E⁻¹ is non-decreasing.
-  const inverse = (emf: number): number => {
-    const clamped = Math.min(ct.emfAtMaxC, Math.max(s.lowestEmf, emf));
-    try {
-      return _temperatureFromEmf(ct, clamped);
-    } catch {
-      return emf < 0.5 * (s.lowestEmf + ct.emfAtMaxC) ? ct.minC : ct.maxC;
-    }
-  };
+  const inverse = (emf: number): number => _enclosedInverse(ct, emf);
   const eps = (box["thermocouple.tolerance"] ?? [0, 0]) as _Interval;
   const ageing = (box["probe.ageing"] ?? [0, 0]) as _Interval;
   let low = inverse(arg[0]) - eps[1];

@@ -66,6 +66,10 @@ export interface _AdcStage {
   readonly ratiometric: boolean;
   /** Unrounded code for an input (V), the actual and nominal full scale (V). */
   code(x: Readonly<Record<string, number>>, volts: number, fullScaleVolts: number, nominalFullScaleVolts: number): number;
+  /** The gain factor 1 + gain error for the source values (the code's factor on the input). */
+  gainFactor(x: Readonly<Record<string, number>>): number;
+  /** The errors added in LSB (offset + INL + quantisation) for the source values. */
+  lsbErrors(x: Readonly<Record<string, number>>): number;
   /** Inverse: the input (V) that gives a code. */
   voltsForCode(x: Readonly<Record<string, number>>, code: number, fullScaleVolts: number, nominalFullScaleVolts: number): number;
 }
@@ -92,18 +96,21 @@ export function _adcStage(element: AdcElement, ctx: _SourceContext, context: str
   const hi = inl > 0;
   const lsbErrors = (x: Readonly<Record<string, number>>): number =>
     (ho ? (x["adc.offset"] as number) : 0) + (hi ? (x["adc.inl"] as number) : 0) + (x["adc.quantization"] as number);
+  const gainFactor = (x: Readonly<Record<string, number>>): number => 1 + (hg ? (x["adc.gainError"] as number) : 0);
   return {
     sources,
     bits,
     codes,
     ratiometric,
+    gainFactor,
+    lsbErrors,
     code: (x, volts, fs, fsNom) => {
-      const g = 1 + (hg ? (x["adc.gainError"] as number) : 0);
+      const g = gainFactor(x);
       const signal = ratiometric ? (volts * fs) / fsNom : volts;
       return (signal * g * codes) / fs + lsbErrors(x);
     },
     voltsForCode: (x, code, fs, fsNom) => {
-      const g = 1 + (hg ? (x["adc.gainError"] as number) : 0);
+      const g = gainFactor(x);
       const signal = ((code - lsbErrors(x)) * fs) / (codes * g);
       return ratiometric ? (signal * fsNom) / fs : signal;
     },

@@ -56,6 +56,8 @@ export interface _FixedScaleStage {
   readonly millivoltsPerC: number;
   /** Trimmed α, mV/°C. */
   readonly alphaMillivoltsPerC: number;
+  /** The part's temperature error (stated accuracy + die-to-terminal difference) for the source values, °C. */
+  extraC(x: Readonly<Record<string, number>>): number;
   /** Output, mV, from the thermocouple EMF (mV) and the die's cold-junction temperature (°C). */
   outputMillivolts(x: Readonly<Record<string, number>>, emfMillivolts: number, coldJunctionC: number): number;
   /** Inverse: the thermocouple EMF (mV) that gives an output (mV). */
@@ -95,6 +97,7 @@ export function _fixedScaleStage(
     sources,
     millivoltsPerC: scale,
     alphaMillivoltsPerC: alpha,
+    extraC,
     outputMillivolts: (x, emf, tc) => scale * (emf / alpha + tc + extraC(x)),
     emfForOutput: (x, out, tc) => (out / scale - tc - extraC(x)) * alpha,
   };

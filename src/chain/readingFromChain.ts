@@ -16,6 +16,7 @@ import {
   _coldJunctionC,
   type _CompiledChain,
 } from "./_compileChain.js";
+import { _readingEnclosure } from "./_readingEnclosure.js";
 import type { ChainErrorSource, ChainModel, ChainReading, MeasurementChain } from "./types.js";
 
 /** Options of {@link readingFromChain}. */
@@ -109,7 +110,8 @@ export function _readingModel(cc: _CompiledChain, hotJunctionC: number): ChainMo
   const inputs: Record<string, Distribution> = {};
   for (const s of sources) inputs[s.name] = s.distribution;
   const model = (x: Readonly<Record<string, number>>): number => _indicatedC(cc, hotJunctionC, x);
-  return { model, inputs, sources, nominalC: model(_meansRecord(sources)) };
+  const enclosure = _readingEnclosure(cc, hotJunctionC);
+  return { model, inputs, sources, nominalC: model(_meansRecord(sources)), ...(enclosure !== undefined ? { enclosure } : {}) };
 }
 
 /**

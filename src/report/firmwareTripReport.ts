@@ -7,6 +7,7 @@
  */
 import type { ChainEvaluation } from "../chain/types.js";
 import type { TripBand } from "../trip/types.js";
+import { _enclosureGapToleranceC } from "../uncertainty/types.js";
 import type { ReportMethodInfo, TripReport, TripReportSetpoint } from "./reportTypes.js";
 import { _requireFiniteResult, _requireShape, HotjunctionRangeError, type _Shape } from "../errors.js";
 import { _methodInfoShape } from "./_reportShapes.js";
@@ -18,6 +19,22 @@ const evaluationShape: _Shape = {
   bounds: ["array", { method: ["oneOf", ["worst-case", "rss", "monte-carlo"]], errorLowC: "number", errorHighC: "number", coverage: "number", standardUncertaintyC: "number" }],
   contributions: ["array", { source: "string", description: "string", worstCaseSwingC: "number", standardUncertaintyC: "number" }],
 };
+
+/**
+ * The worst-case bracket of a band from the reading error's: the band is setpoint − error, so its low edge comes
+ * from the error's high end (and the gaps swap sides). The gaps are those of the reading model's enclosure, and
+ * `_enclosureGapToleranceC` (1e-9 °C) is the largest we state (tests/chain/readingEnclosure.test.ts).
+ */
+function bracketOf(setpointC: number, trueC: number, b: ChainEvaluation["bounds"][number]): Partial<TripBand> {
+  if (b.method !== "worst-case" || b.enclosureLowC === undefined || b.enclosureHighC === undefined) return {};
+  return {
+    enclosureLowC: setpointC - (b.enclosureHighC - trueC),
+    enclosureHighC: setpointC - (b.enclosureLowC - trueC),
+    ...(b.enclosureGapHighC !== undefined ? { enclosureGapLowC: b.enclosureGapHighC } : {}),
+    ...(b.enclosureGapLowC !== undefined ? { enclosureGapHighC: b.enclosureGapLowC } : {}),
+    enclosureGapToleranceC: _enclosureGapToleranceC,
+  };
+}
 
 /** A setpoint of a firmware-trip design. */
 export interface FirmwareTripSetpoint {
@@ -77,6 +94,7 @@ export function firmwareTripReport(
       standardUncertaintyC: b.standardUncertaintyC,
       ...(b.method === "monte-carlo" && methods.trials !== undefined ? { trials: methods.trials } : {}),
       ...(b.method === "monte-carlo" && methods.seed !== undefined ? { seed: methods.seed } : {}),
+      ...bracketOf(s.tripTemperatureC, evaluation.hotJunctionC, b),
     }));
     for (const [k, b] of bands.entries()) {
       _requireFiniteResult(b.lowC, `evaluations[${i}].bounds[${k}].errorHighC`, evaluation.bounds[k]!.errorHighC, "°C", context);

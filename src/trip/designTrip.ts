@@ -10,7 +10,7 @@ import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
 import type { DividerElement, MeasurementChain, ReferenceElement } from "../chain/types.js";
 import { _worstCaseBracketFrom, propagate } from "../uncertainty/propagate.js";
 import { rectangular } from "../uncertainty/rectangular.js";
-import { _propagationMethods, type Distribution, type Model } from "../uncertainty/types.js";
+import { _enclosureGapToleranceC, _propagationMethods, type Distribution, type Model } from "../uncertainty/types.js";
 import { ageingBandAt } from "../chain/wire/probe.js";
 import type { PropagationMethod, PropagationResult } from "../uncertainty/types.js";
 import { _realizeReference } from "./realizeReference.js";
@@ -246,11 +246,7 @@ function worstCaseOf(m: _TripModel, seed: number, coverage: number, normalBoundC
   return propagate(m.model, m.inputs, { method: "worst-case", normalBoundCoverage, modelEnclosure: m.enclosure });
 }
 
-/**
- * The largest gap we state between a worst-case edge and its enclosure, °C: the chain models' enclosures meet their
- * attained extremes within it (tests/trip/worstCaseEnclosure.test.ts; the gap itself is printed).
- */
-export const _enclosureGapToleranceC = 1e-9;
+export { _enclosureGapToleranceC };
 
 /** The bracket fields of a worst-case band from the results its low and high edges were read from. */
 function bracketOf(low: EdgeBracket, high: EdgeBracket): Partial<TripBand> {

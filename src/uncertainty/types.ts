@@ -140,3 +140,10 @@ export interface PropagationResult<Name extends string = string> {
   /** How the result was found, in one sentence (e.g. worst-case search strategy). */
   readonly note: string;
 }
+
+/**
+ * @internal The largest gap we state between a worst-case extreme of a chain model (comparator trip, reading) and its
+ * enclosure, °C: the chain models' enclosures meet their attained extremes within it (tests/trip/worstCaseEnclosure.test.ts,
+ * tests/chain/readingEnclosure.test.ts; the gap itself is printed).
+ */
+export const _enclosureGapToleranceC = 1e-9;

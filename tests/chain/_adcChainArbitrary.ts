@@ -1,0 +1,71 @@
+// The generated ADC chains of the reading-enclosure tests (tests/chain/readingEnclosure.test.ts): invented demo
+// values over the ranges the chain elements accept; the ADC analogue of tests/trip/_chainArbitrary.ts.
+import fc from "fast-check";
+import type { MeasurementChain } from "../../src/chain/types.js";
+
+/** A generated ADC chain (type, tolerance, front end, compensation, reference or fixed full scale, ADC, ambient) and a hot-junction temperature. */
+export const adcChainArb = fc
+  .record({
+    type: fc.constantFrom("K", "N", "J", "E", "T", "R", "S"),
+    // 0 or at least 0.01 °C: a subnormal tolerance widens the hot junction by ulps and its gap to ~2e-9 °C (see DEVELOPERS.md).
+    tcTolerance: fc.oneof(fc.constant(0), fc.double({ min: 0.01, max: 3, noNaN: true })),
+    front: fc.constantFrom("resistors", "fixed", "fixedScale"),
+    compensation: fc.constantFrom("software", "hardware"),
+    gain: fc.integer({ min: 10, max: 200 }),
+    gainTol: fc.double({ min: 0, max: 0.01, noNaN: true }),
+    offsetUv: fc.double({ min: 0, max: 50, noNaN: true }),
+    alphaFactor: fc.double({ min: 0.9, max: 1.1, noNaN: true }),
+    sensorC: fc.double({ min: 0, max: 2, noNaN: true }),
+    gradientC: fc.double({ min: 0, max: 1, noNaN: true }),
+    refTol: fc.double({ min: 0, max: 0.02, noNaN: true }),
+    fullScale: fc.constantFrom("reference", "fixed"),
+    ratiometric: fc.boolean(),
+    bits: fc.integer({ min: 8, max: 24 }),
+    offsetLsb: fc.double({ min: 0, max: 4, noNaN: true }),
+    adcGainTol: fc.double({ min: 0, max: 0.005, noNaN: true }),
+    inlLsb: fc.double({ min: 0, max: 2, noNaN: true }),
+    ambientLow: fc.double({ min: -10, max: 30, noNaN: true }),
+    ambientSpan: fc.double({ min: 0, max: 40, noNaN: true }),
+    hotFraction: fc.double({ min: 0, max: 1, noNaN: true }),
+  })
+  .map((p): { chain: MeasurementChain; hotJunctionC: number } => {
+    const ambient = { minC: p.ambientLow, maxC: p.ambientLow + p.ambientSpan };
+    const seebeckNear25: Record<string, number> = { K: 40.6, N: 26.5, J: 51.7, E: 61, T: 40.7, R: 5.9, S: 5.9 };
+    const amplifier =
+      p.front === "fixedScale"
+        ? ({ kind: "fixedScaleAmplifier", type: p.type, millivoltsPerC: 5, accuracyC: p.sensorC, isothermalGradientC: p.gradientC } as const)
+        : p.front === "resistors"
+          ? ({ kind: "amplifier", gain: { setBy: "resistors", feedbackOhms: (p.gain - 1) * 1000, groundOhms: 1000, toleranceFraction: p.gainTol }, offsetMicrovolts: p.offsetUv } as const)
+          : ({ kind: "amplifier", gain: { setBy: "fixed", gain: p.gain, gainErrorFraction: p.gainTol }, offsetMicrovolts: p.offsetUv } as const);
+    // Hot-junction temperatures from below the ambient to where the signal nears the full scale (4.096 V).
+    const top: Record<string, number> = { K: 900, N: 900, J: 700, E: 600, T: 380, R: 1600, S: 1600 };
+    const hotJunctionC = -20 + p.hotFraction * ((top[p.type] as number) + 20);
+    const chain: Record<string, unknown> = {
+      thermocouple: { kind: "thermocouple", type: p.type, tolerance: { standard: "custom", toleranceC: p.tcTolerance } },
+      amplifier,
+      reference: { kind: "reference", variant: "series", nominalVolts: 4.096, initialAccuracyFraction: p.refTol },
+      detector: {
+        kind: "adc",
+        bits: p.bits,
+        offsetLsb: p.offsetLsb,
+        gainErrorFraction: p.adcGainTol,
+        inlLsb: p.inlLsb,
+        ratiometric: p.ratiometric,
+        ...(p.fullScale === "fixed" ? { fullScaleVolts: 5 } : {}),
+      },
+      ambient,
+    };
+    if (p.front !== "fixedScale") {
+      chain["coldJunction"] =
+        p.compensation === "software"
+          ? { kind: "coldJunction", method: "software", sensorAccuracyC: p.sensorC, isothermalGradientC: p.gradientC }
+          : {
+              kind: "coldJunction",
+              method: "hardware",
+              compensationMicrovoltsPerC: (seebeckNear25[p.type] as number) * p.alphaFactor,
+              matchedAtC: 25,
+              sensorAccuracyC: p.sensorC,
+            };
+    }
+    return { chain: chain as unknown as MeasurementChain, hotJunctionC };
+  });

@@ -230,6 +230,12 @@ export function simulateRunaway(model: DynamicsModel, scenario: RunawayScenario,
   return _simulateCompiled(compiled, sc, maxPoints);
 }
 
+/** The firmware's decision time after a crossing; a sample period near 1e308 s puts it past float64: refused by name. */
+function decisionAfter(crossing: number, fw: { readonly debounceSamples: number; readonly samplePeriodSeconds: number }): number {
+  const ts = fw.samplePeriodSeconds;
+  return _requireFiniteResult(crossing + fw.debounceSamples * ts, "sample period (samplePeriodSeconds)", ts, "s", "simulateRunaway");
+}
+
 /** {@link simulateRunaway} on a compiled model and checked scenario. @internal */
 export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenario, maxPoints: number): RunawayResponse {
   const system = _buildLinearSystem(compiled, sc.startC);
@@ -329,9 +335,7 @@ export function _simulateCompiled(compiled: _CompiledDynamics, sc: RunawayScenar
       const g = filter.push(next[yi] as number);
       if (u === 1 && decision === null && g >= thr) {
         const crossing: number = t + (dt * (thr - gPrev)) / (g - gPrev);
-        const ts = (fw as NonNullable<typeof fw>).samplePeriodSeconds;
-        // a sample period near 1e308 s puts the decision past float64: refused by name, never an Infinity time
-        const decided: number = _requireFiniteResult(crossing + (fw as NonNullable<typeof fw>).debounceSamples * ts, "sample period (samplePeriodSeconds)", ts, "s", "simulateRunaway");
+        const decided: number = decisionAfter(crossing, fw as NonNullable<typeof fw>);
         decision = decided;
         heatOff = decided + delay;
       }

@@ -231,7 +231,8 @@ export function defineThermocoupleData(data: ThermocoupleData): ThermocoupleData
           coefficients: Array.isArray(f?.coefficients) ? [...f.coefficients] : f?.coefficients,
         }))
       : forward,
-    ...(e == null ? {} : { exponential: { a0: e?.a0, a1: e?.a1, a2: e?.a2 } }),
+    // null is kept (and refused by the check): read as "no term" it would give type K without its exponential
+    ...(e === undefined ? {} : { exponential: e === null ? (null as never) : { a0: e?.a0, a1: e?.a1, a2: e?.a2 } }),
   } as ThermocoupleData;
   _checkedData.set(_deepFreeze(copy), _startOf(_compileForeign(copy)));
   return copy;

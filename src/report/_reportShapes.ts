@@ -88,6 +88,18 @@ export const _buildSheetShape: _Shape = {
   parts: ["array", { designators: "string", part: "string", value: "any" /* a number (finite: checked by tripReportFromResult) or a type letter */, unit: "string", tolerance: n, toleranceUnit: ["oneOf", ["fraction", "°C"]], tempcoPpmPerC: n, count: n }],
 };
 
+/** The verdict fields a setpoint carries in a trip result and in a trip report alike. */
+const setpointVerdict = {
+  maxNormalOperatingC: n,
+  hazardLimitC: n,
+  marginToNormalC: n,
+  marginToHazardC: n,
+  pass: "boolean",
+  reason: "string",
+  errorSources: ["array", { name: "string", description: "string", worstCaseC: n, standardUncertaintyC: n }],
+  bandOverService: ["optional", ["array", { hours: n, lowC: n, highC: n }]],
+} satisfies Record<string, _Shape>;
+
 /**
  * @internal What `tripReportFromResult` reads of a `designTrip` result (`TripDesignResult`): every field it copies
  * or prints.
@@ -114,14 +126,7 @@ export const _tripResultShape: _Shape = {
       worstCase: tripBandShape,
       rss: tripBandShape,
       monteCarlo: tripBandShape,
-      maxNormalOperatingC: n,
-      hazardLimitC: n,
-      marginToNormalC: n,
-      marginToHazardC: n,
-      pass: "boolean",
-      reason: "string",
-      errorSources: ["array", { name: "string", description: "string", worstCaseC: n, standardUncertaintyC: n }],
-      bandOverService: ["optional", ["array", { hours: n, lowC: n, highC: n }]],
+      ...setpointVerdict,
     },
   ],
   acceptanceMethod: method,
@@ -143,14 +148,7 @@ export const _tripReportShape: _Shape = {
       tripTemperatureC: n,
       nominalTripC: n,
       bands: ["array", { method, lowC: n, highC: n, coverage: n, standardUncertaintyC: n }],
-      maxNormalOperatingC: n,
-      hazardLimitC: n,
-      marginToNormalC: n,
-      marginToHazardC: n,
-      pass: "boolean",
-      reason: "string",
-      errorSources: ["array", { name: "string", description: "string", worstCaseC: n, standardUncertaintyC: n }],
-      bandOverService: ["optional", ["array", { hours: n, lowC: n, highC: n }]],
+      ...setpointVerdict,
     },
   ],
   details: strings,

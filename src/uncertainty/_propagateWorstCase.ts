@@ -254,6 +254,22 @@ function perInputCorners(evaluator: _ModelEvaluator, x: Float64Array, lower: Flo
 }
 
 /**
+ * Whether the enclosure r meets the attained values [low, high] within the branch and bound's own tolerance (its
+ * "gap closed": 1e-12 of the enclosure's width plus the value, per side), containing them.
+ */
+function meetsEnclosure(r: readonly [number, number], low: number, high: number): boolean {
+  const width = Math.abs(r[1] - r[0]);
+  return r[0] <= low && high <= r[1] && r[1] - high <= 1e-12 * (width + Math.abs(high)) && low - r[0] <= 1e-12 * (width + Math.abs(low));
+}
+
+/** The values of a point (canonical order) as a record in the caller's order of names. */
+function pointRecord(prepared: _PreparedInputs, values: Float64Array): Record<string, number> {
+  const record: Record<string, number> = {};
+  prepared.callerOrder.forEach((name) => (record[name] = values[prepared.names.indexOf(name)] as number));
+  return record;
+}
+
+/**
  * @internal The fast path of a worst case with an enclosure. For each side, the start is the point of one-at-a-time
  * extremes (`corners[s]`: each input at the value that alone, the others at their estimates, raises (maximum) or
  * lowers (minimum) the model most — an end of its range for a monotone input, an interior value for one with an
@@ -295,10 +311,7 @@ export function _enclosureMetAtCorners(
   if (!Array.isArray(r) || r.length !== 2 || typeof r[0] !== "number" || typeof r[1] !== "number" || !Number.isFinite(r[0]) || !Number.isFinite(r[1])) return undefined;
   const high = attained[0] as number;
   const low = attained[1] as number;
-  if (!(r[0] <= low && high <= r[1])) return undefined;
-  // the branch and bound's own tolerance per side (its "gap closed")
-  const width = Math.abs(r[1] - r[0]);
-  return r[1] - high <= 1e-12 * (width + Math.abs(high)) && low - r[0] <= 1e-12 * (width + Math.abs(low)) ? [high, low, r[0], r[1]] : undefined;
+  return meetsEnclosure(r as [number, number], low, high) ? [high, low, r[0], r[1]] : undefined;
 }
 
 /**
@@ -342,8 +355,7 @@ function oneAtATime(
       box[name] = [means[i] as number, means[i] as number];
       const top = Math.max(atLo, atHi, base);
       const bottom = Math.min(atLo, atHi, base);
-      const width = Math.abs((r[1] as number) - (r[0] as number));
-      if (r[0] <= bottom && top <= r[1] && r[1] - top <= 1e-12 * (width + Math.abs(top)) && bottom - r[0] <= 1e-12 * (width + Math.abs(bottom))) {
+      if (meetsEnclosure(r, bottom, top)) {
         high = top;
         low = bottom;
         (best[0] as Float64Array)[i] = top === base ? (means[i] as number) : top === atHi ? hi : lo;
@@ -364,8 +376,8 @@ function oneAtATime(
   return { swings, swingSquares, best };
 }
 
-/** The box of input bounds: bounded inputs at ± their half-width, normal ones at ±k·u for `normalBoundCoverage`. */
-function inputBox(prepared: _PreparedInputs, normalBoundCoverage: number | undefined): { lower: Float64Array; upper: Float64Array; normalK: number | undefined } {
+/** @internal The box of input bounds: bounded inputs at ± their half-width, normal ones at ±k·u for `normalBoundCoverage`. */
+export function _inputBox(prepared: _PreparedInputs, normalBoundCoverage: number | undefined): { lower: Float64Array; upper: Float64Array; normalK: number | undefined } {
   const { distributions, names } = prepared;
   const n = distributions.length;
   const lower = new Float64Array(n);
@@ -403,7 +415,7 @@ export function _propagateWorstCase(
 ): PropagationResult {
   const { distributions, names } = prepared;
   const n = distributions.length;
-  const { lower, upper, normalK } = inputBox(prepared, normalBoundCoverage);
+  const { lower, upper, normalK } = _inputBox(prepared, normalBoundCoverage);
   const means = _meansOf(distributions);
   const x = new Float64Array(n);
   const bestCorner = [new Float64Array(n), new Float64Array(n)]; // [max, min]
@@ -476,14 +488,9 @@ export function _propagateWorstCase(
     high = lin.estimate;
     points[0]?.set(means);
   }
-  const pointRecord = (values: Float64Array): Record<string, number> => {
-    const record: Record<string, number> = {};
-    prepared.callerOrder.forEach((name) => (record[name] = values[names.indexOf(name)] as number));
-    return record;
-  };
   const attained = {
-    low: { value: low, at: pointRecord(points[1] as Float64Array) },
-    high: { value: high, at: pointRecord(points[0] as Float64Array) },
+    low: { value: low, at: pointRecord(prepared, points[1] as Float64Array) },
+    high: { value: high, at: pointRecord(prepared, points[0] as Float64Array) },
   };
   let bracketNote = "; no enclosure was computed (the model is a black box: give modelEnclosure for a proven bracket)";
   let enclosureFields: { enclosure: readonly [number, number]; enclosureGap: readonly [number, number] } | undefined;
@@ -495,8 +502,8 @@ export function _propagateWorstCase(
         : _branchAndBound(enclosure, names, lower, upper, evaluator, attained, points);
     low = attained.low.value;
     high = attained.high.value;
-    attained.low.at = pointRecord(points[1] as Float64Array);
-    attained.high.at = pointRecord(points[0] as Float64Array);
+    attained.low.at = pointRecord(prepared, points[1] as Float64Array);
+    attained.high.at = pointRecord(prepared, points[0] as Float64Array);
     enclosureFields = { enclosure: [bound.low, bound.high], enclosureGap: [low - bound.low, bound.high - high] };
     bracketNote =
       `; enclosure [${bound.low}, ${bound.high}] by branch and bound over the input box with the given interval extension ` +
@@ -549,7 +556,7 @@ export function _worstCaseFrom(
 ): _WorstCaseBracket | undefined {
   const { names } = prepared;
   const n = names.length;
-  const { lower, upper } = inputBox(prepared, normalBoundCoverage);
+  const { lower, upper } = _inputBox(prepared, normalBoundCoverage);
   const starts = [from.high, from.low].map((point) => {
     const x = new Float64Array(n);
     for (let i = 0; i < n; i++) {
@@ -561,21 +568,10 @@ export function _worstCaseFrom(
   });
   const met = _enclosureMetAtCorners(enclosure, names, evaluator, lower, upper, starts);
   if (met === undefined) return undefined;
-  const record = (values: Float64Array): Record<string, number> => {
-    const out: Record<string, number> = {};
-    prepared.callerOrder.forEach((name) => (out[name] = values[names.indexOf(name)] as number));
-    return out;
-  };
   return {
     interval: [met[1], met[0]],
-    attained: { low: { value: met[1], at: record(starts[1] as Float64Array) }, high: { value: met[0], at: record(starts[0] as Float64Array) } },
+    attained: { low: { value: met[1], at: pointRecord(prepared, starts[1] as Float64Array) }, high: { value: met[0], at: pointRecord(prepared, starts[0] as Float64Array) } },
     enclosure: [met[2], met[3]],
     enclosureGap: [met[1] - met[2], met[3] - met[0]],
   };
-}
-
-/** @internal The box of a worst case's inputs (bounded inputs at ± half-width, normal ones at ±k·u). */
-export function _worstCaseBox(prepared: _PreparedInputs, normalBoundCoverage: number | undefined): { lower: Float64Array; upper: Float64Array } {
-  const { lower, upper } = inputBox(prepared, normalBoundCoverage);
-  return { lower, upper };
 }

@@ -3,7 +3,7 @@ import { _requireInteger, _requireOptionsObject, _requireProbability } from "./_
 import { _minimumTrials } from "./_coverageIntervalSorted.js";
 import { _adaptiveBatch, _maxModelEvaluations, _propagateMonteCarlo, type _MonteCarloSettings } from "./_propagateMonteCarlo.js";
 import { _propagateRss } from "./_propagateRss.js";
-import { _propagateWorstCase, _worstCaseBox, _worstCaseFrom, type _Enclosure, type _WorstCaseBracket } from "./_propagateWorstCase.js";
+import { _inputBox, _propagateWorstCase, _worstCaseFrom, type _Enclosure, type _WorstCaseBracket } from "./_propagateWorstCase.js";
 import { _choleskyFactor, _correlationMatrix, _meansOf, _ModelEvaluator, _prepareInputs } from "./_prepare.js";
 import type { Distribution, Model, PropagateOptions, PropagationMethod, PropagationResult } from "./types.js";
 
@@ -206,7 +206,7 @@ export function _worstCaseBracketFrom(
   const before = _prepareInputs(earlier.inputs);
   const attained = earlier.result.attained;
   if (attained === undefined || before.names.length !== prepared.names.length || before.names.some((name, i) => name !== prepared.names[i])) return undefined;
-  const { lower, upper } = _worstCaseBox(before, normalBoundCoverage);
+  const { lower, upper } = _inputBox(before, normalBoundCoverage);
   const point = (at: Readonly<Record<string, number>>) => Float64Array.from(prepared.names, (name) => at[name] as number);
   const evaluator = new _ModelEvaluator(model, prepared.names);
   return _worstCaseFrom(prepared, evaluator, normalBoundCoverage, enclosure, { lower, upper, high: point(attained.high.at), low: point(attained.low.at) });

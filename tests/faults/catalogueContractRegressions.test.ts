@@ -5,18 +5,9 @@
  * TypeError).
  */
 import { describe, expect, it } from "vitest";
-import { faultCatalogue, isHotjunctionError, type MeasurementChain } from "../../src/index.js";
+import { typedErrorOf } from "../_typedError.js";
+import { faultCatalogue, type MeasurementChain } from "../../src/index.js";
 
-function fields(call: () => unknown): { code: string; quantity: string } {
-  let e: unknown;
-  try {
-    call();
-  } catch (caught) {
-    e = caught;
-  }
-  expect(isHotjunctionError(e), String(e)).toBe(true);
-  return e as { code: string; quantity: string };
-}
 
 // the documented example's chain (an invented demo)
 const chain: MeasurementChain = {
@@ -31,27 +22,27 @@ const forged = (patch: Record<string, unknown>): MeasurementChain => ({ ...chain
 
 describe("faultCatalogue checks what it writes into ids and descriptions", () => {
   it("the divider's resistances: not an array, a hole, NaN, ±Infinity, an object without a string form", () => {
-    expect(fields(() => faultCatalogue(forged({ divider: { ...chain.divider, resistorsOhms: 0 } }))).quantity).toBe("chain.divider.resistorsOhms");
+    expect(typedErrorOf(() => faultCatalogue(forged({ divider: { ...chain.divider, resistorsOhms: 0 } }))).quantity).toBe("chain.divider.resistorsOhms");
     // eslint-disable-next-line no-sparse-arrays
     for (const [ohms, at] of [[[10000, , 3], 1], [[Number.NaN, 1], 0], [[1, Number.POSITIVE_INFINITY], 1], [[-Infinity, 1], 0], [[Object.create(null), 1], 0], [[[Number.NaN], 1], 0]] as const) {
-      expect(fields(() => faultCatalogue(forged({ divider: { ...chain.divider, resistorsOhms: ohms } }))).quantity).toBe(`chain.divider.resistorsOhms[${at}]`);
+      expect(typedErrorOf(() => faultCatalogue(forged({ divider: { ...chain.divider, resistorsOhms: ohms } }))).quantity).toBe(`chain.divider.resistorsOhms[${at}]`);
     }
   });
 
   it("the reference: not an object, a non-finite or overflowing voltage", () => {
-    for (const reference of [null, Number.POSITIVE_INFINITY]) expect(fields(() => faultCatalogue(forged({ reference }))).quantity).toBe("chain.reference");
+    for (const reference of [null, Number.POSITIVE_INFINITY]) expect(typedErrorOf(() => faultCatalogue(forged({ reference }))).quantity).toBe("chain.reference");
     for (const nominalVolts of [Number.POSITIVE_INFINITY, -Infinity, Number.NaN]) {
-      expect(fields(() => faultCatalogue(forged({ reference: { ...chain.reference, nominalVolts } }))).quantity).toBe("chain.reference.nominalVolts");
+      expect(typedErrorOf(() => faultCatalogue(forged({ reference: { ...chain.reference, nominalVolts } }))).quantity).toBe("chain.reference.nominalVolts");
     }
-    expect(fields(() => faultCatalogue(forged({ reference: { ...chain.reference, nominalVolts: 1e308 } }))).code).toBe("OVERFLOW");
+    expect(typedErrorOf(() => faultCatalogue(forged({ reference: { ...chain.reference, nominalVolts: 1e308 } }))).code).toBe("OVERFLOW");
   });
 
   it("the amplifier's kind is one of the two kinds; options must be an object", () => {
     for (const kind of [Number.POSITIVE_INFINITY, -Infinity, [Number.NaN]]) {
-      const e = fields(() => faultCatalogue(forged({ amplifier: { ...chain.amplifier, kind } })));
+      const e = typedErrorOf(() => faultCatalogue(forged({ amplifier: { ...chain.amplifier, kind } })));
       expect([e.code, e.quantity]).toEqual(["INVALID_OPTION", "chain.amplifier.kind"]);
     }
-    expect(fields(() => faultCatalogue(chain, null as never)).quantity).toBe("options");
+    expect(typedErrorOf(() => faultCatalogue(chain, null as never)).quantity).toBe("options");
   });
 
   it("the valid chain's catalogue is unchanged (the documented example: 20 faults, thermocouple open first)", () => {

@@ -5,37 +5,29 @@
  * the renderers read them, and free of NaN/±Infinity anywhere; the name is a string.
  */
 import { describe, expect, it } from "vitest";
-import { faultReviewReport, isHotjunctionError, reviewFaults, type FaultReview, type HotjunctionError } from "../../src/index.js";
+import { typedErrorOf } from "../_typedError.js";
+import { faultReviewReport, reviewFaults, type FaultReview } from "../../src/index.js";
 import { ovenChain, ovenTrip } from "./helpers.js";
 
-function thrownBy(call: () => unknown): HotjunctionError {
-  try {
-    call();
-  } catch (e) {
-    expect(isHotjunctionError(e), String(e)).toBe(true);
-    return e as HotjunctionError;
-  }
-  throw new Error("expected a typed error");
-}
 
 describe("faultReviewReport checks the reviews it returns", () => {
   const review = reviewFaults(ovenChain, ovenTrip);
 
   it.each([[[null], "reviews[0]"], [[Number.NaN], "reviews[0]"], [[{}], "reviews[0].name"]] as const)("reviews %j names %s", (reviews, quantity) => {
-    const e = thrownBy(() => faultReviewReport(reviews as never));
+    const e = typedErrorOf(() => faultReviewReport(reviews as never));
     expect(e.code).toBe("INVALID_OPTION");
     expect(e.quantity).toBe(quantity);
   });
 
   it.each([Number.NaN, Number.POSITIVE_INFINITY, [Number.NaN]])("a name %s is a typed error naming name", (name) => {
-    expect(thrownBy(() => faultReviewReport([review], name as never)).quantity).toBe("name");
+    expect(typedErrorOf(() => faultReviewReport([review], name as never)).quantity).toBe("name");
   });
 
   it("a row without its category, or a NaN in any field of a review (its context included), is named", () => {
     const noCategory = { ...review, rows: review.rows.map((r, i) => (i === 0 ? { ...r, category: undefined } : r)) } as unknown as FaultReview;
-    expect(thrownBy(() => faultReviewReport([noCategory])).quantity).toBe("reviews[0].rows[0].category");
+    expect(typedErrorOf(() => faultReviewReport([noCategory])).quantity).toBe("reviews[0].rows[0].category");
     const forgedContext = { ...review, context: { ...review.context, wireShortC: Number.NaN } } as FaultReview;
-    const e = thrownBy(() => faultReviewReport([forgedContext]));
+    const e = typedErrorOf(() => faultReviewReport([forgedContext]));
     expect(e.code).toBe("NOT_A_FINITE_NUMBER");
     expect(e.quantity).toBe("reviews[0].context.wireShortC");
   });

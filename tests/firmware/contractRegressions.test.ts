@@ -5,18 +5,9 @@
  * into the header, or threw a plain TypeError.
  */
 import { describe, expect, it } from "vitest";
-import { buildFirmwareTable, formatFirmwareTableC, interpolateFirmwareTable, isHotjunctionError, type FirmwareTable } from "../../src/index.js";
+import { typedErrorOf } from "../_typedError.js";
+import { buildFirmwareTable, formatFirmwareTableC, interpolateFirmwareTable, type FirmwareTable } from "../../src/index.js";
 
-function fields(call: () => unknown): { code: string; quantity: string } {
-  let e: unknown;
-  try {
-    call();
-  } catch (caught) {
-    e = caught;
-  }
-  expect(isHotjunctionError(e), String(e)).toBe(true);
-  return e as { code: string; quantity: string };
-}
 
 // the documented examples' tables
 const adaptive = buildFirmwareTable({ type: "K", kind: "emfToTemperature", minC: 0, maxC: 500, maxErrorOutputUnits: 0.05 });
@@ -25,23 +16,23 @@ const forged = (table: FirmwareTable, patch: Record<string, unknown>): FirmwareT
 
 describe("interpolateFirmwareTable refuses a forged table or input", () => {
   it("a type or kind without a string form, a spacing that is not an integer, an input without a number form", () => {
-    expect(fields(() => interpolateFirmwareTable(forged(adaptive, { thermocoupleType: Object.create(null) }), 20644)).quantity).toBe("table.thermocoupleType");
-    expect(fields(() => interpolateFirmwareTable(forged(adaptive, { spacingLog2: [Number.NaN] }), 20644)).quantity).toBe("table.spacingLog2");
-    expect(fields(() => interpolateFirmwareTable(forged(adaptive, { spacingLog2: 0.5 }), 20644)).quantity).toBe("table.spacingLog2");
+    expect(typedErrorOf(() => interpolateFirmwareTable(forged(adaptive, { thermocoupleType: Object.create(null) }), 20644)).quantity).toBe("table.thermocoupleType");
+    expect(typedErrorOf(() => interpolateFirmwareTable(forged(adaptive, { spacingLog2: [Number.NaN] }), 20644)).quantity).toBe("table.spacingLog2");
+    expect(typedErrorOf(() => interpolateFirmwareTable(forged(adaptive, { spacingLog2: 0.5 }), 20644)).quantity).toBe("table.spacingLog2");
     // an adaptive table's inputs are not on any 2^k grid: claiming one is refused, not read at the wrong segment
-    expect(fields(() => interpolateFirmwareTable(forged(adaptive, { spacingLog2: 4 }), 20644)).quantity).toMatch(/^table\.inputs\[\d+\]$/);
-    expect(fields(() => interpolateFirmwareTable(adaptive, Object.create(null) as never)).quantity).toBe("table input");
+    expect(typedErrorOf(() => interpolateFirmwareTable(forged(adaptive, { spacingLog2: 4 }), 20644)).quantity).toMatch(/^table\.inputs\[\d+\]$/);
+    expect(typedErrorOf(() => interpolateFirmwareTable(adaptive, Object.create(null) as never)).quantity).toBe("table input");
   });
 
   it("outputs whose step leaves float64, inputs out of order, an input range past the breakpoints", () => {
     const outputs = [...adaptive.outputs];
     outputs[15] = -1e308;
     outputs[16] = 1e308;
-    expect(fields(() => interpolateFirmwareTable(forged(adaptive, { outputs }), 20644)).quantity).toBe("table.outputs[16]");
+    expect(typedErrorOf(() => interpolateFirmwareTable(forged(adaptive, { outputs }), 20644)).quantity).toBe("table.outputs[16]");
     const inputs = [...adaptive.inputs];
     [inputs[3], inputs[4]] = [inputs[4]!, inputs[3]!];
-    expect(fields(() => interpolateFirmwareTable(forged(adaptive, { inputs }), 20644)).quantity).toBe("table.inputs[4]");
-    expect(fields(() => interpolateFirmwareTable(forged(adaptive, { input: { ...adaptive.input, max: 1e9 } }), 20644)).quantity).toBe("table.input");
+    expect(typedErrorOf(() => interpolateFirmwareTable(forged(adaptive, { inputs }), 20644)).quantity).toBe("table.inputs[4]");
+    expect(typedErrorOf(() => interpolateFirmwareTable(forged(adaptive, { input: { ...adaptive.input, max: 1e9 } }), 20644)).quantity).toBe("table.input");
     // the documented example is unchanged: 20644 µV reads 499.994 °C (NIST SRD 60 type K: E(500 °C) = 20.644 mV)
     expect(interpolateFirmwareTable(adaptive, 20644) / adaptive.output.scale).toBe(499.994);
   });
@@ -63,7 +54,7 @@ describe("formatFirmwareTableC refuses a forged error report (it printed NaN/Inf
   ] as const)("%s = %s", (path, value) => {
     const [key, sub] = path.split(".") as [string, string | undefined];
     const patched = sub === undefined ? { [key]: value } : { [key]: { ...(header as unknown as Record<string, object>)[key], [sub]: value } };
-    expect(fields(() => formatFirmwareTableC(forged(header, patched), { prefix: "oven_tc" })).quantity).toBe(`table.${path}`);
+    expect(typedErrorOf(() => formatFirmwareTableC(forged(header, patched), { prefix: "oven_tc" })).quantity).toBe(`table.${path}`);
   });
 
   it("the documented header is unchanged", () => {

@@ -6,18 +6,9 @@
  * NaN/Infinity, or threw a plain TypeError).
  */
 import { describe, expect, it } from "vitest";
-import { createThermocouple, defineThermocoupleData, isHotjunctionError, typeK, type ThermocoupleData } from "../../src/index.js";
+import { typedErrorOf } from "../_typedError.js";
+import { createThermocouple, defineThermocoupleData, typeK, type ThermocoupleData } from "../../src/index.js";
 
-function fields(call: () => unknown): { code: string; quantity: string; message: string } {
-  let e: unknown;
-  try {
-    call();
-  } catch (caught) {
-    e = caught;
-  }
-  expect(isHotjunctionError(e), String(e)).toBe(true);
-  return e as { code: string; quantity: string; message: string };
-}
 
 const forged = (patch: Record<string, unknown>): ThermocoupleData => ({ ...typeK, ...patch }) as never;
 const withSubrange = (i: number, patch: Record<string, unknown>): ThermocoupleData =>
@@ -25,20 +16,20 @@ const withSubrange = (i: number, patch: Record<string, unknown>): ThermocoupleDa
 
 describe("defineThermocoupleData refuses forged data (and createThermocouple refuses it undefined)", () => {
   it("a type or source that is not a string is no type's data (UNKNOWN_TYPE)", () => {
-    for (const type of [Object.create(null), Number.NaN, Number.POSITIVE_INFINITY, [Number.NaN]]) expect(fields(() => defineThermocoupleData(forged({ type }))).code).toBe("UNKNOWN_TYPE");
-    for (const source of [Number.NaN, Number.NEGATIVE_INFINITY, [Number.NaN]]) expect(fields(() => defineThermocoupleData(forged({ source }))).code).toBe("UNKNOWN_TYPE");
+    for (const type of [Object.create(null), Number.NaN, Number.POSITIVE_INFINITY, [Number.NaN]]) expect(typedErrorOf(() => defineThermocoupleData(forged({ type }))).code).toBe("UNKNOWN_TYPE");
+    for (const source of [Number.NaN, Number.NEGATIVE_INFINITY, [Number.NaN]]) expect(typedErrorOf(() => defineThermocoupleData(forged({ source }))).code).toBe("UNKNOWN_TYPE");
   });
 
   it("a non-finite or non-numeric sub-range end, and an exponential term that is not finite numbers (INVALID_OPTION)", () => {
-    expect(fields(() => defineThermocoupleData(withSubrange(0, { minC: Number.NEGATIVE_INFINITY }))).code).toBe("INVALID_OPTION");
-    const noStringForm = fields(() => defineThermocoupleData(withSubrange(1, { maxC: Object.create(null) })));
+    expect(typedErrorOf(() => defineThermocoupleData(withSubrange(0, { minC: Number.NEGATIVE_INFINITY }))).code).toBe("INVALID_OPTION");
+    const noStringForm = typedErrorOf(() => defineThermocoupleData(withSubrange(1, { maxC: Object.create(null) })));
     expect([noStringForm.code, noStringForm.quantity]).toEqual(["INVALID_OPTION", "thermocouple data range"]);
-    for (const exponential of [Number.NaN, null, 0, { a0: 1, a1: Number.NaN, a2: 1 }]) expect(fields(() => defineThermocoupleData(forged({ exponential }))).code).toBe("INVALID_OPTION");
+    for (const exponential of [Number.NaN, null, 0, { a0: 1, a1: Number.NaN, a2: 1 }]) expect(typedErrorOf(() => defineThermocoupleData(forged({ exponential }))).code).toBe("INVALID_OPTION");
   });
 
   it("type K's own data still builds, a defined copy too (NIST SRD 60: E(500 °C) = 20.644 mV); a forged object is refused by createThermocouple", () => {
     expect(createThermocouple(typeK).emfFromTemperature(500)).toBeCloseTo(20.644, 3);
     expect(createThermocouple(defineThermocoupleData(forged({}))).emfFromTemperature(500)).toBeCloseTo(20.644, 3);
-    expect(fields(() => createThermocouple(withSubrange(0, { minC: Number.NEGATIVE_INFINITY }))).code).toBe("UNKNOWN_TYPE");
+    expect(typedErrorOf(() => createThermocouple(withSubrange(0, { minC: Number.NEGATIVE_INFINITY }))).code).toBe("UNKNOWN_TYPE");
   });
 });

@@ -5,21 +5,13 @@
  * shared shape guard, then no NaN/±Infinity anywhere in what the report copies).
  */
 import { describe, expect, it } from "vitest";
+import { typedErrorOf } from "../_typedError.js";
 import { CAUTION_TEXT, tripReportFromResult } from "../../src/report/index.js";
-import { designTrip, isHotjunctionError, type HotjunctionError, type TripDesignResult } from "../../src/index.js";
+import { designTrip, type TripDesignResult } from "../../src/index.js";
 import { parseDesign, tripDesignFromDesign } from "../../src/design/index.js";
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
 
-function thrownBy(call: () => unknown): HotjunctionError {
-  try {
-    call();
-  } catch (e) {
-    expect(isHotjunctionError(e), String(e)).toBe(true);
-    return e as HotjunctionError;
-  }
-  throw new Error("expected a typed error");
-}
 
 const empty = {
   networks: [],
@@ -35,7 +27,7 @@ const methods = { methods: ["worst-case"] as const, coverage: 0.95 };
 
 describe("tripReportFromResult checks the result it is given", () => {
   it.each([undefined, null, Number.NaN, "report", []])("result %s is a typed INVALID_OPTION error naming result", (result) => {
-    const e = thrownBy(() => tripReportFromResult(result as never, methods));
+    const e = typedErrorOf(() => tripReportFromResult(result as never, methods));
     expect(e.code).toBe("INVALID_OPTION");
     expect(e.quantity).toBe("result");
   });
@@ -48,7 +40,7 @@ describe("tripReportFromResult checks the result it is given", () => {
     ["acceptanceMethod", Number.POSITIVE_INFINITY, "result.acceptanceMethod"],
     ["midRail", undefined, "result.midRail"],
   ] as const)("result.%s = %s names %s", (key, value, quantity) => {
-    const e = thrownBy(() => tripReportFromResult({ ...empty, [key]: value } as never, methods));
+    const e = typedErrorOf(() => tripReportFromResult({ ...empty, [key]: value } as never, methods));
     expect(e.quantity).toBe(quantity);
   });
 
@@ -57,7 +49,7 @@ describe("tripReportFromResult checks the result it is given", () => {
     ["kind", Number.NaN, "result.reference.kind"],
     ["name", [Number.NaN], "result.reference.name"],
   ] as const)("result.reference.%s = %s names %s", (key, value, quantity) => {
-    const e = thrownBy(() => tripReportFromResult({ ...empty, reference: { ...empty.reference, [key]: value } } as never, methods));
+    const e = typedErrorOf(() => tripReportFromResult({ ...empty, reference: { ...empty.reference, [key]: value } } as never, methods));
     expect(e.quantity).toBe(quantity);
   });
 
@@ -66,7 +58,7 @@ describe("tripReportFromResult checks the result it is given", () => {
     [{ methods: ["worst-case"], coverage: Number.NEGATIVE_INFINITY }, "methods.coverage"],
     [[Number.NaN], "methods"],
   ] as const)("methods %j names %s", (m, quantity) => {
-    expect(thrownBy(() => tripReportFromResult(empty, m as never)).quantity).toBe(quantity);
+    expect(typedErrorOf(() => tripReportFromResult(empty, m as never)).quantity).toBe(quantity);
   });
 
   it("a real designTrip result (with bands, error sources and a build sheet) reports as before; a NaN inside its build sheet is named", () => {
@@ -78,10 +70,10 @@ describe("tripReportFromResult checks the result it is given", () => {
     expect(report.buildSheet).toBe(result.buildSheet);
     const sheet = result.buildSheet!;
     const forged = { ...result, buildSheet: { ...sheet, parts: sheet.parts.map((p, i) => (i === 0 ? { ...p, value: Number.NaN } : p)) } };
-    const e = thrownBy(() => tripReportFromResult(forged, { methods: ["worst-case"], coverage: 0.95 }));
+    const e = typedErrorOf(() => tripReportFromResult(forged, { methods: ["worst-case"], coverage: 0.95 }));
     expect(e.code).toBe("NOT_A_FINITE_NUMBER");
     expect(e.quantity).toBe("result.buildSheet.parts[0].value");
     const band = { ...result, setpoints: result.setpoints.map((s) => ({ ...s, worstCase: { ...s.worstCase, enclosureLowC: Number.POSITIVE_INFINITY } })) };
-    expect(thrownBy(() => tripReportFromResult(band, { methods: ["worst-case"], coverage: 0.95 })).quantity).toBe("result.setpoints[0].worstCase.enclosureLowC");
+    expect(typedErrorOf(() => tripReportFromResult(band, { methods: ["worst-case"], coverage: 0.95 })).quantity).toBe("result.setpoints[0].worstCase.enclosureLowC");
   });
 });

@@ -3,6 +3,7 @@
  * of undefined"; it is a typed error naming the options.
  */
 import { describe, expect, it } from "vitest";
+import { typedErrorOf } from "../_typedError.js";
 import {
   classifyFaultShift,
   failureDataProblems,
@@ -16,8 +17,7 @@ import {
   safetyFiguresFromReviews,
   safetyFiguresReport,
   twoChannelCutout,
-  type HotjunctionError,
-} from "../../src/index.js";
+  } from "../../src/index.js";
 
 describe("classifyFaultShift input", () => {
   it.each([undefined, null, 7, "shift"])("classifyFaultShift(%s) is a typed error", (input) => {
@@ -37,15 +37,6 @@ describe("classifyFaultShift input", () => {
  * TypeErrors, names and forged fields copied into results as NaN/±Infinity, and subnormal inputs whose ratios
  * overflow. Each is now a typed error naming the quantity, or a finite result.
  */
-function thrownBy(call: () => unknown): HotjunctionError {
-  try {
-    call();
-  } catch (e) {
-    expect(isHotjunctionError(e), String(e)).toBe(true);
-    return e as HotjunctionError;
-  }
-  throw new Error("expected a typed error");
-}
 
 /** True when no number in `value` is NaN or ±Infinity, at any depth. */
 function allFinite(value: unknown): boolean {
@@ -67,7 +58,7 @@ const review = {
 describe("1oo2 formulas and the PFDavg curve: missing objects", () => {
   it.each([undefined, null, 0.05])("pfdAvg1oo2 and pfh1oo2 with common-cause factors %s name commonCause", (cc) => {
     for (const f of [pfdAvg1oo2, pfh1oo2]) {
-      const e = thrownBy(() => f(rates, cc as never, proofTest));
+      const e = typedErrorOf(() => f(rates, cc as never, proofTest));
       expect(e.quantity).toBe("commonCause");
       expect(e.code).toBe("INVALID_OPTION");
     }
@@ -75,18 +66,18 @@ describe("1oo2 formulas and the PFDavg curve: missing objects", () => {
 
   it("pfdAvgCurve with a null pair names pair; without proofTest names proofTest", () => {
     const channel = { name: "kiln", lambdaDuFit: 225, lambdaDdFit: 0 };
-    expect(thrownBy(() => pfdAvgCurve(channel, { proofTestIntervalsHours: [730], proofTest: { meanTimeToRestorationHours: 8 }, pair: null as never })).quantity).toBe("pair");
-    expect(thrownBy(() => pfdAvgCurve(channel, { proofTestIntervalsHours: [730] } as never)).quantity).toBe("proofTest");
-    expect(thrownBy(() => pfdAvgCurve(channel, { proofTestIntervalsHours: [730], proofTest: null as never })).quantity).toBe("proofTest");
+    expect(typedErrorOf(() => pfdAvgCurve(channel, { proofTestIntervalsHours: [730], proofTest: { meanTimeToRestorationHours: 8 }, pair: null as never })).quantity).toBe("pair");
+    expect(typedErrorOf(() => pfdAvgCurve(channel, { proofTestIntervalsHours: [730] } as never)).quantity).toBe("proofTest");
+    expect(typedErrorOf(() => pfdAvgCurve(channel, { proofTestIntervalsHours: [730], proofTest: null as never })).quantity).toBe("proofTest");
   });
 
   it.each([Number.NaN, Number.POSITIVE_INFINITY, [0, Number.NaN, 1]])("a channel or pair name %s is a typed error naming it", (name) => {
     const base = { proofTestIntervalsHours: [730], proofTest: { meanTimeToRestorationHours: 8 } };
-    expect(thrownBy(() => pfdAvgCurve({ name: name as never, ...rates }, base)).quantity).toBe("channel.name");
-    expect(thrownBy(() => pfdAvgCurve(rates, { ...base, pair: { beta: 0.05, betaD: 0.02, name: name as never } })).quantity).toBe("pair.name");
+    expect(typedErrorOf(() => pfdAvgCurve({ name: name as never, ...rates }, base)).quantity).toBe("channel.name");
+    expect(typedErrorOf(() => pfdAvgCurve(rates, { ...base, pair: { beta: 0.05, betaD: 0.02, name: name as never } })).quantity).toBe("pair.name");
     const options = { beta: 0.05, betaD: 0.02, proofTest };
-    expect(thrownBy(() => twoChannelCutout({ name: name as never, ...rates }, rates, options)).quantity).toBe("channelA.name");
-    expect(thrownBy(() => twoChannelCutout(rates, { name: name as never, ...rates }, options)).quantity).toBe("channelB.name");
+    expect(typedErrorOf(() => twoChannelCutout({ name: name as never, ...rates }, rates, options)).quantity).toBe("channelA.name");
+    expect(typedErrorOf(() => twoChannelCutout(rates, { name: name as never, ...rates }, options)).quantity).toBe("channelB.name");
   });
 });
 
@@ -124,25 +115,25 @@ describe("classes and figures check the fields they copy", () => {
     let node = forged;
     for (const key of path.slice(0, -1)) node = node[key] as Record<string | number, unknown>;
     node[path[path.length - 1]!] = value;
-    const e = thrownBy(() => safetyFaultClassesFromReview(forged as never));
+    const e = typedErrorOf(() => safetyFaultClassesFromReview(forged as never));
     expect(e.quantity).toBe(quantity);
     expect(e.code).toBe("INVALID_OPTION");
   });
 
   it("safetyFaultClassesFromReview, safetyFigures and safetyFiguresFromReviews refuse null options by name", () => {
-    expect(thrownBy(() => safetyFaultClassesFromReview(review, null as never)).quantity).toBe("options");
+    expect(typedErrorOf(() => safetyFaultClassesFromReview(review, null as never)).quantity).toBe("options");
     const data = { elements: [{ element: "thermocouple", rateFit: 20, modes: [{ mode: "open", share: 1, faultId: "thermocouple.open" }] }] };
     const classes = safetyFaultClassesFromReview(review);
-    expect(thrownBy(() => safetyFigures(data, classes, null as never)).quantity).toBe("options");
-    expect(thrownBy(() => safetyFiguresFromReviews(data, [review], null as never)).quantity).toBe("options");
-    expect(thrownBy(() => safetyFiguresFromReviews(data, [review], { healthyBandsC: 3 as never })).quantity).toBe("options.healthyBandsC");
-    expect(thrownBy(() => safetyFigures(data, { ...classes, name: Number.NaN as never })).quantity).toBe("setpoint.name");
+    expect(typedErrorOf(() => safetyFigures(data, classes, null as never)).quantity).toBe("options");
+    expect(typedErrorOf(() => safetyFiguresFromReviews(data, [review], null as never)).quantity).toBe("options");
+    expect(typedErrorOf(() => safetyFiguresFromReviews(data, [review], { healthyBandsC: 3 as never })).quantity).toBe("options.healthyBandsC");
+    expect(typedErrorOf(() => safetyFigures(data, { ...classes, name: Number.NaN as never })).quantity).toBe("setpoint.name");
   });
 
   it("safetyFiguresReport refuses a non-finite value in any field of a part (identicalChannels NaN)", () => {
     const pair = twoChannelCutout(rates, rates, { beta: 0.05, betaD: 0.02, proofTest });
     for (const [key, value] of [["identicalChannels", Number.NaN], ["commonCauseBasis", Number.POSITIVE_INFINITY], ["simplifiedEquationsValid", [0, Number.NaN, 1]]] as const) {
-      const e = thrownBy(() => safetyFiguresReport({ twoChannel: [{ ...pair, [key]: value }] }));
+      const e = typedErrorOf(() => safetyFiguresReport({ twoChannel: [{ ...pair, [key]: value }] }));
       expect(e.code).toBe("NOT_A_FINITE_NUMBER");
       expect(e.quantity.startsWith(`input.twoChannel[0].${key}`)).toBe(true);
     }
@@ -150,7 +141,7 @@ describe("classes and figures check the fields they copy", () => {
   });
 
   it.each([Number.NaN, Number.POSITIVE_INFINITY, [Number.NaN], { elements: Number.NaN }])("failureDataProblems(%s) is thrown (not failure data), not listed with a NaN value", (data) => {
-    const e = thrownBy(() => failureDataProblems(data));
+    const e = typedErrorOf(() => failureDataProblems(data));
     expect(e.code).toBe("INVALID_DESIGN");
     expect(e.quantity).toMatch(/^failureData(\.elements)?$/);
   });

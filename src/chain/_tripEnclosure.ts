@@ -310,11 +310,15 @@ function argumentOverColdJunction(s: EnclosureSetup, f: FrontOver, a: ArgumentOv
  * A with a wire: the leakage factor and a terminating connector's temperature couple with t_cj. Each takes the
  * end that raises (or lowers) A when its direction is proven over the whole box: A falls with s when its
  * numerator e − W is positive over the box (rises when negative), and rises with a connector's temperature
- * where E′ > 0 over the connector's temperatures (−W holds +E(t_connector), s > 0).
+ * where E′ > 0 over the connector's temperatures (−W holds +E(t_connector), s > 0); A is linear in a proportional
+ * cable's relative mismatch k and takes its end where the sign of E(t_junction) − E(t_cj) is proven over the box.
  */
+const cableTolerance = "cable.tolerance";
+
 function argumentWithWire(s: EnclosureSetup, f: FrontOver, a: ArgumentOver, box: Box): _Interval {
   const { ct, cc, added } = s;
   const { front, fixedAdded, tcRange, scaleRange } = f;
+  const cableOver = s.wire?.cable?.emfErrorOver;
   const numerator = _subInterval(
     front(tcRange),
     added.reduce<_Interval>((w, p, i) => {
@@ -330,6 +334,14 @@ function argumentWithWire(s: EnclosureSetup, f: FrontOver, a: ArgumentOver, box:
       const relative = name.endsWith(".aboveColdJunction");
       const slopeThere = _seebeckOver(ct, relative ? _addInterval(tcRange, r) : r);
       if (slopeThere[0] > 0 && scaleRange[0] > 0) b[name] = high ? [r[1], r[1]] : [r[0], r[0]];
+    }
+    // The proportional cable: W = k·(E(t_junction) − E(t_cj)) is linear in k, so A falls with k where the
+    // bracket is positive over the whole box (its sign read off W's enclosure at k = 1) and rises where negative.
+    const k = box[cableTolerance];
+    if (cableOver !== undefined && k !== undefined && scaleRange[0] > 0) {
+      const perUnit = cableOver({ ...box, [cableTolerance]: [1, 1] }, tcRange).value;
+      const rising = perUnit[1] < 0;
+      if (perUnit[0] > 0 || rising) b[cableTolerance] = high === rising ? [k[1], k[1]] : [k[0], k[0]];
     }
     return b;
   };

@@ -3,9 +3,13 @@
 // properties against the full search over generated chains, and the fallback where the two do not meet.
 // Sources: the bracket argument of chain/_tripEnclosure.ts (DEVELOPERS.md); x − x² on [0, 1] has its maximum 1/4
 // at 1/2 (calculus); the non-monotone chain's slopes are NIST SRD 60 type K table slopes.
+import { readFileSync } from "node:fs";
 import fc from "fast-check";
 import { afterEach, describe, expect, it } from "vitest";
 import { tripTemperatureModel } from "../../src/chain/tripTemperatureModel.js";
+import { measurementChainFromDesign, tripDesignFromDesign } from "../../src/design/designToObjects.js";
+import { designTrip } from "../../src/trip/designTrip.js";
+import { parseDesign } from "../../src/design/parseDesign.js";
 import type { MeasurementChain } from "../../src/chain/types.js";
 import { propagate, rectangular } from "../../src/uncertainty/index.js";
 import { _worstCaseBracketFrom } from "../../src/uncertainty/propagate.js";
@@ -163,5 +167,58 @@ describe("warm-started bracket of a self-consistent edge's iterations (`_worstCa
     // same names: a + b's corners, exactly
     const again = _worstCaseBracketFrom((({ a }: { a: number }) => a) as never, { a: rectangular({ lower: -2, upper: 2 }) }, 0.9973, enclosure, { inputs: before, result: first });
     expect(again?.interval).toEqual([-2, 2]);
+  });
+});
+
+describe("a proportional cable (W = k·(E(t_junction) − E(t_cj)), linear in its relative mismatch k)", () => {
+  // The cable's tolerance statement (ASTM E230 type KX extension, standard limits) and the law of intermediate
+  // temperatures give the model (src/chain/wire/extensionCable.ts); that A falls with k where
+  // E(t_junction) > E(t_cj) over the box is its derivative −(E(t_j) − E(t_cj))/s with s > 0 (calculus).
+  const furnace = JSON.parse(readFileSync(new URL("../../examples/heat-treat-furnace-wire.json", import.meta.url), "utf8")) as {
+    wire: { cable: Record<string, unknown> };
+    ambient: { minC: number; maxC: number };
+  };
+  const chainWith = (junction: { minC: number; maxC: number }, ambient: { minC: number; maxC: number }): MeasurementChain => {
+    const d = structuredClone(furnace);
+    d.wire.cable = { ...d.wire.cable, mismatch: "proportional", runTemperatureC: { minC: 0, maxC: 200 }, junctionTemperatureC: junction };
+    d.ambient = ambient;
+    const parsed = parseDesign(JSON.stringify(d), { fileName: "furnace-proportional.json" });
+    // the threshold divider the trip design finds for this design (E96, the design's tolerance)
+    const [network] = designTrip(tripDesignFromDesign(parsed), { monteCarloTrials: 1000, seed: 1 }).networks;
+    const chain = measurementChainFromDesign(parsed);
+    return { ...chain, divider: { kind: "divider", resistorsOhms: network?.resistorsOhms ?? [], toleranceFraction: parsed.resistors?.toleranceFraction ?? 0 } };
+  };
+
+  it("junction above the cold junction over the box: the enclosure meets the attained band at once (the cable's ends), within the stated tolerance, at every junction and ambient range", () => {
+    let runs = 0;
+    for (const junction of [{ minC: 80, maxC: 150 }, { minC: 60, maxC: 60 }, { minC: 120, maxC: 190 }]) {
+      for (const ambient of [{ minC: 20, maxC: 45 }, { minC: 0, maxC: 10 }]) {
+        const m = tripTemperatureModel(chainWith(junction, ambient), 0);
+        const fast = worstCase(m.model as never, m.inputs as never, m.enclosure, true);
+        // the enclosure meets at once: the fast path, or a branch and bound that closes the gap in a few calls
+        // (before the cable's ends were taken per side it spent its 4,096 calls per side)
+        const calls = Number(/\((\d+) enclosure calls/.exec(fast.note ?? "")?.[1] ?? 0);
+        expect(fast.note?.includes(skipped) || calls <= 16).toBe(true);
+        const [gapLow, gapHigh] = fast.enclosureGap as readonly [number, number];
+        expect(Math.max(gapLow, gapHigh)).toBeLessThanOrEqual(tolerance);
+        expect(m.model(fast.attained?.low.at as never)).toBe(fast.attained?.low.value);
+        expect(m.model(fast.attained?.high.at as never)).toBe(fast.attained?.high.value);
+        // the worst case moves the cable's mismatch to an end of its range at both edges (linear in k)
+        const k = (m.inputs as Record<string, { mean: number; halfWidth: number }>)["cable.tolerance"] as { halfWidth: number };
+        for (const at of [fast.attained?.low.at, fast.attained?.high.at]) {
+          expect(Math.abs(Math.abs((at as Record<string, number>)["cable.tolerance"] as number) - k.halfWidth)).toBeLessThanOrEqual(1e-12 * k.halfWidth);
+        }
+        runs++;
+      }
+    }
+    expect(runs).toBe(6);
+  });
+
+  it("the fast path's band is the full search's within the stated tolerance (one junction range)", () => {
+    const m = tripTemperatureModel(chainWith({ minC: 80, maxC: 150 }, { minC: 20, maxC: 45 }), 0);
+    const fast = worstCase(m.model as never, m.inputs as never, m.enclosure, true);
+    const full = worstCase(m.model as never, m.inputs as never, m.enclosure, false);
+    expect(Math.abs(fast.interval[0] - full.interval[0])).toBeLessThanOrEqual(tolerance);
+    expect(Math.abs(fast.interval[1] - full.interval[1])).toBeLessThanOrEqual(tolerance);
   });
 });

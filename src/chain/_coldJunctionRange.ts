@@ -140,7 +140,17 @@ export function _overColdJunction(
   a: _ColdJunctionArgument,
 ): _Interval {
   const { argument, slope, allowance, state } = a;
-  const atPoint = (t: number): _Interval => _widen(argument([t, t]), allowance());
+  // Neighbouring pieces share their ends: each point's argument is evaluated once (the same value, and the
+  // allowance read at each use as before, since a repeated evaluation cannot raise it).
+  const seen = new Map<number, _Interval>();
+  const atPoint = (t: number): _Interval => {
+    let v = seen.get(t);
+    if (v === undefined) {
+      v = argument([t, t]);
+      seen.set(t, v);
+    }
+    return _widen(v, allowance());
+  };
   const overPiece = (p: _Interval, depth: number): _Interval => {
     if (p[0] === p[1]) return atPoint(p[0]);
     state.pieces++;

@@ -224,9 +224,14 @@ export function _connectorStage(
         const r: _Interval = varies ? (box[tName] as _Interval) : [fixed, fixed];
         const tConn = hasAbs ? r : _addInterval(tcj, r);
         const leg: _Interval = hasLeg ? _divInterval(_mulInterval([-legSum, -legSum], box[`${name}.legDifference`] as _Interval), [1000, 1000]) : [0, 0];
+        // Each part computed when read: the subdivision reads the value at points and the slope over pieces.
         return {
-          value: _addInterval(_subInterval(_emfOver(ct, tcj), _emfOver(ct, tConn)), leg),
-          coldJunctionSlope: hasAbs ? _seebeckOver(ct, tcj) : _subInterval(_seebeckOver(ct, tcj), _seebeckOver(ct, tConn)),
+          get value(): _Interval {
+            return _addInterval(_subInterval(_emfOver(ct, tcj), _emfOver(ct, tConn)), leg);
+          },
+          get coldJunctionSlope(): _Interval {
+            return hasAbs ? _seebeckOver(ct, tcj) : _subInterval(_seebeckOver(ct, tcj), _seebeckOver(ct, tConn));
+          },
         };
       },
     };

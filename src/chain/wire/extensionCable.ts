@@ -377,8 +377,16 @@ export function _extensionCableStage(
       if (!has) return { value: [0, 0], coldJunctionSlope: [0, 0] };
       const tj: _Interval = junctionVaries ? (box["cable.junctionTemperature"] as _Interval) : [fixedJunctionC, fixedJunctionC];
       const k = _mulInterval(box["cable.tolerance"] as _Interval, [perMicrovolt, perMicrovolt]);
-      const slope = _mulInterval(k, _seebeckOver(ct, tcj));
-      return { value: _mulInterval(k, _subInterval(_emfOver(ct, tj), _emfOver(ct, tcj))), coldJunctionSlope: [-slope[1], -slope[0]] };
+      // Each part computed when read (the subdivision reads the value at points and the slope over pieces).
+      return {
+        get value(): _Interval {
+          return _mulInterval(k, _subInterval(_emfOver(ct, tj), _emfOver(ct, tcj)));
+        },
+        get coldJunctionSlope(): _Interval {
+          const slope = _mulInterval(k, _seebeckOver(ct, tcj));
+          return [-slope[1], -slope[0]];
+        },
+      };
     },
   };
 }

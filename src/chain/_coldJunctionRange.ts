@@ -8,8 +8,9 @@
  *   rounding count, stated, not machine-checked).
  * - `_overColdJunction`: a model argument over a cold-junction interval, cut at the ITS-90 seams (and a few ulps
  *   around seam − r for each Ê(t_cj + r) term with a fixed r), then per piece: where the enclosure of the
- *   argument's t_cj-derivative has one sign, the union of the two end values; else halved, down to 2⁻²⁰ of the
- *   range (40 halvings, 4096 pieces), where the mean-value form is used (`_tripEnclosure.ts`, note 3).
+ *   argument's t_cj-derivative has one sign, the union of the two end values; where its second derivative has
+ *   one sign, the turn located on point slopes and the sides proven monotone (`oneTurn`); else halved, down to
+ *   2⁻²⁰ of the range (40 halvings, 4096 pieces), where the mean-value form is used (`_tripEnclosure.ts`, note 3).
  * @module
  * @internal
  */
@@ -124,6 +125,11 @@ export interface _ColdJunctionArgument {
   /** The float-evaluation allowance, read after each evaluation (it may grow with `state`). */
   readonly allowance: () => number;
   readonly state: { emfEvaluations: number; seamAllowance: number; pieces: number };
+  /**
+   * An enclosure of the argument's second derivative in t_cj over an interval (real derivatives), or undefined
+   * when a term has none there (an E(t) whose interval crosses a seam inside: `_curvatureOver`).
+   */
+  readonly curvature?: (tc: _Interval) => _Interval | undefined;
 }
 
 /**
@@ -139,7 +145,7 @@ export function _overColdJunction(
   seamWeight: number,
   a: _ColdJunctionArgument,
 ): _Interval {
-  const { argument, slope, allowance, state } = a;
+  const { argument, slope, allowance, state, curvature } = a;
   // Neighbouring pieces share their ends: each point's argument is evaluated once (the same value, and the
   // allowance read at each use as before, since a repeated evaluation cannot raise it).
   const seen = new Map<number, _Interval>();
@@ -151,18 +157,81 @@ export function _overColdJunction(
     }
     return _widen(v, allowance());
   };
+  const monotone = (p: _Interval, rising: boolean): _Interval =>
+    rising ? _widen([atPoint(p[0])[0], atPoint(p[1])[1]], allowance()) : _widen([atPoint(p[1])[0], atPoint(p[0])[1]], allowance());
+  /** The mean-value form A(m) + A′(p)·(p − m) of a piece (`d` its slope enclosure). */
+  const meanValue = (p: _Interval, d: _Interval): _Interval => {
+    const m = 0.5 * (p[0] + p[1]);
+    state.emfEvaluations += 1;
+    return _widen(_addInterval(atPoint(m), _mulInterval(d, [_down(p[0] - m), _up(p[1] - m)])), allowance());
+  };
+  const smallest = (tcRange[1] - tcRange[0]) * minPieceFraction;
   const overPiece = (p: _Interval, depth: number): _Interval => {
     if (p[0] === p[1]) return atPoint(p[0]);
     state.pieces++;
     const d = slope(p);
-    if (d[0] >= 0) return _widen([atPoint(p[0])[0], atPoint(p[1])[1]], allowance());
-    if (d[1] <= 0) return _widen([atPoint(p[1])[0], atPoint(p[0])[1]], allowance());
-    const m = 0.5 * (p[0] + p[1]);
-    if (depth >= maxHalvings || state.pieces > maxPieces || p[1] - p[0] <= (tcRange[1] - tcRange[0]) * minPieceFraction) {
-      state.emfEvaluations += 1;
-      return _widen(_addInterval(atPoint(m), _mulInterval(d, [_down(p[0] - m), _up(p[1] - m)])), allowance());
+    if (d[0] >= 0) return monotone(p, true);
+    if (d[1] <= 0) return monotone(p, false);
+    if (depth >= maxHalvings || state.pieces > maxPieces || p[1] - p[0] <= smallest) return meanValue(p, d);
+    if (curvature !== undefined) {
+      const c = curvature(p);
+      if (c !== undefined && (c[0] > 0 || c[1] < 0)) return oneTurn(p, c[0] > 0, depth);
     }
+    const m = 0.5 * (p[0] + p[1]);
     return _hull(overPiece([p[0], m], depth + 1), overPiece([m, p[1]], depth + 1));
+  };
+  /** A′ at a point, oriented so that it rises over the piece: +1 proven positive, −1 proven negative, 0 not proven. */
+  const signAt = (t: number, rising: boolean): number => {
+    const s = slope([t, t]);
+    const sign = s[0] > 0 ? 1 : s[1] < 0 ? -1 : 0;
+    return rising ? sign : -sign;
+  };
+  /**
+   * A piece where A″ has one sign: A′ is monotone there, so its sign is read at points and A turns at most
+   * once. Its turn r is located on point slopes (Illinois regula falsi; its accuracy only decides how much is
+   * proven below); the two sides of [r − δ, r + δ] are monotone where A′'s sign at their inner end proves it
+   * (else they are subdivided as any piece) and [r − δ, r + δ] takes the mean-value form (δ the smallest piece).
+   */
+  const oneTurn = (p: _Interval, rising: boolean, depth: number): _Interval => {
+    // g = ±A′, increasing over p
+    if (signAt(p[0], rising) > 0) return monotone(p, rising);
+    if (signAt(p[1], rising) < 0) return monotone(p, !rising);
+    const g = (t: number): number => {
+      const s = slope([t, t]);
+      return (rising ? 1 : -1) * 0.5 * (s[0] + s[1]);
+    };
+    let lo = p[0];
+    let hi = p[1];
+    let gLo = g(lo);
+    let gHi = g(hi);
+    let side = 0;
+    for (let i = 0; i < 64 && hi - lo > 0.25 * smallest && gLo < 0 && gHi > 0; i++) {
+      let t = (lo * gHi - hi * gLo) / (gHi - gLo);
+      if (!(t > lo && t < hi)) t = 0.5 * (lo + hi);
+      const gt = g(t);
+      if (gt === 0) {
+        lo = hi = t;
+        break;
+      }
+      if (gt < 0) {
+        lo = t;
+        gLo = gt;
+        if (side === -1) gHi *= 0.5;
+        side = -1;
+      } else {
+        hi = t;
+        gHi = gt;
+        if (side === 1) gLo *= 0.5;
+        side = 1;
+      }
+    }
+    const r = gLo >= 0 ? lo : gHi <= 0 ? hi : 0.5 * (lo + hi);
+    const a = Math.max(p[0], r - smallest);
+    const b = Math.min(p[1], r + smallest);
+    let out = b > a ? meanValue([a, b], slope([a, b])) : atPoint(a);
+    if (a > p[0]) out = _hull(out, signAt(a, rising) < 0 ? monotone([p[0], a], !rising) : overPiece([p[0], a], depth + 1));
+    if (b < p[1]) out = _hull(out, signAt(b, rising) > 0 ? monotone([b, p[1]], rising) : overPiece([b, p[1]], depth + 1));
+    return out;
   };
   state.seamAllowance = 0;
   const nearCuts: number[] = [];

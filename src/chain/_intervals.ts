@@ -106,10 +106,46 @@ export function _emfOver(ct: CompiledType, t: _Interval): _Interval {
 
 /** @internal An enclosure of the real Seebeck coefficient E′(t) (mV/°C), or of E″(t) (k = 2, mV/°C²), for t in the interval. */
 export function _seebeckOver(ct: CompiledType, t: _Interval, k: 1 | 2 = 1): _Interval {
+  // A slope of the trip argument asks for E′ over the same t_cj interval once per term (the cold junction, a
+  // connector, a cable): the last few results are kept (a pure function of its arguments).
+  for (let j = 0; j < recent.length; j++) {
+    const r = recent[j] as Recent;
+    if (r.ct === ct && r.lo === t[0] && r.hi === t[1] && r.k === k) return r.value;
+  }
+  const value = seebeckOverUncached(ct, t, k);
+  recent[next] = { ct, lo: t[0], hi: t[1], k, value };
+  next = (next + 1) % 4;
+  return value;
+}
+
+interface Recent {
+  readonly ct: CompiledType;
+  readonly lo: number;
+  readonly hi: number;
+  readonly k: 1 | 2;
+  readonly value: _Interval;
+}
+const recent: Recent[] = [];
+let next = 0;
+
+function seebeckOverUncached(ct: CompiledType, t: _Interval, k: 1 | 2): _Interval {
   let out: _Interval | undefined;
   eachPiece(ct, t, (i, piece) => {
     const r = _encloseEmfDerivative(ct, i, k, piece);
     out = out === undefined ? r : _hull(out, r);
   });
   return out ?? [Number.NEGATIVE_INFINITY, Number.POSITIVE_INFINITY];
+}
+
+/**
+ * @internal An enclosure of the real E″(t) (mV/°C²) over the interval, or undefined when a seam lies strictly
+ * inside it (there the function is two polynomials and its second derivative is not a function).
+ */
+export function _curvatureOver(ct: CompiledType, t: _Interval): _Interval | undefined {
+  const subs = ct.subranges;
+  for (let i = 1; i < subs.length; i++) {
+    const seam = (subs[i] as CompiledType["subranges"][number]).minC;
+    if (seam > t[0] && seam < t[1]) return undefined;
+  }
+  return _seebeckOver(ct, t, 2);
 }

@@ -25,10 +25,14 @@
  * 3. **t_cj by a monotonicity proof, else subdivision.** The t_cj range is cut at the ITS-90 sub-range seams
  *    and then recursively: where an interval enclosure of ∂A/∂t_cj (E′ by interval Horner, see `_intervals.ts`)
  *    has one sign over the piece and the whole box, A is monotone in t_cj there and its range is the union of
- *    the two end values (exact by 2); otherwise the piece is halved, down to 2⁻²⁰ of the range (or 40 halvings),
- *    where the mean-value form A(m) + ∂A/∂t_cj·(t_cj − m) is used. This is where non-monotone chains (a hardware
- *    compensation slope that crosses the Seebeck coefficient inside the ambient range) find their interior
- *    extreme.
+ *    the two end values (exact by 2). Otherwise, where an enclosure of ∂²A/∂t_cj² (−W″/s + E″(t_cj): e is affine
+ *    in t_cj) has one sign over the piece, ∂A/∂t_cj is monotone there, so its sign at a point proves it on one
+ *    side: the turn of A is located on point slopes, the sides of a 2⁻²⁰-wide piece around it are monotone
+ *    where the slope at their inner end proves it, and that piece takes the mean-value form. Else (no
+ *    curvature sign, or an E(t) term's interval across a seam) the piece is halved, down to 2⁻²⁰ of the range
+ *    (or 40 halvings), where the mean-value form A(m) + ∂A/∂t_cj·(t_cj − m) is used. This is where non-monotone
+ *    chains (a hardware compensation slope that crosses the Seebeck coefficient inside the ambient range) find
+ *    their interior extreme.
  * 4. The argument's enclosure is widened by an allowance for the difference between the model as computed in
  *    float64 and its exact value: 64 unit roundoffs of the sum of its terms' magnitudes plus twice the a-priori
  *    bound of Ê per reference-function evaluation (and the largest seam step where a wire temperature
@@ -43,6 +47,7 @@
  */
 import {
   _addInterval,
+  _curvatureOver,
   _divInterval,
   _emfOver,
   _hull,
@@ -76,7 +81,12 @@ const point = (v: number): _Interval => [v, v];
 
 /** The wire's added EMF, piece by piece in the model's order (cable, connectors, loop). */
 type AddedPiece =
-  | { readonly over: (box: Box, tc: _Interval) => { readonly value: _Interval; readonly coldJunctionSlope: _Interval } }
+  | {
+      readonly over: (
+        box: Box,
+        tc: _Interval,
+      ) => { readonly value: _Interval; readonly coldJunctionSlope: _Interval; readonly coldJunctionCurvature: _Interval | undefined };
+    }
   | { readonly transfer: Transfer; readonly names: readonly string[] };
 
 /** What an enclosure of one comparator edge needs from the compiled chain, gathered once per edge. */
@@ -250,6 +260,8 @@ interface ArgumentOver {
   readonly argument: (tc: _Interval, wireBox: Box, scale: _Interval) => _Interval;
   /** An enclosure of ∂A/∂t_cj over a t_cj interval (real derivatives). */
   readonly slope: (tc: _Interval, wireBox: Box, scale: _Interval) => _Interval;
+  /** An enclosure of ∂²A/∂t_cj² over a t_cj interval, undefined where a term's interval crosses a seam. */
+  readonly curvature: (tc: _Interval, wireBox: Box, scale: _Interval) => _Interval | undefined;
   readonly allowance: () => number;
   /** Counters the allowance and the subdivision read and write. */
   readonly state: { emfEvaluations: number; seamAllowance: number; pieces: number };
@@ -279,6 +291,20 @@ function argumentOver(s: EnclosureSetup, f: FrontOver, box: Box): ArgumentOver {
     if (wire !== undefined) d = _divInterval(d, scale);
     return _addInterval(d, _seebeckOver(ct, tc));
   };
+  // e is affine in t_cj and the fixed pieces do not depend on it: A″ = −W″/s + E″(t_cj).
+  const curvature = (tc: _Interval, wireBox: Box, scale: _Interval): _Interval | undefined => {
+    const own = _curvatureOver(ct, tc);
+    if (own === undefined) return undefined;
+    let d: _Interval = point(0);
+    for (const p of added) {
+      if (!("over" in p)) continue;
+      const c = p.over(wireBox, tc).coldJunctionCurvature;
+      if (c === undefined) return undefined;
+      d = _subInterval(d, c);
+    }
+    if (wire !== undefined) d = _divInterval(d, scale);
+    return _addInterval(d, own);
+  };
   // Ê's a-priori bound over every temperature used.
   let temps: _Interval = tcRange;
   for (const name of cc.wireRangeNames) {
@@ -287,7 +313,7 @@ function argumentOver(s: EnclosureSetup, f: FrontOver, box: Box): ArgumentOver {
   }
   const emfBound = _emfBoundOver(ct, [temps]);
   const allowance = (): number => 64 * U * magnitude + 2 * state.emfEvaluations * emfBound + state.seamAllowance;
-  return { argument, slope, allowance, state };
+  return { argument, slope, curvature, allowance, state };
 }
 
 /** A over t_cj ∈ [tcLow, tcHigh] (module note, 3; `_coldJunctionRange.ts`), cut where a reference-function evaluation changes polynomial. */
@@ -301,6 +327,7 @@ function argumentOverColdJunction(s: EnclosureSetup, f: FrontOver, a: ArgumentOv
   return _overColdJunction(f.tcRange, s.seams, s.seamStep, offsets, 1 / Math.min(1, scale[0] > 0 ? scale[0] : 1), {
     argument: (tc) => a.argument(tc, wireBox, scale),
     slope: (tc) => a.slope(tc, wireBox, scale),
+    curvature: (tc) => a.curvature(tc, wireBox, scale),
     allowance: a.allowance,
     state: a.state,
   });

@@ -120,6 +120,45 @@ describe("worst-case bracket of generated comparator chains", () => {
   });
 });
 
+describe("the turn of a non-monotone chain anywhere in the cold-junction range", () => {
+  // Where A″ has one sign over a piece (here E″_K > 0 near room temperature), the enclosure finds the turn of A
+  // on point slopes and proves the two sides monotone (chain/_coldJunctionRange.ts, `oneTurn`). Swept: the
+  // compensation slope moves the turn across the range (S_K rises from 39.45 µV/°C at 0 °C to 41.4 µV/°C at
+  // 60 °C, NIST SRD 60 type K table slopes), across type K's seam at 0 °C, with and without a connector term.
+  it("the bracket closes within the stated tolerance and a dense scan of the cold junction stays inside", () => {
+    let interior = 0;
+    for (const ambient of [{ minC: 0, maxC: 60 }, { minC: -10, maxC: 30 }]) {
+      for (let alpha = 38.9; alpha <= 41.5; alpha += 0.2) {
+        for (const connector of [false, true]) {
+          const chain = {
+            ...interiorExtremeChain,
+            coldJunction: { ...(interiorExtremeChain as unknown as { coldJunction: object }).coldJunction, compensationMicrovoltsPerC: alpha },
+            ambient,
+            ...(connector ? { wire: { connectors: [{ kind: "connector", arrangement: "terminates", contactMetal: "copper", aboveColdJunctionC: { minC: 0, maxC: 3 } }] } } : {}),
+          } as unknown as MeasurementChain;
+          const m = tripTemperatureModel(chain, 0);
+          const w = propagate(m.model, m.inputs, { method: "worst-case", modelEnclosure: m.enclosure });
+          const [lo, hi] = w.enclosure as readonly [number, number];
+          const [gapLow, gapHigh] = w.enclosureGap as readonly [number, number];
+          expect(Math.min(gapLow, gapHigh)).toBeGreaterThanOrEqual(0);
+          expect(Math.max(gapLow, gapHigh)).toBeLessThanOrEqual(tolerance);
+          for (const side of ["low", "high"] as const) {
+            const at = w.attained?.[side].at as Record<string, number>;
+            const t = at["ambient.coldJunctionC"] as number;
+            if (t > ambient.minC && t < ambient.maxC) interior++;
+            for (let k = 0; k <= 1000; k++) {
+              const v = m.model({ ...at, "ambient.coldJunctionC": ambient.minC + ((ambient.maxC - ambient.minC) * k) / 1000 });
+              expect(v).toBeGreaterThanOrEqual(lo);
+              expect(v).toBeLessThanOrEqual(hi);
+            }
+          }
+        }
+      }
+    }
+    expect(interior).toBeGreaterThan(10);
+  });
+});
+
 describe("a toy model the extension cannot close", () => {
   it("keeps a positive gap that still brackets the exact extreme (x − x² on [0, 1]: max 1/4 at 1/2, calculus)", () => {
     const f = ({ x }: { x: number }) => x - x * x;

@@ -36,7 +36,7 @@ import { _oneOfTwoKeys, _optionalLimit, _requireObject, type _SourceContext } fr
 import type { AmbientRange } from "../types.js";
 import type { WireErrorSource } from "../types.js";
 import type { ConnectorElement, ContactMetal, StatedLegSeebeck, TemperatureRangeC } from "../wireTypes.js";
-import { _addInterval, _divInterval, _emfOver, _mulInterval, _seebeckOver, _subInterval, type _Interval } from "../_intervals.js";
+import { _addInterval, _curvatureOver, _divInterval, _emfOver, _mulInterval, _seebeckOver, _subInterval, type _Interval } from "../_intervals.js";
 import { _checkRange, _rangeSource, _wireSource, type _Box, type _Inputs } from "./_wireCommon.js";
 
 /** Seebeck coefficients of a type's legs against a contact metal, µV/°C. */
@@ -130,7 +130,12 @@ export interface _ConnectorStage {
    * rounded, in the model's order of operations), and an enclosure of its derivative in that temperature
    * (E′(t_cj) − E′(t_connector) for a connector above the cold junction, E′(t_cj) for one at its own temperature).
    */
-  emfErrorOver?(box: _Box, coldJunctionC: _Interval): { readonly value: _Interval; readonly coldJunctionSlope: _Interval };
+  emfErrorOver?(box: _Box, coldJunctionC: _Interval): {
+    readonly value: _Interval;
+    readonly coldJunctionSlope: _Interval;
+    /** Its second derivative in t_cj, undefined where an E(t) term's interval crosses a seam. */
+    readonly coldJunctionCurvature: _Interval | undefined;
+  };
 }
 
 function statedLegs(value: unknown, context: string): LegSeebeck {
@@ -231,6 +236,12 @@ export function _connectorStage(
           },
           get coldJunctionSlope(): _Interval {
             return hasAbs ? _seebeckOver(ct, tcj) : _subInterval(_seebeckOver(ct, tcj), _seebeckOver(ct, tConn));
+          },
+          get coldJunctionCurvature(): _Interval | undefined {
+            const atCj = _curvatureOver(ct, tcj);
+            if (hasAbs || atCj === undefined) return atCj;
+            const atConnector = _curvatureOver(ct, tConn);
+            return atConnector === undefined ? undefined : _subInterval(atCj, atConnector);
           },
         };
       },

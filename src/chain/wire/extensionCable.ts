@@ -30,7 +30,7 @@ import { thermocoupleData } from "../../its90/resolveType.js";
 import { _requireNonNegative, _requireObject, type _SourceContext } from "../_common.js";
 import type { AmbientRange, WireErrorSource } from "../types.js";
 import type { CableMismatchModel, CableTolerance, ExtensionCableElement, TemperatureRangeC } from "../wireTypes.js";
-import { _emfOver, _mulInterval, _seebeckOver, _subInterval, type _Interval } from "../_intervals.js";
+import { _curvatureOver, _emfOver, _mulInterval, _seebeckOver, _subInterval, type _Interval } from "../_intervals.js";
 import { _checkRange, _rangeSource, _requireWithin, _wireSource, type _Box, type _Inputs } from "./_wireCommon.js";
 
 /** A resolved cable tolerance statement. */
@@ -296,7 +296,12 @@ export interface _ExtensionCableStage {
    * `emfErrorMillivolts` over a box of the sources and an interval of the cold-junction temperature (outward
    * rounded, in the model's order of operations), and an enclosure of its derivative in that temperature, −k·E′(t_cj).
    */
-  emfErrorOver?(box: _Box, coldJunctionC: _Interval): { readonly value: _Interval; readonly coldJunctionSlope: _Interval };
+  emfErrorOver?(box: _Box, coldJunctionC: _Interval): {
+    readonly value: _Interval;
+    readonly coldJunctionSlope: _Interval;
+    /** Its second derivative in t_cj, undefined where an E(t) term's interval crosses a seam. */
+    readonly coldJunctionCurvature: _Interval | undefined;
+  };
 }
 
 /**
@@ -374,7 +379,7 @@ export function _extensionCableStage(
       return k * (_emfFromTemperature(ct, tj) - _emfFromTemperature(ct, tcj));
     },
     emfErrorOver: (box, tcj) => {
-      if (!has) return { value: [0, 0], coldJunctionSlope: [0, 0] };
+      if (!has) return { value: [0, 0], coldJunctionSlope: [0, 0], coldJunctionCurvature: [0, 0] };
       const tj: _Interval = junctionVaries ? (box["cable.junctionTemperature"] as _Interval) : [fixedJunctionC, fixedJunctionC];
       const k = _mulInterval(box["cable.tolerance"] as _Interval, [perMicrovolt, perMicrovolt]);
       // Each part computed when read (the subdivision reads the value at points and the slope over pieces).
@@ -385,6 +390,12 @@ export function _extensionCableStage(
         get coldJunctionSlope(): _Interval {
           const slope = _mulInterval(k, _seebeckOver(ct, tcj));
           return [-slope[1], -slope[0]];
+        },
+        get coldJunctionCurvature(): _Interval | undefined {
+          const atCj = _curvatureOver(ct, tcj);
+          if (atCj === undefined) return undefined;
+          const c = _mulInterval(k, atCj);
+          return [-c[1], -c[0]];
         },
       };
     },

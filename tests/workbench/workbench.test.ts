@@ -169,10 +169,18 @@ describe.skipIf(!available)("workbench page in headless Chromium", () => {
       const trip = design.setpoints[0]?.tripTemperatureC ?? 0;
       const firstEditMs = await timedEdit(page, "hj-f-setpoints_0__tripTemperatureC", String(trip - 1));
       await page.evaluate(() => window.hotjunctionWorkbench.idle());
-      const editMs = await timedEdit(page, "hj-f-setpoints_0__tripTemperatureC", String(trip - 2));
-      await page.evaluate(() => window.hotjunctionWorkbench.idle());
+      // Five edits after the first (alternating 2 and 1 °C lower), each to its updated band: median and largest.
+      const edits: number[] = [];
+      for (let k = 0; k < 5; k++) {
+        edits.push(await timedEdit(page, "hj-f-setpoints_0__tripTemperatureC", String(trip - (k % 2 === 0 ? 2 : 1))));
+        await page.evaluate(() => window.hotjunctionWorkbench.idle());
+      }
+      edits.sort((a, b) => a - b);
+      const editMs = edits[2] as number;
       const plainMs = await page.evaluate(() => window.hotjunctionWorkbench.plainRecompute(2));
-      ratios.push(`${id}: edit to band ${editMs.toFixed(0)} ms (first edit ${firstEditMs.toFixed(0)} ms), plain recomputation ${plainMs.toFixed(0)} ms, ratio ${(editMs / plainMs).toFixed(2)}`);
+      ratios.push(
+        `${id}: edit to band median ${editMs.toFixed(0)} ms, largest ${(edits[4] as number).toFixed(0)} ms of 5 (first edit ${firstEditMs.toFixed(0)} ms), plain recomputation ${plainMs.toFixed(0)} ms, ratio ${(editMs / plainMs).toFixed(2)}`,
+      );
       expect(editMs).toBeGreaterThan(0);
     }
     console.log(`workbench speed (trials as in each example):\n  ${ratios.join("\n  ")}`);

@@ -1,6 +1,9 @@
 /**
  * Ascending sort of a Float64Array without NaN (internal): LSD radix sort on the IEEE-754 bit patterns,
- * four passes of 16 bits. Several times faster than `Float64Array.prototype.sort` for 10⁵–10⁷ values.
+ * four passes of 16 bits. Faster than `Float64Array.prototype.sort` from about 10⁵ values warm and 10⁶ in a
+ * fresh process (its 65,536-entry counts cost more than a native sort below that: 20,000 values 18 ms cold,
+ * 3.7 ms warm, against 1.4 ms; 3 Dec 2026), so shorter arrays take the native sort (the same order: numeric,
+ * −0 before +0).
  * @module
  * @internal
  */
@@ -8,7 +11,7 @@
 /** @internal Sorts `values` in place (no NaN allowed; −0 sorts before +0). */
 export function _sortFloat64(values: Float64Array): void {
   const n = values.length;
-  if (n < 4096) {
+  if (n < 131_072) {
     values.sort();
     return;
   }

@@ -11,6 +11,8 @@ export default defineConfig([
       bulk: "src/bulk/index.ts",
       // Worker entry of propagateParallel: must sit beside the chunk that starts it (dist/monteCarloWorker.js).
       monteCarloWorker: "src/uncertainty/_monteCarloWorker.ts",
+      // Model factory of designTripParallel's workers: must sit beside the chunk that names it (dist/tripModel.js).
+      tripModel: "src/trip/_tripModelFactory.ts",
     },
     format: ["esm", "cjs"],
     dts: { compilerOptions: { ignoreDeprecations: "6.0" } },
@@ -21,7 +23,9 @@ export default defineConfig([
     target: "es2022",
   },
   {
-    entry: { cli: "src/cli/main.ts" },
+    // The CLI's own copies of the worker entry and the trip model factory, beside its chunks (dist/cli/), where
+    // `check`'s designTripParallel looks for them.
+    entry: { cli: "src/cli/main.ts", "cli/monteCarloWorker": "src/uncertainty/_monteCarloWorker.ts", "cli/tripModel": "src/trip/_tripModelFactory.ts" },
     format: ["esm"],
     banner: { js: "#!/usr/bin/env node" },
     sourcemap: false,

@@ -238,6 +238,8 @@ export {
   customaryToleranceFractions,
   designTrip,
   type DesignTripOptions,
+  designTripParallel,
+  type DesignTripParallelOptions,
   type DividerPairSelection,
   type ElementReferenceOption,
   type IdealReferenceOption,

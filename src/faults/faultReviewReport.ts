@@ -3,7 +3,7 @@
  * @module
  */
 import type { MeasurementChain } from "../chain/types.js";
-import { _invalidChoice, _requireFiniteData, _requireShape } from "../errors.js";
+import { _invalidChoice, _requireFiniteData, _requireObject, _requireShape } from "../errors.js";
 import { _reviewShape } from "./_faultReviewWords.js";
 import { CAUTION_TEXT } from "../caution.js";
 import { _countCategories } from "./_faultClassification.js";
@@ -82,6 +82,8 @@ export function reviewChainFaults(
   options?: ReviewFaultsOptions,
 ): FaultReviewReport {
   if (!Array.isArray(trips)) _invalidChoice("trips", trips, ["an array of trips"], "fault review");
+  // Checked here too: with no trips, reviewFaults (which checks the chain) never runs.
+  _requireObject(chain, "chain", "fault review");
   return faultReviewReport(
     trips.map((t) => reviewFaults(chain, t, options)),
     chain.label,

@@ -493,6 +493,25 @@ function planTrip(design: TripDesign, given: readonly ThresholdNetwork[] | undef
 }
 
 /**
+ * @internal The model and inputs {@link designTrip} gives Monte Carlo at setpoint `index` (the thermocouple
+ * tolerance at the setpoint), rebuilt from the design (and the networks designTrip was given): the same chain and model, so a worker
+ * that calls this draws the same outputs. `inputs` is empty for an error-free chain (no Monte Carlo run).
+ */
+export function _setpointMonteCarloModel(
+  design: TripDesign,
+  index: number,
+  networks: readonly ThresholdNetwork[] | undefined,
+): Pick<ReturnType<typeof _comparatorTripModel>, "model" | "inputs"> {
+  if (typeof design !== "object" || design === null) designError("design", design, "is not an object");
+  const { plans, place, chains } = planTrip(design, networks);
+  const plan = plans[index];
+  if (plan === undefined) designError("setpoint index", index, `is not an index of the ${plans.length} setpoints`);
+  const { network, tap } = place[index] as { network: number; tap: number };
+  const { model, inputs } = _comparatorTripModel((chains[network] as TripChain).compiled, tap, "trip", plan.tripC);
+  return { model, inputs };
+}
+
+/**
  * @internal The reference element a comparator design uses once realized (a shunt's series resistor sized for
  * the threshold networks the design finds): the chain `sweep` evaluates.
  */
@@ -511,6 +530,19 @@ export function _realizedTripReference(design: TripDesign): ReferenceElement {
  *   Monte Carlo trials exceed 10⁹ model evaluations
  */
 export function designTrip(design: TripDesign, options: DesignTripOptions = {}): TripDesignResult {
+  return _designTripWith(design, options, undefined);
+}
+
+/**
+ * @internal {@link designTrip} with each setpoint's Monte Carlo result given (computed elsewhere from
+ * {@link _setpointMonteCarloModel}'s model and inputs with the same options, e.g. on worker threads); an
+ * undefined entry is computed here.
+ */
+export function _designTripWith(
+  design: TripDesign,
+  options: DesignTripOptions,
+  monteCarlo: readonly (PropagationResult | undefined)[] | undefined,
+): TripDesignResult {
   if (typeof design !== "object" || design === null) designError("design", design, "is not an object");
   _requireOptionsObject(options, "designTrip", true);
   if (Array.isArray(design.setpoints) && typeof options.monteCarloTrials === "number") {
@@ -564,6 +596,7 @@ export function designTrip(design: TripDesign, options: DesignTripOptions = {}):
     const rss: PropagationResult = { ...rssRaw, interval: [rssLow, rssHigh] };
     const mc =
       exact?.("monte-carlo") ??
+      monteCarlo?.[i] ??
       propagate(model, inputs, {
         method: "monte-carlo",
         coverage,

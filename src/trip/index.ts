@@ -46,6 +46,7 @@ export type {
   BuildSheetPart,
 } from "./types.js";
 export { designTrip, type DesignTripOptions } from "./designTrip.js";
+export { designTripParallel, type DesignTripParallelOptions } from "./designTripParallel.js";
 export { compareReferences, type CompareReferencesOptions } from "./compareReferences.js";
 export {
   customaryToleranceFractions,

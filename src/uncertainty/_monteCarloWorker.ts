@@ -4,8 +4,8 @@
  * and answers requests "the trials of these blocks" with the model outputs, drawn by the same
  * {@link _TrialStream} as the in-process path: same bits whichever thread runs a block.
  *
- * Messages in: `{ kind: "job", job, module, exportName, inputs, correlations }` (once per job; the inputs are
- * the JSON-serializable distributions) and `{ kind: "run", job, id, state, count }`. Out: `{ kind: "done", id,
+ * Messages in: `{ kind: "job", job, module, exportName, inputs, correlations, argument? }` (once per job; the
+ * inputs are the JSON-serializable distributions; with `argument` the export is a model factory) and `{ kind: "run", job, id, state, count }`. Out: `{ kind: "done", id,
  * values }` (the buffer is transferred) or `{ kind: "error", id, error }`.
  * @module
  * @internal
@@ -30,7 +30,7 @@ function serve(port: Port): void {
     const message = raw as _WorkerJob | _WorkerRun;
     if (message.kind === "job") {
       const prepared = (async (): Promise<Prepared> => {
-        const model = await _loadModel(message.module, message.exportName, "propagateParallel worker");
+        const model = await _loadModel(message.module, message.exportName, "propagateParallel worker", message.argument);
         const inputs = _prepareInputs(message.inputs);
         const correlation = _correlationMatrix(message.correlations, inputs.names);
         const sampler = new _Sampler(inputs.distributions, correlation, inputs.names, undefined);

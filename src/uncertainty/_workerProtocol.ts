@@ -15,6 +15,8 @@ export interface _WorkerJob {
   readonly exportName: string;
   readonly inputs: Record<string, unknown>;
   readonly correlations: unknown;
+  /** When present, the export is a factory: the model is `export(argument)`. */
+  readonly argument?: unknown;
 }
 
 /** @internal A request for the outputs of `count` trials from a block boundary with stream `state`. */
@@ -53,8 +55,11 @@ export function _deserializeError(e: _SerializedError): Error {
   return new Error(e.message);
 }
 
-/** @internal Loads a model export from a module. */
-export async function _loadModel(module: string, exportName: string, context: string): Promise<Model> {
+/**
+ * @internal Loads a model export from a module; with an `argument` the export is a factory and the model is
+ * what it returns for that argument.
+ */
+export async function _loadModel(module: string, exportName: string, context: string, argument?: unknown): Promise<Model> {
   // Same error shape as other failed-load checks (deliberate: this one names the model module).
   let namespace: Record<string, unknown>;
   try {
@@ -79,6 +84,17 @@ export async function _loadModel(module: string, exportName: string, context: st
       allowed: Object.keys(namespace).filter((k) => typeof namespace[k] === "function"),
     });
   }
-  return model as Model;
+  if (argument === undefined) return model as Model;
+  const made = (model as (a: unknown) => unknown)(argument);
+  if (typeof made !== "function") {
+    throw new HotjunctionTypeError({
+      code: "INVALID_OPTION",
+      quantity: "model factory result",
+      value: made,
+      context,
+      problem: `is not a function (${exportName} of ${module} was called with the reference's argument)`,
+    });
+  }
+  return made as Model;
 }
 

@@ -31,6 +31,11 @@ export interface ModelReference {
   readonly module: string;
   /** Name of the exported model function; default `"default"`. */
   readonly exportName?: string;
+  /**
+   * When given, the export is a model factory: the host and every worker call it once with this value (sent
+   * by structured clone, so plain data) and use the model it returns.
+   */
+  readonly argument?: unknown;
 }
 
 /** Options of {@link propagateParallel}: those of `propagate` plus where the work runs. */
@@ -94,9 +99,11 @@ class Pool implements MonteCarloPool {
   }
 
   /** Sends a job to every worker; returns its number. */
-  job(module: string, exportName: string, inputs: Record<string, unknown>, correlations: unknown): number {
+  job(module: string, exportName: string, inputs: Record<string, unknown>, correlations: unknown, argument: unknown): number {
     const job = this.nextJob++;
-    for (const endpoint of this.endpoints) endpoint.post({ kind: "job", job, module, exportName, inputs, correlations });
+    for (const endpoint of this.endpoints) {
+      endpoint.post({ kind: "job", job, module, exportName, inputs, correlations, ...(argument !== undefined ? { argument } : {}) });
+    }
     return job;
   }
 
@@ -325,7 +332,7 @@ export async function propagateParallel<Name extends string>(
   _requireOptionsObject(options, context, true);
   const o: PropagateParallelOptions<Name> = options ?? {};
   let fn: Model;
-  let reference: { module: string; exportName: string } | undefined;
+  let reference: { module: string; exportName: string; argument: unknown } | undefined;
   if (typeof model === "function") {
     fn = model as Model;
   } else {
@@ -342,8 +349,9 @@ export async function propagateParallel<Name extends string>(
     if (typeof exportName !== "string") {
       throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "exportName", value: exportName, context, problem: "is not a string" });
     }
-    reference = { module: (model as ModelReference).module, exportName };
-    fn = await _loadModel(reference.module, exportName, context);
+    const argument = (model as ModelReference).argument;
+    reference = { module: (model as ModelReference).module, exportName, argument };
+    fn = await _loadModel(reference.module, exportName, context, argument);
   }
   const { workers: _w, pool: givenPool, parallelThreshold: _t, ...rest } = o;
   if (o.method !== "monte-carlo") return propagate(fn as Model<Name>, inputs, rest);
@@ -369,7 +377,7 @@ export async function propagateParallel<Name extends string>(
     const pool = (givenPool as Pool | undefined) ?? ((await createMonteCarloPool({ workers: wantWorkers })) as Pool | undefined);
     if (pool !== undefined) {
       try {
-        const job = pool.job(reference.module, reference.exportName, inputs as Record<string, unknown>, o.correlations);
+        const job = pool.job(reference.module, reference.exportName, inputs as Record<string, unknown>, o.correlations, reference.argument);
         const outcome = await driveOnPool(_monteCarloRun(settings), pool, job, settings.seed, planned);
         return _requireFiniteResult(_monteCarloResult(prepared, evaluator, correlation, copula, settings, outcome, pool.size), context) as PropagationResult<Name>;
       } finally {

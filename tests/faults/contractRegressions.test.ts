@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { typedErrorOf } from "../_typedError.js";
-import { faultReviewReport, reviewFaults, type FaultReview } from "../../src/index.js";
+import { faultReviewReport, reviewChainFaults, reviewFaults, type FaultReview } from "../../src/index.js";
 import { ovenChain, ovenTrip } from "./helpers.js";
 
 
@@ -37,5 +37,12 @@ describe("faultReviewReport checks the reviews it returns", () => {
     expect(report.counts.total).toBe(2 * review.rows.length);
     expect(report.counts.dangerousUndetected).toBe(2 * review.counts.dangerousUndetected);
     expect(report.reviews[0]).toBe(review);
+  });
+});
+
+describe("reviewChainFaults checks its chain even with no trips (tests/contract, seed 20261202: `[undefined, []]` read `.label` of undefined)", () => {
+  it.each([undefined, null, 3])("chain %s is a typed error naming chain", (chain) => {
+    const e = typedErrorOf(() => reviewChainFaults(chain as never, []));
+    expect(e.quantity).toBe("chain");
   });
 });

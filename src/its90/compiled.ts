@@ -316,7 +316,11 @@ function monotoneStart(ct: CompiledType): _DataStart {
 /** The full check and the start search of a data object the generator did not write. @internal */
 export function _compileForeign(data: ThermocoupleData): CompiledType {
   validate(data);
-  return build(data, monotoneStart(build(data, {})));
+  // The term's three numbers only: any other key of a forged `exponential` (a `minC`, an `inverse` …) would
+  // otherwise land in the compiled type and replace its range or tables.
+  const e = data.exponential;
+  const clean: ThermocoupleData = { ...data, ...(e && { exponential: { a0: e.a0, a1: e.a1, a2: e.a2 } }) };
+  return build(clean, monotoneStart(build(clean, {})));
 }
 
 /** Start data of a checked copy (`defineThermocoupleData`): the start search's result. @internal */

@@ -53,10 +53,10 @@ export interface ErrorDetails {
 }
 
 function formatValue(value: unknown): string {
-  if (typeof value === "string") return JSON.stringify(value.length > 60 ? `${value.slice(0, 57)}...` : value);
+  if (typeof value === "string") return JSON.stringify(value.length > 60 ? value.slice(0, 57) + "..." : value);
   if (typeof value === "function") return "a function";
   if (Array.isArray(value)) return `an array of length ${value.length}`;
-  if (typeof value === "object" && value !== null) return "a value of type object";
+  if (typeof value === "object" && value) return "a value of type object";
   return Object.is(value, -0) ? "-0" : String(value);
 }
 

@@ -80,10 +80,13 @@ export interface CompiledType {
   inverse?: ExactInverse;
 }
 
-/** Horner evaluation of Σ cᵢ·xⁱ. @internal */
-export function _horner(c: Float64Array, x: number): number {
-  let acc = c[c.length - 1] as number;
-  for (let i = c.length - 2; i >= 0; i--) acc = acc * x + (c[i] as number);
+/**
+ * Horner evaluation of Σ cᵢ·xⁱ; with `first` and `last`, of Σ c[first + i]·xⁱ over c[first … last] (an exact-inverse
+ * segment's 8 coefficients). @internal
+ */
+export function _horner(c: Float64Array, x: number, first = 0, last = c.length - 1): number {
+  let acc = c[last] as number;
+  for (let i = last - 1; i >= first; i--) acc = acc * x + (c[i] as number);
   return acc;
 }
 
@@ -217,7 +220,7 @@ export function _solveInSubrange(ct: CompiledType, index: number, target: number
  */
 export function _compileChecked(data: ThermocoupleData): CompiledType {
   const start = _checkedData.get(data);
-  if (start === undefined) {
+  if (!start) {
     throw new HotjunctionTypeError({
       code: "UNKNOWN_TYPE",
       quantity: "thermocouple data",
@@ -313,7 +316,11 @@ function monotoneStart(ct: CompiledType): _DataStart {
 /** The full check and the start search of a data object the generator did not write. @internal */
 export function _compileForeign(data: ThermocoupleData): CompiledType {
   validate(data);
-  return build(data, monotoneStart(build(data, {})));
+  // The term's three numbers only: any other key of a forged `exponential` (a `minC`, an `inverse` …) would
+  // otherwise land in the compiled type and replace its range or tables.
+  const e = data.exponential;
+  const clean: ThermocoupleData = { ...data, ...(e && { exponential: { a0: e.a0, a1: e.a1, a2: e.a2 } }) };
+  return build(clean, monotoneStart(build(clean, {})));
 }
 
 /** Start data of a checked copy (`defineThermocoupleData`): the start search's result. @internal */

@@ -69,8 +69,9 @@ export const _EMF_END_TOLERANCE_MV = 1e-10;
 export function _checkEmf(ct: CompiledType, emfMillivolts: number, quantity: string, context: string): void {
   if (
     emfMillivolts > ct.emfAtMaxC + _EMF_END_TOLERANCE_MV ||
-    // The end tolerance applies at a range end only, not below type B's dip.
-    emfMillivolts < ct.lowestEmf - (ct.ambiguity === undefined ? _EMF_END_TOLERANCE_MV : 0)
+    // The end tolerance applies at a range end only, not below type B's dip (`ambiguity`, a sentence, is set
+    // exactly where E starts by falling).
+    emfMillivolts < ct.lowestEmf - (ct.ambiguity ? 0 : _EMF_END_TOLERANCE_MV)
   ) {
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",
@@ -82,7 +83,7 @@ export function _checkEmf(ct: CompiledType, emfMillivolts: number, quantity: str
       context,
     });
   }
-  if (ct.ambiguity !== undefined && emfMillivolts <= ct.emfAtMinC) {
+  if (ct.ambiguity && emfMillivolts <= ct.emfAtMinC) {
     throw new HotjunctionRangeError({
       code: "AMBIGUOUS_EMF",
       quantity,
@@ -96,7 +97,7 @@ export function _checkEmf(ct: CompiledType, emfMillivolts: number, quantity: str
 
 function coldJunctionEmf(ct: CompiledType, options: ColdJunctionOptions | undefined): number {
   if (options === undefined) return 0;
-  if (typeof options !== "object" || options === null) {
+  if (typeof options !== "object" || !options) {
     throw new HotjunctionTypeError({
       code: "INVALID_OPTION",
       quantity: "options",
@@ -121,20 +122,18 @@ export function _emfFromTemperature(ct: CompiledType, temperatureC: number, opti
 
 /** @internal */
 export function _temperatureFromEmf(ct: CompiledType, emfMillivolts: number, options?: ColdJunctionOptions): number {
-  let total = emfMillivolts;
   // Fast path: a plain EMF inside the unambiguous range (NaN fails the comparisons and goes the long way).
-  if (!(options === undefined && typeof total === "number" && total > ct.emfAtMinC && total <= ct.emfAtMaxC)) {
-    _requireFinite(emfMillivolts, "EMF", "mV", ct.context);
-    total += coldJunctionEmf(ct, options);
-    _checkEmf(ct, total, options?.coldJunctionC === undefined ? "EMF" : "cold-junction-compensated EMF", ct.context);
+  if (!(options === undefined && typeof emfMillivolts === "number" && emfMillivolts > ct.emfAtMinC && emfMillivolts <= ct.emfAtMaxC)) {
+    // From here the EMF is the cold-junction-compensated one.
+    emfMillivolts = _requireFinite(emfMillivolts, "EMF", "mV", ct.context) + coldJunctionEmf(ct, options);
+    _checkEmf(ct, emfMillivolts, options?.coldJunctionC === undefined ? "EMF" : "cold-junction-compensated EMF", ct.context);
   }
-  return _exactInverse(ct, _exactInverseTables(ct), total);
+  return _exactInverse(ct, _exactInverseTables(ct), emfMillivolts);
 }
 
 /** @internal */
 export function _seebeckCoefficient(ct: CompiledType, temperatureC: number): number {
-  const t = _checkTemperature(ct, temperatureC, "temperature");
-  return _slope(ct, t) * 1000;
+  return _slope(ct, _checkTemperature(ct, temperatureC, "temperature")) * 1000;
 }
 
 /** @internal */
@@ -152,7 +151,7 @@ export function _temperatureRange(ct: CompiledType): ThermocoupleRange {
 
 /**
  * A converter bound to one type's data: the scalar conversions of the letter-based functions, with no lookup
- * per call, and a bundle that carries only this type's coefficients (about 3.1 kB min+gzip). For bulk work and
+ * per call, and a bundle that carries only this type's coefficients (under 3 kB min+gzip). For bulk work and
  * ranges use {@link emfFromTemperatureArray}, {@link temperatureFromEmfArray} and {@link temperatureRange},
  * which accept the same data object.
  */

@@ -22,16 +22,9 @@
  * @internal
  * @module
  */
-import { _emfInSubrange, _solveInSubrange, type CompiledType, type ExactInverse, type InversePiece } from "./compiled.js";
+import { _emfInSubrange, _horner, _solveInSubrange, type CompiledType, type ExactInverse, type InversePiece } from "./compiled.js";
 
 export type { ExactInverse, InversePiece } from "./compiled.js";
-
-/** Σ c[o + i]·sⁱ, i = 0…7, by Horner (the same operations as the nested form c₀ + s(c₁ + s(…))). */
-function segmentValue(c: Float64Array, o: number, s: number): number {
-  let t = c[o + 7] as number;
-  for (let i = o + 6; i >= o; i--) t = t * s + (c[i] as number);
-  return t;
-}
 
 /**
  * Builds segment k of a piece: its edge temperatures (if not yet solved), the interpolant through the roots
@@ -55,31 +48,32 @@ function buildSegment(ct: CompiledType, p: InversePiece, k: number): number {
     s[j] = Math.cos((Math.PI * j) / 16);
     r[j] = _solveInSubrange(ct, range, mid + 0.5 * width * (s[j] as number), segLo, segHi);
   }
-  const o = k * 8;
-  const a = p.coefficients;
-  for (let i = 0; i < 8; i++) a[o + i] = r[2 * i + 1] as number;
+  // The 8 coefficients are worked out in `a`, then stored at the segment's place in the piece's table.
+  const a = new Float64Array(8);
+  for (let i = 0; i < 8; i++) a[i] = r[2 * i + 1] as number;
   // Monomial coefficients of the interpolant by the Björck–Pereyra algorithm (Golub & Van Loan, Matrix
   // Computations, Algorithm 4.6.1): Newton divided differences, then expansion into powers of s.
   for (let m = 0; m < 7; m++) {
-    for (let i = 7; i > m; i--) a[o + i] = ((a[o + i] as number) - (a[o + i - 1] as number)) / ((s[2 * i + 1] as number) - (s[2 * (i - m) - 1] as number));
+    for (let i = 7; i > m; i--) a[i] = ((a[i] as number) - (a[i - 1] as number)) / ((s[2 * i + 1] as number) - (s[2 * (i - m) - 1] as number));
   }
   for (let m = 6; m >= 0; m--) {
-    for (let i = m; i < 7; i++) a[o + i] = (a[o + i] as number) - (a[o + i + 1] as number) * (s[2 * m + 1] as number);
+    for (let i = m; i < 7; i++) a[i] = (a[i] as number) - (a[i + 1] as number) * (s[2 * m + 1] as number);
   }
+  p.coefficients.set(a, k * 8);
   // Check at the extrema (ends included) against the roots there, within 2e-11 °C or 2e-12 mV over the
   // segment's mean slope width / (segHi − segLo); a segment that misses (S nearly vanishing) is solved by
   // Newton at run time instead.
   const allowed = Math.max(2e-11, (2e-12 * (segHi - segLo)) / width);
   let state = 2;
   for (let j = 0; j < 17; j += 2) {
-    if (!(Math.abs(segmentValue(a, o, s[j] as number) - (r[j] as number)) <= allowed)) state = 1;
+    if (!(Math.abs(_horner(a, s[j] as number) - (r[j] as number)) <= allowed)) state = 1;
   }
   return (p.state[k] = state);
 }
 
 function build(ct: CompiledType): ExactInverse {
-  const pieces: InversePiece[] = [];
-  ct.subranges.forEach((sub, range) => {
+  // A sub-range wholly below where E becomes unique (none of today's types) has no piece.
+  const pieces = ct.subranges.flatMap((sub, range): InversePiece[] => {
     const lowC = Math.max(sub.minC, ct.monotonicFromC);
     const highC = sub.maxC;
     // Segments about 4 °C wide: the interpolant then meets the tolerance everywhere but in the few segments
@@ -90,18 +84,9 @@ function build(ct: CompiledType): ExactInverse {
     const edgesC = new Float64Array(count + 1).fill(NaN);
     edgesC[0] = lowC;
     edgesC[count] = highC;
-    if (highC > lowC) {
-      pieces.push({
-        range,
-        emfStart,
-        width,
-        perMillivolt: 1 / width,
-        count,
-        coefficients: new Float64Array(count * 8),
-        state: new Uint8Array(count),
-        edgesC,
-      });
-    }
+    return highC > lowC
+      ? [{ range, emfStart, width, perMillivolt: 1 / width, count, coefficients: new Float64Array(count * 8), state: new Uint8Array(count), edgesC }]
+      : [];
   });
   return { pieces };
 }
@@ -131,21 +116,19 @@ export function _eagerExactInverse(ct: CompiledType): ExactInverse {
  */
 export function _exactInverse(ct: CompiledType, inv: ExactInverse, emfMillivolts: number): number {
   const pieces = inv.pieces;
+  // The pieces in order up to the first that starts above the EMF; the first piece if it does.
   let piece = pieces[0] as InversePiece;
-  for (let i = 1; i < pieces.length; i++) {
-    const next = pieces[i] as InversePiece;
-    if (emfMillivolts >= next.emfStart) piece = next;
-    else break;
+  for (const next of pieces) {
+    if (emfMillivolts < next.emfStart) break;
+    piece = next;
   }
   const x = (emfMillivolts - piece.emfStart) * piece.perMillivolt;
-  let k = Math.floor(x);
-  if (k >= piece.count) k = piece.count - 1;
-  else if (k < 0) k = 0;
-  let state = piece.state[k];
-  if (state === 0) state = buildSegment(ct, piece, k);
+  const k = Math.min(Math.max(Math.floor(x), 0), piece.count - 1);
+  // 0: not built yet (states 1 and 2 are truthy).
+  const state = piece.state[k] || buildSegment(ct, piece, k);
   const lo = piece.edgesC[k] as number;
   const hi = piece.edgesC[k + 1] as number;
-  const t = state === 1 ? _solveInSubrange(ct, piece.range, emfMillivolts, lo, hi) : segmentValue(piece.coefficients, k * 8, 2 * (x - k) - 1);
+  const t = state === 1 ? _solveInSubrange(ct, piece.range, emfMillivolts, lo, hi) : _horner(piece.coefficients, 2 * (x - k) - 1, k * 8, k * 8 + 7);
   // Clamped to the segment's edge temperatures (increasing roots of the forward polynomial), so that the
   // inverse never steps backwards across a segment edge, where two interpolants meet; within the piece's
   // sub-range by the same token.

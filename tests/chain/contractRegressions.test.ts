@@ -17,7 +17,6 @@ import {
   fixedScaleNonlinearityC,
   hardwareCompensationMillivolts,
   hardwareCompensationResidual,
-  isHotjunctionError,
   legSeebeckVsContact,
   longTermDriftPpm,
   loopResistanceOhms,
@@ -34,20 +33,10 @@ import {
   wireEmfMillivolts,
 } from "../../src/index.js";
 import { emfFromTemperatureDecimal } from "../../src/exact.js";
-
-function thrown(call: () => unknown): unknown {
-  try {
-    call();
-  } catch (e) {
-    return e;
-  }
-  return undefined;
-}
+import { typedErrorOf } from "../_typedError.js";
 
 function expectTyped(call: () => unknown, pattern: RegExp): void {
-  const e = thrown(call);
-  expect(isHotjunctionError(e), String(e)).toBe(true);
-  expect((e as Error).message).toMatch(pattern);
+  expect(typedErrorOf(call).message).toMatch(pattern);
 }
 
 describe("element functions refuse forged arguments", () => {
@@ -81,44 +70,38 @@ describe("element functions refuse forged arguments", () => {
   });
 });
 
-function fields(call: () => unknown): { code: string; quantity: string; value: unknown; message: string } {
-  const e = thrown(call);
-  expect(isHotjunctionError(e), String(e)).toBe(true);
-  return e as { code: string; quantity: string; value: unknown; message: string };
-}
-
 describe("keys that are not own keys, and missing temperatures (contract: plain TypeError, NaN, or NaN in a message before)", () => {
   const noStringForm = Object.create(null) as never;
   it("legSeebeckVsContact: a type or metal without a string form, or \"__proto__\", is not a choice", () => {
-    expect(fields(() => legSeebeckVsContact(noStringForm, "copper", 25)).code).toBe("INVALID_OPTION");
-    expect(fields(() => legSeebeckVsContact("__proto__" as never, "copper", 25)).quantity).toBe("thermocouple type");
-    expect(fields(() => legSeebeckVsContact("K", "__proto__" as never, 25)).quantity).toBe("contactMetal");
+    expect(typedErrorOf(() => legSeebeckVsContact(noStringForm, "copper", 25)).code).toBe("INVALID_OPTION");
+    expect(typedErrorOf(() => legSeebeckVsContact("__proto__" as never, "copper", 25)).quantity).toBe("thermocouple type");
+    expect(typedErrorOf(() => legSeebeckVsContact("K", "__proto__" as never, 25)).quantity).toBe("contactMetal");
   });
 
   it("a class or grade without a string form is named in the error, not converted", () => {
-    expect(fields(() => toleranceRange("K", { standard: "IEC 60584-1", class: noStringForm })).quantity).toBe("IEC 60584-1 class");
-    expect(fields(() => thermocoupleToleranceC("K", { standard: "ASTM E230", grade: noStringForm }, 100)).quantity).toBe("ASTM E230 grade");
+    expect(typedErrorOf(() => toleranceRange("K", { standard: "IEC 60584-1", class: noStringForm })).quantity).toBe("IEC 60584-1 class");
+    expect(typedErrorOf(() => thermocoupleToleranceC("K", { standard: "ASTM E230", grade: noStringForm }, 100)).quantity).toBe("ASTM E230 grade");
   });
 
   it("thermocoupleEmfMillivolts, wireEmfMillivolts, emfFromTemperatureDecimal: a missing temperature is named as given", () => {
-    const hot = fields(() => thermocoupleEmfMillivolts("K", undefined as never, 25));
+    const hot = typedErrorOf(() => thermocoupleEmfMillivolts("K", undefined as never, 25));
     expect([hot.quantity, hot.value]).toEqual(["hot-junction temperature", undefined]);
     expect(hot.message).not.toMatch(/NaN/);
-    expect(fields(() => thermocoupleEmfMillivolts("K", noStringForm, 25)).quantity).toBe("hot-junction temperature");
-    expect(fields(() => thermocoupleEmfMillivolts("K", 500, 25, null as never)).quantity).toBe("deviation (deviationC)");
+    expect(typedErrorOf(() => thermocoupleEmfMillivolts("K", noStringForm, 25)).quantity).toBe("hot-junction temperature");
+    expect(typedErrorOf(() => thermocoupleEmfMillivolts("K", 500, 25, null as never)).quantity).toBe("deviation (deviationC)");
     // NIST SRD 60, type K: E(500 °C) = 20.644 mV, E(25 °C) = 1.000 mV (unchanged for valid input)
     expect(thermocoupleEmfMillivolts("K", 500, 25)).toBeCloseTo(19.644, 3);
     const block = { kind: "connector", arrangement: "terminates", contactMetal: "copper", temperatureC: { minC: 35, maxC: 35 } } as const;
-    expect(fields(() => wireEmfMillivolts({ connectors: [block] }, "K", { minC: 25, maxC: 25 }, undefined as never, 25)).quantity).toBe("hot-junction temperature");
-    expect(fields(() => wireEmfMillivolts({ connectors: [block] }, "K", { minC: 25, maxC: 25 }, 500, noStringForm)).quantity).toBe("cold-junction temperature");
-    const d = fields(() => emfFromTemperatureDecimal("K", undefined as never));
+    expect(typedErrorOf(() => wireEmfMillivolts({ connectors: [block] }, "K", { minC: 25, maxC: 25 }, undefined as never, 25)).quantity).toBe("hot-junction temperature");
+    expect(typedErrorOf(() => wireEmfMillivolts({ connectors: [block] }, "K", { minC: 25, maxC: 25 }, 500, noStringForm)).quantity).toBe("cold-junction temperature");
+    const d = typedErrorOf(() => emfFromTemperatureDecimal("K", undefined as never));
     expect([d.quantity, d.value]).toEqual(["temperature", undefined]);
-    expect(fields(() => emfFromTemperatureDecimal("K", "hot")).value).toBe("hot");
+    expect(typedErrorOf(() => emfFromTemperatureDecimal("K", "hot")).value).toBe("hot");
   });
 
   it("a hole in a divider's resistor list is named (it summed to NaN)", () => {
     // eslint-disable-next-line no-sparse-arrays
-    expect(fields(() => dividerTapRatio({ resistorsOhms: [1, , 3] as never }, 0)).quantity).toBe("resistorsOhms[1]");
+    expect(typedErrorOf(() => dividerTapRatio({ resistorsOhms: [1, , 3] as never }, 0)).quantity).toBe("resistorsOhms[1]");
     const chain = {
       thermocouple: { kind: "thermocouple", type: "K", tolerance: { standard: "IEC 60584-1", class: 1 } },
       amplifier: { kind: "fixedScaleAmplifier", type: "K", millivoltsPerC: 5 },
@@ -128,13 +111,13 @@ describe("keys that are not own keys, and missing temperatures (contract: plain 
       detector: { kind: "comparator" },
       ambient: { minC: 25, maxC: 25 },
     } as never;
-    expect(fields(() => nominalTripTemperature(chain, 0)).quantity).toBe("resistorsOhms[1]");
+    expect(typedErrorOf(() => nominalTripTemperature(chain, 0)).quantity).toBe("resistorsOhms[1]");
   });
 });
 
 describe("finite figures whose result leaves float64 are OVERFLOW (contract: returned ±Infinity before)", () => {
   const over = (call: () => unknown): string => {
-    const e = fields(call);
+    const e = typedErrorOf(call);
     expect(e.code).toBe("OVERFLOW");
     return e.quantity;
   };
@@ -157,7 +140,7 @@ describe("finite figures whose result leaves float64 are OVERFLOW (contract: ret
     const cj = { kind: "coldJunction", method: "hardware", compensationMicrovoltsPerC: 40.6 } as const;
     expect(over(() => hardwareCompensationMillivolts(cj, "K", 1e308))).toBe("cold-junction temperature");
     expect(over(() => hardwareCompensationResidual({ ...cj, compensationMicrovoltsPerC: 1e308 }, "K", { minC: 0, maxC: 50 }))).toBe("compensationMicrovoltsPerC");
-    const wide = fields(() => hardwareCompensationResidual(cj, "K", { minC: 0, maxC: 1e308 }));
+    const wide = typedErrorOf(() => hardwareCompensationResidual(cj, "K", { minC: 0, maxC: 1e308 }));
     expect([wide.code, wide.quantity]).toEqual(["OUT_OF_RANGE", "ambient maxC"]);
     expect(wide.message).not.toMatch(/NaN/);
     const amp = { kind: "fixedScaleAmplifier", type: "K", millivoltsPerC: 5, trimmedMicrovoltsPerC: 1e-320 } as const;

@@ -13,24 +13,9 @@ import type { TripReport } from "../../report/reportTypes.js";
 import type { ReportTemperatureUnit } from "../../report/displayUnit.js";
 import { designTrip } from "../../trip/designTrip.js";
 import type { CliIo } from "../io.js";
-import {
-  _addAnalysisOptions,
-  _addDisplayUnitOption,
-  _addReportOnlyOption,
-  _analysisSettings,
-  _loadDesign,
-  _methodInfo,
-  type AnalysisOptionValues,
-  type AnalysisSettings,
-} from "../designOptions.js";
+import { _addAnalysisOptions, _addDisplayUnitOption, _addReportOnlyOption, _analysisSettings, _loadDesign, _methodInfo, type AnalysisOptionValues, type AnalysisSettings } from "../designOptions.js";
 import { CliError, marginFailExitCode } from "../cliError.js";
-import {
-  _addOutputOptions,
-  _chosenFormat,
-  _emitOutputs,
-  _planCommandOutputs,
-  type OutputOptionValues,
-} from "../outputOptions.js";
+import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _startProgress } from "../progress.js";
 import type { CommandContext } from "../commandContext.js";
 import { _adcBuildSheet, _withAdcFullScale } from "../../designAnalysis/adcBuildSheet.js";

@@ -12,13 +12,7 @@ import {
   type ReferenceTable,
 } from "../../its90/referenceTable.js";
 import { thermocoupleTypes } from "../../its90/resolveType.js";
-import {
-  _addOutputOptions,
-  _chosenFormat,
-  _emitOutputs,
-  _planCommandOutputs,
-  type OutputOptionValues,
-} from "../outputOptions.js";
+import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _integerParser, _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
 import type { CommandContext } from "../commandContext.js";
 

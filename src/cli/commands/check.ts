@@ -101,6 +101,7 @@ function limitOf(value: number | undefined, name: string, setpoint: string): num
 
 /** Registers the `check` command. @internal */
 export function registerCheckCommand(program: Command, context: CommandContext): Command {
+  // Deliberately alike: sweep (and every design command) starts its registration the same way, each with its own options.
   const command = program
     .command("check")
     .description("design the trip thresholds of a design file and report trip bands and margins")

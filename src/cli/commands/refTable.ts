@@ -40,6 +40,7 @@ export function _formatReferenceTableText(table: ReferenceTable): string {
 
 /** Registers the `ref-table` command. @internal */
 export function registerRefTableCommand(program: Command, context: CommandContext): Command {
+  // Deliberately alike: emf and temp start their registration the same way, each with its own arguments.
   const command = program
     .command("ref-table")
     .description("reference table E(t) of a type, EMF rounded to 0.001 mV in decimal arithmetic")

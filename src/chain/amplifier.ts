@@ -5,15 +5,7 @@
  * @module
  */
 import { _invalidChoice, _requireFiniteResult } from "../errors.js";
-import {
-  _ambientFromReferenceC,
-  _optionalLimit,
-  _requireFraction,
-  _requireObject,
-  _requirePositive,
-  _source,
-  type _SourceContext,
-} from "./_common.js";
+import { _ambientFromReferenceC, _optionalLimit, _requireFraction, _requireObject, _requirePositive, _source, type _SourceContext } from "./_common.js";
 import type { AmbientRange, AmplifierElement, ChainErrorSource, FixedGain, ResistorGain } from "./types.js";
 
 /**

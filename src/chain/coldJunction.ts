@@ -217,6 +217,7 @@ export function _coldJunctionStage(
   // Same prologue as every element's stage builder (deliberate: object and kind checked, each its own element).
   const o = _requireObject(element, "coldJunction", context);
   if (o["kind"] !== "coldJunction") return _invalidChoice("coldJunction kind", o["kind"], ["coldJunction"], context);
+  // Same shape as the fixed-scale amplifier's accuracy/gradient sources (deliberate: each element names its own sources).
   const sources: ChainErrorSource[] = [];
   if (o["method"] === "software") {
     const sensor = _requireNonNegative(o["sensorAccuracyC"], "sensorAccuracyC", "°C", context);

@@ -6,16 +6,7 @@
  */
 import { _requireFinite, _requireFiniteResult, HotjunctionRangeError } from "../errors.js";
 import type { Distribution, Model } from "../uncertainty/types.js";
-import {
-  _ambientFromReferenceC,
-  _checkAmbient,
-  _optionalLimit,
-  _requireFraction,
-  _requireObject,
-  _requirePositive,
-  _source,
-  type _SourceContext,
-} from "./_common.js";
+import { _ambientFromReferenceC, _checkAmbient, _optionalLimit, _requireFraction, _requireObject, _requirePositive, _source, type _SourceContext } from "./_common.js";
 import type { AmbientRange, ChainErrorSource, DividerElement, SourceDistributionOverride } from "./types.js";
 
 function checkResistors(value: unknown, context: string): readonly number[] {

@@ -25,40 +25,32 @@ function describe(tolerance: ThermocoupleTolerance): string {
   return "custom tolerance";
 }
 
+/** A standard's bands for the type, or the error naming the class or grade the standard does not define for it. */
+function definedBands(
+  bands: readonly ToleranceBand[] | undefined,
+  quantity: string,
+  value: number | string,
+  problem: string,
+  context: string,
+): readonly ToleranceBand[] {
+  if (bands === undefined) throw new HotjunctionRangeError({ code: "INVALID_OPTION", quantity, value, context, problem });
+  return bands;
+}
+
 function bandsOf(type: ThermocoupleType, tolerance: ThermocoupleTolerance, context: string): readonly ToleranceBand[] {
   const t = _requireObject(tolerance, "tolerance", context);
   switch (t["standard"]) {
     case "IEC 60584-1": {
       const cls = t["class"];
       if (cls !== 1 && cls !== 2 && cls !== 3) return _invalidChoice("IEC 60584-1 class", cls, ["1", "2", "3"], context);
-      const bands = iecToleranceClasses.grades[cls][type];
-      if (bands === undefined) {
-        throw new HotjunctionRangeError({
-          code: "INVALID_OPTION",
-          quantity: "IEC 60584-1 class",
-          value: cls,
-          context,
-          problem: `is not defined for type ${type} by ${iecToleranceClasses.source}`,
-        });
-      }
-      return bands;
+      return definedBands(iecToleranceClasses.grades[cls][type], "IEC 60584-1 class", cls, `is not defined for type ${type} by ${iecToleranceClasses.source}`, context);
     }
     case "ASTM E230": {
       const grade = t["grade"];
       if (grade !== "standard" && grade !== "special") {
         return _invalidChoice("ASTM E230 grade", grade, ["standard", "special"], context);
       }
-      const bands = astmE230Tolerances.grades[grade][type];
-      if (bands === undefined) {
-        throw new HotjunctionRangeError({
-          code: "INVALID_OPTION",
-          quantity: "ASTM E230 grade",
-          value: grade,
-          context,
-          problem: `is not defined for type ${type}`,
-        });
-      }
-      return bands;
+      return definedBands(astmE230Tolerances.grades[grade][type], "ASTM E230 grade", grade, `is not defined for type ${type}`, context);
     }
     case "custom": {
       const range = thermocoupleData(type);

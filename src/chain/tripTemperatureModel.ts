@@ -180,6 +180,7 @@ export function nominalTripTemperature(chain: MeasurementChain, tapIndex: number
  * console.log(w.interval.map((t) => t.toFixed(1))); // [ '47.5', '51.4' ]
  * ```
  */
+// Same deliberate prologue as requiredThresholdVolts below (see the note there).
 export function tripTemperatureModel(
   chain: MeasurementChain,
   tapIndex: number,

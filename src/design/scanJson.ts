@@ -136,6 +136,24 @@ export function _scanJson(text: string, options: ScanJsonOptions): JsonScanProbl
     unexpected("a value");
   };
 
+  // One member of an object (after its key) or of an array, then "," (false: another member follows) or the
+  // closing bracket (true: the container ends).
+  const scanMember = (at: string | number, depth: number, close: "}" | "]"): boolean => {
+    path.push(at);
+    scanValue(depth);
+    path.pop();
+    skipBlanks();
+    if (text[index] === ",") {
+      index++;
+      return false;
+    }
+    if (text[index] === close) {
+      index++;
+      return true;
+    }
+    return unexpected(`"," or "${close}"`);
+  };
+
   const scanObject = (depth: number): void => {
     index++; // {
     const seen = new Set<string>();
@@ -155,19 +173,7 @@ export function _scanJson(text: string, options: ScanJsonOptions): JsonScanProbl
       skipBlanks();
       if (text[index] !== ":") unexpected('":" after a key');
       index++;
-      path.push(key);
-      scanValue(depth);
-      path.pop();
-      skipBlanks();
-      if (text[index] === ",") {
-        index++;
-        continue;
-      }
-      if (text[index] === "}") {
-        index++;
-        return;
-      }
-      unexpected('"," or "}"');
+      if (scanMember(key, depth, "}")) return;
     }
   };
 
@@ -179,19 +185,7 @@ export function _scanJson(text: string, options: ScanJsonOptions): JsonScanProbl
       return;
     }
     for (let i = 0; ; i++) {
-      path.push(i);
-      scanValue(depth);
-      path.pop();
-      skipBlanks();
-      if (text[index] === ",") {
-        index++;
-        continue;
-      }
-      if (text[index] === "]") {
-        index++;
-        return;
-      }
-      unexpected('"," or "]"');
+      if (scanMember(i, depth, "]")) return;
     }
   };
 

@@ -125,6 +125,8 @@ export function reviewFaults(chain: MeasurementChain, trip: FaultReviewTrip, opt
 
   const bandC = set.band ?? { lowC: healthyTripC, highC: healthyTripC };
   const limits = { healthyTripC, maxNormalC: set.maxNormal, hazardC: hazard, noChangeC: set.noChange, bandC, noEffectC: set.noEffect, fromC, toC };
+  // Alike in shape only (deliberately): trip/compareReferences.ts builds its setpoint rows the same way (derived
+  // values, then a row literal); the rows and what derives them differ.
   const rows: FaultReviewRow[] = faults.map((fault) => {
     const results = _resolveFault(fault, resolveFacts).map((alt) => runAlternative(fault, alt));
     const c = _classifyFault(results, limits);

@@ -84,6 +84,8 @@ interface Request {
 
 /** Checks the options and fills in the defaults. */
 function checkRequest(options: BuildFirmwareTableOptions): Request {
+  // Same error shape as other object checks (deliberate: errors.ts `_requireOptionsObject` would also refuse an
+  // array here, which today reaches the type check below with its own message).
   if (typeof options !== "object" || options === null) {
     throw new HotjunctionTypeError({
       code: "INVALID_OPTION",

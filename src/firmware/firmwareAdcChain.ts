@@ -50,8 +50,16 @@ export interface _CheckedAdcChain {
   readonly maxCode: number;
 }
 
+/** A chain figure that must be finite and positive (gain, full-scale voltage), with the chain's own message. */
+function requirePositiveFigure(value: unknown, quantity: string, unit: string, context: string): number {
+  const x = _requireFinite(value, quantity, unit, context);
+  if (x <= 0) throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity, value: x, unit, context, problem: "is not positive" });
+  return x;
+}
+
 /** Validates a chain object. @internal */
 export function _checkAdcChain(chain: unknown, context: string): _CheckedAdcChain {
+  // Same error shape as other object checks (deliberate: this one names the ADC chain and its fields).
   if (typeof chain !== "object" || chain === null) {
     throw new HotjunctionTypeError({
       code: "INVALID_OPTION",
@@ -62,28 +70,8 @@ export function _checkAdcChain(chain: unknown, context: string): _CheckedAdcChai
     });
   }
   const c = chain as Record<string, unknown>;
-  const gain = _requireFinite(c["gain"], "ADC chain gain", "V/V", context);
-  if (gain <= 0) {
-    throw new HotjunctionRangeError({
-      code: "OUT_OF_RANGE",
-      quantity: "ADC chain gain",
-      value: gain,
-      unit: "V/V",
-      context,
-      problem: "is not positive",
-    });
-  }
-  const fullScaleVolts = _requireFinite(fullScaleOf(c, context), "ADC full-scale voltage", "V", context);
-  if (fullScaleVolts <= 0) {
-    throw new HotjunctionRangeError({
-      code: "OUT_OF_RANGE",
-      quantity: "ADC full-scale voltage",
-      value: fullScaleVolts,
-      unit: "V",
-      context,
-      problem: "is not positive",
-    });
-  }
+  const gain = requirePositiveFigure(c["gain"], "ADC chain gain", "V/V", context);
+  const fullScaleVolts = requirePositiveFigure(fullScaleOf(c, context), "ADC full-scale voltage", "V", context);
   const bits = _requireAdcBits(c["bits"], context, "ADC resolution");
   const offsetMillivolts =
     c["offsetMillivolts"] === undefined ? 0 : _requireFinite(c["offsetMillivolts"], "ADC offset", "mV", context);

@@ -34,6 +34,8 @@ export interface TripReportSetpoint {
   readonly nominalTripC: number;
   /** Bands by method, in the order shown. */
   readonly bands: readonly TripBand[];
+  // Deliberately alike: trip/types.ts SetpointTripResult carries the same limit, margin and verdict fields; the
+  // report is JSON with its own schema (report/_reportSchema.ts), so its fields are written out here.
   readonly maxNormalOperatingC: number;
   readonly hazardLimitC: number;
   readonly marginToNormalC: number;

@@ -51,6 +51,7 @@ export function _patternDefs(): string {
 /** Fill of each method's band. @internal */
 export const _methodFill = { "worst-case": "#9a9a9a", rss: "url(#hj-hatch)", "monte-carlo": "url(#hj-dots)" } as const;
 
+// Deliberately alike: _leftAxis below is the same axis stood upright (its own coordinates, tick side, turned title).
 /** A horizontal axis at `y` with ticks, tick labels and a title. @internal */
 export function _bottomAxis(scale: ScaleLinear<number, number>, y: number, title: string, tickCount = 8): string {
   const [x0, x1] = scale.range() as [number, number];
@@ -71,6 +72,7 @@ export function _bottomAxis(scale: ScaleLinear<number, number>, y: number, title
   );
 }
 
+// Deliberately alike: _bottomAxis above is the same axis lying down (its own coordinates and tick side).
 /** A vertical axis at `x` with ticks, tick labels and a title. @internal */
 export function _leftAxis(scale: ScaleLinear<number, number>, x: number, title: string, tickCount = 6): string {
   const [y0, y1] = scale.range() as [number, number];

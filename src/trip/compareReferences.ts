@@ -114,6 +114,7 @@ export function compareReferences(
     } else {
       onProgress?.((2 * k + 2) / runs);
     }
+    // Alike in shape only (deliberately): faults/reviewFaults.ts builds its fault rows the same way; the rows differ.
     const setpoints = withOption.setpoints.map((sp, i) => {
       const b = acceptedBand(withOption, i);
       const yardstick = acceptedBand(ideal, i);

@@ -259,6 +259,8 @@ export interface SetpointTripResult {
   readonly worstCase: TripBand;
   readonly rss: TripBand;
   readonly monteCarlo: TripBand;
+  // Deliberately alike: report/reportTypes.ts TripReportSetpoint writes these limit, margin and verdict fields
+  // out again for the report's JSON (its own schema).
   /** Process limits used. */
   readonly maxNormalOperatingC: number;
   readonly hazardLimitC: number;

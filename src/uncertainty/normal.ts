@@ -3,6 +3,9 @@ import { _requireNonNegative, _requireOneOf, _requireOptionsObject, _requirePosi
 import { _makeDistribution } from "./_distribution.js";
 import type { InputDistribution } from "./types.js";
 
+// Deliberately alike: every distribution module (arcsine, normal, rectangular, trapezoidal, triangular) has the
+// same layout, its own documented options and entry over the shared checks (_checks.ts) and builder
+// (_makeDistribution), so each public type and its JCGM reference read alone in the docs.
 /**
  * Options of {@link normalDistribution}: either a standard deviation, or an expanded uncertainty with its coverage factor.
  */

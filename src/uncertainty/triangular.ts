@@ -3,6 +3,9 @@ import { _requireNonNegative, _requireOptionsObject } from "./_checks.js";
 import { _makeDistribution } from "./_distribution.js";
 import type { Distribution } from "./types.js";
 
+// Deliberately alike: every distribution module (arcsine, normal, rectangular, trapezoidal, triangular) has the
+// same layout, its own documented options and entry over the shared checks (_checks.ts) and builder
+// (_makeDistribution), so each public type and its JCGM reference read alone in the docs.
 /** Options of {@link triangular}. */
 export interface TriangularOptions {
   /** Center of the interval, in the input's unit (finite). */

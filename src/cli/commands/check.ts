@@ -14,24 +14,9 @@ import type { ReportTemperatureUnit } from "../../report/displayUnit.js";
 import { designTrip, type DesignTripOptions } from "../../trip/designTrip.js";
 import { designTripParallel } from "../../trip/designTripParallel.js";
 import type { CliIo } from "../io.js";
-import {
-  _addAnalysisOptions,
-  _addDisplayUnitOption,
-  _addReportOnlyOption,
-  _analysisSettings,
-  _loadDesign,
-  _methodInfo,
-  type AnalysisOptionValues,
-  type AnalysisSettings,
-} from "../designOptions.js";
+import { _addAnalysisOptions, _addDisplayUnitOption, _addReportOnlyOption, _analysisSettings, _loadDesign, _methodInfo, type AnalysisOptionValues, type AnalysisSettings } from "../designOptions.js";
 import { CliError, marginFailExitCode } from "../cliError.js";
-import {
-  _addOutputOptions,
-  _chosenFormat,
-  _emitOutputs,
-  _planCommandOutputs,
-  type OutputOptionValues,
-} from "../outputOptions.js";
+import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _startProgress } from "../progress.js";
 import { _integerParser } from "../parseArgs.js";
 import type { CommandContext } from "../commandContext.js";
@@ -138,6 +123,7 @@ function limitOf(value: number | undefined, name: string, setpoint: string): num
 
 /** Registers the `check` command. @internal */
 export function registerCheckCommand(program: Command, context: CommandContext): Command {
+  // Deliberately alike: sweep (and every design command) starts its registration the same way, each with its own options.
   const command = program
     .command("check")
     .description("design the trip thresholds of a design file and report trip bands and margins")

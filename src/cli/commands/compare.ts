@@ -10,23 +10,8 @@ import type { ReportTemperatureUnit } from "../../report/displayUnit.js";
 import { compareReferences } from "../../trip/compareReferences.js";
 import { _startProgress } from "../progress.js";
 import { CliError, marginFailExitCode } from "../cliError.js";
-import {
-  _addAnalysisOptions,
-  _addDisplayUnitOption,
-  _addReportOnlyOption,
-  _analysisSettings,
-  _loadDesign,
-  _methodInfo,
-  _setpointLimitsOfDesign,
-  type AnalysisOptionValues,
-} from "../designOptions.js";
-import {
-  _addOutputOptions,
-  _chosenFormat,
-  _emitOutputs,
-  _planCommandOutputs,
-  type OutputOptionValues,
-} from "../outputOptions.js";
+import { _addAnalysisOptions, _addDisplayUnitOption, _addReportOnlyOption, _analysisSettings, _loadDesign, _methodInfo, _setpointLimitsOfDesign, type AnalysisOptionValues } from "../designOptions.js";
+import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import type { CommandContext } from "../commandContext.js";
 import type { CliIo } from "../io.js";
 import type { AnalysisSettings } from "../designOptions.js";

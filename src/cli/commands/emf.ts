@@ -5,21 +5,16 @@
 import { Option, type Command } from "commander";
 import { thermocoupleTypes } from "../../its90/resolveType.js";
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
-import { _addOutputOptions, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _integerParser, _parseNumber } from "../parseArgs.js";
 import type { CommandContext } from "../commandContext.js";
-import { emfUnits, temperatureUnits, type EmfUnit, type TemperatureUnit } from "../temperatureUnits.js";
+import { emfUnits, temperatureUnits } from "../temperatureUnits.js";
 import { _emfText } from "../conversionText.js";
-
-interface EmfOptions extends OutputOptionValues {
-  readonly unit: TemperatureUnit;
-  readonly emfUnit: EmfUnit;
-  readonly coldJunction?: number;
-  readonly decimals?: number;
-}
+import { _addConversionOutput } from "../conversionCommand.js";
 
 /** Registers the `emf` command. @internal */
 export function registerEmfCommand(program: Command, context: CommandContext): Command {
+  // Deliberately alike: temp.ts registers the same flags for the other direction and ref-table starts the same
+  // way; each command declares its own arguments, order and help.
   const command = program
     .command("emf")
     .description("thermocouple EMF at a hot-junction temperature (ITS-90 reference function)")
@@ -33,11 +28,5 @@ export function registerEmfCommand(program: Command, context: CommandContext): C
       "after",
       "\nExamples:\n  hotjunction emf K 500\n  hotjunction emf N 1250 --cold-junction 30\n  hotjunction emf J 212 --unit F --json\n",
     );
-  _addOutputOptions(command, ["json"]);
-  command.action(async (type: ThermocoupleType, temperature: number, options: EmfOptions) => {
-    const plan = _planCommandOutputs(context.io, options, []);
-    const text = _emfText(type, temperature, options);
-    _emitOutputs(context.io, plan, options, text);
-  });
-  return command;
+  return _addConversionOutput(command, context, _emfText);
 }

@@ -12,13 +12,7 @@ import {
   type ReferenceTable,
 } from "../../its90/referenceTable.js";
 import { thermocoupleTypes } from "../../its90/resolveType.js";
-import {
-  _addOutputOptions,
-  _chosenFormat,
-  _emitOutputs,
-  _planCommandOutputs,
-  type OutputOptionValues,
-} from "../outputOptions.js";
+import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _integerParser, _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
 import type { CommandContext } from "../commandContext.js";
 
@@ -46,6 +40,7 @@ export function _formatReferenceTableText(table: ReferenceTable): string {
 
 /** Registers the `ref-table` command. @internal */
 export function registerRefTableCommand(program: Command, context: CommandContext): Command {
+  // Deliberately alike: emf and temp start their registration the same way, each with its own arguments.
   const command = program
     .command("ref-table")
     .description("reference table E(t) of a type, EMF rounded to 0.001 mV in decimal arithmetic")

@@ -6,21 +6,16 @@
 import { Option, type Command } from "commander";
 import { thermocoupleTypes } from "../../its90/resolveType.js";
 import type { ThermocoupleType } from "../../data/thermocoupleData.js";
-import { _addOutputOptions, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _integerParser, _parseNumber } from "../parseArgs.js";
 import type { CommandContext } from "../commandContext.js";
-import { emfUnits, temperatureUnits, type EmfUnit, type TemperatureUnit } from "../temperatureUnits.js";
+import { emfUnits, temperatureUnits } from "../temperatureUnits.js";
 import { _tempText } from "../conversionText.js";
-
-interface TempOptions extends OutputOptionValues {
-  readonly unit: TemperatureUnit;
-  readonly emfUnit: EmfUnit;
-  readonly coldJunction?: number;
-  readonly decimals?: number;
-}
+import { _addConversionOutput } from "../conversionCommand.js";
 
 /** Registers the `temp` command. @internal */
 export function registerTempCommand(program: Command, context: CommandContext): Command {
+  // Deliberately alike: emf.ts registers the same flags for the other direction and ref-table starts the same
+  // way; each command declares its own arguments, order and help.
   const command = program
     .command("temp")
     .description("hot-junction temperature from a measured EMF (exact ITS-90 inverse, cold junction compensated)")
@@ -34,11 +29,5 @@ export function registerTempCommand(program: Command, context: CommandContext): 
       "after",
       "\nExamples:\n  hotjunction temp K 19.644 --cold-junction 25\n  hotjunction temp N 41500 --emf-unit uV --json\n",
     );
-  _addOutputOptions(command, ["json"]);
-  command.action(async (type: ThermocoupleType, emf: number, options: TempOptions) => {
-    const plan = _planCommandOutputs(context.io, options, []);
-    const text = _tempText(type, emf, options);
-    _emitOutputs(context.io, plan, options, text);
-  });
-  return command;
+  return _addConversionOutput(command, context, _tempText);
 }

@@ -3,8 +3,11 @@
 import fc from "fast-check";
 import type { MeasurementChain } from "../../src/chain/types.js";
 
-/** A generated ADC chain (type, tolerance, front end, compensation, reference or fixed full scale, ADC, ambient) and a hot-junction temperature. */
-export const adcChainArb = fc
+/**
+ * A generated ADC chain (type, tolerance, front end, compensation, reference or fixed full scale, ADC, ambient) and a
+ * hot-junction temperature, with its place between −20 °C and the type's top drawn from `hotFraction`.
+ */
+export const adcChainArbOver = (hotFraction: fc.Arbitrary<number>) => fc
   .record({
     type: fc.constantFrom("K", "N", "J", "E", "T", "R", "S"),
     // 0 or at least 0.01 °C: a subnormal tolerance widens the hot junction by ulps and its gap to ~2e-9 °C (see DEVELOPERS.md).
@@ -28,7 +31,7 @@ export const adcChainArb = fc
     inlLsb: fc.double({ min: 0, max: 2, noNaN: true }),
     ambientLow: fc.double({ min: -10, max: 30, noNaN: true }),
     ambientSpan: fc.double({ min: 0, max: 40, noNaN: true }),
-    hotFraction: fc.double({ min: 0, max: 1, noNaN: true }),
+    hotFraction,
   })
   .map((p): { chain: MeasurementChain; hotJunctionC: number } => {
     const ambient = { minC: p.ambientLow, maxC: p.ambientLow + p.ambientSpan };
@@ -72,15 +75,21 @@ export const adcChainArb = fc
     return { chain: chain as unknown as MeasurementChain, hotJunctionC };
   });
 
+/** ADC chains anywhere from −20 °C to the type's top. */
+export const adcChainArb = adcChainArbOver(fc.double({ min: 0, max: 1, noNaN: true }));
+
+/** ADC chains in the top 2 % of their range (type N and K at 882 … 900 °C, where Ê's bound is largest). */
+export const adcChainNearTopArb = adcChainArbOver(fc.double({ min: 0.98, max: 1, noNaN: true }));
+
 /**
  * A generated wire for an ADC chain (invented demo values): an extension cable (ASTM E230 standard limits, envelope or
  * proportional, probe head up to 60 °C above the terminals), a terminating copper connector above the cold junction
  * or at its own temperature, an inline connector, a loop with bias and detection currents, leakage and ageing, each
  * present or not. Software compensation's terminal gradient is dropped when a terminating connector states it.
  */
-export const adcWireChainArb = fc
+export const adcWireChainArbOver = (base: typeof adcChainArb) => fc
   .record({
-    base: adcChainArb,
+    base,
     cable: fc.constantFrom("none", "envelope", "proportional"),
     headAboveC: fc.double({ min: 0, max: 60, noNaN: true }),
     headSpanC: fc.double({ min: 0, max: 40, noNaN: true }),
@@ -146,3 +155,9 @@ export const adcWireChainArb = fc
     chain["wire"] = wire;
     return { chain: chain as unknown as MeasurementChain, hotJunctionC: p.base.hotJunctionC };
   });
+
+/** ADC chains with a wire, anywhere in their range. */
+export const adcWireChainArb = adcWireChainArbOver(adcChainArb);
+
+/** ADC chains with a wire in the top 2 % of their range. */
+export const adcWireChainNearTopArb = adcWireChainArbOver(adcChainNearTopArb);

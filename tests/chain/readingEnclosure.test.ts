@@ -19,7 +19,7 @@ import { measurementChainFromDesign, parseDesign } from "../../src/design/index.
 import { formatTripReport } from "../../src/report/index.js";
 import { propagate } from "../../src/uncertainty/index.js";
 import { chainArb } from "../trip/_chainArbitrary.js";
-import { adcChainArb, adcWireChainArb } from "./_adcChainArbitrary.js";
+import { adcChainArb, adcChainNearTopArb, adcWireChainArb, adcWireChainNearTopArb } from "./_adcChainArbitrary.js";
 
 const tolerance = 1e-9;
 const examplesDir = join(import.meta.dirname, "../../examples");
@@ -182,6 +182,11 @@ describe("reading bracket of generated chains", () => {
 
   it("ADC chains with a wire (cable, connectors, loop, leakage, ageing): the same bracket, within the stated 1e-9 °C", () => {
     expect(checkGenerated(adcWireChainArb, 60, 37)).toBeGreaterThan(45);
+  });
+
+  it("near the top of each type's range (K and N to 900 °C, R and S to 1600 °C), with and without a wire: within the stated 1e-9 °C", () => {
+    expect(checkGenerated(adcChainNearTopArb, 40, 41)).toBeGreaterThan(30);
+    expect(checkGenerated(adcWireChainNearTopArb, 40, 43)).toBeGreaterThan(30);
   });
 
   it("comparator chains, with and without a wire: the reading at the detector input has its bracket too", () => {

@@ -16,7 +16,7 @@
  */
 import { _emfInSubrange, type CompiledType } from "../its90/compiled.js";
 import { _emfEvaluationBound } from "../its90/curvatureEnclosure.js";
-import { _temperatureFromEmf } from "../its90/engine.js";
+import { _EMF_END_TOLERANCE_MV, _temperatureFromEmf } from "../its90/engine.js";
 import { _addInterval, _down, _hull, _mulInterval, _up, _widen, type _Interval } from "./_intervals.js";
 
 type Box = Readonly<Record<string, readonly [number, number]>>;
@@ -41,6 +41,24 @@ export function _seamsOf(ct: CompiledType): { readonly seams: readonly number[];
   return { seams: ct.subranges.slice(1).map((s) => s.minC), seamStep };
 }
 
+/**
+ * @internal How far the piecewise reference function can step back across the seams inside t, mV: E(t′) ≥
+ * E(t″) − this for t′ ≥ t″ in t where E′ > 0 on each piece (E: each sub-range's polynomial in real arithmetic;
+ * the standard's pieces need not meet at a seam). Σ over seams s in (t₀, t₁] of the lower polynomial's excess
+ * over the upper one at s, from the float values with both evaluation bounds, when positive. A source taken at
+ * an end of its range through E relies on it.
+ */
+export function _backwardSeamStep(ct: CompiledType, t: _Interval): number {
+  let back = 0;
+  for (let j = 1; j < ct.subranges.length; j++) {
+    const s = (ct.subranges[j] as (typeof ct.subranges)[number]).minC;
+    if (!(s > t[0] && s <= t[1])) continue;
+    const step = _emfInSubrange(ct, j - 1, s) - _emfInSubrange(ct, j, s) + _emfEvaluationBound(ct, j - 1, [s, s]) + _emfEvaluationBound(ct, j, [s, s]);
+    back += Math.max(0, step);
+  }
+  return back;
+}
+
 /** @internal The largest a-priori bound of |Ê − E| over the temperature intervals, mV. */
 export function _emfBoundOver(ct: CompiledType, temps: readonly _Interval[]): number {
   let bound = 0;
@@ -56,12 +74,14 @@ export function _emfBoundOver(ct: CompiledType, temps: readonly _Interval[]): nu
 
 /**
  * @internal E⁻¹ at an end of an enclosed argument: any argument the model can evaluate lies in the type's EMF
- * range, and the exact inverse is non-decreasing, so the clamped end bounds every value the model returns.
+ * range widened by the end tolerance the inverse accepts, and the exact inverse is non-decreasing, so the clamped
+ * end bounds every value the model returns.
  */
 export function _enclosedInverse(ct: CompiledType, emf: number): number {
-  const lowest = Math.max(ct.lowestEmf, ct.emfAtMinC);
+  // The model accepts EMFs up to its end tolerance beyond the range (mapped to the end temperature): so does the clamp.
+  const lowest = ct.ambiguity === undefined ? ct.emfAtMinC - _EMF_END_TOLERANCE_MV : Math.max(ct.lowestEmf, ct.emfAtMinC);
   try {
-    return _temperatureFromEmf(ct, Math.min(ct.emfAtMaxC, Math.max(lowest, emf)));
+    return _temperatureFromEmf(ct, Math.min(ct.emfAtMaxC + _EMF_END_TOLERANCE_MV, Math.max(lowest, emf)));
   } catch {
     return emf < 0.5 * (lowest + ct.emfAtMaxC) ? ct.minC : ct.maxC;
   }

@@ -8,7 +8,8 @@
  *   operands and also the float64 result of the same operation on any float64 points of them (rounding to
  *   nearest is monotone). Applied in the order the model computes, the enclosure holds the model as computed.
  * - `_emfOver(ct, t)`: the float64 value Ê(t) = `_emf(ct, t)` for every t in the interval. A point interval
- *   gives Ê(t) itself. Otherwise, per sub-range piece: when the interval enclosure of E′ over the piece is
+ *   gives Ê(t) itself. Otherwise, per sub-range piece (the piece that is only a seam, where Ê takes the upper
+ *   sub-range, left out): when the interval enclosure of E′ over the piece is
  *   positive, [Ê(a) − 2δ, Ê(b) + 2δ] (E increasing; δ the a-priori Horner bound of |Ê − E| over the piece),
  *   else the mean-value form Ê(m) ± 2δ + E′([a, b])·([a, b] − m).
  * - `_seebeckOver(ct, t)`: an enclosure of the real E′(t) over the interval (interval Horner in mean-value
@@ -70,13 +71,18 @@ export function _mag(a: _Interval): number {
   return Math.max(Math.abs(a[0]), Math.abs(a[1]));
 }
 
-/** Calls `f` for each sub-range piece [a′, b′] of t (the sub-range's own polynomial; shared ends in both). */
-function eachPiece(ct: CompiledType, t: _Interval, f: (index: number, piece: _Interval) => void): void {
+/**
+ * Calls `f` for each sub-range piece [a′, b′] of t (the sub-range's own polynomial; shared ends in both). With
+ * `asEvaluated`, a piece that is only the shared end of a sub-range with the next one is left out: Ê takes the
+ * upper sub-range there (`_subrangeIndex`), so the lower polynomial's value at the seam is no value of Ê.
+ */
+function eachPiece(ct: CompiledType, t: _Interval, f: (index: number, piece: _Interval) => void, asEvaluated = false): void {
   const subs = ct.subranges;
   for (let i = 0; i < subs.length; i++) {
     const s = subs[i] as CompiledType["subranges"][number];
     const lo = Math.max(t[0], s.minC);
     const hi = Math.min(t[1], s.maxC);
+    if (asEvaluated && lo === hi && lo === s.maxC && subs[i + 1]?.minC === s.maxC) continue;
     if (lo <= hi) f(i, [lo, hi]);
   }
 }
@@ -100,7 +106,7 @@ export function _emfOver(ct: CompiledType, t: _Interval): _Interval {
       r = addOutward([_down(em - d), _up(em + d)], _mulInterval(slope, [_down(piece[0] - m), _up(piece[1] - m)]));
     }
     out = out === undefined ? r : _hull(out, r);
-  });
+  }, true);
   return out ?? [Number.NEGATIVE_INFINITY, Number.POSITIVE_INFINITY];
 }
 

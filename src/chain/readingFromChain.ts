@@ -110,8 +110,10 @@ export function _readingModel(cc: _CompiledChain, hotJunctionC: number): ChainMo
   const inputs: Record<string, Distribution> = {};
   for (const s of sources) inputs[s.name] = s.distribution;
   const model = (x: Readonly<Record<string, number>>): number => _indicatedC(cc, hotJunctionC, x);
-  const enclosure = _readingEnclosure(cc, hotJunctionC);
-  return { model, inputs, sources, nominalC: model(_meansRecord(sources)), ...(enclosure !== undefined ? { enclosure } : {}) };
+  // A source the enclosure does not account for (a new element) leaves the model without one.
+  const { enclosure, accountsFor } = _readingEnclosure(cc, hotJunctionC);
+  const complete = sources.every((s) => accountsFor.has(s.name));
+  return { model, inputs, sources, nominalC: model(_meansRecord(sources)), ...(complete ? { enclosure } : {}) };
 }
 
 /**

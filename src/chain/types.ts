@@ -495,7 +495,7 @@ export interface ChainModel {
   /** The model's output with every input at its mean, °C. */
   readonly nominalC: number;
   /**
-   * Comparator trip models, and reading models of chains without a wire: an interval enclosure of the model over a
+   * Comparator trip models and reading models (with or without a wire): an interval enclosure of the model over a
    * box of its inputs ([low, high] by source name → [low, high] °C), for worst case's `modelEnclosure`.
    */
   readonly enclosure?: (box: Readonly<Record<string, readonly [number, number]>>) => readonly [number, number];
@@ -527,7 +527,7 @@ export interface ChainBound {
   /** How the result was found. */
   readonly note: string;
   /**
-   * Worst case of a model with an interval enclosure (reading models of chains without a wire), the bracket:
+   * Worst case of a model with an interval enclosure (reading models, with or without a wire), the bracket:
    * `lowC`/`highC` are the attained extremes (the model reaches them at points of the source box),
    * `enclosureLowC`/`enclosureHighC` a proven enclosure of the model over the whole box (outward-rounded interval
    * arithmetic, a monotonicity proof per source and subdivision of the cold-junction temperature), °C, and the gaps

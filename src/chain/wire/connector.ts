@@ -122,6 +122,11 @@ export function isothermalGradientAsConnector(gradientC: number): ConnectorEleme
 export interface _ConnectorStage {
   readonly sources: readonly WireErrorSource[];
   readonly arrangement: "terminates" | "inline";
+  /**
+   * Terminating connectors: the temperature's range, °C (absolute, or above the cold-junction sensor when
+   * `relative`), and the name of its source (there is one only when the range is not a point).
+   */
+  readonly temperature?: { readonly range: readonly [number, number]; readonly relative: boolean; readonly name: string };
   /** EMF error ΔE the connector adds to the thermocouple's EMF, mV, with the cold-junction sensor at `coldJunctionC`. */
   emfErrorMillivolts(x: _Inputs, coldJunctionC: number): number;
   /**
@@ -219,6 +224,7 @@ export function _connectorStage(
     return {
       sources,
       arrangement: "terminates",
+      temperature: { range: [range.minC, range.maxC], relative: !hasAbs, name: tName },
       emfErrorMillivolts: (x, tcj) => {
         const r = varies ? (x[tName] as number) : fixed;
         const tConn = hasAbs ? r : tcj + r;

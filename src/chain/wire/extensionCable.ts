@@ -289,6 +289,10 @@ export interface _ExtensionCableStage {
   readonly sources: readonly WireErrorSource[];
   readonly statement: CableToleranceStatement;
   readonly mismatch: CableMismatchModel;
+  /** The cable junction's (probe head's) temperature range, °C (a point when it is no source). */
+  readonly junctionTemperatureC: TemperatureRangeC;
+  /** The proportional model's k per µV of `cable.tolerance`, 1/µV (0 for the envelope). */
+  readonly mismatchPerMicrovolt: number;
   /** EMF error ΔE the cable adds to the thermocouple's EMF, mV, with the cold end at `coldJunctionC`. */
   emfErrorMillivolts(x: _Inputs, coldJunctionC: number): number;
   /**
@@ -342,6 +346,8 @@ export function _extensionCableStage(
       sources,
       statement,
       mismatch,
+      junctionTemperatureC: junction,
+      mismatchPerMicrovolt: 0,
       emfErrorMillivolts: (x) => (has ? (x["cable.tolerance"] as number) / 1000 : 0),
     };
   }
@@ -372,6 +378,8 @@ export function _extensionCableStage(
     sources,
     statement,
     mismatch,
+    junctionTemperatureC: junction,
+    mismatchPerMicrovolt: perMicrovolt,
     emfErrorMillivolts: (x, tcj) => {
       if (!has) return 0;
       const tj = junctionVaries ? (x["cable.junctionTemperature"] as number) : fixedJunctionC;

@@ -21,7 +21,8 @@ export default defineConfig([
     target: "es2022",
   },
   {
-    entry: { cli: "src/cli/main.ts" },
+    // The sweep's worker entry sits beside cli.js (dist/sweepWorker.js), one level above the command chunks.
+    entry: { cli: "src/cli/main.ts", sweepWorker: "src/cli/_sweepWorker.ts" },
     format: ["esm"],
     banner: { js: "#!/usr/bin/env node" },
     sourcemap: false,

@@ -1,0 +1,129 @@
+/**
+ * Monte Carlo of a family of models, each with its own inputs, on draws made once (internal): the engine of a
+ * sweep, where the chain at each temperature reads the same sources but some of them (the thermocouple
+ * tolerance) widen with the temperature.
+ * @module
+ * @internal
+ */
+import { _requireOptionsObject, _requireProbability } from "./_checks.js";
+import type { _CheckedDistribution } from "./_distribution.js";
+import { _blockSize, _firstBlockState, _nextBlockState, _Sampler, _scaleUnitDraws } from "./_monteCarloStream.js";
+import { _monteCarloResult, _OutputSummary } from "./_propagateMonteCarlo.js";
+import { _meansOf, _ModelEvaluator, _prepareInputs, type _PreparedInputs } from "./_prepare.js";
+import { _monteCarloSettings, _requireFiniteResult } from "./propagate.js";
+import type { Distribution, Model, PropagateOptions, PropagationResult } from "./types.js";
+
+/** Most unit draws (inputs × trials) a family keeps (32 MiB, and as much again in the records). */
+const maxDraws = 4_194_304;
+
+function sameShape(a: _CheckedDistribution, b: _CheckedDistribution): boolean {
+  return a.kindCode === b.kindCode && (a.kindCode !== 3 || a.beta === b.beta);
+}
+
+function sameScale(a: _CheckedDistribution, b: _CheckedDistribution): boolean {
+  return sameShape(a, b) && a.mean === b.mean && a.halfWidth === b.halfWidth && a.standardUncertainty === b.standardUncertainty;
+}
+
+/**
+ * @internal Monte Carlo of many (model, inputs) pairs that read the same input names with the same shapes (each
+ * its own means and widths) on common draws. The unit draws of every trial (the sampler's, before location and
+ * scale: {@link _Sampler.fillUnits}) are made once, from the same block streams as `propagate`; each pair scales
+ * them by its own distributions with the sampler's arithmetic (an input whose distribution did not change since
+ * the last pair is not scaled again) and evaluates its model on them, trial by trial in the same order.
+ * `run(model, inputs)` therefore returns, bit for bit, `propagate(model, inputs, { ...options, method:
+ * "monte-carlo" })`; it returns `undefined` (the caller runs `propagate`) when the options ask for what the
+ * family does not do (correlations, adaptive stopping, progress), when the inputs differ in names or shapes from
+ * the first pair's, or when inputs × trials is above 4,194,304.
+ */
+export class _CommonDrawsFamily {
+  private first: _PreparedInputs | undefined;
+  private units: Float64Array | undefined;
+  /** One record per trial, kept: an input is stored again only when its distribution changed. */
+  private records: Record<string, number>[] = [];
+  private column: Float64Array | undefined;
+  private scaledBy: (_CheckedDistribution | undefined)[] = [];
+  private outputs: Float64Array | undefined;
+
+  constructor(private readonly options: PropagateOptions) {}
+
+  run(model: Model, inputs: Readonly<Record<string, Distribution>>): PropagationResult | undefined {
+    const context = "propagate";
+    const o = this.options;
+    if (o.correlations !== undefined || o.adaptive !== undefined || o.onProgress !== undefined || typeof model !== "function") return undefined;
+    _requireOptionsObject(o, context, true);
+    const coverage = o.coverage === undefined ? 0.95 : _requireProbability(o.coverage, "coverage", context);
+    const prepared = _prepareInputs(inputs);
+    const evaluator = new _ModelEvaluator(model, prepared.names);
+    evaluator.probeNames(_meansOf(prepared.distributions));
+    const settings = _monteCarloSettings(o, coverage, 1, context);
+    const trials = settings.trials;
+    const n = prepared.names.length;
+    if (n * trials > maxDraws) return undefined;
+    if (this.first === undefined) this.draw(prepared, trials, settings.seed);
+    const first = this.first as _PreparedInputs;
+    if (first.names.length !== n || first.names.some((name, i) => name !== prepared.names[i] || !sameShape(first.distributions[i] as _CheckedDistribution, prepared.distributions[i] as _CheckedDistribution))) {
+      return undefined;
+    }
+    const units = this.units as Float64Array;
+    const column = this.column as Float64Array;
+    const records = this.records;
+    prepared.distributions.forEach((d, i) => {
+      const before = this.scaledBy[i];
+      if (before !== undefined && sameScale(before, d)) return;
+      _scaleUnitDraws(d, units, i * trials, column, 0, trials);
+      store(records, prepared.names[i] as string, column);
+      this.scaledBy[i] = d;
+    });
+    const out = this.outputs as Float64Array;
+    evaluate(evaluator, records, out);
+    const summary = new _OutputSummary(trials, coverage, settings.shortest);
+    summary.push(out);
+    const outcome = { summary: summary.finish(), converged: undefined, batch: undefined };
+    return _requireFiniteResult(_monteCarloResult(prepared, evaluator, undefined, false, settings, outcome, 1), context);
+  }
+
+  /** Draws the unit draws of every trial, block by block from the run's block streams. */
+  private draw(prepared: _PreparedInputs, trials: number, seed: number): void {
+    const n = prepared.names.length;
+    const sampler = new _Sampler(prepared.distributions, undefined, prepared.names, undefined);
+    const units = new Float64Array(n * trials);
+    let state = _firstBlockState(seed);
+    for (let start = 0; start < trials; start += _blockSize) {
+      sampler.useStream(state);
+      sampler.fillUnits(_blockSize); // whole blocks, as the stream samples them
+      const size = Math.min(_blockSize, trials - start);
+      for (let i = 0; i < n; i++) units.set(sampler.columns.subarray(i * _blockSize, i * _blockSize + size), i * trials + start);
+      state = _nextBlockState(state);
+    }
+    this.first = prepared;
+    this.units = units;
+    this.column = new Float64Array(trials);
+    this.scaledBy = [];
+    // every record built the same way (names in canonical order), so all have one shape
+    this.records = Array.from({ length: trials }, () => {
+      const record: Record<string, number> = {};
+      for (const name of prepared.names) record[name] = 0;
+      return record;
+    });
+    this.outputs = new Float64Array(trials);
+  }
+}
+
+/** Stores one input's values, trial by trial, into the records. */
+function store(records: Record<string, number>[], name: string, values: Float64Array): void {
+  for (let t = 0; t < records.length; t++) (records[t] as Record<string, number>)[name] = values[t] as number;
+}
+
+/** The model at every trial's record, each output checked as the trial stream checks it. */
+function evaluate(evaluator: _ModelEvaluator, records: readonly Record<string, number>[], out: Float64Array): void {
+  const model = evaluator.model;
+  for (let t = 0; t < records.length; t++) {
+    const record = records[t] as Record<string, number>;
+    const y = model(record);
+    if (typeof y !== "number" || y - y !== 0) {
+      Object.assign(evaluator.record, record);
+      evaluator.fail(y);
+    }
+    out[t] = y;
+  }
+}

@@ -9,7 +9,8 @@ import { _checkBoundsOptions } from "../chain/_chainBounds.js";
 import { _compileChain } from "../chain/_compileChain.js";
 import type { MeasurementChain } from "../chain/types.js";
 import { _requireFinite } from "../errors.js";
-import type { ErrorSweep } from "../report/reportTypes.js";
+import type { ErrorSweep, ErrorSweepBracket } from "../report/reportTypes.js";
+import { _enclosureGapToleranceC } from "../uncertainty/types.js";
 import type { PropagationMethod } from "../uncertainty/types.js";
 
 /** What each sweep point runs: the methods and their settings (as `evaluateChain` takes them). @internal */
@@ -45,7 +46,15 @@ export class _SweepRange {
       return {
         temperatureC: t,
         nominalErrorC: evaluation.indicatedC - t,
-        bands: evaluation.bounds.map((b) => ({ method: b.method, errorLowC: b.errorLowC, errorHighC: b.errorHighC })),
+        bands: evaluation.bounds.map((b) => ({
+          method: b.method,
+          errorLowC: b.errorLowC,
+          errorHighC: b.errorHighC,
+          ...(b.enclosureLowC !== undefined && b.enclosureHighC !== undefined
+            ? { enclosureErrorLowC: b.enclosureLowC - t, enclosureErrorHighC: b.enclosureHighC - t }
+            : {}),
+          ...(b.enclosureGapLowC !== undefined && b.enclosureGapHighC !== undefined ? { enclosureGapLowC: b.enclosureGapLowC, enclosureGapHighC: b.enclosureGapHighC } : {}),
+        })),
         largestSources: [...evaluation.contributions]
           .sort((a, b) => b.worstCaseSwingC - a.worstCaseSwingC)
           .slice(0, 3)
@@ -57,3 +66,24 @@ export class _SweepRange {
 
 /** One row of a sweep. @internal */
 export type _SweepRow = ErrorSweep["rows"][number];
+
+/**
+ * The worst case's bracket over a sweep's rows: points with an enclosure and the largest gap (either side), with the
+ * tolerance we state; `undefined` when no point's worst case has an enclosure. @internal
+ */
+export function _sweepBracket(rows: readonly _SweepRow[]): ErrorSweepBracket | undefined {
+  let enclosedPoints = 0;
+  let largestGapC = 0;
+  let largestGapAtC = Number.NaN;
+  for (const row of rows) {
+    const w = row.bands.find((b) => b.method === "worst-case");
+    if (w?.enclosureGapLowC === undefined || w.enclosureGapHighC === undefined) continue;
+    enclosedPoints++;
+    const gap = Math.max(w.enclosureGapLowC, w.enclosureGapHighC);
+    if (enclosedPoints === 1 || gap > largestGapC) {
+      largestGapC = gap;
+      largestGapAtC = row.temperatureC;
+    }
+  }
+  return enclosedPoints === 0 ? undefined : { points: rows.length, enclosedPoints, largestGapC, largestGapAtC, gapToleranceC: _enclosureGapToleranceC };
+}

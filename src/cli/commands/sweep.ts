@@ -4,6 +4,7 @@
  * @module
  */
 import type { Command } from "commander";
+import { _sweepBracket } from "../_sweepRows.js";
 import { _sweepRowsOnWorkers } from "../_sweepWorkers.js";
 import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import type { DesignFile } from "../../design/designSchema.js";
@@ -131,11 +132,13 @@ export function registerSweepCommand(program: Command, context: CommandContext):
       progress.stop();
     }
     const { acceptanceMethod: _unused, ...methodsWithoutAcceptance } = methods;
+    const bracket = _sweepBracket(rows);
     const sweep: ErrorSweep = {
       title: "Reading error sweep",
       ...(design.name !== undefined ? { designName: design.name } : {}),
       rows,
       setpoints: _setpointLimitsOfDesign(design),
+      ...(bracket !== undefined ? { worstCaseBracket: bracket } : {}),
       notes: [
         design.comparator !== undefined
           ? "Comparator design: the error is that of the signal at the comparator input read as a temperature (no threshold)."

@@ -15,6 +15,8 @@ import type { Distribution, Model, PropagateOptions, PropagationResult } from ".
 
 /** Most unit draws (inputs × trials) a family keeps (32 MiB, and as much again in the records). */
 const maxDraws = 4_194_304;
+/** Most trials a family keeps a record for (one small object each). */
+const maxRecords = 524_288;
 
 function sameShape(a: _CheckedDistribution, b: _CheckedDistribution): boolean {
   return a.kindCode === b.kindCode && (a.kindCode !== 3 || a.beta === b.beta);
@@ -33,7 +35,8 @@ function sameScale(a: _CheckedDistribution, b: _CheckedDistribution): boolean {
  * `run(model, inputs)` therefore returns, bit for bit, `propagate(model, inputs, { ...options, method:
  * "monte-carlo" })`; it returns `undefined` (the caller runs `propagate`) when the options ask for what the
  * family does not do (correlations, adaptive stopping, progress), when the inputs differ in names or shapes from
- * the first pair's, or when inputs × trials is above 4,194,304.
+ * the first pair's, or when inputs × trials is above 4,194,304 or trials above 524,288. The records are kept
+ * from member to member: for models that only read them (the chain models), as `propagate` asks of every model.
  */
 export class _CommonDrawsFamily {
   private first: _PreparedInputs | undefined;
@@ -58,7 +61,7 @@ export class _CommonDrawsFamily {
     const settings = _monteCarloSettings(o, coverage, 1, context);
     const trials = settings.trials;
     const n = prepared.names.length;
-    if (n * trials > maxDraws) return undefined;
+    if (n * trials > maxDraws || trials > maxRecords) return undefined;
     if (this.first === undefined) this.draw(prepared, trials, settings.seed);
     const first = this.first as _PreparedInputs;
     if (first.names.length !== n || first.names.some((name, i) => name !== prepared.names[i] || !sameShape(first.distributions[i] as _CheckedDistribution, prepared.distributions[i] as _CheckedDistribution))) {

@@ -5,7 +5,7 @@
  */
 import { _invalidChoice, _requireFinite } from "../errors.js";
 import { normalQuantile } from "../uncertainty/normalQuantile.js";
-import type { _CommonDrawsFamily } from "../uncertainty/_commonDrawsFamily.js";
+import type { _CommonDrawsFamily, _SplitModel } from "../uncertainty/_commonDrawsFamily.js";
 import { propagate } from "../uncertainty/propagate.js";
 import { _propagationMethods, type PropagationMethod } from "../uncertainty/types.js";
 import { _requireObject } from "./_common.js";
@@ -69,14 +69,15 @@ export function _checkBoundsOptions(options: unknown, context: string): _Checked
 /**
  * @internal Bounds per method and the contribution table of a chain model; `trueC` is the value errors are
  * taken against (the true hot-junction temperature, or the nominal result). With `family` (a sweep's common
- * draws, made with this call's Monte Carlo options) the Monte Carlo band comes from it: the same bits as
- * `propagate`, which runs when the family declines.
+ * draws, made with this call's Monte Carlo options; `split`: the model split for it) the Monte Carlo band
+ * comes from it: the same bits as `propagate`, which runs when the family declines.
  */
 export function _chainBounds(
   cm: ChainModel,
   trueC: number,
   options: _CheckedBoundsOptions,
   family?: _CommonDrawsFamily,
+  split?: _SplitModel,
 ): { bounds: ChainBound[]; contributions: ChainContribution[] } {
   const names = Object.keys(cm.inputs);
   if (names.length === 0) {
@@ -100,7 +101,7 @@ export function _chainBounds(
   let rssResult: ReturnType<typeof propagate> | undefined;
   for (const method of options.methods) {
     const r =
-      (method === "monte-carlo" ? family?.run(cm.model, cm.inputs) : undefined) ??
+      (method === "monte-carlo" ? family?.run(cm.model, cm.inputs, split) : undefined) ??
       propagate(cm.model, cm.inputs, {
         method,
         coverage: options.coverage,

@@ -5,9 +5,18 @@
  */
 import { _requireFinite, _requireWorkWithin, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
-import { _CommonDrawsFamily } from "../uncertainty/_commonDrawsFamily.js";
+import { _CommonDrawsFamily, type _SplitModel } from "../uncertainty/_commonDrawsFamily.js";
 import { _chainBounds, _checkBoundsOptions, type _CheckedBoundsOptions, type ChainBoundsOptions } from "./_chainBounds.js";
-import { _codeForVolts, _compileChain, _meansRecord, _signalVolts, _sourcesAt, type _CompiledChain } from "./_compileChain.js";
+import {
+  _codeForVolts,
+  _compileChain,
+  _indicatedCFromParts,
+  _indicatedParts,
+  _meansRecord,
+  _signalVolts,
+  _sourcesAt,
+  type _CompiledChain,
+} from "./_compileChain.js";
 import { _readingModel } from "./readingFromChain.js";
 import type { ChainEvaluation, MeasurementChain } from "./types.js";
 
@@ -25,6 +34,21 @@ export function _chainDraws(opts: _CheckedBoundsOptions): _CommonDrawsFamily | u
     : undefined;
 }
 
+/**
+ * The reading model at `t` split for common draws (chains without a wire): what does not depend on the temperature
+ * (the cold junction's and the sensor's EMF, gain, offset, ADC full scale) once per trial for every point.
+ */
+function _readingSplit(cc: _CompiledChain, t: number): _SplitModel | undefined {
+  if (cc.wire !== undefined) return undefined;
+  return {
+    key: cc,
+    count: 7,
+    pointInputs: ["thermocouple.tolerance"], // the only input the parts do not read (it moves the hot junction)
+    parts: (x, out, at) => _indicatedParts(cc, x, out, at),
+    value: (x, parts, at) => _indicatedCFromParts(cc, t, x, parts, at),
+  };
+}
+
 /** @internal {@link evaluateChain} at one temperature of a compiled chain (checked options, optional common draws). */
 export function _chainEvaluationAt(cc: _CompiledChain, t: number, opts: _CheckedBoundsOptions, draws?: _CommonDrawsFamily): ChainEvaluation {
   const sources = _sourcesAt(cc, t);
@@ -32,7 +56,7 @@ export function _chainEvaluationAt(cc: _CompiledChain, t: number, opts: _Checked
   const volts = _signalVolts(cc, t, x);
   const reading = cc.adc !== undefined ? { volts, code: _codeForVolts(cc, volts, x) } : { volts };
   const cm = _readingModel(cc, t);
-  const { bounds, contributions } = _chainBounds(cm, t, opts, draws);
+  const { bounds, contributions } = _chainBounds(cm, t, opts, draws, draws !== undefined ? _readingSplit(cc, t) : undefined);
   return { hotJunctionC: t, reading, indicatedC: cm.nominalC, bounds, contributions };
 }
 

@@ -27,6 +27,20 @@ function sameScale(a: _CheckedDistribution, b: _CheckedDistribution): boolean {
 }
 
 /**
+ * @internal A member's model split in two, for a family: `parts(x, out, at)` writes `count` values that depend on
+ * the inputs other than `pointInputs` only, the same function for every member with the same `key` (e.g. a chain's
+ * cold-junction EMF); `value(x, parts, at)` is then the model's output, bit for bit `model(x)`. The family computes
+ * the parts once per trial and recomputes them only when an input outside `pointInputs` changes or the key does.
+ */
+export interface _SplitModel {
+  readonly key: object;
+  readonly count: number;
+  readonly pointInputs: readonly string[];
+  parts(x: Readonly<Record<string, number>>, out: Float64Array, at: number): void;
+  value(x: Readonly<Record<string, number>>, parts: Float64Array, at: number): number;
+}
+
+/**
  * @internal Monte Carlo of many (model, inputs) pairs that read the same input names with the same shapes (each
  * its own means and widths) on common draws. The unit draws of every trial (the sampler's, before location and
  * scale: {@link _Sampler.fillUnits}) are made once, from the same block streams as `propagate`; each pair scales
@@ -46,10 +60,13 @@ export class _CommonDrawsFamily {
   private column: Float64Array | undefined;
   private scaledBy: (_CheckedDistribution | undefined)[] = [];
   private outputs: Float64Array | undefined;
+  /** Parts of a split model per trial, and whose they are (undefined: to be computed). */
+  private parts: Float64Array | undefined;
+  private partsKey: object | undefined;
 
   constructor(private readonly options: PropagateOptions) {}
 
-  run(model: Model, inputs: Readonly<Record<string, Distribution>>): PropagationResult | undefined {
+  run(model: Model, inputs: Readonly<Record<string, Distribution>>, split?: _SplitModel): PropagationResult | undefined {
     const context = "propagate";
     const o = this.options;
     if (o.correlations !== undefined || o.adaptive !== undefined || o.onProgress !== undefined || typeof model !== "function") return undefined;
@@ -74,15 +91,29 @@ export class _CommonDrawsFamily {
       const before = this.scaledBy[i];
       if (before !== undefined && sameScale(before, d)) return;
       _scaleUnitDraws(d, units, i * trials, column, 0, trials);
-      store(records, prepared.names[i] as string, column);
+      const name = prepared.names[i] as string;
+      store(records, name, column);
       this.scaledBy[i] = d;
+      if (split === undefined || !split.pointInputs.includes(name)) this.partsKey = undefined;
     });
     const out = this.outputs as Float64Array;
-    evaluate(evaluator, records, out);
+    if (split === undefined) evaluate(evaluator, records, out);
+    else evaluateSplit(evaluator, split, records, this.partsFor(split), out);
     const summary = new _OutputSummary(trials, coverage, settings.shortest);
     summary.push(out);
     const outcome = { summary: summary.finish(), converged: undefined, batch: undefined };
     return _requireFiniteResult(_monteCarloResult(prepared, evaluator, undefined, false, settings, outcome, 1), context);
+  }
+
+  /** The split model's parts at every trial's record, computed again only when they may have changed. */
+  private partsFor(split: _SplitModel): Float64Array {
+    const records = this.records;
+    if (this.parts === undefined || this.parts.length !== records.length * split.count) this.parts = new Float64Array(records.length * split.count);
+    if (this.partsKey !== split.key) {
+      for (let t = 0; t < records.length; t++) split.parts(records[t] as Record<string, number>, this.parts, t * split.count);
+      this.partsKey = split.key;
+    }
+    return this.parts;
   }
 
   /** Draws the unit draws of every trial, block by block from the run's block streams. */
@@ -109,6 +140,20 @@ export class _CommonDrawsFamily {
       return record;
     });
     this.outputs = new Float64Array(trials);
+  }
+}
+
+/** {@link evaluate} through a split model: the same outputs, the parts read from `parts`. */
+function evaluateSplit(evaluator: _ModelEvaluator, split: _SplitModel, records: readonly Record<string, number>[], parts: Float64Array, out: Float64Array): void {
+  const k = split.count;
+  for (let t = 0; t < records.length; t++) {
+    const record = records[t] as Record<string, number>;
+    const y = split.value(record, parts, t * k);
+    if (typeof y !== "number" || y - y !== 0) {
+      Object.assign(evaluator.record, record);
+      evaluator.fail(y);
+    }
+    out[t] = y;
   }
 }
 

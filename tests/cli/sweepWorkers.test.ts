@@ -3,11 +3,16 @@
  * the one `evaluateChain` gives at that temperature alone (the Monte Carlo band with the same seed, so the seed in
  * the report reproduces every point). Properties over two example designs (an ADC chain whose thermocouple
  * tolerance widens inside the sweep, and a comparator chain); the library's own per-point path is the reference.
+ * The reading model split for common draws (the parts that do not depend on the temperature once per trial) gives
+ * the plain model's bits for every example chain without a wire, over points across the source box.
  */
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { evaluateChain } from "../../src/chain/evaluateChain.js";
+import { _compileChain, _indicatedC, _indicatedCFromParts, _indicatedParts } from "../../src/chain/_compileChain.js";
+import { _readingModel } from "../../src/chain/readingFromChain.js";
+import { readdirSync } from "node:fs";
 import { sweepChainOfDesign } from "../../src/cli/commands/sweep.js";
 import { _sweepRowsOnWorkers } from "../../src/cli/_sweepWorkers.js";
 import type { DesignFile } from "../../src/design/designSchema.js";
@@ -18,6 +23,38 @@ const options = { methods: ["worst-case", "rss", "monte-carlo"] as const, covera
 function design(file: string): DesignFile {
   return JSON.parse(readFileSync(join(projectRoot, "examples", file), "utf8")) as DesignFile;
 }
+
+describe("the reading model split for common draws", () => {
+  it("gives _indicatedC's bits for every example chain without a wire (2,000 source values across the box × 5 temperatures)", () => {
+    const files = readdirSync(join(projectRoot, "examples")).filter((f) => f.endsWith(".json"));
+    let checked = 0;
+    for (const file of files) {
+      const d = design(file);
+      const cc = _compileChain(sweepChainOfDesign(d));
+      if (cc.wire !== undefined) continue;
+      const t0 = d.setpoints[0]?.tripTemperatureC ?? 100;
+      for (const t of [t0 - 80, t0 - 10, t0, t0 + 7.5, t0 + 40]) {
+        const cm = _readingModel(cc, t);
+        const names = Object.keys(cm.inputs);
+        const parts = new Float64Array(7 * 3);
+        for (let i = 0; i < 2000; i++) {
+          const x: Record<string, number> = {};
+          names.forEach((name, k) => {
+            const dist = cm.inputs[name] as { mean: number; halfWidth?: number; standardUncertainty: number };
+            const half = dist.halfWidth ?? 3 * dist.standardUncertainty;
+            // ends, mean and a spread of interior values (deterministic)
+            const u = i < 3 ? [-1, 0, 1][i]! : Math.sin(1 + i * 12.9898 + k * 78.233);
+            x[name] = dist.mean + half * u;
+          });
+          _indicatedParts(cc, x, parts, 7);
+          expect(Object.is(_indicatedCFromParts(cc, t, x, parts, 7), _indicatedC(cc, t, x))).toBe(true);
+          checked++;
+        }
+      }
+    }
+    expect(checked).toBeGreaterThanOrEqual(4 * 5 * 2000);
+  });
+});
 
 describe("sweep on worker threads", () => {
   for (const [file, from, step] of [

@@ -76,13 +76,15 @@ export function _sortFloat64(values: Float64Array): void {
  */
 function selectInPlace(a: Float64Array, lo: number, hi: number, k: number, budget: number): number {
   let work = 0;
+  let first = true;
   while (hi > lo) {
     work += hi - lo + 1;
     if (work > budget) return -1;
     const x = a[lo] as number;
     const y = a[(lo + hi) >>> 1] as number;
     const z = a[hi] as number;
-    const pivot = x < y ? (y < z ? y : x < z ? z : x) : x < z ? x : y < z ? z : y;
+    const pivot = first && hi - lo >= 4096 ? samplePivot(a, lo, hi, k) : x < y ? (y < z ? y : x < z ? z : x) : x < z ? x : y < z ? z : y;
+    first = false;
     let i = lo;
     let j = hi;
     while (i <= j) {
@@ -101,6 +103,23 @@ function selectInPlace(a: Float64Array, lo: number, hi: number, k: number, budge
     else return work; // j < k < i: a[k] equals the pivot
   }
   return work;
+}
+
+/**
+ * A first pivot for a target near an end (an interval's 2.5 % and 97.5 % points): from 63 evenly spaced values,
+ * the one a few sample ranks past k's share towards the middle, so that one partition leaves k on a small side
+ * (Floyd and Rivest's idea, 1975). Any value of the range is a correct pivot; this one only saves passes.
+ */
+function samplePivot(a: Float64Array, lo: number, hi: number, k: number): number {
+  const n = hi - lo + 1;
+  const size = 63;
+  const sample = new Float64Array(size);
+  for (let i = 0; i < size; i++) sample[i] = a[lo + Math.floor(((i + 0.5) * n) / size)] as number;
+  sample.sort();
+  const rank = ((k - lo) / n) * size;
+  const shift = 2.5 * Math.sqrt((rank * (size - rank)) / size) + 1;
+  const r = rank < size / 2 ? Math.min(size - 1, Math.ceil(rank + shift)) : Math.max(0, Math.floor(rank - shift));
+  return sample[r] as number;
 }
 
 /** The zero at sorted index k with its sign as the sort orders zeros (−0 before +0). */

@@ -23,9 +23,15 @@ export default defineConfig([
     target: "es2022",
   },
   {
-    // The CLI's own copies of the worker entry and the trip model factory, beside its chunks (dist/cli/), where
-    // `check`'s designTripParallel looks for them.
-    entry: { cli: "src/cli/main.ts", "cli/monteCarloWorker": "src/uncertainty/_monteCarloWorker.ts", "cli/tripModel": "src/trip/_tripModelFactory.ts" },
+    // The sweep's worker entry sits beside cli.js (dist/sweepWorker.js), one level above the command chunks; the
+    // CLI's own copies of the Monte Carlo worker entry and the trip model factory sit beside its chunks (dist/cli/),
+    // where `check`'s designTripParallel looks for them.
+    entry: {
+      cli: "src/cli/main.ts",
+      sweepWorker: "src/cli/_sweepWorker.ts",
+      "cli/monteCarloWorker": "src/uncertainty/_monteCarloWorker.ts",
+      "cli/tripModel": "src/trip/_tripModelFactory.ts",
+    },
     format: ["esm"],
     banner: { js: "#!/usr/bin/env node" },
     sourcemap: false,

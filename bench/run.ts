@@ -5,6 +5,7 @@ import { runMonteCarloBench } from "./monteCarlo.bench.js";
 import { runFirmwareBench } from "./firmwareTables.bench.js";
 import { runCliStartBench } from "./cliStart.bench.js";
 import { runCliCommandsBench } from "./cliCommands.bench.js";
+import { runSweepBench } from "./sweep.bench.js";
 import { runDynamicsBench } from "./dynamics.bench.js";
 import { runNativeBaselinesBench } from "./nativeBaselines.bench.js";
 
@@ -21,5 +22,7 @@ console.log("");
 for (const line of runCliStartBench()) console.log(line);
 console.log("");
 for (const line of runCliCommandsBench()) console.log(line);
+console.log("");
+for (const line of await runSweepBench()) console.log(line);
 console.log("");
 for (const line of await runDynamicsBench()) console.log(line);

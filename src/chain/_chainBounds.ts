@@ -5,6 +5,7 @@
  */
 import { _invalidChoice, _requireFinite } from "../errors.js";
 import { normalQuantile } from "../uncertainty/normalQuantile.js";
+import type { _CommonDrawsFamily, _SplitModel } from "../uncertainty/_commonDrawsFamily.js";
 import { propagate } from "../uncertainty/propagate.js";
 import { _propagationMethods, type PropagationMethod } from "../uncertainty/types.js";
 import { _requireObject } from "./_common.js";
@@ -67,12 +68,16 @@ export function _checkBoundsOptions(options: unknown, context: string): _Checked
 
 /**
  * @internal Bounds per method and the contribution table of a chain model; `trueC` is the value errors are
- * taken against (the true hot-junction temperature, or the nominal result).
+ * taken against (the true hot-junction temperature, or the nominal result). With `family` (a sweep's common
+ * draws, made with this call's Monte Carlo options; `split`: the model split for it) the Monte Carlo band
+ * comes from it: the same bits as `propagate`, which runs when the family declines.
  */
 export function _chainBounds(
   cm: ChainModel,
   trueC: number,
   options: _CheckedBoundsOptions,
+  family?: _CommonDrawsFamily,
+  split?: _SplitModel,
 ): { bounds: ChainBound[]; contributions: ChainContribution[] } {
   const names = Object.keys(cm.inputs);
   if (names.length === 0) {
@@ -93,13 +98,17 @@ export function _chainBounds(
     return { bounds, contributions: [] };
   }
   const bounds: ChainBound[] = [];
+  let rssResult: ReturnType<typeof propagate> | undefined;
   for (const method of options.methods) {
-    const r = propagate(cm.model, cm.inputs, {
-      method,
-      coverage: options.coverage,
-      ...(method === "monte-carlo" ? { trials: options.trials, seed: options.seed } : {}),
-      ...(method === "worst-case" ? { normalBoundCoverage: options.normalBoundCoverage, modelEnclosure: cm.enclosure } : {}),
-    });
+    const r =
+      (method === "monte-carlo" ? family?.run(cm.model, cm.inputs, split) : undefined) ??
+      propagate(cm.model, cm.inputs, {
+        method,
+        coverage: options.coverage,
+        ...(method === "monte-carlo" ? { trials: options.trials, seed: options.seed } : {}),
+        ...(method === "worst-case" ? { normalBoundCoverage: options.normalBoundCoverage, modelEnclosure: cm.enclosure } : {}),
+      });
+    if (method === "rss") rssResult = r;
     bounds.push({
       method,
       estimateC: r.estimate,
@@ -115,7 +124,8 @@ export function _chainBounds(
         : {}),
     });
   }
-  const rss = propagate(cm.model, cm.inputs, { method: "rss", coverage: options.coverage });
+  // the same call as the rss band's (deterministic): run once
+  const rss = rssResult ?? propagate(cm.model, cm.inputs, { method: "rss", coverage: options.coverage });
   const k = normalQuantile(0.5 + options.normalBoundCoverage / 2);
   const x: Record<string, number> = {};
   for (const s of cm.sources) x[s.name] = s.distribution.mean;

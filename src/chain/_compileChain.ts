@@ -462,6 +462,40 @@ export function _indicatedC(cc: _CompiledChain, hotJunctionC: number, x: Inputs)
 }
 
 /**
+ * @internal The parts of {@link _indicatedC} that do not depend on the hot-junction temperature, for a chain without
+ * a wire, into `out[at…at + 6]`: cold junction °C, its EMF, hardware compensation mV, gain, input offset mV, ADC full
+ * scale V, EMF of the sensor's reading. {@link _indicatedCFromParts} then gives `_indicatedC`'s bits at any
+ * temperature (the same operations on the same values).
+ */
+export function _indicatedParts(cc: _CompiledChain, x: Inputs, out: Float64Array, at: number): void {
+  const tc = _coldJunctionC(cc, x);
+  const cj = cc.coldJunction;
+  out[at] = tc;
+  out[at + 1] = _emfFromTemperature(cc.ct, tc);
+  out[at + 2] = cj !== undefined && cj.method === "hardware" ? cj.compensationMillivolts(x, tc) : 0;
+  out[at + 3] = cc.fixedScale === undefined ? cc.amplifier.gain(x) : 0;
+  out[at + 4] = cc.fixedScale === undefined ? cc.amplifier.inputOffsetMillivolts(x) : 0;
+  out[at + 5] = cc.adc !== undefined ? _adcFullScale(cc, x) : 0;
+  out[at + 6] = cc.fixedScale === undefined && cj !== undefined && cj.method === "software" ? _emfFromTemperature(cc.ct, tc + cj.errorC(x)) : 0;
+}
+
+/** @internal {@link _indicatedC} of a chain without a wire from its {@link _indicatedParts} (at `parts[at…]`). */
+export function _indicatedCFromParts(cc: _CompiledChain, hotJunctionC: number, x: Inputs, parts: Float64Array, at: number): number {
+  const cj = cc.coldJunction;
+  let emf = _emfFromTemperature(cc.ct, hotJunctionC + _toleranceValue(x)) - (parts[at + 1] as number);
+  if (cj?.method === "hardware") emf += parts[at + 2] as number;
+  let volts =
+    cc.fixedScale !== undefined
+      ? cc.fixedScale.outputMillivolts(x, emf, parts[at] as number) / 1000
+      : ((parts[at + 3] as number) * (emf + (parts[at + 4] as number))) / 1000;
+  const adc = cc.adc;
+  if (adc !== undefined) volts = (adc.code(x, volts, parts[at + 5] as number, cc.adcFullScaleVolts) * cc.adcFullScaleVolts) / adc.codes;
+  if (cc.fixedScale !== undefined) return (volts * 1000) / cc.fixedScale.millivoltsPerC;
+  const e = (volts * 1000) / cc.amplifier.nominalGain;
+  return _temperatureFromEmf(cc.ct, cj?.method === "software" ? e + (parts[at + 6] as number) : e);
+}
+
+/**
  * @internal Inverse of the actual chain: the true hot-junction temperature that gives a detector-input
  * voltage for the source values, with the cold junction at `coldJunctionC`.
  */

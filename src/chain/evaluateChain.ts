@@ -5,13 +5,60 @@
  */
 import { _requireFinite, _requireWorkWithin, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
-import { _chainBounds, _checkBoundsOptions, type ChainBoundsOptions } from "./_chainBounds.js";
-import { _codeForVolts, _compileChain, _meansRecord, _signalVolts, _sourcesAt } from "./_compileChain.js";
+import { _CommonDrawsFamily, type _SplitModel } from "../uncertainty/_commonDrawsFamily.js";
+import { _chainBounds, _checkBoundsOptions, type _CheckedBoundsOptions, type ChainBoundsOptions } from "./_chainBounds.js";
+import {
+  _codeForVolts,
+  _compileChain,
+  _indicatedCFromParts,
+  _indicatedParts,
+  _meansRecord,
+  _signalVolts,
+  _sourcesAt,
+  type _CompiledChain,
+} from "./_compileChain.js";
 import { _readingModel } from "./readingFromChain.js";
 import type { ChainEvaluation, MeasurementChain } from "./types.js";
 
 /** Most temperatures one {@link evaluateChain} call evaluates (an array longer than this is refused). @internal */
 export const _maxChainTemperatures = 10_000;
+
+/**
+ * @internal The common draws of a chain evaluated at many temperatures with these options (`undefined` without
+ * Monte Carlo): every point's Monte Carlo band is then the one `propagate` gives at that point, with the draws
+ * made once.
+ */
+export function _chainDraws(opts: _CheckedBoundsOptions): _CommonDrawsFamily | undefined {
+  return opts.methods.includes("monte-carlo")
+    ? new _CommonDrawsFamily({ method: "monte-carlo", coverage: opts.coverage, trials: opts.trials, seed: opts.seed })
+    : undefined;
+}
+
+/**
+ * The reading model at `t` split for common draws (chains without a wire): what does not depend on the temperature
+ * (the cold junction's and the sensor's EMF, gain, offset, ADC full scale) once per trial for every point.
+ */
+function _readingSplit(cc: _CompiledChain, t: number): _SplitModel | undefined {
+  if (cc.wire !== undefined) return undefined;
+  return {
+    key: cc,
+    count: 7,
+    pointInputs: ["thermocouple.tolerance"], // the only input the parts do not read (it moves the hot junction)
+    parts: (x, out, at) => _indicatedParts(cc, x, out, at),
+    value: (x, parts, at) => _indicatedCFromParts(cc, t, x, parts, at),
+  };
+}
+
+/** @internal {@link evaluateChain} at one temperature of a compiled chain (checked options, optional common draws). */
+export function _chainEvaluationAt(cc: _CompiledChain, t: number, opts: _CheckedBoundsOptions, draws?: _CommonDrawsFamily): ChainEvaluation {
+  const sources = _sourcesAt(cc, t);
+  const x = _meansRecord(sources);
+  const volts = _signalVolts(cc, t, x);
+  const reading = cc.adc !== undefined ? { volts, code: _codeForVolts(cc, volts, x) } : { volts };
+  const cm = _readingModel(cc, t);
+  const { bounds, contributions } = _chainBounds(cm, t, opts, draws, draws !== undefined ? _readingSplit(cc, t) : undefined);
+  return { hotJunctionC: t, reading, indicatedC: cm.nominalC, bounds, contributions };
+}
 
 /** Options of {@link evaluateChain}. */
 export type EvaluateChainOptions = ChainBoundsOptions;
@@ -58,16 +105,7 @@ export function evaluateChain(
 ): ChainEvaluation | ChainEvaluation[] {
   const cc = _compileChain(chain);
   const opts = _checkBoundsOptions(options, "evaluateChain");
-  const one = (t: number): ChainEvaluation => {
-    const sources = _sourcesAt(cc, t);
-    const x = _meansRecord(sources);
-    const volts = _signalVolts(cc, t, x);
-    const reading = cc.adc !== undefined ? { volts, code: _codeForVolts(cc, volts, x) } : { volts };
-    const cm = _readingModel(cc, t);
-    const { bounds, contributions } = _chainBounds(cm, t, opts);
-    return { hotJunctionC: t, reading, indicatedC: cm.nominalC, bounds, contributions };
-  };
-  if (typeof hotJunctionC === "number") return one(_requireFinite(hotJunctionC, "hot-junction temperature", "°C", cc.context));
+  if (typeof hotJunctionC === "number") return _chainEvaluationAt(cc, _requireFinite(hotJunctionC, "hot-junction temperature", "°C", cc.context), opts);
   if (!Array.isArray(hotJunctionC)) {
     throw new HotjunctionTypeError({
       code: "NOT_A_FINITE_NUMBER",
@@ -81,5 +119,6 @@ export function evaluateChain(
     throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "number of hot-junction temperatures", value: hotJunctionC.length, min: 0, max: _maxChainTemperatures, context: cc.context, problem: "is more than one call evaluates" });
   }
   if (opts.methods.includes("monte-carlo")) _requireWorkWithin({ temperatures: hotJunctionC.length, trials: opts.trials }, _maxModelEvaluations, cc.context);
-  return hotJunctionC.map((t, i) => one(_requireFinite(t, `hot-junction temperature [${i}]`, "°C", cc.context)));
+  const draws = _chainDraws(opts);
+  return hotJunctionC.map((t, i) => _chainEvaluationAt(cc, _requireFinite(t, `hot-junction temperature [${i}]`, "°C", cc.context), opts, draws));
 }

@@ -148,11 +148,22 @@ const sweepReport = z.looseObject({
     z.strictObject({
       temperatureC: num,
       nominalErrorC: num,
-      bands: z.array(z.strictObject({ method, errorLowC: num, errorHighC: num })),
+      bands: z.array(
+        z.strictObject({
+          method,
+          errorLowC: num,
+          errorHighC: num,
+          enclosureErrorLowC: num.optional(),
+          enclosureErrorHighC: num.optional(),
+          enclosureGapLowC: num.optional(),
+          enclosureGapHighC: num.optional(),
+        }),
+      ),
       largestSources: z.array(z.strictObject({ source: z.string(), halfSwingC: num })).optional(),
     }),
   ),
   setpoints: z.array(z.strictObject({ name: z.string(), tripTemperatureC: num, maxNormalOperatingC: num, hazardLimitC: num })).optional(),
+  worstCaseBracket: z.strictObject({ points: num, enclosedPoints: num, largestGapC: num, largestGapAtC: num, gapToleranceC: num }).optional(),
   notes: z.array(z.string()),
   methods: methodInfo,
 });

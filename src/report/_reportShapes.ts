@@ -25,8 +25,17 @@ export const _methodInfoShape: _Shape = {
 export const _errorSweepShape: _Shape = {
   title: "string",
   designName: ["optional", "string"],
-  rows: ["array", { temperatureC: n, nominalErrorC: n, bands: ["array", { method, errorLowC: n, errorHighC: n }], largestSources: ["optional", ["array", { source: "string", halfSwingC: n }]] }],
+  rows: [
+    "array",
+    {
+      temperatureC: n,
+      nominalErrorC: n,
+      bands: ["array", { method, errorLowC: n, errorHighC: n, enclosureErrorLowC: ["optional", n], enclosureErrorHighC: ["optional", n], enclosureGapLowC: ["optional", n], enclosureGapHighC: ["optional", n] }],
+      largestSources: ["optional", ["array", { source: "string", halfSwingC: n }]],
+    },
+  ],
   setpoints: ["optional", ["array", { name: "string", tripTemperatureC: n, maxNormalOperatingC: n, hazardLimitC: n }]],
+  worstCaseBracket: ["optional", { points: n, enclosedPoints: n, largestGapC: n, largestGapAtC: n, gapToleranceC: n }],
   notes: strings,
   methods: _methodInfoShape,
 };

@@ -7,6 +7,8 @@
 export { CAUTION_TEXT } from "../caution.js";
 export type {
   ErrorSweep,
+  ErrorSweepBand,
+  ErrorSweepBracket,
   ErrorSweepRow,
   ErrorSweepSetpoint,
   ReportFormat,

@@ -34,6 +34,38 @@ function setpointLines(sweep: ErrorSweep, d: _TemperatureDisplay): string[] {
 }
 
 /**
+ * The worst case's bracket over the sweep in one sentence (the words `check` uses for one setpoint), empty without
+ * one: attained and enclosure at how many points, the largest gap and where, the stated tolerance.
+ */
+function bracketLines(sweep: ErrorSweep, d: _TemperatureDisplay): string[] {
+  const b = sweep.worstCaseBracket;
+  if (b === undefined) return [];
+  const u = d.symbol;
+  const gap = b.largestGapC === 0 ? "0" : d.diff(b.largestGapC).toExponential(1);
+  const rest = b.points - b.enclosedPoints;
+  return [
+    `Worst case over the sweep: attained (points of the source box reach them) and enclosure (over the whole box: interval arithmetic with outward rounding) at ${b.enclosedPoints} of ${b.points} points, largest gap ${gap} ${u} at ${_fixed(d.at(b.largestGapAtC), 1)} ${u} (stated tolerance ${d.diff(b.gapToleranceC)} ${u})` +
+      (rest > 0 ? `; the other ${rest} points have no enclosure (attained only, by search).` : "."),
+  ];
+}
+
+/** CSV rows, with the worst case's bracket columns when any point has one (empty for the other methods). */
+function csvTable(sweep: ErrorSweep, d: _TemperatureDisplay): (string | number)[][] {
+  const x = d.csvSuffix;
+  const bracket = sweep.rows.some((r) => r.bands.some((b) => b.enclosureErrorLowC !== undefined));
+  const head = [`true_${x}`, `nominal_error_${x}`, "method", `error_low_${x}`, `error_high_${x}`];
+  const table: (string | number)[][] = [bracket ? [...head, `enclosure_error_low_${x}`, `enclosure_error_high_${x}`, `gap_low_${x}`, `gap_high_${x}`] : head];
+  const cell = (v: number | undefined): string | number => (v === undefined ? "" : d.diff(v));
+  for (const r of sweep.rows) {
+    for (const b of r.bands) {
+      const row = [d.at(r.temperatureC), d.diff(r.nominalErrorC), b.method, d.diff(b.errorLowC), d.diff(b.errorHighC)];
+      table.push(bracket ? [...row, cell(b.enclosureErrorLowC), cell(b.enclosureErrorHighC), cell(b.enclosureGapLowC), cell(b.enclosureGapHighC)] : row);
+    }
+  }
+  return table;
+}
+
+/**
  * Renders an error sweep.
  * @param sweep - sweep data
  * @param format - `"text"`, `"markdown"`, `"csv"` or `"json"`
@@ -53,16 +85,13 @@ function setpointLines(sweep: ErrorSweep, d: _TemperatureDisplay): string[] {
 export function formatSweepReport(sweep: ErrorSweep, format: ReportFormat, options?: ReportDisplayOptions): string {
   _requireShape(sweep, _errorSweepShape, "sweep", "formatSweepReport");
   const d = _displayOf(options);
-  const x = d.csvSuffix;
   const heading = `${sweep.title}${sweep.designName !== undefined ? `: ${sweep.designName}` : ""}`;
   switch (format) {
     case "json":
       return `${JSON.stringify({ report: "error-sweep", reportSchemaVersion: 1, caution: CAUTION_TEXT, method: sweep.methods, ..._jsonUnitField(d), ...sweep }, null, 2)}\n`;
     case "csv": {
-      const table: (string | number)[][] = [[`true_${x}`, `nominal_error_${x}`, "method", `error_low_${x}`, `error_high_${x}`]];
-      for (const r of sweep.rows) for (const b of r.bands) table.push([d.at(r.temperatureC), d.diff(r.nominalErrorC), b.method, d.diff(b.errorLowC), d.diff(b.errorHighC)]);
-      const marks = setpointLines(sweep, d).map((l) => `# ${l}\n`).join("");
-      return `# ${_cautionLine()}\n# ${_describeMethods(sweep.methods)}\n${_csvUnitLine(d)}${marks}${_csv(table)}`;
+      const marks = [...setpointLines(sweep, d), ...bracketLines(sweep, d)].map((l) => `# ${l}\n`).join("");
+      return `# ${_cautionLine()}\n# ${_describeMethods(sweep.methods)}\n${_csvUnitLine(d)}${marks}${_csv(csvTable(sweep, d))}`;
     }
     case "markdown":
       return [
@@ -74,8 +103,8 @@ export function formatSweepReport(sweep: ErrorSweep, format: ReportFormat, optio
         "",
         _markdownTable(rows(sweep, d)),
         "",
-        ...setpointLines(sweep, d).map((l) => `- ${l}`),
-        ...(sweep.setpoints !== undefined && sweep.setpoints.length > 0 ? [""] : []),
+        ...[...setpointLines(sweep, d), ...bracketLines(sweep, d)].map((l) => `- ${l}`),
+        ...((sweep.setpoints !== undefined && sweep.setpoints.length > 0) || sweep.worstCaseBracket !== undefined ? [""] : []),
         "## Method",
         "",
         _describeMethods(sweep.methods),
@@ -91,6 +120,7 @@ export function formatSweepReport(sweep: ErrorSweep, format: ReportFormat, optio
         _textTable(rows(sweep, d)),
         "",
         ...setpointLines(sweep, d),
+        ...bracketLines(sweep, d),
         _describeMethods(sweep.methods),
         ...sweep.notes.map((n) => `Note: ${_sentenceInUnit(n, d)}`),
         "",

@@ -76,12 +76,42 @@ export interface ErrorSweepRow {
   /** Nominal indicated minus true, °C. */
   readonly nominalErrorC: number;
   /** Error bounds (indicated − true) by method, °C. */
-  readonly bands: readonly { readonly method: PropagationMethod; readonly errorLowC: number; readonly errorHighC: number }[];
+  readonly bands: readonly ErrorSweepBand[];
   /**
    * The largest error sources at this temperature by name, largest first, with half the worst-case swing each
    * causes alone (± °C, the trip table's measure); absent when not computed.
    */
   readonly largestSources?: readonly { readonly source: string; readonly halfSwingC: number }[];
+}
+
+/**
+ * One method's error bounds at a sweep point, °C. For the worst case of a chain with an enclosure the bracket
+ * comes with it, as in `check`: `errorLowC`/`errorHighC` are attained (points of the source box reach them),
+ * `enclosureErrorLowC`/`enclosureErrorHighC` a proven enclosure over the whole box (interval arithmetic with
+ * outward rounding), and the gaps between the two (attained low − enclosure low, enclosure high − attained high).
+ */
+export interface ErrorSweepBand {
+  readonly method: PropagationMethod;
+  readonly errorLowC: number;
+  readonly errorHighC: number;
+  readonly enclosureErrorLowC?: number;
+  readonly enclosureErrorHighC?: number;
+  readonly enclosureGapLowC?: number;
+  readonly enclosureGapHighC?: number;
+}
+
+/** The worst case's bracket over a whole sweep: how many points have one and the largest gap, °C. */
+export interface ErrorSweepBracket {
+  /** Points of the sweep. */
+  readonly points: number;
+  /** Points whose worst case has an enclosure (chains with a wire have none yet: attained only, by search). */
+  readonly enclosedPoints: number;
+  /** Largest gap (either side) over the enclosed points, °C. */
+  readonly largestGapC: number;
+  /** True temperature of the point with the largest gap, °C. */
+  readonly largestGapAtC: number;
+  /** The largest gap the library states for chain models, °C. */
+  readonly gapToleranceC: number;
 }
 
 /** A setpoint of the design a sweep belongs to: where the chart marks it and its limits, °C. */
@@ -99,6 +129,8 @@ export interface ErrorSweep {
   readonly rows: readonly ErrorSweepRow[];
   /** The design's setpoints and limits, marked on the chart and listed by the reports; absent for a bare chain. */
   readonly setpoints?: readonly ErrorSweepSetpoint[];
+  /** The worst case's bracket over the sweep (absent without the worst case or without any enclosure). */
+  readonly worstCaseBracket?: ErrorSweepBracket;
   readonly notes: readonly string[];
   readonly methods: ReportMethodInfo;
 }

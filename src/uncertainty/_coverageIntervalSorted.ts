@@ -29,10 +29,18 @@ export function _coverageIntervalSorted(
     }
     return [sorted[bestR - 1] as number, sorted[bestR + q - 1] as number];
   }
+  const [lowIndex, highIndex] = _symmetricIntervalIndices(m, coverage);
+  return [sorted[lowIndex] as number, sorted[highIndex] as number];
+}
+
+/** @internal The 0-based sorted indices of the probabilistically symmetric interval's ends (JCGM 101:2008 7.7). */
+export function _symmetricIntervalIndices(m: number, coverage: number): [number, number] {
+  const pm = coverage * m;
+  const q = Number.isInteger(pm) ? pm : Math.floor(pm + 0.5);
   const half = (m - q) / 2;
   const r = Number.isInteger(half) ? half : Math.floor((m - q + 1) / 2);
   const lowIndex = Math.max(r, 1) - 1;
-  return [sorted[lowIndex] as number, sorted[Math.min(lowIndex + q, m - 1)] as number];
+  return [lowIndex, Math.min(lowIndex + q, m - 1)];
 }
 
 /** @internal Smallest trial count for which the interval indices exist. */

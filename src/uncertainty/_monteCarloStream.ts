@@ -107,6 +107,34 @@ export class _Sampler {
     }
   }
 
+  /**
+   * Fills the first `count` entries of every column with the unit draws that {@link _Sampler.fill} makes from the
+   * same generator calls, before the input's location and scale: normal z, rectangular 2r − 1, arcsine sin(2πr),
+   * trapezoidal (1 + β)r₁ + (1 − β)r₂. {@link _scaleUnitDraws} of them gives `fill`'s bits. Not for correlated inputs.
+   */
+  fillUnits(count: number): void {
+    const col = this.columns;
+    const rng = this.rng;
+    for (let i = 0; i < this.distributions.length; i++) {
+      const d = this.distributions[i] as _CheckedDistribution;
+      const offset = i * batchSize;
+      if (d.kindCode === 0) {
+        this.fillStandardNormal(offset, count);
+      } else if (d.kindCode === 1) {
+        for (let t = 0; t < count; t++) col[offset + t] = 2 * rng.uniform() - 1;
+      } else if (d.kindCode === 4) {
+        for (let t = 0; t < count; t++) col[offset + t] = Math.sin(twoPi * rng.uniform());
+      } else {
+        const beta = d.kindCode === 2 ? 0 : d.beta;
+        for (let t = 0; t < count; t++) {
+          const r1 = rng.uniform();
+          const r2 = rng.uniform();
+          col[offset + t] = (1 + beta) * r1 + (1 - beta) * r2;
+        }
+      }
+    }
+  }
+
   /** Fills the first `count` entries of every column. */
   fill(count: number): void {
     const col = this.columns;
@@ -172,6 +200,26 @@ export class _Sampler {
   }
 }
 
+
+/**
+ * @internal Input values from unit draws (see {@link _Sampler.fillUnits}), with the arithmetic of
+ * {@link _Sampler.fill}: mean + u·z (normal), mean + a·w (rectangular, arcsine), (mean − a) + a·w (trapezoidal,
+ * triangular); `count` values from `units[from…]` to `out[at…]`.
+ */
+export function _scaleUnitDraws(d: _CheckedDistribution, units: Float64Array, from: number, out: Float64Array, at: number, count: number): void {
+  const mean = d.mean;
+  if (d.kindCode === 0) {
+    const u = d.standardUncertainty;
+    for (let t = 0; t < count; t++) out[at + t] = mean + u * (units[from + t] as number);
+  } else if (d.kindCode === 1 || d.kindCode === 4) {
+    const a = d.halfWidth;
+    for (let t = 0; t < count; t++) out[at + t] = mean + a * (units[from + t] as number);
+  } else {
+    const a = d.halfWidth;
+    const low = mean - a;
+    for (let t = 0; t < count; t++) out[at + t] = low + a * (units[from + t] as number);
+  }
+}
 
 /**
  * @internal The fixed sequence of model outputs of a run, handed out in order: blocks are sampled whole when

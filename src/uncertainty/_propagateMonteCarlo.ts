@@ -8,8 +8,8 @@
  * @module
  * @internal
  */
-import { _coverageIntervalSorted } from "./_coverageIntervalSorted.js";
-import { _sortFloat64 } from "./_sortFloat64.js";
+import { _coverageIntervalSorted, _symmetricIntervalIndices } from "./_coverageIntervalSorted.js";
+import { _selectFloat64, _sortFloat64 } from "./_sortFloat64.js";
 import { _studentTQuantile } from "./studentTQuantile.js";
 import { _firstBlockState, _Sampler, _TrialStream } from "./_monteCarloStream.js";
 import type { _ModelEvaluator, _PreparedInputs } from "./_prepare.js";
@@ -126,8 +126,16 @@ export class _OutputSummary {
     if (n === 0) return;
     const values = this.buffer.subarray(0, n);
     const [mean, sd] = _meanAndStandardDeviation(values, 0, n);
-    _sortFloat64(values);
-    const [low, high] = _coverageIntervalSorted(values, this.coverage, this.shortest);
+    let low: number;
+    let high: number;
+    if (this.shortest) {
+      _sortFloat64(values);
+      [low, high] = _coverageIntervalSorted(values, this.coverage, true);
+    } else {
+      // the two order statistics by selection: the sort's values, without the sort
+      const [lowIndex, highIndex] = _symmetricIntervalIndices(n, this.coverage);
+      [low, high] = _selectFloat64(values, lowIndex, highIndex);
+    }
     this.segments.push({ count: n, mean, squares: sd * sd * (n - 1), low, high });
     this.filled = 0;
   }

@@ -4,7 +4,8 @@
  * @module
  */
 import type { Command } from "commander";
-import { evaluateChain } from "../../chain/evaluateChain.js";
+import { _sweepBracket } from "../_sweepRows.js";
+import { _sweepRowsOnWorkers } from "../_sweepWorkers.js";
 import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import type { DesignFile } from "../../design/designSchema.js";
 import type { MeasurementChain } from "../../chain/types.js";
@@ -28,13 +29,13 @@ import {
   _planCommandOutputs,
   type OutputOptionValues,
 } from "../outputOptions.js";
-import { _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
+import { _integerParser, _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
 import { _startProgress } from "../progress.js";
 import { _temperatureSymbol, _toCelsius, type TemperatureUnit } from "../temperatureUnits.js";
 import { _maxModelEvaluations } from "../../uncertainty/_propagateMonteCarlo.js";
 import type { CommandContext } from "../commandContext.js";
 
-type SweepOptions = OutputOptionValues & AnalysisOptionValues & { from: number; to: number; step: number; unit?: TemperatureUnit };
+type SweepOptions = OutputOptionValues & AnalysisOptionValues & { from: number; to: number; step: number; workers?: number; unit?: TemperatureUnit };
 
 /** Most temperatures one sweep evaluates. */
 const maxSweepPoints = 2001;
@@ -75,6 +76,11 @@ export function registerSweepCommand(program: Command, context: CommandContext):
     .requiredOption("--from <t>", "first true temperature, in --unit (default °C)", _parseNumber)
     .requiredOption("--to <t>", "last true temperature, in --unit", _parseNumber)
     .option("--step <t>", "step, in --unit", _parsePositiveNumber, 10)
+    .option(
+      "--workers <n>",
+      "worker threads for the points, 1 to 64 (default: the cores available, at most 8, for 2,000,000 model evaluations or more; else 1); the same results for any number",
+      _integerParser(1, 64),
+    )
     .addHelpText(
       "after",
       "\nExamples:\n  hotjunction sweep examples/heated-enclosure-adc.json --from 20 --to 120 --step 5 --svg enclosure-error.svg\n  hotjunction sweep examples/reflow-oven-trip.json --from 400 --to 560 --step 20 --unit F\n",
@@ -118,35 +124,21 @@ export function registerSweepCommand(program: Command, context: CommandContext):
     }
     const temperatures = shown.map((t) => _toCelsius(t, unit));
     const progress = _startProgress(context.io, "sweep");
-    const rows: ErrorSweep["rows"][number][] = [];
+    let rows: ErrorSweep["rows"][number][];
     try {
-      temperatures.forEach((t, i) => {
-        const evaluation = evaluateChain(chain, t, {
-          methods: methods.methods,
-          coverage: settings.coverage,
-          trials: settings.trials,
-          seed: settings.seed,
-        });
-        rows.push({
-          temperatureC: t,
-          nominalErrorC: evaluation.indicatedC - t,
-          bands: evaluation.bounds.map((b) => ({ method: b.method, errorLowC: b.errorLowC, errorHighC: b.errorHighC })),
-          largestSources: [...evaluation.contributions]
-            .sort((a, b) => b.worstCaseSwingC - a.worstCaseSwingC)
-            .slice(0, 3)
-            .map((c) => ({ source: c.source, halfSwingC: c.worstCaseSwingC / 2 })),
-        });
-        progress.update((i + 1) / count);
-      });
+      const pointOptions = { methods: methods.methods, coverage: settings.coverage, trials: settings.trials, seed: settings.seed };
+      rows = await _sweepRowsOnWorkers(chain, temperatures, pointOptions, options.workers, (done) => progress.update(done / count));
     } finally {
       progress.stop();
     }
     const { acceptanceMethod: _unused, ...methodsWithoutAcceptance } = methods;
+    const bracket = _sweepBracket(rows);
     const sweep: ErrorSweep = {
       title: "Reading error sweep",
       ...(design.name !== undefined ? { designName: design.name } : {}),
       rows,
       setpoints: _setpointLimitsOfDesign(design),
+      ...(bracket !== undefined ? { worstCaseBracket: bracket } : {}),
       notes: [
         design.comparator !== undefined
           ? "Comparator design: the error is that of the signal at the comparator input read as a temperature (no threshold)."

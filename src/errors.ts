@@ -74,6 +74,8 @@ export function _formatErrorMessage({ context, quantity, value, unit, problem, m
   }`;
 }
 
+// Deliberately alike: the two error classes carry the same fields; each extends its own built-in (RangeError,
+// TypeError) so that `instanceof` works with either, which one shared base class cannot give.
 /** A value outside what its quantity allows (out of range, unknown choice, ambiguous inverse...). */
 export class HotjunctionRangeError extends RangeError implements ErrorDetails {
   override readonly name = "HotjunctionRangeError";
@@ -92,6 +94,7 @@ export class HotjunctionRangeError extends RangeError implements ErrorDetails {
   }
 }
 
+// Deliberately alike: the fields of HotjunctionRangeError above, on TypeError (see there).
 /** A value that is not of a usable kind at all (NaN, ±Infinity, a string where a number belongs...). */
 export class HotjunctionTypeError extends TypeError implements ErrorDetails {
   override readonly name = "HotjunctionTypeError";

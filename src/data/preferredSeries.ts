@@ -30,6 +30,7 @@ export const seriesE24: readonly number[] = /* @__PURE__ */ _deepFreeze([
   3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1,
 ]);
 
+// Deliberately alike: the E-series tables below are one shape with their own values (data).
 /** E48 significands (IEC 60063): round(10^(i/48), 2). */
 export const seriesE48: readonly number[] = /* @__PURE__ */ _deepFreeze([
   1.00, 1.05, 1.10, 1.15, 1.21, 1.27, 1.33, 1.40, 1.47, 1.54, 1.62, 1.69,

@@ -106,6 +106,7 @@ export function formatComparisonReport(
         "",
       ].join("\n");
     default:
+      // Deliberately alike: every text report opens with its heading underlined (the sweep report too).
       return [
         heading,
         "=".repeat([...heading].length),

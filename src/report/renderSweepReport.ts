@@ -112,6 +112,7 @@ export function formatSweepReport(sweep: ErrorSweep, format: ReportFormat, optio
         "",
       ].join("\n");
     default:
+      // Deliberately alike: every text report opens with its heading underlined (the comparison report too).
       return [
         heading,
         "=".repeat([...heading].length),

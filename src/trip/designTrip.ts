@@ -28,6 +28,7 @@ import {
   _nominalSwitchingC,
 } from "../chain/tripTemperatureModel.js";
 import type { _CompiledChain, _PrebuiltStages } from "../chain/_compileChain.js";
+// Deliberately alike: the trip barrel (trip/index.ts) lists the same type names to export them.
 import type {
   ProcessLimits,
   ReferenceOption,

@@ -89,6 +89,7 @@ function optimiseCoordinate(
   return bestValue;
 }
 
+// (Alike in shape only with the bulk forward loop's end in its90/bulk.ts: another job.)
 /** Coordinate-wise ascent of sign·f from `x` (modified in place); returns the best sign·f. */
 function coordinateSearch(
   evaluator: _ModelEvaluator,

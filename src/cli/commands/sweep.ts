@@ -69,6 +69,7 @@ export function sweepChainOfDesign(design: DesignFile): MeasurementChain {
 
 /** Registers the `sweep` command. @internal */
 export function registerSweepCommand(program: Command, context: CommandContext): Command {
+  // Deliberately alike: check (and every design command) starts its registration the same way, each with its own options.
   const command = program
     .command("sweep")
     .description("sweep the measurement chain's reading error over temperature")

@@ -41,6 +41,7 @@ export function referenceHeadroom(reference: ReferenceElement): ReferenceHeadroo
   const context = "reference headroom";
   const o = _requireObject(reference, "reference", context);
   if (o["variant"] === "shunt") {
+    // Same error shape as other typed-error checks (deliberate: each names its own quantity and problem).
     throw new HotjunctionRangeError({
       code: "INVALID_OPTION",
       quantity: "reference variant",

@@ -63,6 +63,7 @@ const largerOf = (minC: number, maxC: number, toleranceC: number, fractionOfRead
  */
 export const iecToleranceClasses: ToleranceTable<1 | 2 | 3> = /* @__PURE__ */ _deepFreeze({
   source: "IEC 60584-1:2013, table of tolerance classes",
+  // Deliberately alike: one row per type and class, the same shape with the standard's own values (data).
   grades: {
     1: {
       T: [fixed(-40, 125, 0.5), proportional(125, 350, 0.004)],

@@ -14,6 +14,7 @@ function rejectCustom(value: unknown, context: string): void {
   if (typeof value !== "object" || value === null) return;
   const o = value as Record<string, unknown>;
   if (o["kind"] === "custom") {
+    // Same error shape as other typed-error checks (deliberate: each names its own quantity and problem).
     throw new HotjunctionRangeError({
       code: "INVALID_OPTION",
       quantity: "effect kind",

@@ -57,6 +57,7 @@ export interface FaultReviewTripResult {
  * console.log(loss?.effect, loss?.safety); // "trips-immediately" "safe"
  * ```
  */
+// Deliberately alike: a public entry's signature with its options default and context line (as midRailDivider).
 export function reviewTripDesignFaults(
   design: TripDesign,
   result: FaultReviewTripResult,

@@ -135,6 +135,7 @@ function checkRequest(options: BuildFirmwareTableOptions): Request {
       ? DEFAULT_MAX_BREAKPOINTS
       : _requireInRange(options.maxBreakpoints, "maxBreakpoints", 2, HARD_MAX_BREAKPOINTS, undefined, context);
   if (!Number.isInteger(cap)) {
+    // Same error shape as other typed-error checks (deliberate: each names its own quantity and problem).
     throw new HotjunctionRangeError({
       code: "OUT_OF_RANGE",
       quantity: "maxBreakpoints",

@@ -46,6 +46,7 @@ export interface MidRailDivider {
  * ```
  * @see error-budget conventions for dividers, ∂ln k/∂ln R₂ = 1 − k (common practice, no source)
  */
+// Deliberately alike: a public entry's signature with its options default and context line (as reviewTripDesignFaults).
 export function midRailDivider(
   referenceVolts: number,
   resistorToleranceFraction: number,

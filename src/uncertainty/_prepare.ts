@@ -51,6 +51,7 @@ export function _correlationMatrix(correlations: unknown, names: readonly string
   if (correlations === undefined) return undefined;
   const context = "propagate correlations";
   if (!Array.isArray(correlations)) {
+    // Same error shape as other typed-error checks (deliberate: each names its own quantity and problem).
     throw new HotjunctionTypeError({
       code: "INVALID_OPTION",
       quantity: "correlations",
@@ -78,6 +79,7 @@ export function _correlationMatrix(correlations: unknown, names: readonly string
     const [a, b, r] = entry as [unknown, unknown, unknown];
     for (const name of [a, b]) {
       if (typeof name !== "string" || !names.includes(name)) {
+        // Same error shape as other typed-error checks (deliberate: each names its own quantity and problem).
         throw new HotjunctionRangeError({
           code: "UNKNOWN_NAME",
           quantity: "input name",
@@ -99,6 +101,7 @@ export function _correlationMatrix(correlations: unknown, names: readonly string
     }
     const key = [a as string, b as string].sort().join("\u0000");
     if (seen.has(key)) {
+      // Same error shape as other typed-error checks (deliberate: each names its own quantity and problem).
       throw new HotjunctionRangeError({
         code: "INVALID_OPTION",
         quantity: "correlation",

@@ -75,6 +75,7 @@ export async function _loadModel(module: string, exportName: string, context: st
   }
   const model = namespace[exportName];
   if (typeof model !== "function") {
+    // Same error shape as other typed-error checks (deliberate: each names its own quantity and problem).
     throw new HotjunctionTypeError({
       code: "INVALID_OPTION",
       quantity: "model export",
@@ -87,6 +88,7 @@ export async function _loadModel(module: string, exportName: string, context: st
   if (argument === undefined) return model as Model;
   const made = (model as (a: unknown) => unknown)(argument);
   if (typeof made !== "function") {
+    // Same error shape as other typed-error checks (deliberate: each names its own quantity and problem).
     throw new HotjunctionTypeError({
       code: "INVALID_OPTION",
       quantity: "model factory result",

@@ -52,8 +52,10 @@ const letterEntryBudgetBytes = 6_000;
 // worst case's fast path: measured 100,737 B, then 101,751 B with the renderers' shape guards (2 Dec 2026).
 // Raised from 104,000 B (2 Dec 2026) for the typed-error contract's guards at every export (shapes, finite data,
 // overflow checks: about 2 kB), the ADC reading model's enclosure (about 1.6 kB) and the worst case's one-at-a-time
-// proof and warm start (about 0.5 kB): measured 106,943 B.
-const fullEntryBudgetBytes = 110_000;
+// proof and warm start (about 0.5 kB): measured 106,943 B. Raised from 110,000 B (3 Dec 2026) for the reading
+// enclosure's wire (about 1.2 kB), the sweep's shared draws and selection, the cold-junction enclosure's one-turn
+// step and designTripParallel: measured 112,170 B.
+const fullEntryBudgetBytes = 115_000;
 /** `hotjunction/design` as a whole (`import * as design`), zod included; measured 102 259 B at the entry split (0.1.0). */
 // Raised from 120,000 B when the design file gained the dynamics, failureData and wire sections (the wire
 // checkers pull in the conversion engine); measured figure in DEVELOPERS.md.

@@ -13,6 +13,8 @@ export default defineConfig([
       monteCarloWorker: "src/uncertainty/_monteCarloWorker.ts",
       // Model factory of designTripParallel's workers: must sit beside the chunk that names it (dist/tripModel.js).
       tripModel: "src/trip/_tripModelFactory.ts",
+      // Model factory of evaluateChainParallel's workers (dist/chainModel.js), likewise.
+      chainModel: "src/chain/_chainModelFactory.ts",
     },
     format: ["esm", "cjs"],
     dts: { compilerOptions: { ignoreDeprecations: "6.0" } },
@@ -31,6 +33,7 @@ export default defineConfig([
       sweepWorker: "src/cli/_sweepWorker.ts",
       "cli/monteCarloWorker": "src/uncertainty/_monteCarloWorker.ts",
       "cli/tripModel": "src/trip/_tripModelFactory.ts",
+      "cli/chainModel": "src/chain/_chainModelFactory.ts",
     },
     format: ["esm"],
     banner: { js: "#!/usr/bin/env node" },

@@ -177,6 +177,8 @@ export {
   type ErrorSourceUnit,
   evaluateChain,
   type EvaluateChainOptions,
+  evaluateChainParallel,
+  type EvaluateChainParallelOptions,
   type FixedGain,
   type FixedScaleAmplifierElement,
   fixedScaleNonlinearityC,

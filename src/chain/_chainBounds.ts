@@ -5,7 +5,8 @@
  */
 import { _invalidChoice, _requireFinite } from "../errors.js";
 import { normalQuantile } from "../uncertainty/normalQuantile.js";
-import type { _CommonDrawsFamily, _SplitModel } from "../uncertainty/_commonDrawsFamily.js";
+import type { _SplitModel } from "../uncertainty/_commonDrawsFamily.js";
+import type { Distribution, Model, PropagationResult } from "../uncertainty/types.js";
 import { propagate } from "../uncertainty/propagate.js";
 import { _propagationMethods, type PropagationMethod } from "../uncertainty/types.js";
 import { _requireObject } from "./_common.js";
@@ -67,6 +68,15 @@ export function _checkBoundsOptions(options: unknown, context: string): _Checked
 }
 
 /**
+ * @internal Where a chain evaluation's Monte Carlo band can come from instead of `propagate`: a sweep's common
+ * draws (`_CommonDrawsFamily`) or a run made elsewhere with the same options (on worker threads); undefined
+ * when it declines.
+ */
+export interface _MonteCarloSource {
+  run(model: Model, inputs: Readonly<Record<string, Distribution>>, split?: _SplitModel): PropagationResult | undefined;
+}
+
+/**
  * @internal Bounds per method and the contribution table of a chain model; `trueC` is the value errors are
  * taken against (the true hot-junction temperature, or the nominal result). With `family` (a sweep's common
  * draws, made with this call's Monte Carlo options; `split`: the model split for it) the Monte Carlo band
@@ -76,7 +86,7 @@ export function _chainBounds(
   cm: ChainModel,
   trueC: number,
   options: _CheckedBoundsOptions,
-  family?: _CommonDrawsFamily,
+  family?: _MonteCarloSource,
   split?: _SplitModel,
 ): { bounds: ChainBound[]; contributions: ChainContribution[] } {
   const names = Object.keys(cm.inputs);

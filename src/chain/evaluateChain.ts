@@ -6,7 +6,7 @@
 import { _requireFinite, _requireWorkWithin, HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
 import { _CommonDrawsFamily, type _SplitModel } from "../uncertainty/_commonDrawsFamily.js";
-import { _chainBounds, _checkBoundsOptions, type _CheckedBoundsOptions, type ChainBoundsOptions } from "./_chainBounds.js";
+import { _chainBounds, _checkBoundsOptions, type _CheckedBoundsOptions, type _MonteCarloSource, type ChainBoundsOptions } from "./_chainBounds.js";
 import {
   _codeForVolts,
   _compileChain,
@@ -50,7 +50,7 @@ function _readingSplit(cc: _CompiledChain, t: number): _SplitModel | undefined {
 }
 
 /** @internal {@link evaluateChain} at one temperature of a compiled chain (checked options, optional common draws). */
-export function _chainEvaluationAt(cc: _CompiledChain, t: number, opts: _CheckedBoundsOptions, draws?: _CommonDrawsFamily): ChainEvaluation {
+export function _chainEvaluationAt(cc: _CompiledChain, t: number, opts: _CheckedBoundsOptions, draws?: _MonteCarloSource): ChainEvaluation {
   const sources = _sourcesAt(cc, t);
   const x = _meansRecord(sources);
   const volts = _signalVolts(cc, t, x);

@@ -90,6 +90,7 @@ export {
   type ReadingFromChainResult,
 } from "./readingFromChain.js";
 export { evaluateChain, type EvaluateChainOptions } from "./evaluateChain.js";
+export { evaluateChainParallel, type EvaluateChainParallelOptions } from "./evaluateChainParallel.js";
 export type { ChainBoundsOptions } from "./_chainBounds.js";
 export {
   temperatureFromChainReading,

@@ -4,7 +4,7 @@
  */
 import { _requireInteger, _requireOptionsObject, _requireWorkWithin } from "../errors.js";
 import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
-import { createMonteCarloPool, propagateParallel, type MonteCarloPool } from "../uncertainty/propagateParallel.js";
+import { _workerModuleLocation, createMonteCarloPool, propagateParallel, type MonteCarloPool } from "../uncertainty/propagateParallel.js";
 import type { PropagationResult } from "../uncertainty/types.js";
 import { _designTripWith, _setpointMonteCarloModel, designTrip, type DesignTripOptions } from "./designTrip.js";
 import type { TripDesign, TripDesignResult } from "./types.js";
@@ -19,16 +19,6 @@ export interface DesignTripParallelOptions extends DesignTripOptions {
   readonly parallelThreshold?: number;
 }
 
-/** Where a worker finds the setpoint model factory: beside this code (built: `tripModel.js`; source: the .ts). */
-function factoryLocation(): string | undefined {
-  try {
-    const here = import.meta.url;
-    if (typeof here !== "string" || here === "") return undefined;
-    return new URL(here.endsWith(".ts") ? "./_tripModelFactory.ts" : "./tripModel.js", here).href;
-  } catch {
-    return undefined;
-  }
-}
 
 /**
  * The same result as {@link designTrip}, to the last bit of every number, with each setpoint's Monte Carlo run
@@ -55,7 +45,7 @@ export async function designTripParallel(design: TripDesign, options: DesignTrip
   const threshold = parallelThreshold === undefined ? 262_144 : _requireInteger(parallelThreshold, "parallelThreshold", 1, 1e9, context);
   const count = workers === undefined ? undefined : _requireInteger(workers, "workers", 1, 64, context);
   const trials = tripOptions.monteCarloTrials ?? 100_000;
-  const module = factoryLocation();
+  const module = _workerModuleLocation("../trip/_tripModelFactory.ts", "tripModel.js")?.url.href;
   if (module === undefined || count === 1 || typeof trials !== "number" || trials < threshold) return designTrip(design, tripOptions);
   // The design's checks (planning the networks) and designTrip's work cap run before a worker starts.
   if (!Array.isArray(design?.setpoints) || design.setpoints.length === 0) return designTrip(design, tripOptions);

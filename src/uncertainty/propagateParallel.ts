@@ -140,16 +140,25 @@ function isNodeRuntime(): boolean {
   return typeof process === "object" && typeof process.versions === "object" && typeof process.versions.node === "string";
 }
 
-/** Where the worker entry is: beside this file (built: `monteCarloWorker.js` in `dist/`; source: the .ts). */
-function workerLocation(): { url: URL; fromSource: boolean } | undefined {
+/**
+ * @internal Where a module that workers load is: from source (tests, benches under tsx) `sourcePath` relative to
+ * this file; built, `builtName` beside the chunk this code is in (`dist/`, or `dist/cli/` for the CLI's build,
+ * which has its own copies of the worker entries). Undefined where there is no module URL (CommonJS).
+ */
+export function _workerModuleLocation(sourcePath: string, builtName: string): { url: URL; fromSource: boolean } | undefined {
   try {
     const here = import.meta.url;
     if (typeof here !== "string" || here === "") return undefined;
     const fromSource = here.endsWith(".ts");
-    return { url: new URL(fromSource ? "./_monteCarloWorker.ts" : "./monteCarloWorker.js", here), fromSource };
+    return { url: new URL(fromSource ? sourcePath : `./${builtName}`, here), fromSource };
   } catch {
     return undefined;
   }
+}
+
+/** Where the worker entry is: beside this file (built: `monteCarloWorker.js` in `dist/`; source: the .ts). */
+function workerLocation(): { url: URL; fromSource: boolean } | undefined {
+  return _workerModuleLocation("./_monteCarloWorker.ts", "monteCarloWorker.js");
 }
 
 async function availableCores(): Promise<number> {

@@ -4,7 +4,9 @@
  * @module
  */
 import type { Command } from "commander";
-import { evaluateChain } from "../../chain/evaluateChain.js";
+import { evaluateChain, type EvaluateChainOptions } from "../../chain/evaluateChain.js";
+import { evaluateChainParallel } from "../../chain/evaluateChainParallel.js";
+import type { ChainEvaluation, MeasurementChain } from "../../chain/types.js";
 import type { DesignFile } from "../../design/designSchema.js";
 import { measurementChainFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { firmwareTripReport } from "../../report/firmwareTripReport.js";
@@ -56,11 +58,26 @@ function tripOptions(settings: AnalysisSettings, progress: ReturnType<typeof _st
 }
 
 /**
- * The trip report of a comparator design with its Monte Carlo on worker threads from 262,144 trials
- * (`designTripParallel`: the same numbers as {@link _tripReportOfDesign}); an ADC design's as there. @internal
+ * The trip report of a design with its Monte Carlo on worker threads from 262,144 trials
+ * (`designTripParallel`, or `evaluateChainParallel` at each setpoint of an ADC design: the same numbers as
+ * {@link _tripReportOfDesign}). @internal
  */
 export async function _tripReportOfDesignOnCores(io: CliIo, design: DesignFile, settings: AnalysisSettings, workers: number | undefined): Promise<TripReport> {
-  if (design.comparator === undefined) return _tripReportOfDesign(io, design, settings);
+  if (design.comparator === undefined) {
+    const chain = measurementChainFromDesign(design);
+    const options = _chainOptions(settings);
+    const evaluations: ChainEvaluation[] = [];
+    const progress = _startProgress(io, "chain at setpoints");
+    try {
+      for (const [i, s] of design.setpoints.entries()) {
+        evaluations.push(await evaluateChainParallel(chain, s.tripTemperatureC, { ...options, ...(workers !== undefined ? { workers } : {}) }));
+        progress.update((i + 1) / design.setpoints.length);
+      }
+    } finally {
+      progress.stop();
+    }
+    return _adcReport(design, settings, chain, evaluations);
+  }
   const progress = _startProgress(io, "Monte Carlo");
   try {
     const result = await designTripParallel(tripDesignFromDesign(design), { ...tripOptions(settings, progress), ...(workers !== undefined ? { workers } : {}) });
@@ -82,6 +99,26 @@ export function _tripReportOfDesign(io: CliIo, design: DesignFile, settings: Ana
     }
   }
   const chain = measurementChainFromDesign(design);
+  const progress = _startProgress(io, "chain at setpoints");
+  try {
+    const evaluations = design.setpoints.map((s, i) => {
+      const evaluation = evaluateChain(chain, s.tripTemperatureC, _chainOptions(settings));
+      progress.update((i + 1) / design.setpoints.length);
+      return evaluation;
+    });
+    return _adcReport(design, settings, chain, evaluations);
+  } finally {
+    progress.stop();
+  }
+}
+
+/** evaluateChain's options from the analysis settings. */
+function _chainOptions(settings: AnalysisSettings): EvaluateChainOptions {
+  return { methods: _methodInfo(settings).methods, coverage: settings.coverage, trials: settings.trials, seed: settings.seed };
+}
+
+/** The report of an ADC design from its chain's evaluation at each setpoint. */
+function _adcReport(design: DesignFile, settings: AnalysisSettings, chain: MeasurementChain, evaluations: readonly ChainEvaluation[]): TripReport {
   const setpoints = design.setpoints.map((s) => ({
     name: s.name,
     tripTemperatureC: s.tripTemperatureC,
@@ -89,30 +126,11 @@ export function _tripReportOfDesign(io: CliIo, design: DesignFile, settings: Ana
     maxNormalOperatingC: limitOf(s.maxNormalOperatingC ?? design.processLimits?.maxNormalOperatingC, "maxNormalOperatingC", s.name),
     hazardLimitC: limitOf(s.hazardLimitC ?? design.processLimits?.hazardLimitC, "hazardLimitC", s.name),
   }));
-  const progress = _startProgress(io, "chain at setpoints");
-  try {
-    const evaluations = setpoints.map((s, i) => {
-      const evaluation = evaluateChain(chain, s.tripTemperatureC, {
-        methods: methods.methods,
-        coverage: settings.coverage,
-        trials: settings.trials,
-        seed: settings.seed,
-      });
-      progress.update((i + 1) / setpoints.length);
-      return evaluation;
-    });
-    const reference = design.reference;
-    const details = [`Reference: ${reference.name} (${reference.kind}), ${reference.nominalVolts} V.`, `ADC: ${design.adc?.bits ?? "?"} bits.`];
-    const report = firmwareTripReport(setpoints, evaluations, methods, details);
-    const buildSheet = _adcBuildSheet(design, chain, report, evaluations);
-    return _withAdcFullScale(
-      { ...report, ...(design.name !== undefined ? { designName: design.name } : {}), buildSheet },
-      design.adc?.bits ?? 0,
-      reference.nominalVolts,
-    );
-  } finally {
-    progress.stop();
-  }
+  const reference = design.reference;
+  const details = [`Reference: ${reference.name} (${reference.kind}), ${reference.nominalVolts} V.`, `ADC: ${design.adc?.bits ?? "?"} bits.`];
+  const report = firmwareTripReport(setpoints, evaluations, _methodInfo(settings), details);
+  const buildSheet = _adcBuildSheet(design, chain, report, evaluations);
+  return _withAdcFullScale({ ...report, ...(design.name !== undefined ? { designName: design.name } : {}), buildSheet }, design.adc?.bits ?? 0, reference.nominalVolts);
 }
 
 /** A setpoint's limit (validated present: a missing one here is a bug, said so rather than carried as NaN). */
@@ -139,7 +157,7 @@ export function registerCheckCommand(program: Command, context: CommandContext):
   command.option("--parts-csv <file>", "also write the bill of materials (every part the design chose: value, tolerance, tempco, count) as CSV");
   command.option(
     "--workers <n>",
-    "worker threads for a comparator design's Monte Carlo from 262,144 trials, 1 to 64 (default: the cores available, at most 8; the same numbers for any count)",
+    "worker threads for the Monte Carlo from 262,144 trials, 1 to 64 (default: the cores available, at most 8; the same numbers for any count)",
     _integerParser(1, 64),
   );
   command.action(async (path: string, options: CheckOptions) => {

@@ -236,6 +236,7 @@ export {
 // Over-temperature trip design (preferred series, threshold dividers, trip bands, reference comparison)
 export {
   compareReferences,
+  compareReferencesParallel,
   type CompareReferencesOptions,
   customaryToleranceFractions,
   designTrip,

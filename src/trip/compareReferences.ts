@@ -2,9 +2,11 @@
  * The same trip design evaluated with several reference options side by side.
  * @module
  */
-import { _requireFinite, _requireObject, _requireOptionsObject, _requireWorkWithin, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireInteger, _requireObject, _requireOptionsObject, _requireWorkWithin, HotjunctionRangeError } from "../errors.js";
 import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
+import { createMonteCarloPool } from "../uncertainty/propagateParallel.js";
 import { designTrip, type DesignTripOptions } from "./designTrip.js";
+import { designTripParallel, type DesignTripParallelOptions } from "./designTripParallel.js";
 import type {
   ReferenceComparison,
   ReferenceComparisonEntry,
@@ -67,6 +69,19 @@ export function compareReferences(
   referenceOptions: readonly ReferenceOption[],
   options: CompareReferencesOptions = {},
 ): ReferenceComparison {
+  return _compareReferencesWith(design, referenceOptions, options, designTrip);
+}
+
+/**
+ * @internal {@link compareReferences} with the trip designs made by `trip` (designTrip, or a lookup of results made
+ * on worker threads with the same arguments).
+ */
+export function _compareReferencesWith(
+  design: TripDesign,
+  referenceOptions: readonly ReferenceOption[],
+  options: CompareReferencesOptions,
+  trip: (design: TripDesign, options: DesignTripOptions) => TripDesignResult,
+): ReferenceComparison {
   const context = "compareReferences";
   _requireOptionsObject(options, context, true);
   if (Array.isArray(referenceOptions) && typeof design === "object" && design !== null && Array.isArray(design.setpoints)) {
@@ -100,13 +115,13 @@ export function compareReferences(
   // networks (e.g. a series and a shunt reference of 2.5 V) share one ideal-reference design.
   const yardsticks = new Map<string, TripDesignResult>();
   const entries: ReferenceComparisonEntry[] = referenceOptions.map((option, k) => {
-    const withOption = designTrip({ ...design, reference: option }, { ...designOptions, ...progressOf(2 * k) });
+    const withOption = trip({ ...design, reference: option }, { ...designOptions, ...progressOf(2 * k) });
     acceptanceMethod = withOption.acceptanceMethod;
     const volts = nominalVoltsOf(option);
     const yardstickKey = JSON.stringify([Object.is(volts, -0) ? "-0" : String(volts), withOption.networks]);
     let ideal = yardsticks.get(yardstickKey);
     if (ideal === undefined) {
-      ideal = designTrip(
+      ideal = trip(
         { ...design, reference: { kind: "ideal", name: "ideal reference", nominalVolts: volts } },
         { ...designOptions, ...progressOf(2 * k + 1), networks: withOption.networks },
       );
@@ -164,4 +179,52 @@ export function compareReferences(
       ? `None of the ${entries.length} reference options keeps every setpoint between normal operation and the hazard limit (${acceptanceMethod} band).`
       : `${adequateCount} of ${entries.length} reference options keep every setpoint between normal operation and the hazard limit (${acceptanceMethod} band); the cheapest adequate one is ${recommended}.`;
   return { acceptanceMethod, options: entries, recommended, summary };
+}
+
+/**
+ * The same comparison as {@link compareReferences}, every number to the last bit, with each trip design's Monte
+ * Carlo on worker threads ({@link designTripParallel}) when it has at least `parallelThreshold` trials.
+ * @param design - the trip design (its own `reference` is ignored; plain data: it is sent to the workers)
+ * @param referenceOptions - at least one option; names must differ
+ * @param options - {@link CompareReferencesOptions} plus `workers` and `parallelThreshold` as for `designTripParallel`
+ * @returns a promise of the {@link ReferenceComparison}
+ * @throws (rejects with) the errors of `compareReferences` and `designTripParallel`
+ * @example
+ * ```ts no-run
+ * import { compareReferencesParallel } from "hotjunction";
+ * const c = await compareReferencesParallel(design, options, { monteCarloTrials: 1_000_000 });
+ * ```
+ */
+export async function compareReferencesParallel(
+  design: TripDesign,
+  referenceOptions: readonly ReferenceOption[],
+  options: CompareReferencesOptions & Pick<DesignTripParallelOptions, "workers" | "parallelThreshold"> = {},
+): Promise<ReferenceComparison> {
+  _requireOptionsObject(options, "compareReferences", true);
+  const { workers, parallelThreshold, ...rest } = options;
+  const threshold = parallelThreshold === undefined ? 262_144 : _requireInteger(parallelThreshold, "parallelThreshold", 1, 1e9, "compareReferences");
+  if (workers !== undefined) _requireInteger(workers, "workers", 1, 64, "compareReferences");
+  if (workers === 1 || !(typeof rest.monteCarloTrials === "number" ? rest.monteCarloTrials >= threshold : 100_000 >= threshold)) {
+    return compareReferences(design, referenceOptions, rest);
+  }
+  // A first pass with designTrip itself on a few trials runs every check (and finds each option's networks).
+  const made = new Map<string, TripDesignResult>();
+  const keyOf = (d: TripDesign, o: DesignTripOptions): string => JSON.stringify([d.reference, o.networks ?? null]);
+  const calls: { design: TripDesign; options: DesignTripOptions }[] = [];
+  _compareReferencesWith(design, referenceOptions, { ...rest, monteCarloTrials: 20 }, (d, o) => {
+    const { onProgress: _p, ...plain } = o;
+    calls.push({ design: d, options: { ...plain, monteCarloTrials: rest.monteCarloTrials ?? 100_000 } });
+    return designTrip(d, { ...plain, monteCarloTrials: 20 });
+  });
+  const pool = await createMonteCarloPool(workers === undefined ? {} : { workers });
+  try {
+    for (const [i, c] of calls.entries()) {
+      made.set(keyOf(c.design, c.options), await designTripParallel(c.design, { ...c.options, ...(pool !== undefined ? { pool } : { workers: 1 }), ...(parallelThreshold !== undefined ? { parallelThreshold } : {}) }));
+      rest.onProgress?.((i + 1) / calls.length);
+    }
+  } finally {
+    await pool?.close();
+  }
+  const { onProgress: _q, ...quiet } = rest;
+  return _compareReferencesWith(design, referenceOptions, quiet, (d, o) => made.get(keyOf(d, o)) ?? designTrip(d, o));
 }

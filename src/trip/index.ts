@@ -47,7 +47,7 @@ export type {
 } from "./types.js";
 export { designTrip, type DesignTripOptions } from "./designTrip.js";
 export { designTripParallel, type DesignTripParallelOptions } from "./designTripParallel.js";
-export { compareReferences, type CompareReferencesOptions } from "./compareReferences.js";
+export { compareReferences, compareReferencesParallel, type CompareReferencesOptions } from "./compareReferences.js";
 export {
   customaryToleranceFractions,
   preferredSeries,

@@ -5,7 +5,8 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { parseDesign } from "../../src/design/parseDesign.js";
-import { tripDesignFromDesign } from "../../src/design/designToObjects.js";
+import { referenceOptionFromDesign, tripDesignFromDesign } from "../../src/design/designToObjects.js";
+import { compareReferences, compareReferencesParallel } from "../../src/trip/compareReferences.js";
 import { designTrip } from "../../src/trip/designTrip.js";
 import { designTripParallel } from "../../src/trip/designTripParallel.js";
 import { HotjunctionRangeError } from "../../src/errors.js";
@@ -74,4 +75,19 @@ describe("designTripParallel", () => {
       value: 42,
     });
   });
+
+  it("compareReferencesParallel: the same comparison as compareReferences (the reflow oven's reference options), through workers", async () => {
+    const file = "reflow-oven-trip.json";
+    const parsed = parseDesign(readFileSync(new URL(`../../examples/${file}`, import.meta.url), "utf8"), { fileName: file });
+    const references = [parsed.reference, ...(parsed.referenceAlternatives ?? [])].map(referenceOptionFromDesign);
+    expect(references.length).toBeGreaterThan(1);
+    const design = tripDesignFromDesign(parsed);
+    const options = { monteCarloTrials: 30_000, seed: 4 };
+    const plain = compareReferences(design, references, options);
+    let progress = 0;
+    const parallel = await compareReferencesParallel(design, references, { ...options, workers: 2, parallelThreshold: 1, onProgress: (f) => (progress = f) });
+    expect(JSON.parse(JSON.stringify(parallel))).toEqual(JSON.parse(JSON.stringify(plain)));
+    expect(progress).toBe(1);
+    await expect(compareReferencesParallel(design, references, { parallelThreshold: 0 })).rejects.toMatchObject({ quantity: "parallelThreshold", min: 1 });
+  }, 120_000);
 });

@@ -7,7 +7,7 @@ import type { Command } from "commander";
 import { referenceOptionFromDesign, tripDesignFromDesign } from "../../design/designToObjects.js";
 import { formatComparisonReport } from "../../report/renderComparisonReport.js";
 import type { ReportTemperatureUnit } from "../../report/displayUnit.js";
-import { compareReferences } from "../../trip/compareReferences.js";
+import { compareReferencesParallel, type compareReferences } from "../../trip/compareReferences.js";
 import { _startProgress } from "../progress.js";
 import { CliError, marginFailExitCode } from "../cliError.js";
 import { _addAnalysisOptions, _addDisplayUnitOption, _addReportOnlyOption, _analysisSettings, _loadDesign, _methodInfo, _setpointLimitsOfDesign, type AnalysisOptionValues } from "../designOptions.js";
@@ -110,7 +110,7 @@ export function registerCompareCommand(program: Command, context: CommandContext
     const progress = _startProgress(context.io, "Monte Carlo");
     let comparison: ReturnType<typeof compareReferences>;
     try {
-      comparison = design.comparator === undefined ? _adcComparison(context.io, design, settings) : compareReferences(tripDesignFromDesign(design), references, {
+      comparison = design.comparator === undefined ? _adcComparison(context.io, design, settings) : await compareReferencesParallel(tripDesignFromDesign(design), references, {
         acceptanceMethod: settings.acceptanceMethod,
         coverage: settings.coverage,
         monteCarloTrials: settings.trials,

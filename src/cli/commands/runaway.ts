@@ -20,7 +20,7 @@ import {
 import { _dynamicsFigures, _runawayToChart, _tripDynamicsOfDesign } from "../../designAnalysis/dynamicsOfDesign.js";
 import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import type { CommandContext } from "../commandContext.js";
-import { _tripReportOfDesign } from "./check.js";
+import { _tripReportOfDesignOnCores } from "./check.js";
 
 type RunawayOptions = OutputOptionValues &
   AnalysisOptionValues & { readonly reportOnly?: boolean; readonly setpoint?: string; readonly case?: string; readonly unit?: string };
@@ -63,7 +63,7 @@ export function registerRunawayCommand(program: Command, context: CommandContext
       throw new CliError(`--setpoint ${JSON.stringify(options.setpoint)} is not a setpoint of ${path}; valid: ${design.setpoints.map((s) => JSON.stringify(s.name)).join(", ")}`);
     }
     const settings = _analysisSettings(design, options);
-    const report = _tripReportOfDesign(context.io, design, settings);
+    const report = await _tripReportOfDesignOnCores(context.io, design, settings, undefined);
     const result = _tripDynamicsOfDesign(design, report);
     if (result === undefined) throw new CliError(`${path}: the design states no "dynamics" section`);
     const method = _methodInfo(settings);

@@ -91,6 +91,9 @@ export function _timeToTrueLevelSeconds(model: _CompiledDynamics, system: _Linea
       return t + hit.deltaSeconds;
     }
     t += h;
+    // A level within rounding of the equilibrium (above it by a few ulps) is never reached by the float64 state,
+    // which settles at its fixed point instead: the level is reached, to float64, when the state stops moving.
+    if (stationary(x, next)) return t;
     [x, next] = [next, x];
     if (i % 64 === 63) {
       h *= 2;
@@ -98,6 +101,16 @@ export function _timeToTrueLevelSeconds(model: _CompiledDynamics, system: _Linea
     }
   }
   throw new HotjunctionRangeError({ code: "OUT_OF_RANGE", quantity: "runaway duration", value: t, unit: "s", context: "dynamics", problem: "does not reach the level within the step budget" });
+}
+
+/** Whether a step left every state component where it was (to 4 ulps of its magnitude): the float64 fixed point. */
+function stationary(before: Float64Array, after: Float64Array): boolean {
+  for (let k = 0; k < before.length; k++) {
+    const a = before[k] as number;
+    const b = after[k] as number;
+    if (Math.abs(b - a) > 8.881784197001252e-16 * Math.max(Math.abs(a), Math.abs(b))) return false;
+  }
+  return true;
 }
 
 /** Ramp delay of the digital filter at steady state, s. @internal */

@@ -117,6 +117,29 @@ describe("first-order heated process", () => {
   });
 });
 
+describe("a hazard limit within rounding of the equilibrium (regression: found by the heated-load property above, unseeded)", () => {
+  it("the time to the hazard is where the float64 state settles, near τ·ln((T_eq − T_0)/(T_eq − T_h)); no OVERFLOW from ever longer steps", () => {
+    // 4999.999999775357 W, 500 J/K, 49.999999997754 W/K: T_eq = 119.99999999999913 °C, the hazard limit (trip + 10 °C)
+    // 119.99999999999912 °C, 1 ulp below it. Exactly, the load reaches it at τ·ln(40/1.4e-14) ≈ 356 s (Newton's law of
+    // cooling, first-order lag); the float64 state reaches its fixed point a little earlier.
+    const power = 4999.999999775357;
+    const loss = 49.999999997754;
+    const start = 20 + 0.5999999999999991 * (power / loss);
+    const trip = 20 + (0.5999999999999991 + 0.3) * (power / loss);
+    const r = simulateRunaway(
+      { runaway: { kind: "heaterPower", heaterWatts: power, loadCapacityJoulesPerK: 500, lossWattsPerK: loss, ambientC: 20 } },
+      { startC: start, tripTemperatureC: trip, hazardLimitC: trip + 10 },
+      { maxPoints: 50 },
+    );
+    const tau = 500 / loss;
+    const exact = tau * Math.log((20 + power / loss - start) / (20 + power / loss - (trip + 10)));
+    expect(r.timeFromStartToHazardSeconds).not.toBeNull();
+    expect(r.timeFromStartToHazardSeconds as number).toBeGreaterThan(0.9 * exact);
+    expect(r.timeFromStartToHazardSeconds as number).toBeLessThanOrEqual(exact);
+    expect(r.trueCrossingSeconds as number).toBeCloseTo(tau * Math.log((20 + power / loss - start) / (20 + power / loss - trip)), 6);
+  });
+});
+
 describe("sampled filters on a ramp", () => {
   it("a moving average of N samples delays a ramp by (N − 1)·Ts/2 (textbook DSP, boxcar group delay): decision = t_cross + (N−1)·Ts/2 + M·Ts", () => {
     fc.assert(

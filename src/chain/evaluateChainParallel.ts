@@ -2,8 +2,8 @@
  * {@link evaluateChain} with its Monte Carlo on every core.
  * @module
  */
-import { _requireFinite, _requireInteger, _requireOptionsObject } from "../errors.js";
-import { _workerModuleLocation, createMonteCarloPool, propagateParallel, type MonteCarloPool } from "../uncertainty/propagateParallel.js";
+import { _requireFinite, _requireOptionsObject } from "../errors.js";
+import { _parallelSettings, _workerModuleLocation, createMonteCarloPool, propagateParallel, type MonteCarloPool } from "../uncertainty/propagateParallel.js";
 import { _checkBoundsOptions } from "./_chainBounds.js";
 import { _compileChain } from "./_compileChain.js";
 import { _chainEvaluationAt, evaluateChain, type EvaluateChainOptions } from "./evaluateChain.js";
@@ -46,9 +46,8 @@ export async function evaluateChainParallel(
 ): Promise<ChainEvaluation> {
   const context = "evaluateChainParallel";
   _requireOptionsObject(options, context, true);
-  const { workers, pool, parallelThreshold, ...rest } = options;
-  const threshold = parallelThreshold === undefined ? 262_144 : _requireInteger(parallelThreshold, "parallelThreshold", 1, 1e9, context);
-  const count = workers === undefined ? undefined : _requireInteger(workers, "workers", 1, 64, context);
+  const { workers: _w, pool, parallelThreshold: _t, ...rest } = options;
+  const { threshold, workers: count } = _parallelSettings(options, context);
   // The chain's and the options' checks, in evaluateChain's order, before a worker starts.
   const cc = _compileChain(chain);
   const opts = _checkBoundsOptions(rest, "evaluateChain");

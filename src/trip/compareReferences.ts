@@ -2,9 +2,9 @@
  * The same trip design evaluated with several reference options side by side.
  * @module
  */
-import { _requireFinite, _requireInteger, _requireObject, _requireOptionsObject, _requireWorkWithin, HotjunctionRangeError } from "../errors.js";
+import { _requireFinite, _requireObject, _requireOptionsObject, _requireWorkWithin, HotjunctionRangeError } from "../errors.js";
 import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
-import { createMonteCarloPool } from "../uncertainty/propagateParallel.js";
+import { _parallelSettings, createMonteCarloPool } from "../uncertainty/propagateParallel.js";
 import { designTrip, type DesignTripOptions } from "./designTrip.js";
 import { designTripParallel, type DesignTripParallelOptions } from "./designTripParallel.js";
 import type {
@@ -82,6 +82,46 @@ export function _compareReferencesWith(
   options: CompareReferencesOptions,
   trip: (design: TripDesign, options: DesignTripOptions) => TripDesignResult,
 ): ReferenceComparison {
+  checkComparison(design, referenceOptions, options);
+  const { onProgress, ...designOptions } = options;
+  // Two designs per option (with the option, and with an ideal reference on the same resistors).
+  const runs = referenceOptions.length * 2;
+  const progressOf = (run: number): Pick<DesignTripOptions, "onProgress"> =>
+    onProgress === undefined ? {} : { onProgress: (f: number) => onProgress((run + f) / runs) };
+  let acceptanceMethod: ReferenceComparison["acceptanceMethod"] = options.acceptanceMethod ?? "worst-case";
+
+  // The yardstick depends only on the voltage and the resistors: options of one voltage that choose the same
+  // networks (e.g. a series and a shunt reference of 2.5 V) share one ideal-reference design.
+  const yardsticks = new Map<string, TripDesignResult>();
+  const entries: ReferenceComparisonEntry[] = referenceOptions.map((option, k) => {
+    const withOption = trip({ ...design, reference: option }, { ...designOptions, ...progressOf(2 * k) });
+    acceptanceMethod = withOption.acceptanceMethod;
+    const volts = nominalVoltsOf(option);
+    const yardstickKey = yardstickKeyOf(volts, withOption);
+    let ideal = yardsticks.get(yardstickKey);
+    if (ideal === undefined) {
+      ideal = trip(idealDesignOf(design, volts), { ...designOptions, ...progressOf(2 * k + 1), networks: withOption.networks });
+      yardsticks.set(yardstickKey, ideal);
+    } else {
+      onProgress?.((2 * k + 2) / runs);
+    }
+    return entryOf(option, withOption, ideal);
+  });
+  return rankedComparison(entries, acceptanceMethod);
+}
+
+/** The design with an ideal reference of `volts` (the yardstick of every option of that voltage). */
+function idealDesignOf(design: TripDesign, volts: number): TripDesign {
+  return { ...design, reference: { kind: "ideal", name: "ideal reference", nominalVolts: volts } };
+}
+
+/** Options of one voltage whose designs choose the same networks share one yardstick. */
+function yardstickKeyOf(volts: number, withOption: TripDesignResult): string {
+  return JSON.stringify([Object.is(volts, -0) ? "-0" : String(volts), withOption.networks]);
+}
+
+/** compareReferences' checks of its arguments (before any design runs). */
+function checkComparison(design: TripDesign, referenceOptions: readonly ReferenceOption[], options: CompareReferencesOptions): void {
   const context = "compareReferences";
   _requireOptionsObject(options, context, true);
   if (Array.isArray(referenceOptions) && typeof design === "object" && design !== null && Array.isArray(design.setpoints)) {
@@ -104,70 +144,51 @@ export function _compareReferencesWith(
     names.add(option?.name);
     if (option?.cost !== undefined) _requireFinite(option.cost, "cost", undefined, context);
   }
-  const { onProgress, ...designOptions } = options;
-  // Two designs per option (with the option, and with an ideal reference on the same resistors).
-  const runs = referenceOptions.length * 2;
-  const progressOf = (run: number): Pick<DesignTripOptions, "onProgress"> =>
-    onProgress === undefined ? {} : { onProgress: (f: number) => onProgress((run + f) / runs) };
-  let acceptanceMethod: ReferenceComparison["acceptanceMethod"] = options.acceptanceMethod ?? "worst-case";
+}
 
-  // The yardstick depends only on the voltage and the resistors: options of one voltage that choose the same
-  // networks (e.g. a series and a shunt reference of 2.5 V) share one ideal-reference design.
-  const yardsticks = new Map<string, TripDesignResult>();
-  const entries: ReferenceComparisonEntry[] = referenceOptions.map((option, k) => {
-    const withOption = trip({ ...design, reference: option }, { ...designOptions, ...progressOf(2 * k) });
-    acceptanceMethod = withOption.acceptanceMethod;
-    const volts = nominalVoltsOf(option);
-    const yardstickKey = JSON.stringify([Object.is(volts, -0) ? "-0" : String(volts), withOption.networks]);
-    let ideal = yardsticks.get(yardstickKey);
-    if (ideal === undefined) {
-      ideal = trip(
-        { ...design, reference: { kind: "ideal", name: "ideal reference", nominalVolts: volts } },
-        { ...designOptions, ...progressOf(2 * k + 1), networks: withOption.networks },
-      );
-      yardsticks.set(yardstickKey, ideal);
-    } else {
-      onProgress?.((2 * k + 2) / runs);
-    }
-    // Alike in shape only (deliberately): faults/reviewFaults.ts builds its fault rows the same way; the rows differ.
-    const setpoints = withOption.setpoints.map((sp, i) => {
-      const b = acceptedBand(withOption, i);
-      const yardstick = acceptedBand(ideal, i);
-      return {
-        name: sp.name,
-        lowC: b.lowC,
-        highC: b.highC,
-        idealLowC: yardstick.lowC,
-        idealHighC: yardstick.highC,
-        extraWidthC: b.highC - b.lowC - (yardstick.highC - yardstick.lowC),
-        marginToNormalC: sp.marginToNormalC,
-        marginToHazardC: sp.marginToHazardC,
-        pass: sp.pass,
-      };
-    });
-    const adequate = withOption.pass;
-    const worstExtra = Math.max(...setpoints.map((s) => s.extraWidthC));
-    const smallestMargin = Math.min(...setpoints.map((s) => Math.min(s.marginToNormalC, s.marginToHazardC)));
-    let verdictText: string;
-    if (adequate) {
-      verdictText = `${option.name} is good enough: every setpoint trips between normal operation and the hazard limit (smallest margin ${smallestMargin.toFixed(1)} °C); it widens the band by up to ${worstExtra.toFixed(1)} °C over an ideal reference.`;
-    } else {
-      const failing = withOption.setpoints.find((s) => !s.pass);
-      const why = failing !== undefined ? failing.reason : (withOption.reference.problems[0] ?? "it has a problem.");
-      verdictText = `${option.name} is not good enough: ${why}`;
-    }
+/** One option's entry: its bands beside the yardstick's, the extra width, the verdict. */
+function entryOf(option: ReferenceOption, withOption: TripDesignResult, ideal: TripDesignResult): ReferenceComparisonEntry {
+  // Alike in shape only (deliberately): faults/reviewFaults.ts builds its fault rows the same way; the rows differ.
+  const setpoints = withOption.setpoints.map((sp, i) => {
+    const b = acceptedBand(withOption, i);
+    const yardstick = acceptedBand(ideal, i);
     return {
-      name: option.name,
-      kind: option.kind,
-      cost: option.cost ?? null,
-      reference: withOption.reference,
-      networks: withOption.networks,
-      setpoints,
-      verdict: adequate ? "adequate" : "inadequate",
-      verdictText,
+      name: sp.name,
+      lowC: b.lowC,
+      highC: b.highC,
+      idealLowC: yardstick.lowC,
+      idealHighC: yardstick.highC,
+      extraWidthC: b.highC - b.lowC - (yardstick.highC - yardstick.lowC),
+      marginToNormalC: sp.marginToNormalC,
+      marginToHazardC: sp.marginToHazardC,
+      pass: sp.pass,
     };
   });
+  const adequate = withOption.pass;
+  const worstExtra = Math.max(...setpoints.map((s) => s.extraWidthC));
+  const smallestMargin = Math.min(...setpoints.map((s) => Math.min(s.marginToNormalC, s.marginToHazardC)));
+  let verdictText: string;
+  if (adequate) {
+    verdictText = `${option.name} is good enough: every setpoint trips between normal operation and the hazard limit (smallest margin ${smallestMargin.toFixed(1)} °C); it widens the band by up to ${worstExtra.toFixed(1)} °C over an ideal reference.`;
+  } else {
+    const failing = withOption.setpoints.find((s) => !s.pass);
+    const why = failing !== undefined ? failing.reason : (withOption.reference.problems[0] ?? "it has a problem.");
+    verdictText = `${option.name} is not good enough: ${why}`;
+  }
+  return {
+    name: option.name,
+    kind: option.kind,
+    cost: option.cost ?? null,
+    reference: withOption.reference,
+    networks: withOption.networks,
+    setpoints,
+    verdict: adequate ? "adequate" : "inadequate",
+    verdictText,
+  };
+}
 
+/** The comparison of the entries: the cheapest adequate one recommended, and the summary sentence. */
+function rankedComparison(entries: ReferenceComparisonEntry[], acceptanceMethod: ReferenceComparison["acceptanceMethod"]): ReferenceComparison {
   const ranked = entries
     .map((entry, index) => ({ entry, index }))
     .filter(({ entry }) => entry.verdict === "adequate")
@@ -180,6 +201,7 @@ export function _compareReferencesWith(
       : `${adequateCount} of ${entries.length} reference options keep every setpoint between normal operation and the hazard limit (${acceptanceMethod} band); the cheapest adequate one is ${recommended}.`;
   return { acceptanceMethod, options: entries, recommended, summary };
 }
+
 
 /**
  * The same comparison as {@link compareReferences}, every number to the last bit, with each trip design's Monte
@@ -202,29 +224,39 @@ export async function compareReferencesParallel(
 ): Promise<ReferenceComparison> {
   _requireOptionsObject(options, "compareReferences", true);
   const { workers, parallelThreshold, ...rest } = options;
-  const threshold = parallelThreshold === undefined ? 262_144 : _requireInteger(parallelThreshold, "parallelThreshold", 1, 1e9, "compareReferences");
-  if (workers !== undefined) _requireInteger(workers, "workers", 1, 64, "compareReferences");
+  const { threshold } = _parallelSettings(options, "compareReferences");
   if (workers === 1 || !(typeof rest.monteCarloTrials === "number" ? rest.monteCarloTrials >= threshold : 100_000 >= threshold)) {
     return compareReferences(design, referenceOptions, rest);
   }
-  // A first pass with designTrip itself on a few trials runs every check (and finds each option's networks).
+  // The same designs, in the same order, as compareReferences makes (each option, then its yardstick unless an
+  // option of that voltage with those networks made it already), each on the workers; then the comparison is
+  // assembled from them.
+  checkComparison(design, referenceOptions, rest);
+  const { onProgress, ...designOptions } = rest;
   const made = new Map<string, TripDesignResult>();
   const keyOf = (d: TripDesign, o: DesignTripOptions): string => JSON.stringify([d.reference, o.networks ?? null]);
-  const calls: { design: TripDesign; options: DesignTripOptions }[] = [];
-  _compareReferencesWith(design, referenceOptions, { ...rest, monteCarloTrials: 20 }, (d, o) => {
-    const { onProgress: _p, ...plain } = o;
-    calls.push({ design: d, options: { ...plain, monteCarloTrials: rest.monteCarloTrials ?? 100_000 } });
-    return designTrip(d, { ...plain, monteCarloTrials: 20 });
-  });
   const pool = await createMonteCarloPool(workers === undefined ? {} : { workers });
+  const onWorkers = { ...(pool !== undefined ? { pool } : { workers: 1 }), ...(parallelThreshold !== undefined ? { parallelThreshold } : {}) };
+  const runs = referenceOptions.length * 2;
   try {
-    for (const [i, c] of calls.entries()) {
-      made.set(keyOf(c.design, c.options), await designTripParallel(c.design, { ...c.options, ...(pool !== undefined ? { pool } : { workers: 1 }), ...(parallelThreshold !== undefined ? { parallelThreshold } : {}) }));
-      rest.onProgress?.((i + 1) / calls.length);
+    const yardsticks = new Set<string>();
+    for (const [k, option] of referenceOptions.entries()) {
+      const withDesign = { ...design, reference: option };
+      const withOption = await designTripParallel(withDesign, { ...designOptions, ...onWorkers });
+      made.set(keyOf(withDesign, designOptions), withOption);
+      onProgress?.((2 * k + 1) / runs);
+      const volts = nominalVoltsOf(option);
+      const yardstickKey = yardstickKeyOf(volts, withOption);
+      if (!yardsticks.has(yardstickKey)) {
+        yardsticks.add(yardstickKey);
+        const idealDesign = idealDesignOf(design, volts);
+        const idealOptions = { ...designOptions, networks: withOption.networks };
+        made.set(keyOf(idealDesign, idealOptions), await designTripParallel(idealDesign, { ...idealOptions, ...onWorkers }));
+      }
+      onProgress?.((2 * k + 2) / runs);
     }
   } finally {
     await pool?.close();
   }
-  const { onProgress: _q, ...quiet } = rest;
-  return _compareReferencesWith(design, referenceOptions, quiet, (d, o) => made.get(keyOf(d, o)) ?? designTrip(d, o));
+  return _compareReferencesWith(design, referenceOptions, designOptions, (d, o) => made.get(keyOf(d, o)) ?? designTrip(d, o));
 }

@@ -503,13 +503,35 @@ export function _setpointMonteCarloModel(
   index: number,
   networks: readonly ThresholdNetwork[] | undefined,
 ): Pick<ReturnType<typeof _comparatorTripModel>, "model" | "inputs"> {
+  const all = _setpointMonteCarloModels(design, networks);
+  const one = all[index];
+  if (one === undefined) designError("setpoint index", index, `is not an index of the ${all.length} setpoints`);
+  return one;
+}
+
+/** @internal {@link _setpointMonteCarloModel} for every setpoint, from one plan of the design. */
+export function _setpointMonteCarloModels(
+  design: TripDesign,
+  networks: readonly ThresholdNetwork[] | undefined,
+): Pick<ReturnType<typeof _comparatorTripModel>, "model" | "inputs">[] {
   if (typeof design !== "object" || design === null) designError("design", design, "is not an object");
   const { plans, place, chains } = planTrip(design, networks);
-  const plan = plans[index];
-  if (plan === undefined) designError("setpoint index", index, `is not an index of the ${plans.length} setpoints`);
-  const { network, tap } = place[index] as { network: number; tap: number };
-  const { model, inputs } = _comparatorTripModel((chains[network] as TripChain).compiled, tap, "trip", plan.tripC);
-  return { model, inputs };
+  return plans.map((plan, i) => {
+    const { network, tap } = place[i] as { network: number; tap: number };
+    const { model, inputs } = _comparatorTripModel((chains[network] as TripChain).compiled, tap, "trip", plan.tripC);
+    return { model, inputs };
+  });
+}
+
+/** @internal designTrip's checks of its arguments before any planning: the design object, the options, the work cap, the acceptance method. */
+export function _checkTripArguments(design: TripDesign, options: DesignTripOptions): void {
+  if (typeof design !== "object" || design === null) designError("design", design, "is not an object");
+  _requireOptionsObject(options, "designTrip", true);
+  if (Array.isArray(design.setpoints) && typeof options.monteCarloTrials === "number") {
+    _requireWorkWithin({ setpoints: design.setpoints.length, trials: options.monteCarloTrials }, _maxModelEvaluations, "designTrip");
+  }
+  const acceptanceMethod = options.acceptanceMethod ?? "worst-case";
+  if (!methods.includes(acceptanceMethod)) _invalidChoice("acceptanceMethod", acceptanceMethod, methods, "designTrip");
 }
 
 /**
@@ -544,13 +566,8 @@ export function _designTripWith(
   options: DesignTripOptions,
   monteCarlo: readonly (PropagationResult | undefined)[] | undefined,
 ): TripDesignResult {
-  if (typeof design !== "object" || design === null) designError("design", design, "is not an object");
-  _requireOptionsObject(options, "designTrip", true);
-  if (Array.isArray(design.setpoints) && typeof options.monteCarloTrials === "number") {
-    _requireWorkWithin({ setpoints: design.setpoints.length, trials: options.monteCarloTrials }, _maxModelEvaluations, "designTrip");
-  }
+  _checkTripArguments(design, options);
   const acceptanceMethod = options.acceptanceMethod ?? "worst-case";
-  if (!methods.includes(acceptanceMethod)) _invalidChoice("acceptanceMethod", acceptanceMethod, methods, "designTrip");
   const coverage = options.coverage ?? 0.95;
   const trials = options.monteCarloTrials ?? 100_000;
   const seed = options.seed ?? 1;

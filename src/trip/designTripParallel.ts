@@ -2,11 +2,10 @@
  * {@link designTrip} with each setpoint's Monte Carlo on every core.
  * @module
  */
-import { _requireInteger, _requireOptionsObject, _requireWorkWithin } from "../errors.js";
-import { _maxModelEvaluations } from "../uncertainty/_propagateMonteCarlo.js";
-import { _workerModuleLocation, createMonteCarloPool, propagateParallel, type MonteCarloPool } from "../uncertainty/propagateParallel.js";
+import { _requireOptionsObject } from "../errors.js";
+import { _parallelSettings, _workerModuleLocation, createMonteCarloPool, propagateParallel, type MonteCarloPool } from "../uncertainty/propagateParallel.js";
 import type { PropagationResult } from "../uncertainty/types.js";
-import { _designTripWith, _setpointMonteCarloModel, designTrip, type DesignTripOptions } from "./designTrip.js";
+import { _checkTripArguments, _designTripWith, _setpointMonteCarloModels, designTrip, type DesignTripOptions } from "./designTrip.js";
 import type { TripDesign, TripDesignResult } from "./types.js";
 
 /** Options of {@link designTripParallel}: those of {@link designTrip} plus where the Monte Carlo runs. */
@@ -41,16 +40,15 @@ export interface DesignTripParallelOptions extends DesignTripOptions {
 export async function designTripParallel(design: TripDesign, options: DesignTripParallelOptions = {}): Promise<TripDesignResult> {
   const context = "designTripParallel";
   _requireOptionsObject(options, context, true);
-  const { workers, pool, parallelThreshold, ...tripOptions } = options;
-  const threshold = parallelThreshold === undefined ? 262_144 : _requireInteger(parallelThreshold, "parallelThreshold", 1, 1e9, context);
-  const count = workers === undefined ? undefined : _requireInteger(workers, "workers", 1, 64, context);
+  const { workers: _w, pool, parallelThreshold: _t, ...tripOptions } = options;
+  const { threshold, workers: count } = _parallelSettings(options, context);
   const trials = tripOptions.monteCarloTrials ?? 100_000;
   const module = _workerModuleLocation("../trip/_tripModelFactory.ts", "tripModel.js")?.url.href;
   if (module === undefined || count === 1 || typeof trials !== "number" || trials < threshold) return designTrip(design, tripOptions);
-  // The design's checks (planning the networks) and designTrip's work cap run before a worker starts.
-  if (!Array.isArray(design?.setpoints) || design.setpoints.length === 0) return designTrip(design, tripOptions);
-  _requireWorkWithin({ setpoints: design.setpoints.length, trials }, _maxModelEvaluations, "designTrip");
-  const models = design.setpoints.map((_, i) => _setpointMonteCarloModel(design, i, tripOptions.networks));
+  // designTrip's checks (its arguments, then the design while planning the networks) run before a worker starts.
+  _checkTripArguments(design, tripOptions);
+  const models = _setpointMonteCarloModels(design, tripOptions.networks);
+  if (models.length === 0) return designTrip(design, tripOptions);
   const usePool = pool ?? (await createMonteCarloPool(count === undefined ? {} : { workers: count }));
   if (usePool === undefined) return designTrip(design, tripOptions);
   try {

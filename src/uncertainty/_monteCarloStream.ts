@@ -113,18 +113,27 @@ export class _Sampler {
    * trapezoidal (1 + β)r₁ + (1 − β)r₂. {@link _scaleUnitDraws} of them gives `fill`'s bits. Not for correlated inputs.
    */
   fillUnits(count: number): void {
+    for (let i = 0; i < this.distributions.length; i++) this.fillUnitColumn(i, count);
+  }
+
+  /** Unit draws of input `i` into its column (JCGM 101 6.4.2–6.4.7). */
+  private fillUnitColumn(i: number, count: number): void {
     const col = this.columns;
     const rng = this.rng;
-    for (let i = 0; i < this.distributions.length; i++) {
-      const d = this.distributions[i] as _CheckedDistribution;
-      const offset = i * batchSize;
-      if (d.kindCode === 0) {
+    const d = this.distributions[i] as _CheckedDistribution;
+    const offset = i * batchSize;
+    switch (d.kindCode) {
+      case 0: // normal, 6.4.7
         this.fillStandardNormal(offset, count);
-      } else if (d.kindCode === 1) {
+        break;
+      case 1: // rectangular, 6.4.2
         for (let t = 0; t < count; t++) col[offset + t] = 2 * rng.uniform() - 1;
-      } else if (d.kindCode === 4) {
+        break;
+      case 4: // arcsine, 6.4.6
         for (let t = 0; t < count; t++) col[offset + t] = Math.sin(twoPi * rng.uniform());
-      } else {
+        break;
+      default: {
+        // trapezoidal 6.4.3 (triangular 6.4.4 is β = 0): a' + (b' − a')[(1+β)r₁ + (1−β)r₂]/2
         const beta = d.kindCode === 2 ? 0 : d.beta;
         for (let t = 0; t < count; t++) {
           const r1 = rng.uniform();
@@ -135,44 +144,18 @@ export class _Sampler {
     }
   }
 
-  /** Fills the first `count` entries of every column. */
+  /** Fills the first `count` entries of every column: unit draws, then each input's location and scale in place. */
   fill(count: number): void {
     const col = this.columns;
-    const rng = this.rng;
     const correlated = this.correlated;
     for (let i = 0; i < this.distributions.length; i++) {
-      const d = this.distributions[i] as _CheckedDistribution;
       const offset = i * batchSize;
       if (correlated.includes(i)) {
         this.fillStandardNormal(offset, count);
         continue;
       }
-      const mean = d.mean;
-      const a = d.halfWidth;
-      switch (d.kindCode) {
-        case 0: {
-          this.fillStandardNormal(offset, count);
-          const u = d.standardUncertainty;
-          for (let t = 0; t < count; t++) col[offset + t] = mean + u * (col[offset + t] as number);
-          break;
-        }
-        case 1: // rectangular, 6.4.2
-          for (let t = 0; t < count; t++) col[offset + t] = mean + a * (2 * rng.uniform() - 1);
-          break;
-        case 4: // arcsine, 6.4.6
-          for (let t = 0; t < count; t++) col[offset + t] = mean + a * Math.sin(twoPi * rng.uniform());
-          break;
-        default: {
-          // trapezoidal 6.4.3 (triangular 6.4.4 is β = 0): a' + (b' − a')[(1+β)r₁ + (1−β)r₂]/2
-          const beta = d.kindCode === 2 ? 0 : d.beta;
-          const low = mean - a;
-          for (let t = 0; t < count; t++) {
-            const r1 = rng.uniform();
-            const r2 = rng.uniform();
-            col[offset + t] = low + a * ((1 + beta) * r1 + (1 - beta) * r2);
-          }
-        }
-      }
+      this.fillUnitColumn(i, count);
+      _scaleUnitDraws(this.distributions[i] as _CheckedDistribution, col, offset, col, offset, count);
     }
     const lower = this.lower;
     if (lower === undefined) return;

@@ -141,6 +141,20 @@ function isNodeRuntime(): boolean {
 }
 
 /**
+ * @internal The checked `parallelThreshold` (default 262,144 trials) and `workers` (1–64, or undefined for the
+ * cores) of every function that can run on worker threads.
+ */
+export function _parallelSettings(
+  o: { readonly workers?: number; readonly parallelThreshold?: number },
+  context: string,
+): { threshold: number; workers: number | undefined } {
+  return {
+    threshold: o.parallelThreshold === undefined ? 262_144 : _requireInteger(o.parallelThreshold, "parallelThreshold", 1, 1e9, context),
+    workers: o.workers === undefined ? undefined : _requireInteger(o.workers, "workers", 1, 64, context),
+  };
+}
+
+/**
  * @internal Where a module that workers load is: from source (tests, benches under tsx) `sourcePath` relative to
  * this file; built, `builtName` beside the chunk this code is in (`dist/`, or `dist/cli/` for the CLI's build,
  * which has its own copies of the worker entries). Undefined where there is no module URL (CommonJS).
@@ -364,9 +378,7 @@ export async function propagateParallel<Name extends string>(
   }
   const { workers: _w, pool: givenPool, parallelThreshold: _t, ...rest } = o;
   if (o.method !== "monte-carlo") return propagate(fn as Model<Name>, inputs, rest);
-  const threshold =
-    o.parallelThreshold === undefined ? 262_144 : _requireInteger(o.parallelThreshold, "parallelThreshold", 1, 1e9, context);
-  const workers = o.workers === undefined ? undefined : _requireInteger(o.workers, "workers", 1, 64, context);
+  const { threshold, workers } = _parallelSettings(o, context);
   if (givenPool !== undefined && !(givenPool instanceof Pool)) {
     throw new HotjunctionTypeError({ code: "INVALID_OPTION", quantity: "pool", value: givenPool, context, problem: "is not a pool from createMonteCarloPool" });
   }

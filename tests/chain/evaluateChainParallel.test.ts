@@ -10,7 +10,7 @@ import { evaluateChainParallel } from "../../src/chain/evaluateChainParallel.js"
 import type { ChainEvaluation } from "../../src/chain/types.js";
 import { measurementChainFromDesign } from "../../src/design/designToObjects.js";
 import { parseDesign } from "../../src/design/parseDesign.js";
-import { createMonteCarloPool } from "../../src/uncertainty/propagateParallel.js";
+import { chunksRunOnPool } from "../_countedPool.js";
 
 const chainOf = (path: string) => measurementChainFromDesign(parseDesign(readFileSync(new URL(path, import.meta.url), "utf8"), { fileName: path }));
 
@@ -26,22 +26,11 @@ describe("evaluateChainParallel", () => {
       for (const workers of [1, 2, 4]) {
         expect(numbers(await evaluateChainParallel(chain, t, { ...options, workers, parallelThreshold: 1 })), `${path}, ${workers} workers`).toEqual(plain);
       }
-      const pool = await createMonteCarloPool({ workers: 2 });
-      if (pool === undefined) throw new Error("no worker pool");
-      const counted = pool as unknown as { run: (...a: unknown[]) => Promise<Float64Array> };
-      const run = counted.run.bind(pool);
-      let chunks = 0;
-      counted.run = (...a: unknown[]) => {
-        chunks++;
-        return run(...a);
-      };
-      try {
+      const chunks = await chunksRunOnPool(async (pool) => {
         const viaPool = await evaluateChainParallel(chain, t, { ...options, pool, parallelThreshold: 1 });
         expect(numbers(viaPool)).toEqual(plain);
         expect(viaPool.bounds.find((b) => b.method === "monte-carlo")?.note).toContain("2 worker threads");
-      } finally {
-        await pool.close();
-      }
+      });
       expect(chunks).toBeGreaterThan(0);
     }
   }, 120_000);

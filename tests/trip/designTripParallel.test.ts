@@ -10,7 +10,8 @@ import { compareReferences, compareReferencesParallel } from "../../src/trip/com
 import { designTrip } from "../../src/trip/designTrip.js";
 import { designTripParallel } from "../../src/trip/designTripParallel.js";
 import { HotjunctionRangeError } from "../../src/errors.js";
-import { createMonteCarloPool, propagateParallel } from "../../src/uncertainty/propagateParallel.js";
+import { propagateParallel } from "../../src/uncertainty/propagateParallel.js";
+import { chunksRunOnPool } from "../_countedPool.js";
 import type { TripDesignResult } from "../../src/trip/types.js";
 
 const designOf = (file: string) => tripDesignFromDesign(parseDesign(readFileSync(new URL(`../../examples/${file}`, import.meta.url), "utf8"), { fileName: file }));
@@ -30,20 +31,9 @@ describe("designTripParallel", () => {
         expect(numbers(await designTripParallel(design, { ...options, workers, parallelThreshold: 1 })), `${file}, ${workers} workers`).toEqual(plain);
       }
       // Through a pool, counting the chunks the workers were asked for: the run did leave this thread.
-      const pool = await createMonteCarloPool({ workers: 2 });
-      if (pool === undefined) throw new Error("no worker pool");
-      const counted = pool as unknown as { run: (...a: unknown[]) => Promise<Float64Array> };
-      const run = counted.run.bind(pool);
-      let chunks = 0;
-      counted.run = (...a: unknown[]) => {
-        chunks++;
-        return run(...a);
-      };
-      try {
+      const chunks = await chunksRunOnPool(async (pool) => {
         expect(numbers(await designTripParallel(design, { ...options, pool, parallelThreshold: 1 }))).toEqual(plain);
-      } finally {
-        await pool.close();
-      }
+      });
       expect(chunks).toBeGreaterThan(0);
     }
   }, 120_000);

@@ -1,4 +1,5 @@
 import { defineConfig } from "tsup";
+import { finishProgramBundle } from "./scripts/finishProgramBundle.js";
 
 export default defineConfig([
   {
@@ -45,7 +46,31 @@ export default defineConfig([
     esbuildOptions(options) {
       options.chunkNames = "cli/[name]-[hash]";
     },
+    // The commander program is not in this build: `_programLoader.ts` runs dist/cli/program.cjs (the next entry).
+    define: { __HOTJUNCTION_PROGRAM_BUNDLE__: "true" },
     target: "node20",
     platform: "node",
+  },
+  {
+    // The CLI's program bundle (src/cli/_programBundle.ts): the commander program, every command and the libraries
+    // they use in one CommonJS file, so that the CLI can compile it through a V8 code cache (Node 20 has none for
+    // modules). Each command's code still starts only when that command runs (every import() becomes a lazy module
+    // start). import.meta.url is the bundle's own URL, so worker entries are found beside it in dist/cli/.
+    entry: { "cli/program": "src/cli/_programBundle.ts" },
+    format: ["cjs"],
+    outExtension: () => ({ js: ".cjs" }),
+    sourcemap: false,
+    clean: false,
+    splitting: false,
+    noExternal: [/./],
+    define: { "import.meta.url": "__hotjunctionBundleUrl" },
+    banner: { js: 'var __hotjunctionBundleUrl = require("node:url").pathToFileURL(__filename).href;' },
+    // Every import() as a lazy require: the bundle runs as a node:vm script, which has no module loader of its own.
+    esbuildOptions(options) {
+      options.supported = { ...options.supported, "dynamic-import": false };
+    },
+    target: "node20",
+    platform: "node",
+    onSuccess: finishProgramBundle,
   },
 ]);

@@ -6,6 +6,6 @@ export default defineConfig({
     testTimeout: 120_000,
     hookTimeout: 300_000,
     pool: "forks",
-    setupFiles: ["tests/_fastCheckSeed.ts"],
+    setupFiles: ["tests/_fastCheckSeed.ts", "tests/_cacheDirectory.ts"],
   },
 });

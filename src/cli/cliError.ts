@@ -3,6 +3,7 @@
  * in the README).
  * @module
  */
+import type { CliIo } from "./io.js";
 import { isHotjunctionError } from "../errors.js";
 
 /** Exit code of a usage or validation error (bad argument, bad option, bad design file content, refused output). */
@@ -62,4 +63,15 @@ export function _describeFailure(error: unknown): { message: string; exitCode: n
     return { message: _oneLine(text.length > 0 ? text : error.name), exitCode: failureExitCode };
   }
   return { message: _oneLine(`unexpected failure: ${String(error)}`), exitCode: failureExitCode };
+}
+
+/**
+ * Writes a failure as one line on standard error (`hotjunction: <message>`) and returns its exit code: the CLI
+ * entry's last word, and the program bundle's (`_programBundle.ts`), whose error classes are its own copies.
+ * @internal
+ */
+export function _reportFailure(error: unknown, io: Pick<CliIo, "writeErr">): number {
+  const failure = _describeFailure(error);
+  io.writeErr(`hotjunction: ${failure.message}\n`);
+  return failure.exitCode;
 }

@@ -1,10 +1,11 @@
 /**
  * The command-line program's entry: answers `emf`/`temp` with plain arguments on a fast path, otherwise loads
- * the commander program (src/cli/program.ts); turns every failure into one line on standard error
+ * the commander program (src/cli/program.ts; in the built CLI the program bundle `dist/cli/program.cjs`, through
+ * `_programLoader.ts` and its compile cache); turns every failure into one line on standard error
  * (`hotjunction: <message>`) and an exit code (the table in cliError.ts, printed by `--help`).
  * @module
  */
-import { _describeFailure, usageExitCode } from "./cliError.js";
+import { _reportFailure, usageExitCode } from "./cliError.js";
 import { _tryFastPath } from "./fastPath.js";
 import type { CliIo } from "./io.js";
 
@@ -34,11 +35,10 @@ export async function _runCli(argv: readonly string[], io: CliIo, options: RunCl
       const code = await _tryFastPath(argv, io);
       if (code !== undefined) return code;
     }
-    const { _runProgram } = await import("./program.js");
-    return await _runProgram(argv, io);
+    const { _runProgramOnce } = await import("./_programLoader.js");
+    return await _runProgramOnce(argv, io);
   } catch (error) {
-    const failure = _describeFailure(error);
-    io.writeErr(`hotjunction: ${failure.message}\n`);
-    return failure.exitCode;
+    return _reportFailure(error, io);
   }
 }
+

@@ -55,6 +55,18 @@ export function _deserializeError(e: _SerializedError): Error {
   return new Error(e.message);
 }
 
+/** How {@link _loadModel} imports a module (see {@link _setModuleImporter}). */
+let importModule = (specifier: string): Promise<unknown> => import(/* @vite-ignore */ specifier);
+
+/**
+ * @internal Sets how {@link _loadModel} imports a model module. The CLI's program bundle runs as a `node:vm`
+ * script, which has no module loader of its own (its `import()` calls are built as `require`, which cannot load
+ * an ES module): it passes the `import()` of the CLI's ES module entry.
+ */
+export function _setModuleImporter(importer: (specifier: string) => Promise<unknown>): void {
+  importModule = importer;
+}
+
 /**
  * @internal Loads a model export from a module; with an `argument` the export is a factory and the model is
  * what it returns for that argument.
@@ -63,7 +75,7 @@ export async function _loadModel(module: string, exportName: string, context: st
   // Same error shape as other failed-load checks (deliberate: this one names the model module).
   let namespace: Record<string, unknown>;
   try {
-    namespace = (await import(/* @vite-ignore */ module)) as Record<string, unknown>;
+    namespace = (await importModule(module)) as Record<string, unknown>;
   } catch (error) {
     throw new HotjunctionTypeError({
       code: "INVALID_OPTION",

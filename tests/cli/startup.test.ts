@@ -1,7 +1,9 @@
 /**
  * The CLI's start-up path loads only what the command uses: the built `dist/cli.js` runs under a module hook
- * that logs every module URL loaded; the source modules inside each loaded bundle chunk are read from the
- * `// src/...` markers esbuild writes. `emf` and `temp` must load neither the schema library (zod), the chart
+ * that logs every module URL loaded; the source modules inside each loaded ESM chunk are read from the
+ * `// src/...` markers esbuild writes. Commands other than the fast path run in the program bundle
+ * `dist/cli/program.cjs`, whose loader logs the bundle's URL and whose module-start hook logs each module the
+ * run starts (`bundle:<path>`, see scripts/finishProgramBundle.ts) to the same file. `emf` and `temp` must load neither the schema library (zod), the chart
  * libraries (d3), the argument parser's other commands, nor the design, trip, fault, report or uncertainty code.
  * And the fast path prints what the full parser prints, byte for byte.
  */
@@ -37,11 +39,22 @@ function loadedModules(args: readonly string[]): Loaded {
     env: { ...process.env, HOTJUNCTION_MODULE_LOG: log },
     timeout: 60_000,
   });
-  const urls = readFileSync(log, "utf8").split("\n").filter((l) => l.length > 0);
+  const urls: string[] = [];
   const sources = new Set<string>();
-  for (const url of urls) {
-    if (!url.startsWith("file:") || !url.includes("/dist/")) continue;
-    const text = readFileSync(fileURLToPath(url), "utf8");
+  for (const line of readFileSync(log, "utf8").split("\n")) {
+    if (line.length === 0) continue;
+    if (line.startsWith("bundle:")) {
+      // A module started inside the program bundle (dist/cli/program.cjs): its path, logged by the bundle's hook.
+      const path = line.slice("bundle:".length);
+      if (path.startsWith("src/")) sources.add(path);
+      urls.push(`bundle:/${path}`);
+      continue;
+    }
+    urls.push(line);
+    // The ESM chunks name their source modules in `// src/...` lines; the program bundle names all of them, so
+    // only its started modules (above) count.
+    if (!line.startsWith("file:") || !line.includes("/dist/") || line.endsWith(".cjs")) continue;
+    const text = readFileSync(fileURLToPath(line), "utf8");
     for (const match of text.matchAll(/^\/\/ (src\/[\w/.-]+)$/gm)) sources.add(match[1] as string);
   }
   return { urls, sources: [...sources].sort(), status: result.status, stdout: result.stdout };
@@ -87,6 +100,7 @@ describe("start-up path of the built CLI", () => {
       const sources = run.sources.filter((s) => forbiddenSources.some((f) => s.startsWith(f)));
       expect(sources, args.join(" ")).toEqual([]);
       expect(run.sources).toContain("src/its90/convert.ts");
+      expect(run.urls.filter((u) => u.endsWith("/program.cjs") || u.startsWith("bundle:")), args.join(" ")).toEqual([]);
     }
   });
 
@@ -111,6 +125,7 @@ describe("start-up path of the built CLI", () => {
     expect(run.sources).toContain("src/trip/designTrip.ts");
     expect(run.sources).toContain("src/design/parseDesign.ts");
     expect(run.sources.filter((s) => s.startsWith("src/cli/commands/"))).toEqual(["src/cli/commands/check.ts"]);
+    expect(run.urls.some((u) => u.endsWith("/dist/cli/program.cjs"))).toBe(true);
   });
 });
 

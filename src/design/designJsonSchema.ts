@@ -2,7 +2,7 @@
  * The JSON Schema of the design file, generated from the zod schema (draft 2020-12).
  * @module
  */
-import { z } from "zod";
+import * as z from "zod";
 import { designFileSchema } from "./designSchema.js";
 
 /**

@@ -6,7 +6,7 @@
  * default. The published JSON Schema (`schema/hotjunction-design.schema.json`) is generated from these.
  * @module
  */
-import { z } from "zod";
+import * as z from "zod";
 import { _propagationMethods } from "../uncertainty/types.js";
 
 const temperatureC = (description: string) => z.number().min(-273.15).max(3000).describe(`${description}, °C`);

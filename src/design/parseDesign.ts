@@ -4,7 +4,7 @@
  * escapes, whatever the input.
  * @module
  */
-import type { z } from "zod";
+import type * as z from "zod";
 import { DesignFileError } from "./designFileError.js";
 import { designFileSchema, referenceSchema, type DesignFile, type DesignReference } from "./designSchema.js";
 import { _checkDesignRules, _checkReferenceRules, type DesignRuleProblem } from "./designRules.js";

@@ -4,7 +4,7 @@
  * Schema `schema/hotjunction-safety-figures.schema.json` (draft 2020-12), versioned by its `format` tag.
  * @module
  */
-import { z } from "zod";
+import * as z from "zod";
 
 const num = z.number();
 const nonNeg = z.number().min(0);

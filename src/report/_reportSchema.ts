@@ -6,7 +6,7 @@
  * `dynamics`), and chain elements echoed inside a realization are open objects.
  * @module
  */
-import { z } from "zod";
+import * as z from "zod";
 import { _propagationMethods } from "../uncertainty/types.js";
 
 /** The report layout version every JSON report carries as `reportSchemaVersion`. */

@@ -3,7 +3,6 @@
  * in the README).
  * @module
  */
-import type { CliIo } from "./io.js";
 import { isHotjunctionError } from "../errors.js";
 
 /** Exit code of a usage or validation error (bad argument, bad option, bad design file content, refused output). */
@@ -70,7 +69,7 @@ export function _describeFailure(error: unknown): { message: string; exitCode: n
  * entry's last word, and the program bundle's (`_programBundle.ts`), whose error classes are its own copies.
  * @internal
  */
-export function _reportFailure(error: unknown, io: Pick<CliIo, "writeErr">): number {
+export function _reportFailure(error: unknown, io: { readonly writeErr: (text: string) => void }): number {
   const failure = _describeFailure(error);
   io.writeErr(`hotjunction: ${failure.message}\n`);
   return failure.exitCode;

@@ -39,79 +39,12 @@
     (v128.store offset=3392 (i32.const 0) (v128.const f64x2 80 80)))
   (start $init)
 
-  ;; e^x per lane: the fdlibm algorithm (Sun Microsystems' freely distributable libm, e_exp.c) as V8 carries it
+  ;; e^x per lane, on two vectors at once (four lanes; the two dependency chains interleaved so that they
+  ;; overlap): the fdlibm algorithm (Sun Microsystems' freely distributable libm, e_exp.c) as V8 carries it
   ;; for Math.exp, including its exp(1) = Math.E special case: argument reduction x = k*ln2 + r with ln2 split in a
   ;; high and a low part, a degree-5 rational approximation of r, then scaling by 2^k. The branches of the scalar
   ;; code become lane selects; for |x| < 704 they give the scalar code's result bit for bit (k = 0 and k = +-1 are
   ;; the general formula with exact products, see DEVELOPERS.md). Lanes with |x| >= 704 set $bail.
-  (func $exp (param $x v128) (result v128)
-    (local $abs v128) (local $neg v128) (local $k v128) (local $hi v128) (local $lo v128) (local $r v128)
-    (local $t v128) (local $c v128) (local $y v128)
-    ;; For |x| (not NaN) the order of the floats is the order of their bits: each high-word test of the scalar
-    ;; code is a float comparison with the float whose high word is the bound (and low word 0).
-    (local.set $abs (f64x2.abs (local.get $x)))
-    (if (i32.eqz (i64x2.all_true (f64x2.lt (local.get $abs) (v128.const f64x2 704 704))))
-      (then (global.set $bail (i32.const 1))))
-    (local.set $neg (f64x2.lt (local.get $x) (v128.const f64x2 0 0)))
-    ;; k: 0 when |x| <= 0.5 ln2 (high word <= 0x3fd62e42, i.e. |x| < 0x3fd62e4300000000); +-1 when |x| < 1.5 ln2
-    ;; (high word < 0x3ff0a2b2); else trunc(x/ln2 +- 0.5).
-    (local.set $k
-      (v128.and
-        (f64x2.ge (local.get $abs) (v128.const i64x2 0x3fd62e4300000000 0x3fd62e4300000000))
-        (v128.bitselect
-          (v128.or (v128.and (local.get $neg) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
-            (v128.const f64x2 1 1))
-          (f64x2.trunc
-            (f64x2.add
-              (f64x2.mul (v128.const f64x2 1.44269504088896338700e+00 1.44269504088896338700e+00) (local.get $x))
-              (v128.or (v128.and (local.get $neg) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
-                (v128.const f64x2 0.5 0.5))))
-          (f64x2.lt (local.get $abs) (v128.const i64x2 0x3ff0a2b200000000 0x3ff0a2b200000000)))))
-    (local.set $hi
-      (f64x2.sub (local.get $x)
-        (f64x2.mul (local.get $k) (v128.const f64x2 6.93147180369123816490e-01 6.93147180369123816490e-01))))
-    (local.set $lo (f64x2.mul (local.get $k) (v128.const f64x2 1.90821492927058770002e-10 1.90821492927058770002e-10)))
-    (local.set $r (f64x2.sub (local.get $hi) (local.get $lo)))
-    (local.set $t (f64x2.mul (local.get $r) (local.get $r)))
-    ;; c = r - t*(P1 + t*(P2 + t*(P3 + t*(P4 + t*P5))))
-    (local.set $c
-      (f64x2.sub (local.get $r)
-        (f64x2.mul (local.get $t)
-          (f64x2.add (v128.const f64x2 1.66666666666666019037e-01 1.66666666666666019037e-01)
-            (f64x2.mul (local.get $t)
-              (f64x2.add (v128.const f64x2 -2.77777777770155933842e-03 -2.77777777770155933842e-03)
-                (f64x2.mul (local.get $t)
-                  (f64x2.add (v128.const f64x2 6.61375632143793436117e-05 6.61375632143793436117e-05)
-                    (f64x2.mul (local.get $t)
-                      (f64x2.add (v128.const f64x2 -1.65339022054652515390e-06 -1.65339022054652515390e-06)
-                        (f64x2.mul (local.get $t)
-                          (v128.const f64x2 4.13813679705723846039e-08 4.13813679705723846039e-08))))))))))))
-    ;; y = 1 - ((lo - r*c/(2 - c)) - hi); for k = 0 (hi = r, lo = 0) the same float as 1 - (r*c/(c - 2) - r).
-    (local.set $y
-      (f64x2.sub (v128.const f64x2 1 1)
-        (f64x2.sub
-          (f64x2.sub (local.get $lo)
-            (f64x2.div (f64x2.mul (local.get $r) (local.get $c))
-              (f64x2.sub (v128.const f64x2 2 2) (local.get $c))))
-          (local.get $hi))))
-    ;; times 2^k, built from its bits: k + 1.5*2^52 holds k in its low bits, so ((bits + 1023) << 52) is 2^k
-    ;; (k is within +-1016 here), the scaling V8 does.
-    (local.set $y
-      (f64x2.mul (local.get $y)
-        (i64x2.shl
-          (i64x2.add (f64x2.add (local.get $k) (v128.const f64x2 6755399441055744 6755399441055744))
-            (v128.const i64x2 1023 1023))
-          (i32.const 52))))
-    ;; |x| < 2^-28 (high word < 0x3e300000): 1 + x.
-    (local.set $y
-      (v128.bitselect (f64x2.add (v128.const f64x2 1 1) (local.get $x)) (local.get $y)
-        (f64x2.lt (local.get $abs) (v128.const i64x2 0x3e30000000000000 0x3e30000000000000))))
-    ;; exp(1) is Math.E.
-    (v128.bitselect (v128.const f64x2 2.718281828459045 2.718281828459045) (local.get $y)
-      (f64x2.eq (local.get $x) (v128.const f64x2 1 1))))
-
-    ;; $exp on two vectors at once (four lanes): the same operations, interleaved so that the two dependency chains
-  ;; overlap; used by the forward kernel's blocks of four.
   (func $exp2 (param $x0 v128) (param $x1 v128) (result v128 v128)
     (local $abs0 v128) (local $neg0 v128) (local $k0 v128) (local $hi0 v128) (local $lo0 v128) (local $r0 v128)
     (local $t0 v128) (local $c0 v128) (local $y0 v128)
@@ -230,6 +163,11 @@
     (local.set $y1 (v128.bitselect (v128.load offset=3376 (i32.const 0)) (local.get $y1)
       (f64x2.eq (local.get $x1) (v128.load offset=3136 (i32.const 0)))))
     (local.get $y0) (local.get $y1))
+
+  ;; $exp2 on one vector (the second result dropped): the single elements of the forward kernel.
+  (func $exp (param $x v128) (result v128)
+    (call $exp2 (local.get $x) (local.get $x))
+    (drop))
 
   ;; One lane of $exp, for the check at instantiation against the engine's Math.exp (src/bulk/wasmKernel.ts).
   (func (export "exp") (param $x f64) (result f64)
@@ -453,6 +391,7 @@
     (local $end i32) (local $w i32) (local $sp i32) (local $q i32)
     (local $low v128) (local $high v128) (local $v v128) (local $xv v128) (local $kv v128) (local $m v128)
     (local $st v128) (local $pm v128) (local $la v128) (local $ba v128) (local $c0 v128) (local $c1 v128)
+    (local $r1 v128) (local $r2 v128) (local $r3 v128) (local $u1 v128) (local $u2 v128) (local $u3 v128)
     (local $stJ v128) (local $pmJ v128) (local $laJ v128) (local $baJ v128) (local $lJ v128) (local $uJ v128)
     (local.set $low (f64x2.splat (local.get $lowOk)))
     (local.set $high (f64x2.splat (local.get $highOk)))
@@ -536,22 +475,73 @@
             (local.set $rp0 (i32.load offset=16 (local.get $sp)))
             (local.set $rp1 (i32.load offset=24 (local.get $sp)))
             (local.set $s (v128.load (local.get $sp)))
-            (if (i32.eq (local.get $rp0) (local.get $rp1))
+            (if (i32.and (i32.le_u (i32.add (local.get $i) (i32.const 8)) (local.get $w))
+                  (i32.and (i32.and (i32.and (i32.and (i32.and (i32.and (i32.eq (local.get $rp0) (local.get $rp1))
+                  (i32.eq (local.get $rp0) (i32.load offset=48 (local.get $sp))))
+                  (i32.eq (local.get $rp0) (i32.load offset=56 (local.get $sp))))
+                  (i32.eq (local.get $rp0) (i32.load offset=80 (local.get $sp))))
+                  (i32.eq (local.get $rp0) (i32.load offset=88 (local.get $sp))))
+                  (i32.eq (local.get $rp0) (i32.load offset=112 (local.get $sp))))
+                  (i32.eq (local.get $rp0) (i32.load offset=120 (local.get $sp)))))
               (then
-                ;; One segment: its numbers in both lanes.
-                (br_if $evaluated (i32.eqz (f64.le (f64.load offset=64 (local.get $rp0)) (f64.load offset=72 (local.get $rp0)))))
-                (local.set $t (v128.load64_splat offset=56 (local.get $rp0)))
-                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_splat offset=48 (local.get $rp0))))
-                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_splat offset=40 (local.get $rp0))))
-                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_splat offset=32 (local.get $rp0))))
-                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_splat offset=24 (local.get $rp0))))
-                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_splat offset=16 (local.get $rp0))))
-                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_splat offset=8 (local.get $rp0))))
-                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_splat (local.get $rp0))))
-                (local.set $lo (v128.load64_splat offset=64 (local.get $rp0)))
-                (local.set $hi (v128.load64_splat offset=72 (local.get $rp0))))
+                ;; 4 pairs in one segment: 4 chains side by side, each coefficient loaded once.
+                (local.set $lo0 (f64.load offset=64 (local.get $rp0)))
+                (local.set $hi0 (f64.load offset=72 (local.get $rp0)))
+                (br_if $evaluated (i32.eqz (f64.le (local.get $lo0) (local.get $hi0))))
+                (local.set $r1 (v128.load offset=32 (local.get $sp)))
+                (local.set $r2 (v128.load offset=64 (local.get $sp)))
+                (local.set $r3 (v128.load offset=96 (local.get $sp)))
+                (local.set $c0 (v128.load64_splat offset=56 (local.get $rp0)))
+                (local.set $t (local.get $c0))
+                (local.set $u1 (local.get $c0))
+                (local.set $u2 (local.get $c0))
+                (local.set $u3 (local.get $c0))
+                (local.set $c0 (v128.load64_splat offset=48 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat offset=40 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat offset=32 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat offset=24 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat offset=16 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat offset=8 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $lo (f64x2.splat (local.get $lo0)))
+                (local.set $hi (f64x2.splat (local.get $hi0)))
+                (v128.store offset=0 (local.get $at) (f64x2.pmax (f64x2.pmin (local.get $t) (local.get $hi)) (local.get $lo)))
+                (v128.store offset=16 (local.get $at) (f64x2.pmax (f64x2.pmin (local.get $u1) (local.get $hi)) (local.get $lo)))
+                (v128.store offset=32 (local.get $at) (f64x2.pmax (f64x2.pmin (local.get $u2) (local.get $hi)) (local.get $lo)))
+                (local.set $at (i32.add (local.get $at) (i32.const 48)))
+                (local.set $sp (i32.add (local.get $sp) (i32.const 96)))
+                (local.set $i (i32.add (local.get $i) (i32.const 6)))
+                (local.set $t (local.get $u3)))
               (else
-                ;; Two segments: each lane's coefficients, two at a time.
+                ;; Else one pair, each lane's coefficients gathered two at a time.
                 (local.set $c0 (v128.load offset=64 (local.get $rp0)))
                 (local.set $c1 (v128.load offset=64 (local.get $rp1)))
                 (local.set $lo (i8x16.shuffle 0 1 2 3 4 5 6 7 16 17 18 19 20 21 22 23 (local.get $c0) (local.get $c1)))

@@ -356,6 +356,13 @@
           (br $run))))
     (local.get $n))
 
+  ;; The float after x (x finite).
+  (func $nextUp (param $x f64) (result f64)
+    (if (result f64) (f64.eq (local.get $x) (f64.const 0))
+      (then (f64.const 0x1p-1074))
+      (else (f64.reinterpret_i64 (i64.add (i64.reinterpret_f64 (local.get $x))
+        (select (i64.const 1) (i64.const -1) (f64.gt (local.get $x) (f64.const 0))))))))
+
   ;; The exact inverse's interpolated segments, in place over n float64 (EMFs in, temperatures out) at $ptr. The
   ;; table at $tab holds $np pieces of 48 bytes, all f64: EMF start, segments per millivolt, the last segment's
   ;; index (count - 1), 1.5*2^52 plus the address of the piece's segment records (the address sits in the float's
@@ -392,7 +399,9 @@
     (local $low v128) (local $high v128) (local $v v128) (local $xv v128) (local $kv v128) (local $m v128)
     (local $st v128) (local $pm v128) (local $la v128) (local $ba v128) (local $c0 v128) (local $c1 v128)
     (local $r1 v128) (local $r2 v128) (local $r3 v128) (local $u1 v128) (local $u2 v128) (local $u3 v128)
-    (local $stJ v128) (local $pmJ v128) (local $laJ v128) (local $baJ v128) (local $lJ v128) (local $uJ v128)
+    (local $lowIn f64) (local $highEx f64) (local $stJ v128) (local $pmJ v128) (local $laJ v128) (local $baJ v128) (local $lJ v128) (local $uJ v128)
+    (local.set $lowIn (call $nextUp (local.get $lowOk)))
+    (local.set $highEx (call $nextUp (local.get $highOk)))
     (local.set $low (f64x2.splat (local.get $lowOk)))
     (local.set $high (f64x2.splat (local.get $highOk)))
     ;; The last piece's header.
@@ -418,26 +427,48 @@
         (local.set $pmJ (v128.load64_splat offset=8 (local.get $pp)))
         (local.set $laJ (v128.load64_splat offset=16 (local.get $pp)))
         (local.set $baJ (v128.load64_splat offset=24 (local.get $pp)))
-        (local.set $lJ (v128.load64_splat offset=32 (local.get $pp)))
-        (local.set $uJ (v128.load64_splat offset=40 (local.get $pp)))
+        ;; [lJ, uJ): that piece's interval within the window (e > lowOk is e >= the float after lowOk).
+        (local.set $lJ (f64x2.splat (f64.max (local.get $lowIn) (f64.load offset=32 (local.get $pp)))))
+        (local.set $uJ (f64x2.splat (f64.min (local.get $highEx) (f64.load offset=40 (local.get $pp)))))
         ;; Pass 1: locate pairs from i, up to end or the first pair with an element outside (lowOk, highOk].
         (local.set $sp (i32.const 36864))
         (local.set $w (local.get $i))
         (block $located
           (loop $locate
             (local.set $v (v128.load (local.get $at)))
-            (local.set $m (v128.and (f64x2.gt (local.get $v) (local.get $low)) (f64x2.le (local.get $v) (local.get $high))))
-            (if (i32.eq (i64x2.bitmask (v128.and (local.get $m)
-                  (v128.and (f64x2.ge (local.get $v) (local.get $lJ)) (f64x2.lt (local.get $v) (local.get $uJ)))))
-                (i32.const 3))
+            (local.set $c0 (v128.load offset=16 (local.get $at)))
+            (if (i32.and (i32.le_u (i32.add (local.get $w) (i32.const 4)) (local.get $end))
+                  (i32.eq (i64x2.bitmask (v128.and
+                    (v128.and (f64x2.ge (local.get $v) (local.get $lJ)) (f64x2.lt (local.get $v) (local.get $uJ)))
+                    (v128.and (f64x2.ge (local.get $c0) (local.get $lJ)) (f64x2.lt (local.get $c0) (local.get $uJ)))))
+                    (i32.const 3)))
               (then
-                (local.set $st (local.get $stJ))
-                (local.set $pm (local.get $pmJ))
-                (local.set $la (local.get $laJ))
-                (local.set $ba (local.get $baJ)))
+                ;; Two pairs in that piece: its numbers, from registers. s and the two record addresses (in the
+                ;; low 32 bits of each lane) per pair.
+                (local.set $xv (f64x2.mul (f64x2.sub (local.get $v) (local.get $stJ)) (local.get $pmJ)))
+                (local.set $kv (f64x2.pmin (local.get $laJ)
+                  (f64x2.pmax (v128.load offset=3088 (i32.const 0)) (f64x2.floor (local.get $xv)))))
+                (v128.store (local.get $sp)
+                  (f64x2.sub (f64x2.mul (v128.load offset=3312 (i32.const 0)) (f64x2.sub (local.get $xv) (local.get $kv)))
+                    (v128.load offset=3136 (i32.const 0))))
+                (v128.store offset=16 (local.get $sp)
+                  (f64x2.add (local.get $baJ) (f64x2.mul (local.get $kv) (v128.load offset=3392 (i32.const 0)))))
+                (local.set $xv (f64x2.mul (f64x2.sub (local.get $c0) (local.get $stJ)) (local.get $pmJ)))
+                (local.set $kv (f64x2.pmin (local.get $laJ)
+                  (f64x2.pmax (v128.load offset=3088 (i32.const 0)) (f64x2.floor (local.get $xv)))))
+                (v128.store offset=32 (local.get $sp)
+                  (f64x2.sub (f64x2.mul (v128.load offset=3312 (i32.const 0)) (f64x2.sub (local.get $xv) (local.get $kv)))
+                    (v128.load offset=3136 (i32.const 0))))
+                (v128.store offset=48 (local.get $sp)
+                  (f64x2.add (local.get $baJ) (f64x2.mul (local.get $kv) (v128.load offset=3392 (i32.const 0)))))
+                (local.set $at (i32.add (local.get $at) (i32.const 32)))
+                (local.set $sp (i32.add (local.get $sp) (i32.const 64)))
+                (local.set $w (i32.add (local.get $w) (i32.const 4))))
               (else
-                (br_if $located (i32.ne (i64x2.bitmask (local.get $m)) (i32.const 3)))
-                ;; Per lane: piece j while e >= L of piece j.
+                ;; One pair, each lane's piece: piece j while e >= L of piece j.
+                (br_if $located (i32.ne (i64x2.bitmask
+                  (v128.and (f64x2.gt (local.get $v) (local.get $low)) (f64x2.le (local.get $v) (local.get $high))))
+                  (i32.const 3)))
                 (local.set $st (v128.load64_splat (local.get $tab)))
                 (local.set $pm (v128.load64_splat offset=8 (local.get $tab)))
                 (local.set $la (v128.load64_splat offset=16 (local.get $tab)))
@@ -452,19 +483,18 @@
                     (local.set $pm (v128.bitselect (v128.load64_splat offset=8 (local.get $pp)) (local.get $pm) (local.get $m)))
                     (local.set $la (v128.bitselect (v128.load64_splat offset=16 (local.get $pp)) (local.get $la) (local.get $m)))
                     (local.set $ba (v128.bitselect (v128.load64_splat offset=24 (local.get $pp)) (local.get $ba) (local.get $m)))
-                    (br $piece)))))
-            (local.set $xv (f64x2.mul (f64x2.sub (local.get $v) (local.get $st)) (local.get $pm)))
-            (local.set $kv (f64x2.pmin (local.get $la)
-              (f64x2.pmax (v128.load offset=3088 (i32.const 0)) (f64x2.floor (local.get $xv)))))
-            (v128.store (local.get $sp)
-              (f64x2.sub (f64x2.mul (v128.load offset=3312 (i32.const 0)) (f64x2.sub (local.get $xv) (local.get $kv)))
-                (v128.load offset=3136 (i32.const 0))))
-            ;; The two record addresses, in the low 32 bits of each lane.
-            (v128.store offset=16 (local.get $sp)
-              (f64x2.add (local.get $ba) (f64x2.mul (local.get $kv) (v128.load offset=3392 (i32.const 0)))))
-            (local.set $at (i32.add (local.get $at) (i32.const 16)))
-            (local.set $sp (i32.add (local.get $sp) (i32.const 32)))
-            (local.set $w (i32.add (local.get $w) (i32.const 2)))
+                    (br $piece)))
+                (local.set $xv (f64x2.mul (f64x2.sub (local.get $v) (local.get $st)) (local.get $pm)))
+                (local.set $kv (f64x2.pmin (local.get $la)
+                  (f64x2.pmax (v128.load offset=3088 (i32.const 0)) (f64x2.floor (local.get $xv)))))
+                (v128.store (local.get $sp)
+                  (f64x2.sub (f64x2.mul (v128.load offset=3312 (i32.const 0)) (f64x2.sub (local.get $xv) (local.get $kv)))
+                    (v128.load offset=3136 (i32.const 0))))
+                (v128.store offset=16 (local.get $sp)
+                  (f64x2.add (local.get $ba) (f64x2.mul (local.get $kv) (v128.load offset=3392 (i32.const 0)))))
+                (local.set $at (i32.add (local.get $at) (i32.const 16)))
+                (local.set $sp (i32.add (local.get $sp) (i32.const 32)))
+                (local.set $w (i32.add (local.get $w) (i32.const 2)))))
             (br_if $locate (i32.lt_u (local.get $w) (local.get $end)))))
         ;; Pass 2: evaluate the located pairs, up to w or the first pair with a segment not mirrored.
         (local.set $at (i32.add (local.get $ptr) (i32.shl (local.get $i) (i32.const 3))))

@@ -377,19 +377,20 @@
   ;; to the piece's segments, s = 2(x - k) - 1, Horner over the segment's 8 coefficients in s from c7, and the
   ;; clamp to the segment's edges, t < lo ? lo : t > hi ? hi : t.
   ;;
-  ;; Fast path, blocks of up to 64 elements in pairs (two lanes), in two passes so that each loop body is short and
+  ;; Fast path, blocks of up to 256 elements in pairs (two lanes), in two passes so that each loop body is short and
   ;; the processor overlaps the dependency chains of successive pairs (one pair's 7 multiply-add steps are
-  ;; latency-bound). Pass 1 locates each pair: a pair inside the piece of the block's first element uses that
-  ;; piece's numbers, held in registers; any other pair selects per lane over the pieces (compares and selects).
-  ;; floor, then max(., 0) and min(., last) as pmax/pmin, which for these operands give Math.max/Math.min's floats
-  ;; (+0 for -0 included). It writes s and the two record addresses to a scratch area at 36864. Pass 2 evaluates
-  ;; each pair: when both lanes are in one segment, its coefficients are loaded once into both lanes; else each
-  ;; lane's coefficients are gathered (a 16-byte load per two coefficients, lanes paired by shuffles). The clamp is
-  ;; pmax(pmin(t, hi), lo), which is JavaScript's t < lo ? lo : t > hi ? hi : t whenever lo <= hi; a pair with
-  ;; !(lo <= hi) in a lane (NaN lower edge: segment not mirrored) is not stored. A pass stops at the first pair it
-  ;; cannot do; then the slow path below takes one element or pair (scalar locate per lane, the clamp by compares
-  ;; and selects) and returns the index of an element left for JavaScript, or converts it and goes back to the
-  ;; fast path.
+  ;; latency-bound). Pass 1 locates the pairs: while the next two pairs lie in the piece of the block's first
+  ;; element (within the window: e > lowOk is e >= the float after lowOk), both at once with that piece's numbers
+  ;; from registers; else one pair, each lane selecting its piece by compares and selects. floor, then max(., 0) and
+  ;; min(., last) as pmax/pmin, which for these operands give Math.max/Math.min's floats (+0 for -0 included). It
+  ;; writes s and the two record addresses per pair to a scratch area at 36864 (4 KiB). Pass 2 evaluates: four
+  ;; pairs whose eight lanes share one segment as four chains side by side, each coefficient loaded once for all;
+  ;; else one pair, each lane's coefficients gathered (a 16-byte load per two coefficients, lanes paired by
+  ;; shuffles). The clamp is pmax(pmin(t, hi), lo), which is JavaScript's t < lo ? lo : t > hi ? hi : t whenever
+  ;; lo <= hi; a pair with !(lo <= hi) in a lane (NaN lower edge: segment not mirrored) is not stored. A pass stops
+  ;; at the first pair it cannot do; then the slow path below takes the element at i alone (scalar, the clamp by
+  ;; compares and selects) and returns its index when it is left for JavaScript, or converts it and goes back to
+  ;; the fast path.
   (func (export "inverse") (param $ptr i32) (param $n i32) (param $tab i32) (param $np i32)
       (param $lowOk f64) (param $highOk f64) (result i32)
     (local $i i32) (local $at i32) (local $rp0 i32) (local $rp1 i32) (local $pp i32) (local $ki i32) (local $last i32)
@@ -408,10 +409,10 @@
     (local.set $q (i32.add (local.get $tab) (i32.mul (i32.sub (local.get $np) (i32.const 1)) (i32.const 48))))
     (loop $block
       (block $slow
-        ;; This block: the next (n - i) & ~1 elements, at most 64.
+        ;; This block: the next (n - i) & ~1 elements, at most 256.
         (local.set $end (i32.sub (local.get $n) (local.get $i)))
         (local.set $end (i32.add (local.get $i) (i32.and
-          (select (i32.const 64) (local.get $end) (i32.gt_u (local.get $end) (i32.const 64))) (i32.const -2))))
+          (select (i32.const 256) (local.get $end) (i32.gt_u (local.get $end) (i32.const 256))) (i32.const -2))))
         (br_if $slow (i32.ge_u (local.get $i) (local.get $end)))
         (local.set $at (i32.add (local.get $ptr) (i32.shl (local.get $i) (i32.const 3))))
         ;; The piece of the block's first element (L <= e < U; the last piece if none).

@@ -54,6 +54,7 @@ export const _FORWARD_MAX_COEFFICIENTS = 16;
 
 const FORWARD_TABLE = 0;
 const CHUNK = 4096;
+// 36864–40960 (after the chunk): the exact inverse's scratch area, written and read inside one kernel call.
 const MIRRORS = 65536;
 /** 1.5·2⁵²: added to a record address it keeps the address in the float's low 32 bits (see kernel.wat). */
 const RECORD_BIAS = 6755399441055744;

@@ -67,8 +67,8 @@ describe("hotjunction/bulk errors: the root entry's, after the same elements", (
       const highOk = ct.emfAtMaxC + _EMF_END_TOLERANCE_MV;
       const mid = (ct.emfAtMinC + ct.emfAtMaxC) / 2;
       for (const edge of [lowOk, next(lowOk, true), next(lowOk, false), highOk, next(highOk, true), next(highOk, false)]) {
-        // 256 elements just inside the edge's end of the window, the edge at element 37 (inside a block of 64 and a
-        // run of four pairs of the kernel).
+        // 256 elements just inside the edge's end of the window, the edge at element 37 (inside one of the kernel's
+        // blocks, in a run of pairs its fast paths take).
         const near = edge < mid ? next(next(lowOk, true), true) : highOk;
         const input = Float64Array.from({ length: 256 }, (_, i) => (i === 37 ? edge : near));
         const ours = new Float64Array(256).fill(-1);

@@ -6,7 +6,7 @@
  * harness `bench/c/harness.c`. Skipped with a note when gcc is missing. Rounds interleave JavaScript and C (C runs as a child process between the JavaScript rounds);
  * each side keeps its best round. Targets (issue 16): bulk forward ≤ 1.5× the C forward loop, bulk exact
  * inverse ≤ 3× the C loop of the published approximate inverse. A third line gives the memory floor: a C copy loop
- * over the same arrays (`bench/c/copy.c`), and our chunk copies into the kernel's memory and back with no kernel
+ * over the same arrays (`bench/c/copy.c`), the same through a 32 KiB buffer (`bench/c/chunkCopy.c`), and our chunk copies into the kernel's memory and back with no kernel
  * call, so the kernel's own share is the difference. Not a test: nothing passes or fails on a timing.
  * Run: `npx tsx bench/nativeBaselines.bench.ts [rounds]` (default 9; part of `npm run bench`).
  * @module
@@ -69,10 +69,12 @@ export function runNativeBaselinesBench(n = 1_000_000, rounds = 9): string[] {
     const forwardBin = join(dir, "forward");
     const inverseBin = join(dir, "approxInverse");
     const copyBin = join(dir, "copy");
+    const chunkCopyBin = join(dir, "chunkCopy");
     const harness = join(here, "c", "harness.c");
     execFileSync("gcc", [...flags, "-o", forwardBin, harness, join(here, "c", "forward.c"), "-lm"]);
     execFileSync("gcc", [...flags, "-o", inverseBin, harness, join(here, "c", "approxInverse.c"), "-lm"]);
     execFileSync("gcc", [...flags, "-o", copyBin, harness, join(here, "c", "copy.c"), "-lm"]);
+    execFileSync("gcc", [...flags, "-o", chunkCopyBin, harness, join(here, "c", "chunkCopy.c"), "-lm"]);
     const temps = new Float64Array(n).map((_, i) => (1372 * i) / n);
     const emfs = new Float64Array(n).map((_, i) => (54.886 * i) / n + 1e-9);
     const out = new Float64Array(n);
@@ -93,6 +95,7 @@ export function runNativeBaselinesBench(n = 1_000_000, rounds = 9): string[] {
     let wasmF = Infinity;
     let wasmI = Infinity;
     let cCopy = Infinity;
+    let cChunkCopy = Infinity;
     let wasmShuffled = Infinity;
     let copies = Infinity;
     emfFromTemperatureArray("K", temps, out);
@@ -108,6 +111,7 @@ export function runNativeBaselinesBench(n = 1_000_000, rounds = 9): string[] {
       jsInverse = Math.min(jsInverse, bestNsPerElement(n, 3, () => temperatureFromEmfArray("K", emfs, out)));
       cInverse = Math.min(cInverse, c(inverseBin));
       cCopy = Math.min(cCopy, c(copyBin));
+      cChunkCopy = Math.min(cChunkCopy, c(chunkCopyBin));
       wasmShuffled = Math.min(wasmShuffled, bestNsPerElement(n, 3, () => wasmInverse("K", shuffled, out)));
       copies = Math.min(copies, bestNsPerElement(n, 3, () => chunkCopies(emfs, out)));
     }
@@ -117,7 +121,7 @@ export function runNativeBaselinesBench(n = 1_000_000, rounds = 9): string[] {
       `native baselines (gcc ${gcc.stdout.split("\n")[0]?.split(" ").pop()}, ${flags.join(" ")}; ${n.toLocaleString("en")} elements, best of ${rounds} interleaved rounds; hotjunction/bulk backend: ${bulkBackend()})`,
       `  bulk forward, type K 0-1372 °C, C ${ns(cForward)} per element: hotjunction/bulk ${ns(wasmF)} -> ${ratio(wasmF, cForward)} (target ≤ 1.5x); root entry (JavaScript) ${ns(jsForward)} -> ${ratio(jsForward, cForward)}; the C loop written in plain JavaScript ${ns(bare)} -> ${ratio(bare, cForward)}`,
       `  bulk exact inverse vs C published approximate inverse ${ns(cInverse)}: hotjunction/bulk ${ns(wasmI)} -> ${ratio(wasmI, cInverse)} (target ≤ 3x); root entry (JavaScript) ${ns(jsInverse)} -> ${ratio(jsInverse, cInverse)}; hotjunction/bulk on the same EMFs scrambled ${ns(wasmShuffled)} -> ${ratio(wasmShuffled, cInverse)}`,
-      `  memory floor: C copy loop over the same arrays ${ns(cCopy)} (the C approximate inverse ${ratio(cInverse, cCopy)} of it); hotjunction/bulk's chunk copies in and out alone ${ns(copies)}, leaving ${ns(wasmI - copies)} per element for the kernel`,
+      `  memory floor: C copy loop over the same arrays ${ns(cCopy)} (the C approximate inverse ${ratio(cInverse, cCopy)} of it), through a 32 KiB buffer with memcpy ${ns(cChunkCopy)}; hotjunction/bulk's chunk copies in and out alone ${ns(copies)}, leaving ${ns(wasmI - copies)} per element for the kernel`,
     ];
   } finally {
     rmSync(dir, { recursive: true, force: true });

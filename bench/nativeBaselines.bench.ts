@@ -6,8 +6,9 @@
  * harness `bench/c/harness.c`. Skipped with a note when gcc is missing. Rounds interleave JavaScript and C (C runs as a child process between the JavaScript rounds);
  * each side keeps its best round. Targets (issue 16): bulk forward ≤ 1.5× the C forward loop, bulk exact
  * inverse ≤ 3× the C loop of the published approximate inverse. A third line gives the memory floor: a C copy loop
- * over the same arrays (`bench/c/copy.c`), the same through a 32 KiB buffer (`bench/c/chunkCopy.c`), and our chunk copies into the kernel's memory and back with no kernel
- * call, so the kernel's own share is the difference. Not a test: nothing passes or fails on a timing.
+ * over the same arrays (`bench/c/copy.c`), the same through a 32 KiB buffer (`bench/c/chunkCopy.c`), and our chunk
+ * copies into the kernel's memory and back with no kernel call, so the kernel's own share is the difference. Not a
+ * test: nothing passes or fails on a timing.
  * Run: `npx tsx bench/nativeBaselines.bench.ts [rounds]` (default 9; part of `npm run bench`).
  * @module
  */

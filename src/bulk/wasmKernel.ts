@@ -20,7 +20,7 @@ interface KernelExports {
 /** Where the exact-inverse mirror of one type lives in the kernel's memory. @internal */
 export interface InverseMirror {
   readonly inv: ExactInverse;
-  /** Address of the piece table (32 bytes per piece). */
+  /** Address of the piece table (48 bytes per piece: see kernel.wat). */
   readonly table: number;
   /** Per piece, the address of its segment records (80 bytes each: 8 coefficients, lower and upper edge). */
   readonly recordsAt: readonly number[];

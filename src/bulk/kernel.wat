@@ -35,82 +35,16 @@
     (v128.store offset=3328 (i32.const 0) (v128.const f64x2 6755399441055744 6755399441055744))
     (v128.store offset=3344 (i32.const 0) (v128.const i64x2 1023 1023))
     (v128.store offset=3360 (i32.const 0) (v128.const i64x2 0x3e30000000000000 0x3e30000000000000))
-    (v128.store offset=3376 (i32.const 0) (v128.const f64x2 2.718281828459045 2.718281828459045)))
+    (v128.store offset=3376 (i32.const 0) (v128.const f64x2 2.718281828459045 2.718281828459045))
+    (v128.store offset=3392 (i32.const 0) (v128.const f64x2 80 80)))
   (start $init)
 
-  ;; e^x per lane: the fdlibm algorithm (Sun Microsystems' freely distributable libm, e_exp.c) as V8 carries it
+  ;; e^x per lane, on two vectors at once (four lanes; the two dependency chains interleaved so that they
+  ;; overlap): the fdlibm algorithm (Sun Microsystems' freely distributable libm, e_exp.c) as V8 carries it
   ;; for Math.exp, including its exp(1) = Math.E special case: argument reduction x = k*ln2 + r with ln2 split in a
   ;; high and a low part, a degree-5 rational approximation of r, then scaling by 2^k. The branches of the scalar
   ;; code become lane selects; for |x| < 704 they give the scalar code's result bit for bit (k = 0 and k = +-1 are
   ;; the general formula with exact products, see DEVELOPERS.md). Lanes with |x| >= 704 set $bail.
-  (func $exp (param $x v128) (result v128)
-    (local $abs v128) (local $neg v128) (local $k v128) (local $hi v128) (local $lo v128) (local $r v128)
-    (local $t v128) (local $c v128) (local $y v128)
-    ;; For |x| (not NaN) the order of the floats is the order of their bits: each high-word test of the scalar
-    ;; code is a float comparison with the float whose high word is the bound (and low word 0).
-    (local.set $abs (f64x2.abs (local.get $x)))
-    (if (i32.eqz (i64x2.all_true (f64x2.lt (local.get $abs) (v128.const f64x2 704 704))))
-      (then (global.set $bail (i32.const 1))))
-    (local.set $neg (f64x2.lt (local.get $x) (v128.const f64x2 0 0)))
-    ;; k: 0 when |x| <= 0.5 ln2 (high word <= 0x3fd62e42, i.e. |x| < 0x3fd62e4300000000); +-1 when |x| < 1.5 ln2
-    ;; (high word < 0x3ff0a2b2); else trunc(x/ln2 +- 0.5).
-    (local.set $k
-      (v128.and
-        (f64x2.ge (local.get $abs) (v128.const i64x2 0x3fd62e4300000000 0x3fd62e4300000000))
-        (v128.bitselect
-          (v128.or (v128.and (local.get $neg) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
-            (v128.const f64x2 1 1))
-          (f64x2.trunc
-            (f64x2.add
-              (f64x2.mul (v128.const f64x2 1.44269504088896338700e+00 1.44269504088896338700e+00) (local.get $x))
-              (v128.or (v128.and (local.get $neg) (v128.const i64x2 0x8000000000000000 0x8000000000000000))
-                (v128.const f64x2 0.5 0.5))))
-          (f64x2.lt (local.get $abs) (v128.const i64x2 0x3ff0a2b200000000 0x3ff0a2b200000000)))))
-    (local.set $hi
-      (f64x2.sub (local.get $x)
-        (f64x2.mul (local.get $k) (v128.const f64x2 6.93147180369123816490e-01 6.93147180369123816490e-01))))
-    (local.set $lo (f64x2.mul (local.get $k) (v128.const f64x2 1.90821492927058770002e-10 1.90821492927058770002e-10)))
-    (local.set $r (f64x2.sub (local.get $hi) (local.get $lo)))
-    (local.set $t (f64x2.mul (local.get $r) (local.get $r)))
-    ;; c = r - t*(P1 + t*(P2 + t*(P3 + t*(P4 + t*P5))))
-    (local.set $c
-      (f64x2.sub (local.get $r)
-        (f64x2.mul (local.get $t)
-          (f64x2.add (v128.const f64x2 1.66666666666666019037e-01 1.66666666666666019037e-01)
-            (f64x2.mul (local.get $t)
-              (f64x2.add (v128.const f64x2 -2.77777777770155933842e-03 -2.77777777770155933842e-03)
-                (f64x2.mul (local.get $t)
-                  (f64x2.add (v128.const f64x2 6.61375632143793436117e-05 6.61375632143793436117e-05)
-                    (f64x2.mul (local.get $t)
-                      (f64x2.add (v128.const f64x2 -1.65339022054652515390e-06 -1.65339022054652515390e-06)
-                        (f64x2.mul (local.get $t)
-                          (v128.const f64x2 4.13813679705723846039e-08 4.13813679705723846039e-08))))))))))))
-    ;; y = 1 - ((lo - r*c/(2 - c)) - hi); for k = 0 (hi = r, lo = 0) the same float as 1 - (r*c/(c - 2) - r).
-    (local.set $y
-      (f64x2.sub (v128.const f64x2 1 1)
-        (f64x2.sub
-          (f64x2.sub (local.get $lo)
-            (f64x2.div (f64x2.mul (local.get $r) (local.get $c))
-              (f64x2.sub (v128.const f64x2 2 2) (local.get $c))))
-          (local.get $hi))))
-    ;; times 2^k, built from its bits: k + 1.5*2^52 holds k in its low bits, so ((bits + 1023) << 52) is 2^k
-    ;; (k is within +-1016 here), the scaling V8 does.
-    (local.set $y
-      (f64x2.mul (local.get $y)
-        (i64x2.shl
-          (i64x2.add (f64x2.add (local.get $k) (v128.const f64x2 6755399441055744 6755399441055744))
-            (v128.const i64x2 1023 1023))
-          (i32.const 52))))
-    ;; |x| < 2^-28 (high word < 0x3e300000): 1 + x.
-    (local.set $y
-      (v128.bitselect (f64x2.add (v128.const f64x2 1 1) (local.get $x)) (local.get $y)
-        (f64x2.lt (local.get $abs) (v128.const i64x2 0x3e30000000000000 0x3e30000000000000))))
-    ;; exp(1) is Math.E.
-    (v128.bitselect (v128.const f64x2 2.718281828459045 2.718281828459045) (local.get $y)
-      (f64x2.eq (local.get $x) (v128.const f64x2 1 1))))
-
-    ;; $exp on two vectors at once (four lanes): the same operations, interleaved so that the two dependency chains
-  ;; overlap; used by the forward kernel's blocks of four.
   (func $exp2 (param $x0 v128) (param $x1 v128) (result v128 v128)
     (local $abs0 v128) (local $neg0 v128) (local $k0 v128) (local $hi0 v128) (local $lo0 v128) (local $r0 v128)
     (local $t0 v128) (local $c0 v128) (local $y0 v128)
@@ -229,6 +163,11 @@
     (local.set $y1 (v128.bitselect (v128.load offset=3376 (i32.const 0)) (local.get $y1)
       (f64x2.eq (local.get $x1) (v128.load offset=3136 (i32.const 0)))))
     (local.get $y0) (local.get $y1))
+
+  ;; $exp2 on one vector (the second result dropped): the single elements of the forward kernel.
+  (func $exp (param $x v128) (result v128)
+    (call $exp2 (local.get $x) (local.get $x))
+    (drop))
 
   ;; One lane of $exp, for the check at instantiation against the engine's Math.exp (src/bulk/wasmKernel.ts).
   (func (export "exp") (param $x f64) (result f64)
@@ -417,116 +356,300 @@
           (br $run))))
     (local.get $n))
 
+  ;; The float after x (x finite).
+  (func $nextUp (param $x f64) (result f64)
+    (if (result f64) (f64.eq (local.get $x) (f64.const 0))
+      (then (f64.const 0x1p-1074))
+      (else (f64.reinterpret_i64 (i64.add (i64.reinterpret_f64 (local.get $x))
+        (select (i64.const 1) (i64.const -1) (f64.gt (local.get $x) (f64.const 0))))))))
+
   ;; The exact inverse's interpolated segments, in place over n float64 (EMFs in, temperatures out) at $ptr. The
-  ;; table at $tab holds $np pieces of 32 bytes: EMF start (f64), segments per millivolt (f64), segment count
-  ;; (f64, for JavaScript), the address (i32) of the piece's segment records and the segment count (i32). A record
-  ;; is 80 bytes: the 8 coefficients, c0 first, then the segment's two edge temperatures; a lower edge NaN marks a
-  ;; segment not mirrored here. Returns n when every element is converted, else the index of the first element it
-  ;; left for the JavaScript path: outside (lowOk, highOk], or a segment not mirrored (not built yet, or solved by
-  ;; Newton); elements before it are converted. Each step is the JavaScript exact inverse's, in its order. Per lane
-  ;; ("locate", written out for each lane): the last piece whose start is <= e, x = (e - start)*perMillivolt,
-  ;; k = floor(x) clamped to the piece's segments, s = 2(x - k) - 1; then for both lanes at once Horner over the
-  ;; segment's 8 coefficients in s and the clamp to the segment's edge temperatures, t < lo ? lo : t > hi ? hi : t
-  ;; (compares and selects, not f64x2.min/max, which differ on signed zeros). A pair whose second element is left
-  ;; for JavaScript goes one element at a time.
+  ;; table at $tab holds $np pieces of 48 bytes, all f64: EMF start, segments per millivolt, the last segment's
+  ;; index (count - 1), 1.5*2^52 plus the address of the piece's segment records (the address sits in the float's
+  ;; low 32 bits, and base + 80k is exact), then the piece's EMF interval [L, U): L the largest start of the pieces
+  ;; up to this one (-Infinity for the first), U the next piece's L (+Infinity for the last). JavaScript scans the
+  ;; pieces in order and stops at the first whose start is above e, so e falls in piece J exactly when L <= e < U.
+  ;; A record is 80 bytes: the 8 coefficients, c0 first, then the segment's two edge temperatures; a lower edge NaN
+  ;; marks a segment not mirrored here. Returns n when every element is converted, else the index of the first
+  ;; element it left for the JavaScript path: outside (lowOk, highOk], or a segment not mirrored (not built yet, or
+  ;; solved by Newton); elements before it are converted, elements from it on are left as they were. Each step is
+  ;; the JavaScript exact inverse's, in its order: the piece, x = (e - start) * perMillivolt, k = floor(x) clamped
+  ;; to the piece's segments, s = 2(x - k) - 1, Horner over the segment's 8 coefficients in s from c7, and the
+  ;; clamp to the segment's edges, t < lo ? lo : t > hi ? hi : t.
+  ;;
+  ;; Fast path, blocks of up to 256 elements in pairs (two lanes), in two passes so that each loop body is short and
+  ;; the processor overlaps the dependency chains of successive pairs (one pair's 7 multiply-add steps are
+  ;; latency-bound). Pass 1 locates the pairs: while the next two pairs lie in the piece of the block's first
+  ;; element (within the window: e > lowOk is e >= the float after lowOk), both at once with that piece's numbers
+  ;; from registers; else one pair, each lane selecting its piece by compares and selects. floor, then max(., 0) and
+  ;; min(., last) as pmax/pmin, which for these operands give Math.max/Math.min's floats (+0 for -0 included). It
+  ;; writes s and the two record addresses per pair to a scratch area at 36864 (4 KiB). Pass 2 evaluates: four
+  ;; pairs whose eight lanes share one segment as four chains side by side, each coefficient loaded once for all;
+  ;; else one pair, each lane's coefficients gathered (a 16-byte load per two coefficients, lanes paired by
+  ;; shuffles). The clamp is pmax(pmin(t, hi), lo), which is JavaScript's t < lo ? lo : t > hi ? hi : t whenever
+  ;; lo <= hi; a pair with !(lo <= hi) in a lane (NaN lower edge: segment not mirrored) is not stored. A pass stops
+  ;; at the first pair it cannot do; then the slow path below takes the element at i alone (scalar, the clamp by
+  ;; compares and selects) and returns its index when it is left for JavaScript, or converts it and goes back to
+  ;; the fast path.
   (func (export "inverse") (param $ptr i32) (param $n i32) (param $tab i32) (param $np i32)
       (param $lowOk f64) (param $highOk f64) (result i32)
-    (local $i i32) (local $at i32) (local $rp0 i32) (local $rp1 i32) (local $pair i32) (local $j i32) (local $pp i32)
-    (local $ki i32) (local $last i32) (local $e f64) (local $x f64) (local $k f64) (local $s0 f64) (local $s1 f64) (local $s v128) (local $t v128)
-    (local $lo v128) (local $hi v128)
-    (block $finished
-      (loop $step
-        (br_if $finished (i32.ge_u (local.get $i) (local.get $n)))
+    (local $i i32) (local $at i32) (local $rp0 i32) (local $rp1 i32) (local $pp i32) (local $ki i32) (local $last i32)
+    (local $e f64) (local $x f64) (local $k f64) (local $s0 f64) (local $t0 f64) (local $lo0 f64) (local $hi0 f64)
+    (local $s v128) (local $t v128) (local $lo v128) (local $hi v128)
+    (local $end i32) (local $w i32) (local $sp i32) (local $q i32)
+    (local $low v128) (local $high v128) (local $v v128) (local $xv v128) (local $kv v128) (local $m v128)
+    (local $st v128) (local $pm v128) (local $la v128) (local $ba v128) (local $c0 v128) (local $c1 v128)
+    (local $r1 v128) (local $r2 v128) (local $r3 v128) (local $u1 v128) (local $u2 v128) (local $u3 v128)
+    (local $lowIn f64) (local $highEx f64) (local $stJ v128) (local $pmJ v128) (local $laJ v128) (local $baJ v128) (local $lJ v128) (local $uJ v128)
+    (local.set $lowIn (call $nextUp (local.get $lowOk)))
+    (local.set $highEx (call $nextUp (local.get $highOk)))
+    (local.set $low (f64x2.splat (local.get $lowOk)))
+    (local.set $high (f64x2.splat (local.get $highOk)))
+    ;; The last piece's header.
+    (local.set $q (i32.add (local.get $tab) (i32.mul (i32.sub (local.get $np) (i32.const 1)) (i32.const 48))))
+    (loop $block
+      (block $slow
+        ;; This block: the next (n - i) & ~1 elements, at most 256.
+        (local.set $end (i32.sub (local.get $n) (local.get $i)))
+        (local.set $end (i32.add (local.get $i) (i32.and
+          (select (i32.const 256) (local.get $end) (i32.gt_u (local.get $end) (i32.const 256))) (i32.const -2))))
+        (br_if $slow (i32.ge_u (local.get $i) (local.get $end)))
         (local.set $at (i32.add (local.get $ptr) (i32.shl (local.get $i) (i32.const 3))))
-        ;; Lane 0: locate.
-        (block $lane0
-          (local.set $rp0 (i32.const 0))
-          (local.set $e (f64.load (local.get $at)))
-          (br_if $lane0 (i32.eqz (i32.and (f64.gt (local.get $e) (local.get $lowOk)) (f64.le (local.get $e) (local.get $highOk)))))
-          (local.set $j (i32.const 1))
-          (local.set $pp (local.get $tab))
-          (block $found0
-            (loop $up0
-              (br_if $found0 (i32.ge_s (local.get $j) (local.get $np)))
-              (br_if $found0 (i32.eqz (f64.ge (local.get $e) (f64.load offset=32 (local.get $pp)))))
-              (local.set $pp (i32.add (local.get $pp) (i32.const 32)))
-              (local.set $j (i32.add (local.get $j) (i32.const 1)))
-              (br $up0)))
-          (local.set $x (f64.mul (f64.sub (local.get $e) (f64.load (local.get $pp))) (f64.load offset=8 (local.get $pp))))
-          ;; k = floor(x), then k >= count ? count - 1 : k < 0 ? 0 : k, in integers: for x >= 0 the truncation is
-          ;; the floor, and a negative x gives 0 either way (the same float k for s: +0 as in JavaScript; with
-          ;; x = -0, x - k is -0 or +0, and s is -1 both ways).
-          (local.set $ki (i32.trunc_sat_f64_s (local.get $x)))
-          (local.set $last (i32.sub (i32.load offset=28 (local.get $pp)) (i32.const 1)))
-          (local.set $ki (select (local.get $last) (local.get $ki) (i32.gt_s (local.get $ki) (local.get $last))))
-          (local.set $ki (select (i32.const 0) (local.get $ki) (i32.lt_s (local.get $ki) (i32.const 0))))
-          (local.set $k (f64.convert_i32_s (local.get $ki)))
-          (local.set $rp0 (i32.add (i32.load offset=24 (local.get $pp)) (i32.mul (local.get $ki) (i32.const 80))))
-          ;; A segment not mirrored has NaN for its lower edge.
-          (if (f64.ne (f64.load offset=64 (local.get $rp0)) (f64.load offset=64 (local.get $rp0)))
-            (then (local.set $rp0 (i32.const 0)) (br $lane0)))
-          (local.set $s0 (f64.sub (f64.mul (f64.const 2) (f64.sub (local.get $x) (local.get $k))) (f64.const 1))))
-        (if (i32.eqz (local.get $rp0)) (then (return (local.get $i))))
-        (local.set $rp1 (i32.const 0))
-        (if (i32.lt_u (i32.add (local.get $i) (i32.const 1)) (local.get $n))
-          (then
-        ;; Lane 1: locate.
-        (block $lane1
-          (local.set $rp1 (i32.const 0))
-          (local.set $e (f64.load offset=8 (local.get $at)))
-          (br_if $lane1 (i32.eqz (i32.and (f64.gt (local.get $e) (local.get $lowOk)) (f64.le (local.get $e) (local.get $highOk)))))
-          (local.set $j (i32.const 1))
-          (local.set $pp (local.get $tab))
-          (block $found1
-            (loop $up1
-              (br_if $found1 (i32.ge_s (local.get $j) (local.get $np)))
-              (br_if $found1 (i32.eqz (f64.ge (local.get $e) (f64.load offset=32 (local.get $pp)))))
-              (local.set $pp (i32.add (local.get $pp) (i32.const 32)))
-              (local.set $j (i32.add (local.get $j) (i32.const 1)))
-              (br $up1)))
-          (local.set $x (f64.mul (f64.sub (local.get $e) (f64.load (local.get $pp))) (f64.load offset=8 (local.get $pp))))
-          ;; k = floor(x), then k >= count ? count - 1 : k < 0 ? 0 : k, in integers: for x >= 0 the truncation is
-          ;; the floor, and a negative x gives 0 either way (the same float k for s: +0 as in JavaScript; with
-          ;; x = -0, x - k is -0 or +0, and s is -1 both ways).
-          (local.set $ki (i32.trunc_sat_f64_s (local.get $x)))
-          (local.set $last (i32.sub (i32.load offset=28 (local.get $pp)) (i32.const 1)))
-          (local.set $ki (select (local.get $last) (local.get $ki) (i32.gt_s (local.get $ki) (local.get $last))))
-          (local.set $ki (select (i32.const 0) (local.get $ki) (i32.lt_s (local.get $ki) (i32.const 0))))
-          (local.set $k (f64.convert_i32_s (local.get $ki)))
-          (local.set $rp1 (i32.add (i32.load offset=24 (local.get $pp)) (i32.mul (local.get $ki) (i32.const 80))))
-          ;; A segment not mirrored has NaN for its lower edge.
-          (if (f64.ne (f64.load offset=64 (local.get $rp1)) (f64.load offset=64 (local.get $rp1)))
-            (then (local.set $rp1 (i32.const 0)) (br $lane1)))
-          (local.set $s1 (f64.sub (f64.mul (f64.const 2) (f64.sub (local.get $x) (local.get $k))) (f64.const 1))))
-          ))
-        (local.set $pair (i32.ne (local.get $rp1) (i32.const 0)))
-        (if (i32.eqz (local.get $pair))
-          (then
-            ;; One element: lane 1 repeats lane 0.
-            (local.set $rp1 (local.get $rp0))
-            (local.set $s1 (local.get $s0))))
-        (local.set $s (f64x2.replace_lane 1 (f64x2.splat (local.get $s0)) (local.get $s1)))
-        (local.set $t (v128.load64_lane offset=56 1 (local.get $rp1) (v128.load64_zero offset=56 (local.get $rp0))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=48 1 (local.get $rp1) (v128.load64_zero offset=48 (local.get $rp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=40 1 (local.get $rp1) (v128.load64_zero offset=40 (local.get $rp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=32 1 (local.get $rp1) (v128.load64_zero offset=32 (local.get $rp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=24 1 (local.get $rp1) (v128.load64_zero offset=24 (local.get $rp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=16 1 (local.get $rp1) (v128.load64_zero offset=16 (local.get $rp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane offset=8 1 (local.get $rp1) (v128.load64_zero offset=8 (local.get $rp0)))))
-        (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (v128.load64_lane 1 (local.get $rp1) (v128.load64_zero (local.get $rp0)))))
-        (local.set $lo (v128.load64_lane offset=64 1 (local.get $rp1) (v128.load64_zero offset=64 (local.get $rp0))))
-        (local.set $hi (v128.load64_lane offset=72 1 (local.get $rp1) (v128.load64_zero offset=72 (local.get $rp0))))
-        (local.set $t
-          (v128.bitselect (local.get $lo)
-            (v128.bitselect (local.get $hi) (local.get $t) (f64x2.gt (local.get $t) (local.get $hi)))
-            (f64x2.lt (local.get $t) (local.get $lo))))
-        (if (i32.eqz (local.get $pair))
-          (then
-            (v128.store64_lane 0 (local.get $at) (local.get $t))
-            (local.set $i (i32.add (local.get $i) (i32.const 1)))
-            (br $step)))
-        (v128.store (local.get $at) (local.get $t))
-        (local.set $i (i32.add (local.get $i) (i32.const 2)))
-        (br $step)))
+        ;; The piece of the block's first element (L <= e < U; the last piece if none).
+        (local.set $e (f64.load (local.get $at)))
+        (local.set $pp (local.get $tab))
+        (block $hyp
+          (loop $next
+            (br_if $hyp (i32.ge_u (local.get $pp) (local.get $q)))
+            (br_if $hyp (i32.eqz (f64.ge (local.get $e) (f64.load offset=40 (local.get $pp)))))
+            (local.set $pp (i32.add (local.get $pp) (i32.const 48)))
+            (br $next)))
+        (local.set $stJ (v128.load64_splat (local.get $pp)))
+        (local.set $pmJ (v128.load64_splat offset=8 (local.get $pp)))
+        (local.set $laJ (v128.load64_splat offset=16 (local.get $pp)))
+        (local.set $baJ (v128.load64_splat offset=24 (local.get $pp)))
+        ;; [lJ, uJ): that piece's interval within the window (e > lowOk is e >= the float after lowOk).
+        (local.set $lJ (f64x2.splat (f64.max (local.get $lowIn) (f64.load offset=32 (local.get $pp)))))
+        (local.set $uJ (f64x2.splat (f64.min (local.get $highEx) (f64.load offset=40 (local.get $pp)))))
+        ;; Pass 1: locate pairs from i, up to end or the first pair with an element outside (lowOk, highOk].
+        (local.set $sp (i32.const 36864))
+        (local.set $w (local.get $i))
+        (block $located
+          (loop $locate
+            (local.set $v (v128.load (local.get $at)))
+            (local.set $c0 (v128.load offset=16 (local.get $at)))
+            (if (i32.and (i32.le_u (i32.add (local.get $w) (i32.const 4)) (local.get $end))
+                  (i32.eq (i64x2.bitmask (v128.and
+                    (v128.and (f64x2.ge (local.get $v) (local.get $lJ)) (f64x2.lt (local.get $v) (local.get $uJ)))
+                    (v128.and (f64x2.ge (local.get $c0) (local.get $lJ)) (f64x2.lt (local.get $c0) (local.get $uJ)))))
+                    (i32.const 3)))
+              (then
+                ;; Two pairs in that piece: its numbers, from registers. s and the two record addresses (in the
+                ;; low 32 bits of each lane) per pair.
+                (local.set $xv (f64x2.mul (f64x2.sub (local.get $v) (local.get $stJ)) (local.get $pmJ)))
+                (local.set $kv (f64x2.pmin (local.get $laJ)
+                  (f64x2.pmax (v128.load offset=3088 (i32.const 0)) (f64x2.floor (local.get $xv)))))
+                (v128.store (local.get $sp)
+                  (f64x2.sub (f64x2.mul (v128.load offset=3312 (i32.const 0)) (f64x2.sub (local.get $xv) (local.get $kv)))
+                    (v128.load offset=3136 (i32.const 0))))
+                (v128.store offset=16 (local.get $sp)
+                  (f64x2.add (local.get $baJ) (f64x2.mul (local.get $kv) (v128.load offset=3392 (i32.const 0)))))
+                (local.set $xv (f64x2.mul (f64x2.sub (local.get $c0) (local.get $stJ)) (local.get $pmJ)))
+                (local.set $kv (f64x2.pmin (local.get $laJ)
+                  (f64x2.pmax (v128.load offset=3088 (i32.const 0)) (f64x2.floor (local.get $xv)))))
+                (v128.store offset=32 (local.get $sp)
+                  (f64x2.sub (f64x2.mul (v128.load offset=3312 (i32.const 0)) (f64x2.sub (local.get $xv) (local.get $kv)))
+                    (v128.load offset=3136 (i32.const 0))))
+                (v128.store offset=48 (local.get $sp)
+                  (f64x2.add (local.get $baJ) (f64x2.mul (local.get $kv) (v128.load offset=3392 (i32.const 0)))))
+                (local.set $at (i32.add (local.get $at) (i32.const 32)))
+                (local.set $sp (i32.add (local.get $sp) (i32.const 64)))
+                (local.set $w (i32.add (local.get $w) (i32.const 4))))
+              (else
+                ;; One pair, each lane's piece: piece j while e >= L of piece j.
+                (br_if $located (i32.ne (i64x2.bitmask
+                  (v128.and (f64x2.gt (local.get $v) (local.get $low)) (f64x2.le (local.get $v) (local.get $high))))
+                  (i32.const 3)))
+                (local.set $st (v128.load64_splat (local.get $tab)))
+                (local.set $pm (v128.load64_splat offset=8 (local.get $tab)))
+                (local.set $la (v128.load64_splat offset=16 (local.get $tab)))
+                (local.set $ba (v128.load64_splat offset=24 (local.get $tab)))
+                (local.set $pp (local.get $tab))
+                (block $pieced
+                  (loop $piece
+                    (br_if $pieced (i32.ge_u (local.get $pp) (local.get $q)))
+                    (local.set $pp (i32.add (local.get $pp) (i32.const 48)))
+                    (local.set $m (f64x2.ge (local.get $v) (v128.load64_splat offset=32 (local.get $pp))))
+                    (local.set $st (v128.bitselect (v128.load64_splat (local.get $pp)) (local.get $st) (local.get $m)))
+                    (local.set $pm (v128.bitselect (v128.load64_splat offset=8 (local.get $pp)) (local.get $pm) (local.get $m)))
+                    (local.set $la (v128.bitselect (v128.load64_splat offset=16 (local.get $pp)) (local.get $la) (local.get $m)))
+                    (local.set $ba (v128.bitselect (v128.load64_splat offset=24 (local.get $pp)) (local.get $ba) (local.get $m)))
+                    (br $piece)))
+                (local.set $xv (f64x2.mul (f64x2.sub (local.get $v) (local.get $st)) (local.get $pm)))
+                (local.set $kv (f64x2.pmin (local.get $la)
+                  (f64x2.pmax (v128.load offset=3088 (i32.const 0)) (f64x2.floor (local.get $xv)))))
+                (v128.store (local.get $sp)
+                  (f64x2.sub (f64x2.mul (v128.load offset=3312 (i32.const 0)) (f64x2.sub (local.get $xv) (local.get $kv)))
+                    (v128.load offset=3136 (i32.const 0))))
+                (v128.store offset=16 (local.get $sp)
+                  (f64x2.add (local.get $ba) (f64x2.mul (local.get $kv) (v128.load offset=3392 (i32.const 0)))))
+                (local.set $at (i32.add (local.get $at) (i32.const 16)))
+                (local.set $sp (i32.add (local.get $sp) (i32.const 32)))
+                (local.set $w (i32.add (local.get $w) (i32.const 2)))))
+            (br_if $locate (i32.lt_u (local.get $w) (local.get $end)))))
+        ;; Pass 2: evaluate the located pairs, up to w or the first pair with a segment not mirrored.
+        (local.set $at (i32.add (local.get $ptr) (i32.shl (local.get $i) (i32.const 3))))
+        (local.set $sp (i32.const 36864))
+        (block $evaluated
+          (loop $evaluate
+            (br_if $evaluated (i32.ge_u (local.get $i) (local.get $w)))
+            (local.set $rp0 (i32.load offset=16 (local.get $sp)))
+            (local.set $rp1 (i32.load offset=24 (local.get $sp)))
+            (local.set $s (v128.load (local.get $sp)))
+            (if (i32.and (i32.le_u (i32.add (local.get $i) (i32.const 8)) (local.get $w))
+                  (i32.and (i32.and (i32.and (i32.and (i32.and (i32.and (i32.eq (local.get $rp0) (local.get $rp1))
+                  (i32.eq (local.get $rp0) (i32.load offset=48 (local.get $sp))))
+                  (i32.eq (local.get $rp0) (i32.load offset=56 (local.get $sp))))
+                  (i32.eq (local.get $rp0) (i32.load offset=80 (local.get $sp))))
+                  (i32.eq (local.get $rp0) (i32.load offset=88 (local.get $sp))))
+                  (i32.eq (local.get $rp0) (i32.load offset=112 (local.get $sp))))
+                  (i32.eq (local.get $rp0) (i32.load offset=120 (local.get $sp)))))
+              (then
+                ;; 4 pairs in one segment: 4 chains side by side, each coefficient loaded once.
+                (local.set $lo0 (f64.load offset=64 (local.get $rp0)))
+                (local.set $hi0 (f64.load offset=72 (local.get $rp0)))
+                (br_if $evaluated (i32.eqz (f64.le (local.get $lo0) (local.get $hi0))))
+                (local.set $r1 (v128.load offset=32 (local.get $sp)))
+                (local.set $r2 (v128.load offset=64 (local.get $sp)))
+                (local.set $r3 (v128.load offset=96 (local.get $sp)))
+                (local.set $c0 (v128.load64_splat offset=56 (local.get $rp0)))
+                (local.set $t (local.get $c0))
+                (local.set $u1 (local.get $c0))
+                (local.set $u2 (local.get $c0))
+                (local.set $u3 (local.get $c0))
+                (local.set $c0 (v128.load64_splat offset=48 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat offset=40 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat offset=32 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat offset=24 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat offset=16 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat offset=8 (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $c0 (v128.load64_splat (local.get $rp0)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s)) (local.get $c0)))
+                (local.set $u1 (f64x2.add (f64x2.mul (local.get $u1) (local.get $r1)) (local.get $c0)))
+                (local.set $u2 (f64x2.add (f64x2.mul (local.get $u2) (local.get $r2)) (local.get $c0)))
+                (local.set $u3 (f64x2.add (f64x2.mul (local.get $u3) (local.get $r3)) (local.get $c0)))
+                (local.set $lo (f64x2.splat (local.get $lo0)))
+                (local.set $hi (f64x2.splat (local.get $hi0)))
+                (v128.store offset=0 (local.get $at) (f64x2.pmax (f64x2.pmin (local.get $t) (local.get $hi)) (local.get $lo)))
+                (v128.store offset=16 (local.get $at) (f64x2.pmax (f64x2.pmin (local.get $u1) (local.get $hi)) (local.get $lo)))
+                (v128.store offset=32 (local.get $at) (f64x2.pmax (f64x2.pmin (local.get $u2) (local.get $hi)) (local.get $lo)))
+                (local.set $at (i32.add (local.get $at) (i32.const 48)))
+                (local.set $sp (i32.add (local.get $sp) (i32.const 96)))
+                (local.set $i (i32.add (local.get $i) (i32.const 6)))
+                (local.set $t (local.get $u3)))
+              (else
+                ;; Else one pair, each lane's coefficients gathered two at a time.
+                (local.set $c0 (v128.load offset=64 (local.get $rp0)))
+                (local.set $c1 (v128.load offset=64 (local.get $rp1)))
+                (local.set $lo (i8x16.shuffle 0 1 2 3 4 5 6 7 16 17 18 19 20 21 22 23 (local.get $c0) (local.get $c1)))
+                (local.set $hi (i8x16.shuffle 8 9 10 11 12 13 14 15 24 25 26 27 28 29 30 31 (local.get $c0) (local.get $c1)))
+                (br_if $evaluated (i32.ne (i64x2.bitmask (f64x2.le (local.get $lo) (local.get $hi))) (i32.const 3)))
+                (local.set $c0 (v128.load offset=48 (local.get $rp0)))
+                (local.set $c1 (v128.load offset=48 (local.get $rp1)))
+                (local.set $t (i8x16.shuffle 8 9 10 11 12 13 14 15 24 25 26 27 28 29 30 31 (local.get $c0) (local.get $c1)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+                  (i8x16.shuffle 0 1 2 3 4 5 6 7 16 17 18 19 20 21 22 23 (local.get $c0) (local.get $c1))))
+                (local.set $c0 (v128.load offset=32 (local.get $rp0)))
+                (local.set $c1 (v128.load offset=32 (local.get $rp1)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+                  (i8x16.shuffle 8 9 10 11 12 13 14 15 24 25 26 27 28 29 30 31 (local.get $c0) (local.get $c1))))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+                  (i8x16.shuffle 0 1 2 3 4 5 6 7 16 17 18 19 20 21 22 23 (local.get $c0) (local.get $c1))))
+                (local.set $c0 (v128.load offset=16 (local.get $rp0)))
+                (local.set $c1 (v128.load offset=16 (local.get $rp1)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+                  (i8x16.shuffle 8 9 10 11 12 13 14 15 24 25 26 27 28 29 30 31 (local.get $c0) (local.get $c1))))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+                  (i8x16.shuffle 0 1 2 3 4 5 6 7 16 17 18 19 20 21 22 23 (local.get $c0) (local.get $c1))))
+                (local.set $c0 (v128.load (local.get $rp0)))
+                (local.set $c1 (v128.load (local.get $rp1)))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+                  (i8x16.shuffle 8 9 10 11 12 13 14 15 24 25 26 27 28 29 30 31 (local.get $c0) (local.get $c1))))
+                (local.set $t (f64x2.add (f64x2.mul (local.get $t) (local.get $s))
+                  (i8x16.shuffle 0 1 2 3 4 5 6 7 16 17 18 19 20 21 22 23 (local.get $c0) (local.get $c1))))))
+            (v128.store (local.get $at) (f64x2.pmax (f64x2.pmin (local.get $t) (local.get $hi)) (local.get $lo)))
+            (local.set $at (i32.add (local.get $at) (i32.const 16)))
+            (local.set $sp (i32.add (local.get $sp) (i32.const 32)))
+            (local.set $i (i32.add (local.get $i) (i32.const 2)))
+            (br $evaluate)))
+        ;; The whole block done: the next one.
+        (br_if $block (i32.eq (local.get $i) (local.get $end))))
+      ;; Slow path: the element at i, alone (scalar; the same operations).
+      (if (i32.ge_u (local.get $i) (local.get $n)) (then (return (local.get $n))))
+      (local.set $at (i32.add (local.get $ptr) (i32.shl (local.get $i) (i32.const 3))))
+      (local.set $e (f64.load (local.get $at)))
+      (if (i32.eqz (i32.and (f64.gt (local.get $e) (local.get $lowOk)) (f64.le (local.get $e) (local.get $highOk))))
+        (then (return (local.get $i))))
+      (local.set $pp (local.get $tab))
+      (block $found
+        (loop $up
+          (br_if $found (i32.ge_u (local.get $pp) (local.get $q)))
+          (br_if $found (i32.eqz (f64.ge (local.get $e) (f64.load offset=40 (local.get $pp)))))
+          (local.set $pp (i32.add (local.get $pp) (i32.const 48)))
+          (br $up)))
+      (local.set $x (f64.mul (f64.sub (local.get $e) (f64.load (local.get $pp))) (f64.load offset=8 (local.get $pp))))
+      ;; k = floor(x), then k >= count ? count - 1 : k < 0 ? 0 : k, in integers: for x >= 0 the truncation is the
+      ;; floor, and a negative x gives 0 either way (the same float k for s: +0 as in JavaScript; with x = -0,
+      ;; x - k is -0 or +0, and s is -1 both ways).
+      (local.set $ki (i32.trunc_sat_f64_s (local.get $x)))
+      (local.set $last (i32.trunc_f64_s (f64.load offset=16 (local.get $pp))))
+      (local.set $ki (select (local.get $last) (local.get $ki) (i32.gt_s (local.get $ki) (local.get $last))))
+      (local.set $ki (select (i32.const 0) (local.get $ki) (i32.lt_s (local.get $ki) (i32.const 0))))
+      (local.set $k (f64.convert_i32_s (local.get $ki)))
+      (local.set $rp0 (i32.add (i32.load offset=24 (local.get $pp)) (i32.mul (local.get $ki) (i32.const 80))))
+      (local.set $lo0 (f64.load offset=64 (local.get $rp0)))
+      (local.set $hi0 (f64.load offset=72 (local.get $rp0)))
+      ;; A segment not mirrored has NaN for its lower edge.
+      (if (f64.ne (local.get $lo0) (local.get $lo0)) (then (return (local.get $i))))
+      (local.set $s0 (f64.sub (f64.mul (f64.const 2) (f64.sub (local.get $x) (local.get $k))) (f64.const 1)))
+      (local.set $t0 (f64.load offset=56 (local.get $rp0)))
+      (local.set $t0 (f64.add (f64.mul (local.get $t0) (local.get $s0)) (f64.load offset=48 (local.get $rp0))))
+      (local.set $t0 (f64.add (f64.mul (local.get $t0) (local.get $s0)) (f64.load offset=40 (local.get $rp0))))
+      (local.set $t0 (f64.add (f64.mul (local.get $t0) (local.get $s0)) (f64.load offset=32 (local.get $rp0))))
+      (local.set $t0 (f64.add (f64.mul (local.get $t0) (local.get $s0)) (f64.load offset=24 (local.get $rp0))))
+      (local.set $t0 (f64.add (f64.mul (local.get $t0) (local.get $s0)) (f64.load offset=16 (local.get $rp0))))
+      (local.set $t0 (f64.add (f64.mul (local.get $t0) (local.get $s0)) (f64.load offset=8 (local.get $rp0))))
+      (local.set $t0 (f64.add (f64.mul (local.get $t0) (local.get $s0)) (f64.load (local.get $rp0))))
+      ;; t < lo ? lo : t > hi ? hi : t
+      (f64.store (local.get $at)
+        (select (local.get $lo0)
+          (select (local.get $hi0) (local.get $t0) (f64.gt (local.get $t0) (local.get $hi0)))
+          (f64.lt (local.get $t0) (local.get $lo0))))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $block))
     (local.get $n))
 )

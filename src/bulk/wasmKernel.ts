@@ -20,7 +20,7 @@ interface KernelExports {
 /** Where the exact-inverse mirror of one type lives in the kernel's memory. @internal */
 export interface InverseMirror {
   readonly inv: ExactInverse;
-  /** Address of the piece table (32 bytes per piece). */
+  /** Address of the piece table (48 bytes per piece: see kernel.wat). */
   readonly table: number;
   /** Per piece, the address of its segment records (80 bytes each: 8 coefficients, lower and upper edge). */
   readonly recordsAt: readonly number[];
@@ -54,7 +54,10 @@ export const _FORWARD_MAX_COEFFICIENTS = 16;
 
 const FORWARD_TABLE = 0;
 const CHUNK = 4096;
+// 36864–40960 (after the chunk): the exact inverse's scratch area, written and read inside one kernel call.
 const MIRRORS = 65536;
+/** 1.5·2⁵²: added to a record address it keeps the address in the float's low 32 bits (see kernel.wat). */
+const RECORD_BIAS = 6755399441055744;
 
 function decodeBase64(text: string): Uint8Array<ArrayBuffer> {
   const binary = atob(text);
@@ -170,7 +173,7 @@ export function _inverseMirror(k: BulkKernel, ct: CompiledType, inv: ExactInvers
   const pieces = inv.pieces;
   let top = k.top;
   const table = top;
-  top += pieces.length * 32;
+  top += pieces.length * 48;
   const recordsAt: number[] = [];
   for (const p of pieces) {
     recordsAt.push(top);
@@ -179,13 +182,19 @@ export function _inverseMirror(k: BulkKernel, ct: CompiledType, inv: ExactInvers
   const memory = k.exports.memory;
   if (top > memory.buffer.byteLength) memory.grow(Math.ceil((top - memory.buffer.byteLength) / 65536));
   _views(k);
+  // The EMF interval [L, U) of each piece: the exact inverse scans the pieces in order and stops at the first
+  // whose start is above the EMF, so it picks piece j exactly when L(j) <= e < L(j + 1), with L(j) the largest
+  // start of pieces 0..j (−∞ for piece 0; L is non-decreasing) and +∞ after the last piece.
+  const lower = pieces.map((_, j) => (j === 0 ? -Infinity : Math.max(...pieces.slice(0, j + 1).map((p) => p.emfStart))));
   pieces.forEach((p, j) => {
-    const at = (table + j * 32) / 8;
+    const at = (table + j * 48) / 8;
     k.f64[at] = p.emfStart;
     k.f64[at + 1] = p.perMillivolt;
-    k.f64[at + 2] = p.count;
-    k.i32[(at + 3) * 2] = recordsAt[j] as number;
-    k.i32[(at + 3) * 2 + 1] = p.count;
+    k.f64[at + 2] = p.count - 1;
+    // 1.5·2⁵² + address: the address in the float's low 32 bits, and base + 80·k exact for the kernel.
+    k.f64[at + 3] = RECORD_BIAS + (recordsAt[j] as number);
+    k.f64[at + 4] = lower[j] as number;
+    k.f64[at + 5] = lower[j + 1] ?? Infinity;
     for (let s = 0; s < p.count; s++) k.f64[(recordsAt[j] as number) / 8 + s * 10 + 8] = NaN;
   });
   k.top = top;

@@ -6,9 +6,12 @@
  */
 import { afterEach, describe, expect, it, vi } from "vitest";
 import * as bulk from "../../src/bulk/index.js";
+import { _compile } from "../../src/its90/compiled.js";
+import { _EMF_END_TOLERANCE_MV } from "../../src/its90/engine.js";
 import {
   emfFromTemperatureArray as rootForwardArray,
   temperatureFromEmfArray as rootInverseArray,
+  thermocoupleData,
   thermocoupleTypes,
   temperatureRange,
 } from "../../src/index.js";
@@ -49,6 +52,43 @@ describe("hotjunction/bulk errors: the root entry's, after the same elements", (
     const a = thrown(() => bulk.temperatureFromEmfArray("B", e)) as { code: string; message: string };
     expect(a.code).toBe("AMBIGUOUS_EMF");
     expect(a.message).toBe((thrown(() => rootInverseArray("B", e)) as Error).message);
+  });
+
+  it("every type: EMFs at the acceptance window's ends and one float beyond, inside a long array (the kernel's block path), as in the root entry", () => {
+    const next = (x: number, up: boolean): number => {
+      const b = new BigInt64Array(new Float64Array([x]).buffer);
+      if (x === 0) return up ? 5e-324 : -5e-324;
+      b[0] = (b[0] as bigint) + ((x > 0) === up ? 1n : -1n);
+      return new Float64Array(b.buffer)[0] as number;
+    };
+    for (const type of thermocoupleTypes) {
+      const ct = _compile(thermocoupleData(type));
+      const lowOk = ct.monotonicFromC > ct.minC ? ct.emfAtMinC : ct.emfAtMinC - _EMF_END_TOLERANCE_MV;
+      const highOk = ct.emfAtMaxC + _EMF_END_TOLERANCE_MV;
+      const mid = (ct.emfAtMinC + ct.emfAtMaxC) / 2;
+      for (const edge of [lowOk, next(lowOk, true), next(lowOk, false), highOk, next(highOk, true), next(highOk, false)]) {
+        // 256 elements just inside the edge's end of the window, the edge at element 37 (inside one of the kernel's
+        // blocks, in a run of pairs its fast paths take).
+        const near = edge < mid ? next(next(lowOk, true), true) : highOk;
+        const input = Float64Array.from({ length: 256 }, (_, i) => (i === 37 ? edge : near));
+        const ours = new Float64Array(256).fill(-1);
+        const theirs = new Float64Array(256).fill(-1);
+        let a: unknown;
+        let b: unknown;
+        try {
+          bulk.temperatureFromEmfArray(type, input, ours);
+        } catch (error) {
+          a = error;
+        }
+        try {
+          rootInverseArray(type, input, theirs);
+        } catch (error) {
+          b = error;
+        }
+        expect([type, edge, (a as Error | undefined)?.message]).toEqual([type, edge, (b as Error | undefined)?.message]);
+        for (let i = 0; i < 256; i++) expect(Object.is(ours[i], theirs[i])).toBe(true);
+      }
+    }
   });
 
   it("refuses a plain array, a short output array and an unknown type", () => {

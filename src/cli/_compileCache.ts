@@ -134,8 +134,10 @@ export function _runCachedCommonJs<T>(file: string, base: string, cacheName: str
         return;
       }
       try {
+        // Only names this code writes: the base, 16 hex digits, the cache name.
+        const ours = new RegExp(`^${base.replace(/[^a-z0-9]/gi, "")}-[0-9a-f]{16}-${name}\\.v8$`);
         for (const entry of readdirSync(dir)) {
-          if (entry.startsWith(`${base}-`) && entry.endsWith(`-${name}.v8`) && !entry.startsWith(`${base}-${key}-`)) rmSync(join(dir, entry), { force: true });
+          if (ours.test(entry) && !entry.startsWith(`${base}-${key}-`)) rmSync(join(dir, entry), { force: true });
         }
       } catch {
         // Stale files stay; the next keep tries again.

@@ -121,6 +121,13 @@ describe("running a CommonJS file through the cache", () => {
     expect(b.cacheFile).not.toBe(a.cacheFile);
     expect(existsSync(a.cacheFile as string)).toBe(false);
     expect(existsSync(b.cacheFile as string)).toBe(true);
+    // A file that only looks alike is not ours: it stays.
+    const lookalike = join(dir, "cache", "m-notahexkey-run.v8");
+    writeFileSync(lookalike, "user data");
+    module(dir, "const value = 4;");
+    expect(runOnce(file, "run", env).status).toBe("miss");
+    expect(readFileSync(lookalike, "utf8")).toBe("user data");
+    expect(readdirSync(join(dir, "cache")).filter((f) => f !== "m-notahexkey-run.v8")).toHaveLength(1);
   });
 
   it("runs without a cache when it is turned off or its directory cannot be made, and names odd caches `other`", () => {

@@ -11,7 +11,7 @@
  * @internal
  */
 import { createHash, randomBytes } from "node:crypto";
-import { lstatSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, writeFileSync } from "node:fs";
+import { lstatSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { homedir } from "node:os";
 import { dirname, isAbsolute, join } from "node:path";
@@ -29,12 +29,16 @@ export interface _CachedModule<T> {
   /**
    * Writes the code compiled so far (call it after the work, so the functions the work ran are in it) when the
    * cache was missing or refused. Atomic (a temporary file renamed into place); errors are ignored. Also removes
-   * cache files of the same base name for other source texts or Node versions.
+   * the older cache files of the same base and cache name (other source texts or Node versions) beyond the
+   * newest {@link _keptPerName}.
    */
   keep(): void;
 }
 
 type Environment = Readonly<Record<string, string | undefined>>;
+
+/** Cache files kept per base and cache name (this run's and the newest other one). @internal */
+export const _keptPerName = 2;
 
 /**
  * The cache directory: `HOTJUNCTION_CACHE_DIR` when set; else the platform's per-user cache directory
@@ -134,11 +138,14 @@ export function _runCachedCommonJs<T>(file: string, base: string, cacheName: str
         return;
       }
       try {
-        // Only names this code writes: the base, 16 hex digits, the cache name.
+        // Only names this code writes (the base, 16 hex digits, the cache name), newest first; the newest
+        // {@link _keptPerName} stay, so two installs used in turn (a project's and a global one) keep theirs.
         const ours = new RegExp(`^${base.replace(/[^a-z0-9]/gi, "")}-[0-9a-f]{16}-${name}\\.v8$`);
-        for (const entry of readdirSync(dir)) {
-          if (ours.test(entry) && !entry.startsWith(`${base}-${key}-`)) rmSync(join(dir, entry), { force: true });
-        }
+        const files = readdirSync(dir)
+          .filter((entry) => ours.test(entry))
+          .map((entry) => ({ entry, at: entry.startsWith(`${base}-${key}-`) ? Infinity : statSync(join(dir, entry)).mtimeMs }))
+          .sort((a, b) => b.at - a.at);
+        for (const { entry } of files.slice(_keptPerName)) rmSync(join(dir, entry), { force: true });
       } catch {
         // Stale files stay; the next keep tries again.
       }

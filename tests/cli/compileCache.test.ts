@@ -5,7 +5,7 @@
  * (Node.js 20 documentation, `vm.Script` options `cachedData` and `cachedDataRejected`).
  */
 import { spawnSync } from "node:child_process";
-import { chmodSync, existsSync, mkdirSync, readdirSync, readFileSync, symlinkSync, writeFileSync } from "node:fs";
+import { chmodSync, existsSync, mkdirSync, readdirSync, readFileSync, symlinkSync, utimesSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { _cacheDirectory, _usableCacheDirectory } from "../../src/cli/_compileCache.js";
@@ -108,9 +108,10 @@ describe("running a CommonJS file through the cache", () => {
     expect(runOnce(file, "run", env).status).toBe("hit");
   });
 
-  it("keys the cache by the source text and removes the stale file of an older text", () => {
+  it("keys the cache by the source text; keeps this text's file and the newest other one, removes older ones", () => {
     const dir = tempDir();
-    const env = { HOTJUNCTION_CACHE_DIR: join(dir, "cache") };
+    const cache = join(dir, "cache");
+    const env = { HOTJUNCTION_CACHE_DIR: cache };
     const file = module(dir, "const value = 1;");
     const a = runOnce(file, "run", env);
     // Same length, other text: V8's own check (the length) would take the old cache; the key does not.
@@ -119,15 +120,26 @@ describe("running a CommonJS file through the cache", () => {
     expect(b.status).toBe("miss");
     expect(b.exports.value).toBe(2);
     expect(b.cacheFile).not.toBe(a.cacheFile);
-    expect(existsSync(a.cacheFile as string)).toBe(false);
-    expect(existsSync(b.cacheFile as string)).toBe(true);
+    // Two installs used in turn: both keep their cache.
+    expect(existsSync(a.cacheFile as string)).toBe(true);
+    module(dir, "const value = 1;");
+    expect(runOnce(file, "run", env).status).toBe("hit");
+    // A third text: the oldest file goes (by modification time), this one and the newest other stay.
+    utimesSync(a.cacheFile as string, new Date(2_000_000_000_000), new Date(2_000_000_000_000));
+    utimesSync(b.cacheFile as string, new Date(1_000_000_000_000), new Date(1_000_000_000_000));
+    module(dir, "const value = 3;");
+    const c = runOnce(file, "run", env);
+    expect(c.status).toBe("miss");
+    expect(existsSync(a.cacheFile as string)).toBe(true);
+    expect(existsSync(b.cacheFile as string)).toBe(false);
+    expect(existsSync(c.cacheFile as string)).toBe(true);
     // A file that only looks alike is not ours: it stays.
-    const lookalike = join(dir, "cache", "m-notahexkey-run.v8");
+    const lookalike = join(cache, "m-notahexkey-run.v8");
     writeFileSync(lookalike, "user data");
     module(dir, "const value = 4;");
     expect(runOnce(file, "run", env).status).toBe("miss");
     expect(readFileSync(lookalike, "utf8")).toBe("user data");
-    expect(readdirSync(join(dir, "cache")).filter((f) => f !== "m-notahexkey-run.v8")).toHaveLength(1);
+    expect(readdirSync(cache).filter((f) => f !== "m-notahexkey-run.v8")).toHaveLength(2);
   });
 
   it("runs without a cache when it is turned off or its directory cannot be made, and names odd caches `other`", () => {

@@ -87,10 +87,15 @@ describe("running a CommonJS file through the cache", () => {
     return JSON.parse(result.stdout) as Run;
   }
 
-  it("misses and keeps, then hits with the same exports; a refused cache is compiled as usual and replaced", () => {
+  /** A fresh folder for the module and its cache directory below it. */
+  function place(): { dir: string; cache: string; env: Record<string, string> } {
     const dir = tempDir();
     const cache = join(dir, "cache");
-    const env = { HOTJUNCTION_CACHE_DIR: cache };
+    return { dir, cache, env: { HOTJUNCTION_CACHE_DIR: cache } };
+  }
+
+  it("misses and keeps, then hits with the same exports; a refused cache is compiled as usual and replaced", () => {
+    const { dir, cache, env } = place();
     const file = module(dir, "function f(n) { let s = 0; for (let i = 0; i < n; i++) s += i * i; return s; }\nconst value = f(1000);");
     const first = runOnce(file, "run", env);
     expect(first.status).toBe("miss");
@@ -109,9 +114,7 @@ describe("running a CommonJS file through the cache", () => {
   });
 
   it("keys the cache by the source text; keeps this text's file and the newest other one, removes older ones", () => {
-    const dir = tempDir();
-    const cache = join(dir, "cache");
-    const env = { HOTJUNCTION_CACHE_DIR: cache };
+    const { dir, cache, env } = place();
     const file = module(dir, "const value = 1;");
     const a = runOnce(file, "run", env);
     // Same length, other text: V8's own check (the length) would take the old cache; the key does not.

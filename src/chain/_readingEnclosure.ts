@@ -53,6 +53,7 @@
  * @internal
  */
 import { _addInterval, _divInterval, _emfOver, _hull, _mag, _mulInterval, _seebeckOver, _subInterval, type _Interval } from "./_intervals.js";
+import { _numberRecord } from "../uncertainty/_prepare.js";
 import { _ambientInputName, type _CompiledChain } from "./_compileChain.js";
 import { _backwardSeamStep, _cornerRange, _emfBoundOver, _enclosedInverse, _overColdJunction, _seamsOf, _unitRoundoff, type _Transfer } from "./_coldJunctionRange.js";
 import { _addedOver, _fixedPieceRanges, _wireNames, _wirePieces, _wireSideBox, type _AddedPiece, type _WireSide } from "./_wireEnclosure.js";
@@ -126,8 +127,11 @@ function boxTerms(s: Setup, box: Box): BoxTerms {
   const { cc, names } = s;
   const { ct, adc, fixedScale, amplifier } = cc;
   const cj = cc.coldJunction;
-  // Built at once (fast properties; a loop of keyed stores makes a V8 hash table past 16 names, see _zeroRecord).
-  const x: Record<string, number> = Object.fromEntries(Object.entries(box).map(([name, b]) => [name, 0.5 * (b[0] + b[1])]));
+  const inBox = Object.keys(box);
+  const x = _numberRecord(inBox, (i) => {
+    const b = box[inBox[i] as string] as readonly [number, number];
+    return 0.5 * (b[0] + b[1]);
+  });
   const range = (f: _Transfer, list: readonly string[]): _Interval => _cornerRange(f, x, box, list.filter((n) => n in box));
   const eps = (box["thermocouple.tolerance"] ?? [0, 0]) as _Interval;
   const ageing = (box["probe.ageing"] ?? [0, 0]) as _Interval;

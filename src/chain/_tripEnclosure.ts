@@ -57,6 +57,7 @@ import {
   _subInterval,
   type _Interval,
 } from "./_intervals.js";
+import { _numberRecord } from "../uncertainty/_prepare.js";
 import { _ambientInputName, type _CompiledChain } from "./_compileChain.js";
 import { _cornerRange, _emfBoundOver, _enclosedInverse, _overColdJunction, _seamsOf, _unitRoundoff, type _Transfer } from "./_coldJunctionRange.js";
 import type { _ComparatorStage } from "./comparator.js";
@@ -207,8 +208,11 @@ interface FrontOver {
 
 function frontOver(s: EnclosureSetup, box: Box): FrontOver {
   const { reference, divider, comparator, fixedScale, amplifier, cj, leakage, cc } = s;
-  // Built at once (fast properties; a loop of keyed stores makes a V8 hash table past 16 names, see _zeroRecord).
-  const x: Values = Object.fromEntries(Object.entries(box).map(([name, b]) => [name, 0.5 * (b[0] + b[1])]));
+  const names = Object.keys(box);
+  const x: Values = _numberRecord(names, (i) => {
+    const b = box[names[i] as string] as readonly [number, number];
+    return 0.5 * (b[0] + b[1]);
+  });
   const present = (list: readonly string[]): string[] => list.filter((n) => n in box);
   const range = (f: Transfer, list: readonly string[]): _Interval => _cornerRange(f, x, box, present(list));
   const vRef = range((v) => reference.volts(v), s.referenceNames);

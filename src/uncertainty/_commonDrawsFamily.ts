@@ -9,7 +9,7 @@ import { _requireOptionsObject, _requireProbability } from "./_checks.js";
 import type { _CheckedDistribution } from "./_distribution.js";
 import { _blockSize, _firstBlockState, _nextBlockState, _Sampler, _scaleUnitDraws } from "./_monteCarloStream.js";
 import { _monteCarloResult, _OutputSummary } from "./_propagateMonteCarlo.js";
-import { _meansOf, _ModelEvaluator, _prepareInputs, _zeroRecord, type _PreparedInputs } from "./_prepare.js";
+import { _meansOf, _ModelEvaluator, _prepareInputs, _numberRecord, type _PreparedInputs } from "./_prepare.js";
 import { _monteCarloSettings, _requireFiniteResult } from "./propagate.js";
 import type { Distribution, Model, PropagateOptions, PropagationResult } from "./types.js";
 
@@ -134,7 +134,7 @@ export class _CommonDrawsFamily {
     this.column = new Float64Array(trials);
     this.scaledBy = [];
     // every record built the same way (names in canonical order), so all have one shape
-    this.records = Array.from({ length: trials }, () => _zeroRecord(prepared.names));
+    this.records = Array.from({ length: trials }, () => _numberRecord(prepared.names));
     this.outputs = new Float64Array(trials);
   }
 }

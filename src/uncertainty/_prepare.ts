@@ -288,20 +288,21 @@ export function _recordFill(names: readonly string[], stride: number): _RecordFi
 }
 
 /**
- * @internal A record with every name at 0, in this order, with fast (not dictionary) properties that hold
- * doubles in place. Two V8 behaviours decide the cost of every Monte Carlo trial (measured hot on 4 Dec 2026):
+ * @internal A record of numbers, `names[i]` → `valueOf(i)` in this order, with fast (not dictionary) properties
+ * that hold doubles in place. Two V8 behaviours decide the cost of every evaluation through a record (measured
+ * hot on 4 Dec 2026):
  * - an object turns into a hash table once more than 12 properties beyond its 4 in-object slots are added by
- *   keyed stores (`record[name] = 0` in a loop), and then every store and every read by name is a lookup (a
+ *   keyed stores (`record[name] = v` in a loop), and then every store and every read by name is a lookup (a
  *   fill of 20 names 250 ns against 21 ns for 16; the examples with a wire or two channels have 20–22 inputs):
  *   so the record is built at once, by `Object.fromEntries`;
- * - a field first given a small integer (0) holds tagged values, so every later store of a double allocates a
- *   number on the heap (20 ns and 16 bytes per store; 8 MB of garbage in one `check` of the furnace), while a
- *   field first given a double holds it in place (2 ns): so each starts at 0.5 and is then set to 0.
- * Same keys, order and values (+0) as the loop.
+ * - a field first given a small integer (such as 0) holds tagged values, so every later store of a double
+ *   allocates a number on the heap (20 ns and 16 bytes per store, against 2 ns in place): so each field starts
+ *   at 0.5 and is then given its value.
+ * Same keys, order and values as the loop. Default value 0.
  */
-export function _zeroRecord(names: readonly string[]): Record<string, number> {
+export function _numberRecord(names: readonly string[], valueOf: (i: number) => number = () => 0): Record<string, number> {
   const record: Record<string, number> = Object.fromEntries(names.map((name) => [name, 0.5]));
-  for (const name of names) record[name] = 0;
+  names.forEach((name, i) => (record[name] = valueOf(i)));
   return record;
 }
 
@@ -313,7 +314,7 @@ export class _ModelEvaluator {
     readonly model: Model,
     readonly names: readonly string[],
   ) {
-    this.record = _zeroRecord(names);
+    this.record = _numberRecord(names);
     this.fill = _recordFill(names, 1);
   }
 

@@ -6,7 +6,7 @@
 import { HotjunctionRangeError, HotjunctionTypeError } from "../errors.js";
 import { _normalQuantile } from "./normalQuantile.js";
 import { _contributionsRecord, _linearise } from "./_propagateRss.js";
-import { _meansOf, type _ModelEvaluator, type _PreparedInputs } from "./_prepare.js";
+import { _meansOf, _numberRecord, type _ModelEvaluator, type _PreparedInputs } from "./_prepare.js";
 import type { PropagationResult } from "./types.js";
 
 /** All corners are evaluated up to this many inputs (2¹⁶ = 65 536 model calls). */
@@ -265,8 +265,7 @@ function meetsEnclosure(r: readonly [number, number], low: number, high: number)
 
 /** The values of a point (canonical order) as a record in the caller's order of names. */
 function pointRecord(prepared: _PreparedInputs, values: Float64Array): Record<string, number> {
-  // Built at once (fast properties; a loop of keyed stores makes a V8 hash table past 16 names, see _zeroRecord).
-  return Object.fromEntries(prepared.callerOrder.map((name) => [name, values[prepared.names.indexOf(name)] as number]));
+  return _numberRecord(prepared.callerOrder, (i) => values[prepared.names.indexOf(prepared.callerOrder[i] as string)] as number);
 }
 
 /**

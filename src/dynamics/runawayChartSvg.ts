@@ -9,6 +9,7 @@ import { _requireInRange, _requireOptionsObject, _requireShape } from "../errors
 import { _CHART_MAX_ABS_C, _checkRunawayResponse } from "./_dynamicsShapes.js";
 import { CAUTION_TEXT } from "../caution.js";
 import type { RunawayResponse } from "./simulateRunaway.js";
+import { _maxOf, _minOf } from "../extremes.js";
 
 /** Options of {@link runawayChartSvg}. */
 export interface RunawayChartOptions {
@@ -83,8 +84,8 @@ export function runawayChartSvg(response: RunawayResponse, options: RunawayChart
   const plotH = height - top - bottom;
   const tMax = s.timeSeconds.length > 0 ? (s.timeSeconds[s.timeSeconds.length - 1] as number) : 1;
   const values = [...s.trueC, ...s.indicatedC, ...(s.filteredC ?? []), scenario.hazardLimitC, scenario.tripTemperatureC, response.peakTrueC];
-  let yLo = Math.min(...values);
-  let yHi = Math.max(...values);
+  let yLo = _minOf(values);
+  let yHi = _maxOf(values);
   const pad = Math.max((yHi - yLo) * 0.06, 1e-6);
   yLo -= pad;
   yHi += pad;

@@ -15,6 +15,7 @@ import { _segmentBound } from "./segmentBound.js";
 import { _firmwareTableKinds, _tableFunction, type _TableFunction, type FirmwareTableKind } from "./tableFunction.js";
 import { _denseSearch, _monotonic, _overflow, _roundingBound, _storeOutputs, type _Column } from "./tableOutputs.js";
 import type { BuildFirmwareTableOptions, FirmwareTable, FirmwareTablePlacement } from "./types.js";
+import { _maxOf, _minOf } from "../extremes.js";
 
 export type {
   BuildFirmwareTableOptions,
@@ -347,8 +348,8 @@ function buildWithBudget(r: Request, lo: number, hi: number, roundingBound: numb
       unit: fn.outputUnit,
       numberType: output.numberType,
       scale: output.scale,
-      min: Math.min(...outputs),
-      max: Math.max(...outputs),
+      min: _minOf(outputs),
+      max: _maxOf(outputs),
     },
     chain:
       chain === undefined

@@ -11,6 +11,7 @@ import { _fixed } from "./formatting.js";
 import type { _TemperatureDisplay } from "./displayUnit.js";
 import { _bottomAxis, _element, _escapeXml, _splitCaution, _svgDocument, _text } from "./svg.js";
 import { _wrapWords } from "../textWrap.js";
+import { _maxOf, _minOf } from "../extremes.js";
 
 /** One band row of a panel, temperatures in °C. @internal */
 export interface _BandRow {
@@ -60,8 +61,8 @@ export function _bandPanelChartSvg(chart: _BandPanelChart): string {
   let y = top;
   for (const p of chart.panels) {
     const values = [p.maxNormalOperatingC, p.hazardLimitC, p.targetC, ...p.rows.flatMap((b) => [b.lowC, b.highC])].map(display.at);
-    const lo = Math.min(...values);
-    const hi = Math.max(...values);
+    const lo = _minOf(values);
+    const hi = _maxOf(values);
     const pad = Math.max((hi - lo) * 0.1, 0.5);
     const x = scaleLinear().domain([lo - pad, hi + pad]).range([left, width - right]).nice();
     const at = (c: number): number => x(display.at(c));

@@ -15,6 +15,7 @@ import { _wrapWords } from "../textWrap.js";
 import { _propagationMethods } from "../uncertainty/types.js";
 import { _requireShape } from "../errors.js";
 import { _errorSweepShape } from "./_reportShapes.js";
+import { _maxOf, _minOf } from "../extremes.js";
 
 /**
  * Draws an error sweep as an SVG document (text).
@@ -39,8 +40,8 @@ export function errorBandChartSvg(sweep: ErrorSweep, options?: ReportDisplayOpti
   const title = `${sweep.title}${sweep.designName !== undefined ? `: ${sweep.designName}` : ""}`;
   const temperatures = sweep.rows.map((r) => display.at(r.temperatureC));
   const errors = sweep.rows.flatMap((r) => [r.nominalErrorC, ...r.bands.flatMap((b) => [b.errorLowC, b.errorHighC])]).map(display.diff);
-  const tMin = Math.min(...temperatures);
-  const tMax = Math.max(...temperatures);
+  const tMin = _minOf(temperatures);
+  const tMax = _maxOf(temperatures);
   const eMin = Math.min(0, ...errors);
   const eMax = Math.max(0, ...errors);
   const x = scaleLinear().domain(tMin === tMax ? [tMin - 1, tMax + 1] : [tMin, tMax]).range([margin.left, width - margin.right]);

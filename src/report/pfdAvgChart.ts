@@ -9,6 +9,7 @@ import type { PfdAvgCurve } from "../safety/types.js";
 import { _element, _splitCaution, _svgDocument, _text } from "./svg.js";
 import { _wrapWords } from "../textWrap.js";
 import { _requireShape, HotjunctionRangeError, type _Shape } from "../errors.js";
+import { _maxOf, _minOf } from "../extremes.js";
 
 /** Input of {@link pfdAvgChartSvg}. */
 export interface PfdAvgChartInput {
@@ -80,10 +81,10 @@ export function pfdAvgChartSvg(input: PfdAvgChartInput): string {
   const points = input.curves.flatMap((c) => c.points);
   const hours = points.map((p) => p.proofTestIntervalHours);
   const pfds = points.flatMap((p) => [p.pfdAvg1oo1, ...(p.pfdAvg1oo2 === null ? [] : [p.pfdAvg1oo2])]).filter((v) => v > 0);
-  const hMin = Math.min(...hours);
-  const hMax = Math.max(...hours);
-  const pMin = pfds.length === 0 ? 1e-6 : Math.min(...pfds);
-  const pMax = pfds.length === 0 ? 1 : Math.max(...pfds);
+  const hMin = _minOf(hours);
+  const hMax = _maxOf(hours);
+  const pMin = pfds.length === 0 ? 1e-6 : _minOf(pfds);
+  const pMax = pfds.length === 0 ? 1 : _maxOf(pfds);
   const x = scaleLog().domain(hMin === hMax ? [hMin / 10, hMax * 10] : [hMin, hMax]).range([margin.left, width - margin.right]);
   const y = scaleLog()
     .domain([10 ** Math.floor(Math.log10(pMin)), 10 ** Math.ceil(Math.log10(pMax === pMin ? pMax * 10 : pMax))])

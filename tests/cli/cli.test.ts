@@ -30,6 +30,20 @@ describe("hotjunction CLI (in-process)", () => {
     expect(csv.split("\n")).toContain("1000,41.276");
   });
 
+  it("ref-table prints a long table whole (164,201 rows; NIST Monograph 175 type K: −270 °C −6.458 mV, 1372 °C 54.886 mV)", async () => {
+    // The text table's column widths were Math.max(...rows): past about 10⁵ rows the call overflowed the stack.
+    const text = await run(["ref-table", "K", "--from", "-270", "--to", "1372", "--step", "0.01"]);
+    expect(text.code).toBe(0);
+    const lines = text.stdout.split("\n");
+    expect(lines).toHaveLength(2 + 164_201 + 1);
+    expect(lines[2]?.trim().split(/\s+/)).toEqual(["-270", "-6.458"]);
+    expect(lines.at(-2)?.trim().split(/\s+/)).toEqual(["1372", "54.886"]);
+    // Above the row limit: a typed error with the count and the valid range.
+    const tooMany = await run(["ref-table", "K", "--from", "-270", "--to", "1372", "--step", "0.001"]);
+    expect(tooMany.code).toBe(2);
+    expect(tooMany.stderr).toBe("hotjunction: type K reference table: row count 1642001 is too large; valid range 1 to 200000\n");
+  });
+
   it("usage errors exit 2 with one line", async () => {
     for (const args of [
       [],

@@ -15,6 +15,7 @@ import { thermocoupleTypes } from "../../its90/resolveType.js";
 import { _addOutputOptions, _chosenFormat, _emitOutputs, _planCommandOutputs, type OutputOptionValues } from "../outputOptions.js";
 import { _integerParser, _parseNumber, _parsePositiveNumber } from "../parseArgs.js";
 import type { CommandContext } from "../commandContext.js";
+import { _maxOf } from "../../extremes.js";
 
 interface RefTableOptions extends OutputOptionValues {
   readonly from: number;
@@ -27,8 +28,8 @@ interface RefTableOptions extends OutputOptionValues {
 export function _formatReferenceTableText(table: ReferenceTable): string {
   const header = ["temperature °C", "EMF mV"];
   const rows = table.rows.map((r) => [String(r.temperatureC), r.emfText]);
-  const width0 = Math.max(header[0]!.length, ...rows.map((r) => r[0]!.length));
-  const width1 = Math.max(header[1]!.length, ...rows.map((r) => r[1]!.length));
+  const width0 = Math.max(header[0]!.length, _maxOf(rows.map((r) => r[0]!.length)));
+  const width1 = Math.max(header[1]!.length, _maxOf(rows.map((r) => r[1]!.length)));
   const line = (a: string, b: string): string => `${a.padStart(width0)}  ${b.padStart(width1)}`;
   return [
     `Type ${table.type}, reference junction at 0 °C (ITS-90)`,

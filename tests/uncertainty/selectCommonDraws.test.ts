@@ -45,9 +45,12 @@ describe("_selectFloat64", () => {
       _sortFloat64(sorted);
       const k1 = Math.floor(next() * n);
       const k2 = k1 + Math.floor(next() * (n - k1));
-      const [low, high] = _selectFloat64(Float64Array.from(values), k1, k2);
-      expect(Object.is(low, sorted[k1])).toBe(true);
-      expect(Object.is(high, sorted[k2])).toBe(true);
+      // The selection itself (sortBelow 0), and the default, which sorts arrays this short.
+      for (const sortBelow of [0, undefined]) {
+        const [low, high] = _selectFloat64(Float64Array.from(values), k1, k2, sortBelow);
+        expect(Object.is(low, sorted[k1])).toBe(true);
+        expect(Object.is(high, sorted[k2])).toBe(true);
+      }
     }
   });
 });

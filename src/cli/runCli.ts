@@ -41,4 +41,3 @@ export async function _runCli(argv: readonly string[], io: CliIo, options: RunCl
     return _reportFailure(error, io);
   }
 }
-

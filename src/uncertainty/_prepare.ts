@@ -180,8 +180,9 @@ export type _RecordFill = (record: Record<string, number>, values: ArrayLike<num
  * that sees every name, so V8 treats it as megamorphic and looks each name up (most of the time of a cheap model
  * was spent there); here the first 32 names each have their own store site with a name fixed per fill, which
  * stays monomorphic while a process evaluates one set of names. Same values, same order. 32, not 16: the
- * examples with a wire or two channels have 20–22 inputs, and the loop's four to six stores cost more than
- * the sixteen others (a fill of 20 names 250 ns, of 16 names 21 ns, measured hot on 4 Dec 2026).
+ * examples with a wire or two channels have 20–22 inputs, and with 16 sites the loop's four to six stores cost
+ * more than the sixteen others (into a `_numberRecord`, hot, 4 Dec 2026: 20 names 85–95 ns with 16 sites, 50 ns
+ * with 32; 22 names 125–188 ns against 44 ns).
  */
 export function _recordFill(names: readonly string[], stride: number): _RecordFill {
   const n = names.length;
